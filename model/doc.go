@@ -1,0 +1,65 @@
+// Package model computes the thermodynamics of one ideal-gas species at a
+// temperature and pressure, from its molecular partition function.
+//
+// # Partition function
+//
+// The molecular partition function factorises into translation, rotation,
+// vibration and electronic levels, q = q_tr · q_rot · q_vib · q_el. Each
+// factor reports three dimensionless numbers (see Terms):
+//
+//	LnQ = ln q
+//	U   = T ∂ln q/∂T              (so U_f = RT·U)
+//	Cv  = ∂/∂T (T² ∂ln q/∂T)      (so Cv_f = R·Cv)
+//
+// all analytic, with no finite differences. For N molecules,
+// A = −NkT[ln(q_tr/N) + 1 + Σ ln q_int]; the "+1" and the 1/N of Stirling's
+// approximation are folded into the translational LnQ, so that for every
+// factor A_f/RT = −LnQ and S_f/R = LnQ + U. The translational factor at
+// fixed (T, P) is
+//
+//	ln(q_tr/N) + 1 = ln[(2π m kT/h²)^{3/2} · kT/P] + 1,
+//
+// which makes S_tr the Sackur-Tetrode entropy. Molar properties follow:
+//
+//	U = E0 + RT·ΣU_f    H = U + RT     A = E0 − RT·ΣLnQ_f   G = A + RT
+//	S = R·Σ(LnQ_f + U_f)               Cv = R·ΣCv_f         Cp = Cv + R
+//
+// and the chemical potential of the pure gas is μ = G (per mole).
+//
+// # Treatments
+//
+//   - Translation: particle in a box, classical (valid while n/nQ ≪ 1).
+//   - Rotation: atoms have none. Linear molecules sum the rigid-rotor levels
+//     E_J = kΘ J(J+1) exactly while T < 50 Θrot and use the Euler–Maclaurin
+//     series q = T/(σΘ)·(1 + Θ/3T + Θ²/15T² + 4Θ³/315T³) above; nonlinear
+//     molecules use the classical rigid-rotor limit
+//     q = √π/σ · T^{3/2}/√(ΘA ΘB ΘC). Treatment selects the choice.
+//   - Vibration: harmonic oscillators, energy zero at v = 0 (the zero-point
+//     energy is inside E0).
+//   - Electronic: a sum over the listed levels, ground level at zero.
+//
+// # Nuclear spin of homonuclear molecules
+//
+// Homonuclear linear molecules whose rotor levels are summed (H2, D2, O2,
+// N2, F2, Cl2 …) carry statistical weights for even and odd J taken from
+// the nuclear spins (H2: 1 for even J, 3 for odd J; ¹⁶O2: odd J only). The
+// spin isomers are taken in equilibrium with each other at every
+// temperature (equilibrium hydrogen, not the frozen 3:1 "normal" mixture),
+// and the weighted sum is divided by the total spin weight so that the
+// nuclear-spin entropy is left out, as in the published tables. At high T
+// this reduces to q = T/(2Θ).
+//
+// # Conventions
+//
+// The energy zero E0 of each species is its enthalpy of formation at 0 K,
+// ΔfH°(0 K), from the elements in their reference states. G and μ are
+// therefore on the scale of the JANAF tables: μ of O2 at 0 K is zero, and
+// μ of any species differs from the sum of its elements' by the Gibbs
+// energy of formation. The standard pressure is 1 bar (10⁵ Pa) unless a
+// caller selects 1 atm (101 325 Pa); it enters the standard-state table
+// functions only, never the absolute value of G at (T, P).
+//
+// Physical constants are the CODATA 2018 exact values from
+// gonum.org/v1/gonum/unit/constant. Molar masses are summed from the formula
+// with IUPAC standard atomic weights.
+package model

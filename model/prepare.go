@@ -1,0 +1,74 @@
+package model
+
+import (
+	"fmt"
+	"math"
+)
+
+// Prepare checks a species' data and derives its molar mass and
+// characteristic temperatures. A species must be prepared before use;
+// the catalogue does it for every species it loads.
+func (sp *Species) Prepare() error {
+	m, err := MolarMassKgPerMol(sp.Formula)
+	if err != nil {
+		return err
+	}
+	sp.MolarMassKgPerMol = m
+	sp.massKg = m / avogadroPerMol
+	sp.lnNQ0 = 1.5*math.Log(sp.massKg) + math.Log(quantumConcTerm)
+
+	if sp.Symmetry == 0 {
+		sp.Symmetry = 1
+	}
+	wantRot := map[RotorKind]int{Atom: 0, Linear: 1, Nonlinear: 3}[sp.Rotor]
+	if len(sp.RotConstPerCm) != wantRot {
+		return fmt.Errorf("model: %s: a %s rotor takes %d rotational constants, got %d", sp.Formula, sp.Rotor, wantRot, len(sp.RotConstPerCm))
+	}
+	sp.rotThetaK = sp.rotThetaK[:0]
+	prod := 1.0
+	for _, b := range sp.RotConstPerCm {
+		if !(b > 0) {
+			return fmt.Errorf("model: %s: rotational constant %g cm⁻¹ must be above 0", sp.Formula, b)
+		}
+		th := WavenumberToKelvin(b)
+		sp.rotThetaK = append(sp.rotThetaK, th)
+		prod *= th
+	}
+	switch sp.Rotor {
+	case Linear:
+		sp.lnRotClassical = -math.Log(float64(sp.Symmetry) * prod)
+	case Nonlinear:
+		sp.lnRotClassical = 0.5*math.Log(math.Pi) - math.Log(float64(sp.Symmetry)) - 0.5*math.Log(prod)
+	}
+	if sp.Homonuclear() && sp.Rotor != Linear {
+		return fmt.Errorf("model: %s: spin weights apply to linear molecules only", sp.Formula)
+	}
+	if sp.SpinWeights[0] < 0 || sp.SpinWeights[1] < 0 {
+		return fmt.Errorf("model: %s: spin weights must not be negative", sp.Formula)
+	}
+
+	sp.vibThetaK, sp.vibDeg = sp.vibThetaK[:0], sp.vibDeg[:0]
+	for _, v := range sp.Vib {
+		if !(v.WavenumberPerCm > 0) || v.Degeneracy < 1 {
+			return fmt.Errorf("model: %s: vibration %g cm⁻¹ ×%d: want a wavenumber above 0 and a degeneracy of at least 1", sp.Formula, v.WavenumberPerCm, v.Degeneracy)
+		}
+		sp.vibThetaK = append(sp.vibThetaK, WavenumberToKelvin(v.WavenumberPerCm))
+		sp.vibDeg = append(sp.vibDeg, float64(v.Degeneracy))
+	}
+
+	if len(sp.Elec) == 0 {
+		sp.Elec = []ElecLevel{{0, 1}}
+	}
+	sp.elecThetaK, sp.elecDeg = sp.elecThetaK[:0], sp.elecDeg[:0]
+	for i, e := range sp.Elec {
+		if e.Degeneracy < 1 || e.EnergyPerCm < 0 || (i == 0 && e.EnergyPerCm != 0) {
+			return fmt.Errorf("model: %s: electronic level %g cm⁻¹ ×%d: the ground level must be at 0 cm⁻¹ and every degeneracy at least 1", sp.Formula, e.EnergyPerCm, e.Degeneracy)
+		}
+		sp.elecThetaK = append(sp.elecThetaK, WavenumberToKelvin(e.EnergyPerCm))
+		sp.elecDeg = append(sp.elecDeg, float64(e.Degeneracy))
+	}
+	if sp.BoilingK < 0 {
+		return fmt.Errorf("model: %s: boiling point %g K must not be negative", sp.Formula, sp.BoilingK)
+	}
+	return nil
+}

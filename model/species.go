@@ -1,0 +1,150 @@
+package model
+
+import "strings"
+
+// RotorKind says how a species rotates.
+type RotorKind int
+
+const (
+	Atom      RotorKind = iota // no rotation
+	Linear                     // one rotational constant B
+	Nonlinear                  // three rotational constants A, B, C
+)
+
+func (k RotorKind) String() string {
+	switch k {
+	case Atom:
+		return "atom"
+	case Linear:
+		return "linear"
+	case Nonlinear:
+		return "nonlinear"
+	}
+	return "unknown"
+}
+
+// VibMode is one harmonic vibrational fundamental.
+type VibMode struct {
+	WavenumberPerCm float64
+	Degeneracy      int
+}
+
+// ElecLevel is one electronic level (or fine-structure component).
+type ElecLevel struct {
+	EnergyPerCm float64
+	Degeneracy  int
+}
+
+// Hazard is a set of hazard classes, one bit each.
+type Hazard uint8
+
+const (
+	Asphyxiant Hazard = 1 << iota
+	Flammable
+	Oxidizer
+	Toxic
+	Pyrophoric
+	Corrosive
+)
+
+var hazardNames = []struct {
+	h    Hazard
+	name string
+}{
+	{Asphyxiant, "asphyxiant"},
+	{Flammable, "flammable"},
+	{Oxidizer, "oxidizer"},
+	{Toxic, "toxic"},
+	{Pyrophoric, "pyrophoric"},
+	{Corrosive, "corrosive"},
+}
+
+// HazardByName returns the hazard class with the given name.
+func HazardByName(name string) (Hazard, bool) {
+	for _, hn := range hazardNames {
+		if hn.name == name {
+			return hn.h, true
+		}
+	}
+	return 0, false
+}
+
+// Names lists the classes in h in a fixed order.
+func (h Hazard) Names() []string {
+	var out []string
+	for _, hn := range hazardNames {
+		if h&hn.h != 0 {
+			out = append(out, hn.name)
+		}
+	}
+	return out
+}
+
+func (h Hazard) String() string { return strings.Join(h.Names(), ", ") }
+
+// AllHazards lists every hazard class, in display order.
+func AllHazards() []Hazard {
+	out := make([]Hazard, len(hazardNames))
+	for i, hn := range hazardNames {
+		out[i] = hn.h
+	}
+	return out
+}
+
+// Species is everything the partition function needs to know about one
+// molecule, with the sources of its numbers.
+type Species struct {
+	Formula string // how the species is addressed, e.g. "CO2"
+	Name    string // e.g. "carbon dioxide"
+
+	MolarMassKgPerMol float64 // from the formula and IUPAC atomic weights
+
+	Rotor RotorKind
+	// RotConstPerCm holds B for a linear molecule and A, B, C for a
+	// nonlinear one, in cm⁻¹.
+	RotConstPerCm []float64
+	Symmetry      int // rotational symmetry number σ
+	// SpinWeights are the nuclear-spin statistical weights of even and odd
+	// J for a homonuclear linear molecule; zero for heteronuclear ones.
+	SpinWeights [2]float64
+
+	Vib  []VibMode
+	Elec []ElecLevel // ground level first, at 0 cm⁻¹
+
+	// EnergyZeroJPerMol is ΔfH°(0 K): it puts all species on the scale of
+	// the elements in their reference states.
+	EnergyZeroJPerMol float64
+
+	BoilingK float64 // normal boiling (or sublimation) point; 0 if unknown
+	Hazards  Hazard
+
+	// Sources maps a field name of the catalogue file (for example "vib")
+	// to the publication its numbers come from.
+	Sources map[string]string
+	// Notes is free text shown with the species (e.g. "sublimes").
+	Notes string
+
+	// Derived once by prepare: characteristic temperatures in K.
+	rotThetaK  []float64
+	vibThetaK  []float64
+	vibDeg     []float64
+	elecThetaK []float64
+	elecDeg    []float64
+	massKg     float64
+	// lnNQ0 is ln[(2π m k/h²)^{3/2}]: ln nQ = lnNQ0 + 1.5 ln T.
+	lnNQ0 float64
+	// lnRotClassical is ln(√π/σ / √(ΘAΘBΘC)) or ln(1/(σΘ)).
+	lnRotClassical float64
+}
+
+// RotThetaK returns the rotational temperatures hcB/k in K.
+func (sp *Species) RotThetaK() []float64 { return sp.rotThetaK }
+
+// VibThetaK returns the vibrational temperatures hcν̃/k in K, one per mode.
+func (sp *Species) VibThetaK() []float64 { return sp.vibThetaK }
+
+// ElecThetaK returns the electronic level energies as temperatures in K.
+func (sp *Species) ElecThetaK() []float64 { return sp.elecThetaK }
+
+// Homonuclear reports whether even and odd J carry separate spin weights.
+func (sp *Species) Homonuclear() bool { return sp.SpinWeights[0]+sp.SpinWeights[1] > 0 }

@@ -1,0 +1,127 @@
+package model
+
+import (
+	"fmt"
+	"math"
+)
+
+// RotationTreatment chooses how linear rotors are handled.
+type RotationTreatment int
+
+const (
+	// RotationAuto sums levels while T < 50 Θrot, else uses the series.
+	RotationAuto RotationTreatment = iota
+	// RotationSummed always sums the rigid-rotor levels.
+	RotationSummed
+	// RotationClassical always uses the high-temperature limit T/(σΘ).
+	RotationClassical
+)
+
+// VibrationTreatment chooses the vibrational model.
+type VibrationTreatment int
+
+const (
+	VibrationHarmonic VibrationTreatment = iota // harmonic oscillators
+	VibrationFrozen                             // no vibrational excitation
+)
+
+// ElectronicTreatment chooses the electronic model.
+type ElectronicTreatment int
+
+const (
+	ElectronicLevels     ElectronicTreatment = iota // sum the listed levels
+	ElectronicGroundOnly                            // ground-level degeneracy only
+)
+
+// Treatment picks a model per degree of freedom. The zero value is the
+// default: summed/series rigid rotor, harmonic vibration, all listed
+// electronic levels.
+type Treatment struct {
+	Rotation   RotationTreatment
+	Vibration  VibrationTreatment
+	Electronic ElectronicTreatment
+}
+
+// State is one species at one (T, P): the terms of each factor and the
+// molar properties they give.
+type State struct {
+	TempK, PresPa float64
+
+	Trans, Rot, Vib, Elec Terms
+
+	CvJPerMolK float64
+	CpJPerMolK float64
+	UJPerMol   float64 // internal energy, on the ΔfH°(0 K) scale
+	HJPerMol   float64
+	SJPerMolK  float64
+	AJPerMol   float64
+	GJPerMol   float64 // also the chemical potential μ of the pure gas
+}
+
+// Total returns the sum of the four factors' terms.
+func (s *State) Total() Terms { return s.Trans.add(s.Rot).add(s.Vib).add(s.Elec) }
+
+// Errors from State.
+var (
+	ErrTemperature = fmt.Errorf("model: temperature must be a finite number above 0 K")
+	ErrPressure    = fmt.Errorf("model: pressure must be a finite number above 0 Pa")
+)
+
+// CheckConditions reports whether (T, P) is a state the model can take.
+func CheckConditions(tempK, presPa float64) error {
+	if !(tempK > 0) || math.IsInf(tempK, 0) {
+		return fmt.Errorf("%w (got %g K)", ErrTemperature, tempK)
+	}
+	if !(presPa > 0) || math.IsInf(presPa, 0) {
+		return fmt.Errorf("%w (got %g Pa)", ErrPressure, presPa)
+	}
+	return nil
+}
+
+// State computes the species at (T, P) with the default treatment.
+func (sp *Species) State(tempK, presPa float64) (State, error) {
+	return sp.StateWith(tempK, presPa, Treatment{})
+}
+
+// StateWith computes the species at (T, P) with a chosen treatment.
+func (sp *Species) StateWith(tempK, presPa float64, tr Treatment) (State, error) {
+	if err := CheckConditions(tempK, presPa); err != nil {
+		return State{}, err
+	}
+	var s State
+	sp.fill(&s, tempK, presPa, tr)
+	return s, nil
+}
+
+// Fill computes the state into s without checking (T, P); callers that have
+// checked the conditions once use it in loops.
+func (sp *Species) Fill(s *State, tempK, presPa float64, tr Treatment) {
+	sp.fill(s, tempK, presPa, tr)
+}
+
+func (sp *Species) fill(s *State, tempK, presPa float64, tr Treatment) {
+	s.TempK, s.PresPa = tempK, presPa
+	s.Trans = sp.translation(tempK, presPa)
+	s.Rot = sp.rotation(tempK, tr.Rotation)
+	if tr.Vibration == VibrationHarmonic {
+		s.Vib = sp.vibration(tempK)
+	} else {
+		s.Vib = Terms{}
+	}
+	s.Elec = sp.electronic(tempK, tr.Electronic)
+	tot := s.Total()
+	r := GasConstant
+	rt := r * tempK
+	s.CvJPerMolK = r * tot.Cv
+	s.CpJPerMolK = s.CvJPerMolK + r
+	s.UJPerMol = sp.EnergyZeroJPerMol + rt*tot.U
+	s.HJPerMol = s.UJPerMol + rt
+	s.SJPerMolK = r * (tot.LnQ + tot.U)
+	s.AJPerMol = sp.EnergyZeroJPerMol - rt*tot.LnQ
+	s.GJPerMol = s.AJPerMol + rt
+}
+
+// QuantumConcentration returns nQ = (2π m kT/h²)^{3/2} in m⁻³.
+func (sp *Species) QuantumConcentration(tempK float64) float64 {
+	return math.Exp(sp.lnNQ0 + 1.5*math.Log(tempK))
+}
