@@ -1,0 +1,42 @@
+// Package mixtures combines species from package model into ideal-gas
+// blends: it parses blend text and values with units, mixes, sweeps T or
+// P, and saves and loads blend files.
+//
+// # Ideal mixing
+//
+// Each species i of mole fraction xᵢ is taken at its partial pressure
+// pᵢ = xᵢP, so that its chemical potential is
+//
+//	μᵢ = μᵢ°(T) + RT ln(xᵢP/P°),
+//
+// with μᵢ°(T) the pure species' Gibbs energy at the standard pressure P°
+// (1 bar unless 1 atm is chosen). Molar properties of the blend are
+// mole-fraction sums of the species' partial molar properties:
+//
+//	H = Σ xᵢHᵢ   Cp = Σ xᵢCpᵢ   S = Σ xᵢSᵢ(T, pᵢ)   G = Σ xᵢμᵢ
+//
+// so S holds the mixing entropy ΔS_mix = −R Σ xᵢ ln xᵢ, which is also
+// reported on its own. Density is PM/(RT) and the speed of sound is
+// √(γRT/M), with γ = Cp/Cv.
+//
+// # Conventions
+//
+// Energies sit on the scale of package model: each species' energy zero is
+// its ΔfH°(0 K), so G and μ are referenced to the elements in their
+// standard reference states at 0 K. Inputs and outputs are SI unless a
+// name says otherwise (tempK, presPa, JPerMolK).
+//
+// # Blend text
+//
+// A blend is a list of "SPECIES AMOUNT" items separated by commas,
+// semicolons or new lines, for example
+//
+//	N2 78.08%, O2 20.95%, Ar 0.93%, CO2 0.04%
+//	SiH4 2%, H2 500ppm, N2 bal
+//	N2 0.79, O2 0.21
+//
+// An amount is a bare mole fraction (0.21), a mole percent (21% or
+// 21 mol%), ppm or ppb by moles, a mass fraction (0.3 kg/kg), a mass
+// percent (30 wt% or 30 mass%), a partial pressure with a pressure unit
+// (0.2 bar, 150 Pa), or "bal" for the one balance species.
+package mixtures

@@ -1,0 +1,129 @@
+package mixtures
+
+import (
+	"math"
+
+	"zmix/model"
+)
+
+// Mixture is a resolved ideal-gas blend: species and mole fractions that
+// sum to one.
+type Mixture struct {
+	Components        []Component
+	MolarMassKgPerMol float64
+}
+
+// Options are the choices a state is computed with. The zero value means
+// the defaults: the default model treatment and P° = 1 bar.
+type Options struct {
+	Treatment model.Treatment
+	StdPresPa float64 // standard pressure P°; 0 means 1 bar
+}
+
+func (o Options) stdPresPa() float64 {
+	if o.StdPresPa > 0 {
+		return o.StdPresPa
+	}
+	return model.StdPressureBarPa
+}
+
+// SpeciesTerm is one species' share of a mixture state.
+type SpeciesTerm struct {
+	Species       *model.Species
+	X             float64 // mole fraction
+	MassFrac      float64
+	PartialPresPa float64
+	// MuJPerMol is μᵢ = μᵢ°(T) + RT ln(xᵢP/P°); Mu0JPerMol is μᵢ°(T).
+	MuJPerMol  float64
+	Mu0JPerMol float64
+	// Partial molar properties: the species at (T, pᵢ), per mole of i.
+	SJPerMolK  float64
+	CpJPerMolK float64
+	HJPerMol   float64
+	// Contributions to the blend's molar S and Cp: xᵢSᵢ and xᵢCpᵢ.
+	SShareJPerMolK  float64
+	CpShareJPerMolK float64
+	// State is the full species state at (T, pᵢ), with its factor terms.
+	State model.State
+}
+
+// State is a mixture at one (T, P), per mole of mixture unless a method
+// says per kg.
+type State struct {
+	TempK, PresPa, StdPresPa float64
+
+	MolarMassKgPerMol float64
+	DensityKgPerM3    float64
+	CpJPerMolK        float64
+	CvJPerMolK        float64
+	Gamma             float64
+	SoundSpeedMPerS   float64
+	HJPerMol          float64
+	UJPerMol          float64
+	SJPerMolK         float64
+	GJPerMol          float64
+	AJPerMol          float64
+	SMixJPerMolK      float64 // −R Σ xᵢ ln xᵢ
+
+	Species []SpeciesTerm
+}
+
+// PerKg converts a molar quantity of the state to a specific one.
+func (s *State) PerKg(perMol float64) float64 { return perMol / s.MolarMassKgPerMol }
+
+// State computes the mixture at (T, P).
+func (m *Mixture) State(tempK, presPa float64, opts Options) (State, error) {
+	if err := model.CheckConditions(tempK, presPa); err != nil {
+		return State{}, err
+	}
+	var s State
+	m.Fill(&s, tempK, presPa, opts)
+	return s, nil
+}
+
+// Fill computes the mixture at (T, P) into s, reusing s.Species when it
+// has room. It does not check (T, P): callers check once with
+// model.CheckConditions.
+func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
+	if cap(s.Species) >= len(m.Components) {
+		s.Species = s.Species[:len(m.Components)]
+	} else {
+		s.Species = make([]SpeciesTerm, len(m.Components))
+	}
+	p0 := opts.stdPresPa()
+	r := model.GasConstant
+	rt := r * tempK
+	s.TempK, s.PresPa, s.StdPresPa = tempK, presPa, p0
+	s.MolarMassKgPerMol = m.MolarMassKgPerMol
+	var cp, cv, h, u, sEnt, g, a, smix float64
+	for i, c := range m.Components {
+		t := &s.Species[i]
+		t.Species, t.X, t.MassFrac = c.Species, c.X, c.MassFrac
+		pi := c.X * presPa
+		t.PartialPresPa = pi
+		c.Species.Fill(&t.State, tempK, pi, opts.Treatment)
+		st := &t.State
+		t.MuJPerMol = st.GJPerMol
+		// μ° at P°: the species' G shifted from pᵢ to P°.
+		t.Mu0JPerMol = st.GJPerMol - rt*math.Log(pi/p0)
+		t.SJPerMolK, t.CpJPerMolK, t.HJPerMol = st.SJPerMolK, st.CpJPerMolK, st.HJPerMol
+		t.SShareJPerMolK = c.X * st.SJPerMolK
+		t.CpShareJPerMolK = c.X * st.CpJPerMolK
+		cp += c.X * st.CpJPerMolK
+		cv += c.X * st.CvJPerMolK
+		h += c.X * st.HJPerMol
+		u += c.X * st.UJPerMol
+		sEnt += t.SShareJPerMolK
+		g += c.X * st.GJPerMol
+		a += c.X * st.AJPerMol
+		smix -= r * c.X * math.Log(c.X)
+	}
+	s.CpJPerMolK, s.CvJPerMolK = cp, cv
+	s.Gamma = cp / cv
+	s.HJPerMol, s.UJPerMol, s.SJPerMolK, s.GJPerMol = h, u, sEnt, g
+	// A of an ideal mixture: Σ xᵢ Aᵢ(T, pᵢ) = G − PV/n = G − RT.
+	s.AJPerMol = a
+	s.SMixJPerMolK = smix
+	s.DensityKgPerM3 = presPa * m.MolarMassKgPerMol / rt
+	s.SoundSpeedMPerS = math.Sqrt(s.Gamma * rt / m.MolarMassKgPerMol)
+}

@@ -1,0 +1,124 @@
+package mixtures
+
+import (
+	"context"
+	"errors"
+	"fmt"
+	"math"
+
+	"gonum.org/v1/gonum/floats"
+
+	"zmix/model"
+)
+
+// SweepVar is the variable a sweep moves.
+type SweepVar int
+
+const (
+	SweepTemperature SweepVar = iota
+	SweepPressure
+)
+
+func (v SweepVar) String() string {
+	if v == SweepPressure {
+		return "pressure"
+	}
+	return "temperature"
+}
+
+// Sweep describes a grid over T or P. Steps is the number of points, end
+// points included. Pressure sweeps always use a log grid.
+type Sweep struct {
+	Var      SweepVar
+	From, To float64 // K or Pa
+	Steps    int
+	Log      bool
+}
+
+// MaxSweepSteps bounds a sweep so that a typing slip cannot exhaust memory.
+const MaxSweepSteps = 1_000_000
+
+// ErrSweep is wrapped by every sweep error.
+var ErrSweep = errors.New("mixtures: bad sweep")
+
+// Check validates the sweep.
+func (sw Sweep) Check() error {
+	if sw.Steps < 2 || sw.Steps > MaxSweepSteps {
+		return fmt.Errorf("%w: %d steps; want a whole number of points from 2 to %d", ErrSweep, sw.Steps, MaxSweepSteps)
+	}
+	for _, v := range []float64{sw.From, sw.To} {
+		if !(v > 0) || math.IsInf(v, 0) {
+			unit := "K"
+			if sw.Var == SweepPressure {
+				unit = "Pa"
+			}
+			return fmt.Errorf("%w: end point %g %s; want %s above zero", ErrSweep, v, unit, sw.Var)
+		}
+	}
+	if sw.From == sw.To {
+		return fmt.Errorf("%w: the range starts and ends at %g; want two different end points", ErrSweep, sw.From)
+	}
+	return nil
+}
+
+// Grid returns the sweep's points.
+func (sw Sweep) Grid() []float64 {
+	xs := make([]float64, sw.Steps)
+	if sw.Log || sw.Var == SweepPressure {
+		return floats.LogSpan(xs, sw.From, sw.To)
+	}
+	return floats.Span(xs, sw.From, sw.To)
+}
+
+// SweepResult holds one mixture state per grid point.
+type SweepResult struct {
+	Sweep  Sweep
+	Grid   []float64
+	Points []State
+}
+
+// Run computes the mixture at every point of the sweep, holding the other
+// variable at fixedTempK or fixedPresPa.
+func (m *Mixture) Run(sw Sweep, fixedTempK, fixedPresPa float64, opts Options) (*SweepResult, error) {
+	return m.RunContext(context.Background(), sw, fixedTempK, fixedPresPa, opts, nil)
+}
+
+// progressEvery is how many points pass between progress reports.
+const progressEvery = 4096
+
+// RunContext is Run with cancellation and a progress callback, called
+// with the number of points done every few thousand points.
+func (m *Mixture) RunContext(ctx context.Context, sw Sweep, fixedTempK, fixedPresPa float64, opts Options, progress func(done, total int)) (*SweepResult, error) {
+	if err := sw.Check(); err != nil {
+		return nil, err
+	}
+	if err := model.CheckConditions(fixedTempK, fixedPresPa); err != nil {
+		return nil, err
+	}
+	res := &SweepResult{Sweep: sw, Grid: sw.Grid(), Points: make([]State, sw.Steps)}
+	// One backing array for every point's species terms: the result is
+	// the only allocation that grows with the number of points.
+	k := len(m.Components)
+	terms := make([]SpeciesTerm, sw.Steps*k)
+	for i, x := range res.Grid {
+		if i%progressEvery == 0 && i > 0 {
+			if err := ctx.Err(); err != nil {
+				return nil, err
+			}
+			if progress != nil {
+				progress(i, sw.Steps)
+			}
+		}
+		t, p := x, fixedPresPa
+		if sw.Var == SweepPressure {
+			t, p = fixedTempK, x
+		}
+		pt := &res.Points[i]
+		pt.Species = terms[i*k : (i+1)*k : (i+1)*k]
+		m.Fill(pt, t, p, opts)
+	}
+	if progress != nil {
+		progress(sw.Steps, sw.Steps)
+	}
+	return res, nil
+}

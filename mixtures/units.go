@@ -1,0 +1,161 @@
+package mixtures
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+)
+
+// Pressure is a parsed pressure: the absolute value in Pa and whether the
+// user gave it as gauge (barg, psig), converted with 101 325 Pa.
+type Pressure struct {
+	Pa    float64
+	Gauge bool
+}
+
+// AtmospherePa is the ambient pressure assumed for gauge readings.
+const AtmospherePa = 101325
+
+// TemperatureUnits and PressureUnits list the accepted unit words, for
+// error messages and help.
+const (
+	TemperatureUnits = "K, C (°C), F (°F), R (Rankine)"
+	PressureUnits    = "Pa, kPa, MPa, bar, mbar, atm, Torr, psi (psia); gauge: barg, psig"
+)
+
+// ErrValue is wrapped by every value-parsing error.
+var ErrValue = errors.New("mixtures: bad value")
+
+// splitNumber splits "25 °C" or "1.5bar" into the number and the unit text.
+func splitNumber(s string) (float64, string, error) {
+	s = strings.TrimSpace(s)
+	end := 0
+	for end < len(s) {
+		c := s[end]
+		if (c >= '0' && c <= '9') || c == '.' || c == '-' || c == '+' ||
+			((c == 'e' || c == 'E') && end > 0 && end+1 < len(s) && (s[end+1] == '-' || s[end+1] == '+' || (s[end+1] >= '0' && s[end+1] <= '9'))) {
+			end++
+			continue
+		}
+		break
+	}
+	if end == 0 {
+		return 0, "", fmt.Errorf("no number")
+	}
+	x, err := strconv.ParseFloat(s[:end], 64)
+	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
+		return 0, "", fmt.Errorf("%q is not a number", s[:end])
+	}
+	return x, strings.TrimSpace(s[end:]), nil
+}
+
+// ParseTemperature reads a temperature with its unit ("300 K", "25 C",
+// "77°F", "540 R") and returns kelvin. It rejects values at or below
+// absolute zero.
+func ParseTemperature(s string) (float64, error) {
+	x, unit, err := splitNumber(s)
+	if err != nil {
+		return 0, fmt.Errorf("%w: temperature %q: %v; want a number and a unit: %s", ErrValue, s, err, TemperatureUnits)
+	}
+	var k float64
+	switch strings.TrimPrefix(strings.ToLower(unit), "°") {
+	case "k":
+		k = x
+	case "c", "degc":
+		k = x + 273.15
+	case "f", "degf":
+		k = (x + 459.67) * 5 / 9
+	case "r", "degr":
+		k = x * 5 / 9
+	case "":
+		return 0, fmt.Errorf("%w: temperature %q has no unit; want one of %s (e.g. %g K)", ErrValue, s, TemperatureUnits, x)
+	default:
+		return 0, fmt.Errorf("%w: temperature %q: unknown unit %q; want %s", ErrValue, s, unit, TemperatureUnits)
+	}
+	if !(k > 0) {
+		return 0, fmt.Errorf("%w: temperature %q is at or below absolute zero; want a value above 0 K", ErrValue, s)
+	}
+	return k, nil
+}
+
+// pressureUnitPa holds the absolute pressure units and their size in Pa.
+var pressureUnitPa = map[string]float64{
+	"pa":   1,
+	"kpa":  1e3,
+	"mpa":  1e6,
+	"bar":  1e5,
+	"bara": 1e5,
+	"mbar": 100,
+	"atm":  101325,
+	"torr": 101325.0 / 760,
+	"psi":  6894.757293168361, // 1 lbf/in² (0.45359237 kg · 9.80665 m/s² / 0.0254² m²)
+	"psia": 6894.757293168361,
+}
+
+var gaugeUnitPa = map[string]float64{
+	"barg": 1e5,
+	"psig": 6894.757293168361,
+	"kpag": 1e3,
+}
+
+// pressureUnit returns the size in Pa of a unit word and whether it is
+// gauge; ok is false for words that are not pressure units.
+func pressureUnit(unit string) (sizePa float64, gauge, ok bool) {
+	u := strings.ToLower(unit)
+	if v, ok := pressureUnitPa[u]; ok {
+		return v, false, true
+	}
+	if v, ok := gaugeUnitPa[u]; ok {
+		return v, true, true
+	}
+	return 0, false, false
+}
+
+// ParsePressure reads a pressure with its unit ("1 bar", "14.7 psia",
+// "2 barg", "760 Torr"). Gauge units add 101 325 Pa. The absolute result
+// must be above 0 Pa.
+func ParsePressure(s string) (Pressure, error) {
+	x, unit, err := splitNumber(s)
+	if err != nil {
+		return Pressure{}, fmt.Errorf("%w: pressure %q: %v; want a number and a unit: %s", ErrValue, s, err, PressureUnits)
+	}
+	if unit == "" {
+		return Pressure{}, fmt.Errorf("%w: pressure %q has no unit; want one of %s (e.g. %g bar)", ErrValue, s, PressureUnits, x)
+	}
+	size, gauge, ok := pressureUnit(unit)
+	if !ok {
+		return Pressure{}, fmt.Errorf("%w: pressure %q: unknown unit %q; want %s", ErrValue, s, unit, PressureUnits)
+	}
+	p := Pressure{Pa: x * size, Gauge: gauge}
+	if gauge {
+		p.Pa += AtmospherePa
+	}
+	if !(p.Pa > 0) || math.IsInf(p.Pa, 0) {
+		return Pressure{}, fmt.Errorf("%w: pressure %q is at or below zero absolute; want a value above 0 Pa absolute", ErrValue, s)
+	}
+	return p, nil
+}
+
+// ParseRange reads "A..B" where A and B are values of one kind; a unit
+// written only after B applies to A too ("300..1500 K").
+func ParseRange(s string) (from, to string, err error) {
+	a, b, ok := strings.Cut(s, "..")
+	a, b = strings.TrimSpace(a), strings.TrimSpace(b)
+	if !ok || a == "" || b == "" {
+		return "", "", fmt.Errorf("%w: range %q: want FROM..TO, e.g. 300..1500 K or 1 bar..50 bar", ErrValue, s)
+	}
+	if _, ua, err := splitNumber(a); err == nil && ua == "" {
+		if _, ub, err := splitNumber(b); err == nil && ub != "" {
+			a += " " + ub
+		}
+	}
+	return a, b, nil
+}
+
+// FormatTemperature writes a temperature in kelvin with sensible digits.
+func FormatTemperature(tempK float64) string {
+	return strconv.FormatFloat(tempK, 'g', 6, 64) + " K"
+}
+
