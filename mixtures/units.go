@@ -158,4 +158,3 @@ func ParseRange(s string) (from, to string, err error) {
 func FormatTemperature(tempK float64) string {
 	return strconv.FormatFloat(tempK, 'g', 6, 64) + " K"
 }
-
