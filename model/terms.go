@@ -32,12 +32,13 @@ func (sp *Species) rotation(tempK float64, how RotationTreatment) Terms {
 	case Atom:
 		return Terms{}
 	case Nonlinear:
-		return Terms{LnQ: sp.lnRotClassical + 1.5*math.Log(tempK), U: 1.5, Cv: 0}
+		// ln q = const + (3/2) ln T: U = 3/2 and Cv = ∂(T·U)/∂T = 3/2.
+		return Terms{LnQ: sp.lnRotClassical + 1.5*math.Log(tempK), U: 1.5, Cv: 1.5}
 	}
 	theta := sp.rotThetaK[0]
 	switch how {
 	case RotationClassical:
-		return Terms{LnQ: sp.lnRotClassical + math.Log(tempK), U: 1, Cv: 0}
+		return Terms{LnQ: sp.lnRotClassical + math.Log(tempK), U: 1, Cv: 1}
 	case RotationSummed:
 		return sp.linearRotorSum(tempK)
 	}
