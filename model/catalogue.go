@@ -195,12 +195,13 @@ var catalogueFields = map[string]string{
 // Lines starting with # are comments; a "|" starts the field's source.
 func ParseCatalogue(file string, r io.Reader) ([]*Species, error) {
 	var (
-		out     []*Species
-		cur     *Species
-		curLine int
-		seen    map[string]bool
-		lineNo  int
-		scanner = bufio.NewScanner(r)
+		out      []*Species
+		cur      *Species
+		curLine  int
+		seen     map[string]bool
+		headerAt = map[string]int{} // formula → line of its block
+		lineNo   int
+		scanner  = bufio.NewScanner(r)
 	)
 	finish := func() error {
 		if cur == nil {
@@ -238,6 +239,10 @@ func ParseCatalogue(file string, r io.Reader) ([]*Species, error) {
 			if _, err := ParseFormula(formula); err != nil {
 				return nil, &CatalogueError{file, lineNo, "", strings.TrimPrefix(err.Error(), "model: ")}
 			}
+			if at, dup := headerAt[formula]; dup {
+				return nil, &CatalogueError{file, lineNo, "", fmt.Sprintf("species [%s] given twice (first at line %d)", formula, at)}
+			}
+			headerAt[formula] = lineNo
 			cur = &Species{Formula: formula, Sources: map[string]string{}}
 			curLine = lineNo
 			seen = map[string]bool{}

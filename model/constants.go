@@ -15,6 +15,9 @@ var (
 	avogadroPerMol  = float64(constant.Avogadro)
 )
 
+// lnBoltzmann is ln(k/(J/K)), for products with k taken in logs.
+var lnBoltzmann = math.Log(boltzmannJPerK)
+
 // GasConstant is R = N_A·k in J/(mol·K).
 var GasConstant = avogadroPerMol * boltzmannJPerK
 

@@ -59,6 +59,10 @@
 // caller selects 1 atm (101 325 Pa); it enters the standard-state table
 // functions only, never the absolute value of G at (T, P).
 //
+// State accepts temperatures from MinTempK to MaxTempK and any finite
+// pressure above 0 Pa; every figure it returns is then finite. Whether the
+// model is trustworthy there is a separate question, answered by Validity.
+//
 // Physical constants are the CODATA 2018 exact values from
 // gonum.org/v1/gonum/unit/constant. Molar masses are summed from the formula
 // with IUPAC standard atomic weights.

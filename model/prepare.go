@@ -43,6 +43,12 @@ func (sp *Species) Prepare() error {
 	if sp.Homonuclear() && sp.Rotor != Linear {
 		return fmt.Errorf("model: %s: spin weights apply to linear molecules only", sp.Formula)
 	}
+	// The summed rotor divides by the spin weights and the series by σ;
+	// they agree only for σ = 2, the one value a rotation that exchanges
+	// identical nuclei can have in a linear molecule.
+	if sp.Homonuclear() && sp.Symmetry != 2 {
+		return fmt.Errorf("model: %s: spin weights need symmetry number 2, got %d", sp.Formula, sp.Symmetry)
+	}
 	if sp.SpinWeights[0] < 0 || sp.SpinWeights[1] < 0 {
 		return fmt.Errorf("model: %s: spin weights must not be negative", sp.Formula)
 	}

@@ -67,10 +67,23 @@ var (
 	ErrPressure    = fmt.Errorf("model: pressure must be a finite number above 0 Pa")
 )
 
+// The temperatures the model accepts. No gas is classical at either end
+// (the validity notes say so long before); the bounds keep every figure
+// finite: below MinTempK level spacings over kT overflow, and far above
+// MaxTempK RT·ln q does.
+const (
+	MinTempK = 1e-3
+	MaxTempK = 1e6
+)
+
 // CheckConditions reports whether (T, P) is a state the model can take.
+// Any finite pressure above 0 Pa is accepted.
 func CheckConditions(tempK, presPa float64) error {
 	if !(tempK > 0) || math.IsInf(tempK, 0) {
 		return fmt.Errorf("%w (got %g K)", ErrTemperature, tempK)
+	}
+	if tempK < MinTempK || tempK > MaxTempK {
+		return fmt.Errorf("%w, from %g K to %g K (got %g K)", ErrTemperature, MinTempK, MaxTempK, tempK)
 	}
 	if !(presPa > 0) || math.IsInf(presPa, 0) {
 		return fmt.Errorf("%w (got %g Pa)", ErrPressure, presPa)

@@ -18,8 +18,10 @@ func (t Terms) add(o Terms) Terms { return Terms{t.LnQ + o.LnQ, t.U + o.U, t.Cv 
 // translation returns the translational terms at (T, P), with the 1/N! of
 // indistinguishable molecules folded in (Sackur-Tetrode).
 func (sp *Species) translation(tempK, presPa float64) Terms {
-	lnNQ := sp.lnNQ0 + 1.5*math.Log(tempK)
-	lnVPerN := math.Log(boltzmannJPerK * tempK / presPa)
+	lnT := math.Log(tempK)
+	lnNQ := sp.lnNQ0 + 1.5*lnT
+	// V/N = kT/P, taken in logs so that no product over- or underflows.
+	lnVPerN := lnBoltzmann + lnT - math.Log(presPa)
 	return Terms{LnQ: lnNQ + lnVPerN + 1, U: 1.5, Cv: 1.5}
 }
 
@@ -67,7 +69,9 @@ func linearRotorSeries(lnInvSigmaTheta, theta, tempK float64) Terms {
 
 // linearRotorSum sums Σ g_J (2J+1) exp(−J(J+1)Θ/T) directly, with the
 // nuclear-spin weights of a homonuclear molecule (equilibrium between spin
-// isomers) or 1/σ for a heteronuclear one.
+// isomers) or 1/σ for a heteronuclear one. The energy zero stays at J = 0
+// even when J = 0 is forbidden (¹⁶O2), but the sum runs relative to the
+// lowest allowed level, so that it cannot underflow to zero at low T.
 func (sp *Species) linearRotorSum(tempK float64) Terms {
 	theta := sp.rotThetaK[0]
 	wEven, wOdd := 1.0, 1.0
@@ -78,13 +82,21 @@ func (sp *Species) linearRotorSum(tempK float64) Terms {
 	} else if sp.Symmetry > 1 {
 		norm = float64(sp.Symmetry)
 	}
-	// Moments of the level energy ε_J = J(J+1)Θ, in units of T.
-	var z, m1, m2 float64
+	j0 := 0
+	if wEven == 0 {
+		j0 = 1
+	}
 	ratio := theta / tempK
-	for j := 0; ; j++ {
-		x := float64(j*(j+1)) * ratio
-		if x > 60 && j > 0 {
-			break
+	x0 := float64(j0*(j0+1)) * ratio // lowest allowed level, in units of kT
+	// Moments of the level energy ε_J − ε_J0, in units of kT.
+	var z, m1, m2 float64
+	for j := j0; ; j++ {
+		x := 0.0
+		if j > j0 {
+			x = float64(j*(j+1)-j0*(j0+1)) * ratio
+			if x > 60 {
+				break
+			}
 		}
 		w := wEven
 		if j%2 == 1 {
@@ -99,7 +111,7 @@ func (sp *Species) linearRotorSum(tempK float64) Terms {
 		m2 += t * x * x
 	}
 	mean := m1 / z
-	return Terms{LnQ: math.Log(z / norm), U: mean, Cv: m2/z - mean*mean}
+	return Terms{LnQ: math.Log(z/norm) - x0, U: mean + x0, Cv: m2/z - mean*mean}
 }
 
 // vibration returns the harmonic-oscillator terms, energy zero at v = 0.
@@ -112,8 +124,8 @@ func (sp *Species) vibration(tempK float64) Terms {
 			continue // exp(−x) underflows: the mode is frozen
 		}
 		em := math.Exp(-x)    // e^{−x}
-		om := -math.Expm1(-x) // 1 − e^{−x}
-		t.LnQ -= g * math.Log1p(-em)
+		om := -math.Expm1(-x) // 1 − e^{−x}, accurate when x is small
+		t.LnQ -= g * math.Log(om)
 		xe := x * em / om // x/(e^x − 1)
 		t.U += g * xe
 		t.Cv += g * xe * xe / em // x² e^x/(e^x−1)²
@@ -132,6 +144,9 @@ func (sp *Species) electronic(tempK float64, how ElectronicTreatment) Terms {
 	var z, m1, m2 float64
 	for i, theta := range sp.elecThetaK {
 		x := theta / tempK
+		if x > 700 {
+			continue // unpopulated; skipping it also avoids 0·∞ at tiny T
+		}
 		t := sp.elecDeg[i] * math.Exp(-x)
 		z += t
 		m1 += t * x
