@@ -52,6 +52,7 @@ var (
 	ErrUnknownSpecies = errors.New("unknown species")
 	ErrSyntax         = errors.New("cannot read item")
 	ErrTwoBalances    = errors.New("more than one balance species")
+	ErrNotFinite      = errors.New("amount is not a finite number")
 )
 
 // BlendError points at the offending token of a blend.
@@ -300,9 +301,8 @@ func (b *Blend) Resolve(cat *model.Catalogue, presPa float64) (*Mixture, error) 
 		}
 	}
 
-	// Mole fraction of each entry, then merge by species.
-	var comps []Component
-	index := map[*model.Species]int{}
+	// Mole fraction of each entry; NewMixture merges repeated species.
+	comps := make([]Component, 0, len(entries))
 	for _, e := range entries {
 		var x float64
 		a := e.item.Amount
@@ -316,29 +316,39 @@ func (b *Blend) Resolve(cat *model.Catalogue, presPa float64) (*Mixture, error) 
 		case Balance:
 			x = math.Max(0, 1-sumX-molarMass*sumWOverM)
 		}
-		if j, ok := index[e.sp]; ok {
-			comps[j].X += x
-			continue
-		}
-		index[e.sp] = len(comps)
 		comps = append(comps, Component{Species: e.sp, X: x})
 	}
 	return NewMixture(comps)
 }
 
-// NewMixture builds a mixture from mole fractions, dropping zero amounts
-// and normalising the rest to sum to one.
+// NewMixture builds a mixture from mole amounts (any positive scale),
+// merging a species given more than once (a gas mixed with itself adds
+// no entropy), dropping zero amounts and normalising the rest to sum to
+// one.
 func NewMixture(comps []Component) (*Mixture, error) {
 	var kept []Component
+	index := make(map[*model.Species]int, len(comps))
 	total := 0.0
 	for _, c := range comps {
-		if c.X < 0 || math.IsNaN(c.X) {
+		if math.IsNaN(c.X) || math.IsInf(c.X, 0) {
+			return nil, fmt.Errorf("mixtures: %s: %w (x = %g)", c.Species.Formula, ErrNotFinite, c.X)
+		}
+		if c.X < 0 {
 			return nil, fmt.Errorf("mixtures: %s: %w (x = %g)", c.Species.Formula, ErrNegative, c.X)
 		}
-		if c.X > 0 {
-			kept = append(kept, c)
-			total += c.X
+		if c.X == 0 {
+			continue
 		}
+		total += c.X
+		if j, ok := index[c.Species]; ok {
+			kept[j].X += c.X
+			continue
+		}
+		index[c.Species] = len(kept)
+		kept = append(kept, Component{Species: c.Species, X: c.X})
+	}
+	if math.IsInf(total, 0) {
+		return nil, fmt.Errorf("mixtures: %w: the amounts add up to more than a float can hold", ErrNotFinite)
 	}
 	if len(kept) == 0 {
 		return nil, fmt.Errorf("mixtures: %w: every amount is zero", ErrEmptyBlend)
