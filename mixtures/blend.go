@@ -142,11 +142,13 @@ func parseItem(s string) (Item, *BlendError) {
 
 // ParseAmount reads one amount; see the package documentation.
 func ParseAmount(s string) (Amount, *BlendError) {
-	low := strings.ToLower(strings.TrimSpace(s))
-	if low == "bal" || low == "balance" {
+	trimmed := strings.TrimSpace(s)
+	if low := strings.ToLower(trimmed); low == "bal" || low == "balance" {
 		return Amount{Basis: Balance}, nil
 	}
-	x, unit, err := splitNumber(low)
+	// The unit keeps its case for pressureUnit, which must tell MPa from mPa.
+	x, typedUnit, err := splitNumber(trimmed)
+	unit := strings.ToLower(typedUnit)
 	if err != nil {
 		return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %q: %v; want %s", s, err, amountForms)}
 	}
@@ -168,15 +170,21 @@ func ParseAmount(s string) (Amount, *BlendError) {
 	case "wt%", "wt %", "mass%", "mass %", "%wt":
 		a = Amount{MassFraction, x / 100}
 	default:
-		size, gauge, ok := pressureUnit(unit)
+		if why := ambiguousPressureUnit(typedUnit); why != "" {
+			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %q: %s", s, why)}
+		}
+		size, gauge, ok := pressureUnit(typedUnit)
 		if !ok || gauge {
 			why := "unknown unit"
 			if gauge {
 				why = "a partial pressure must be absolute, not gauge"
 			}
-			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %q: %s %q; want %s", s, why, unit, amountForms)}
+			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %q: %s %q; want %s", s, why, typedUnit, amountForms)}
 		}
 		a = Amount{PartialPres, x * size}
+		if math.IsInf(a.Value, 0) {
+			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %q is too large to compute with; want %s", s, amountForms)}
+		}
 	}
 	if a.Basis != PartialPres && a.Value > 1+1e-12 {
 		return Amount{}, &BlendError{Err: ErrOver100, Detail: fmt.Sprintf("%q alone is more than 100 %%", s)}

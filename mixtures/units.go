@@ -101,8 +101,12 @@ var gaugeUnitPa = map[string]float64{
 }
 
 // pressureUnit returns the size in Pa of a unit word and whether it is
-// gauge; ok is false for words that are not pressure units.
+// gauge; ok is false for words that are not pressure units. Case does not
+// matter, except that "mPa" is refused (see ambiguousPressureUnit).
 func pressureUnit(unit string) (sizePa float64, gauge, ok bool) {
+	if ambiguousPressureUnit(unit) != "" {
+		return 0, false, false
+	}
 	u := strings.ToLower(unit)
 	if v, ok := pressureUnitPa[u]; ok {
 		return v, false, true
@@ -111,6 +115,16 @@ func pressureUnit(unit string) (sizePa float64, gauge, ok bool) {
 		return v, true, true
 	}
 	return 0, false, false
+}
+
+// ambiguousPressureUnit explains why a unit is refused for its case, or
+// returns "". Folding case would read millipascal as megapascal, 10⁹ times
+// off, so a lower-case m before Pa is an error rather than a guess.
+func ambiguousPressureUnit(unit string) string {
+	if strings.EqualFold(unit, "mpa") && unit[0] == 'm' {
+		return fmt.Sprintf("%q would be millipascal, which is not accepted; write MPa for megapascal", unit)
+	}
+	return ""
 }
 
 // ParsePressure reads a pressure with its unit ("1 bar", "14.7 psia",
@@ -124,6 +138,9 @@ func ParsePressure(s string) (Pressure, error) {
 	if unit == "" {
 		return Pressure{}, fmt.Errorf("%w: pressure %q has no unit; want one of %s (e.g. %g bar)", ErrValue, s, PressureUnits, x)
 	}
+	if why := ambiguousPressureUnit(unit); why != "" {
+		return Pressure{}, fmt.Errorf("%w: pressure %q: %s; want %s", ErrValue, s, why, PressureUnits)
+	}
 	size, gauge, ok := pressureUnit(unit)
 	if !ok {
 		return Pressure{}, fmt.Errorf("%w: pressure %q: unknown unit %q; want %s", ErrValue, s, unit, PressureUnits)
@@ -132,7 +149,10 @@ func ParsePressure(s string) (Pressure, error) {
 	if gauge {
 		p.Pa += AtmospherePa
 	}
-	if !(p.Pa > 0) || math.IsInf(p.Pa, 0) {
+	if math.IsInf(p.Pa, 0) {
+		return Pressure{}, fmt.Errorf("%w: pressure %q is too large to compute with; want a finite value above 0 Pa absolute", ErrValue, s)
+	}
+	if !(p.Pa > 0) {
 		return Pressure{}, fmt.Errorf("%w: pressure %q is at or below zero absolute; want a value above 0 Pa absolute", ErrValue, s)
 	}
 	return p, nil
