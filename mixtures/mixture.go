@@ -1,6 +1,7 @@
 package mixtures
 
 import (
+	"fmt"
 	"math"
 
 	"zmix/model"
@@ -71,9 +72,28 @@ type State struct {
 // PerKg converts a molar quantity of the state to a specific one.
 func (s *State) PerKg(perMol float64) float64 { return perMol / s.MolarMassKgPerMol }
 
+// minPartialPa is the smallest normal float64, 2⁻¹⁰²². Below it a partial
+// pressure keeps too few digits for ln pᵢ, and at 0 the logarithm is −Inf.
+const minPartialPa = 0x1p-1022
+
+// CheckConditions reports whether the mixture can be computed at (T, P):
+// the model's range for T and P, and every partial pressure xᵢP a normal
+// float.
+func (m *Mixture) CheckConditions(tempK, presPa float64) error {
+	if err := model.CheckConditions(tempK, presPa); err != nil {
+		return err
+	}
+	for _, c := range m.Components {
+		if pi := c.X * presPa; pi < minPartialPa {
+			return fmt.Errorf("%w: the partial pressure of %s, x·P = %g Pa, is too small to compute with (got P = %g Pa)", model.ErrPressure, c.Species.Formula, pi, presPa)
+		}
+	}
+	return nil
+}
+
 // State computes the mixture at (T, P).
 func (m *Mixture) State(tempK, presPa float64, opts Options) (State, error) {
-	if err := model.CheckConditions(tempK, presPa); err != nil {
+	if err := m.CheckConditions(tempK, presPa); err != nil {
 		return State{}, err
 	}
 	var s State
@@ -83,7 +103,7 @@ func (m *Mixture) State(tempK, presPa float64, opts Options) (State, error) {
 
 // Fill computes the mixture at (T, P) into s, reusing s.Species when it
 // has room. It does not check (T, P): callers check once with
-// model.CheckConditions.
+// m.CheckConditions.
 func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 	if cap(s.Species) >= len(m.Components) {
 		s.Species = s.Species[:len(m.Components)]
