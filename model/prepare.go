@@ -53,13 +53,14 @@ func (sp *Species) Prepare() error {
 		return fmt.Errorf("model: %s: spin weights must not be negative", sp.Formula)
 	}
 
-	sp.vibThetaK, sp.vibDeg = sp.vibThetaK[:0], sp.vibDeg[:0]
+	sp.vibThetaK, sp.vibDeg, sp.vibModes = sp.vibThetaK[:0], sp.vibDeg[:0], sp.vibModes[:0]
 	for _, v := range sp.Vib {
 		if !(v.WavenumberPerCm > 0) || v.Degeneracy < 1 {
 			return fmt.Errorf("model: %s: vibration %g cm⁻¹ ×%d: want a wavenumber above 0 and a degeneracy of at least 1", sp.Formula, v.WavenumberPerCm, v.Degeneracy)
 		}
 		sp.vibThetaK = append(sp.vibThetaK, WavenumberToKelvin(v.WavenumberPerCm))
 		sp.vibDeg = append(sp.vibDeg, float64(v.Degeneracy))
+		sp.vibModes = append(sp.vibModes, vibTerm{WavenumberToKelvin(v.WavenumberPerCm), float64(v.Degeneracy), v.Degeneracy})
 	}
 
 	if len(sp.Elec) == 0 {
@@ -73,6 +74,7 @@ func (sp *Species) Prepare() error {
 		sp.elecThetaK = append(sp.elecThetaK, WavenumberToKelvin(e.EnergyPerCm))
 		sp.elecDeg = append(sp.elecDeg, float64(e.Degeneracy))
 	}
+	sp.lnElecG0 = math.Log(sp.elecDeg[0])
 	if sp.BoilingK < 0 {
 		return fmt.Errorf("model: %s: boiling point %g K must not be negative", sp.Formula, sp.BoilingK)
 	}

@@ -128,13 +128,22 @@ type Species struct {
 	rotThetaK  []float64
 	vibThetaK  []float64
 	vibDeg     []float64
+	vibModes   []vibTerm // the same modes, packed for the hot loop
 	elecThetaK []float64
 	elecDeg    []float64
+	lnElecG0   float64 // ln of the ground level's degeneracy
 	massKg     float64
 	// lnNQ0 is ln[(2π m k/h²)^{3/2}]: ln nQ = lnNQ0 + 1.5 ln T.
 	lnNQ0 float64
 	// lnRotClassical is ln(√π/σ / √(ΘAΘBΘC)) or ln(1/(σΘ)).
 	lnRotClassical float64
+}
+
+// vibTerm is one vibrational mode as the partition function uses it.
+type vibTerm struct {
+	thetaK float64 // hcν̃/k
+	deg    float64
+	nDeg   int // deg as a count, for the product of 1 − e^{−x}
 }
 
 // RotThetaK returns the rotational temperatures hcB/k in K.

@@ -114,8 +114,9 @@ func (sp *Species) Fill(s *State, tempK, presPa float64, tr Treatment) {
 
 func (sp *Species) fill(s *State, tempK, presPa float64, tr Treatment) {
 	s.TempK, s.PresPa = tempK, presPa
-	s.Trans = sp.translation(tempK, presPa)
-	s.Rot = sp.rotation(tempK, tr.Rotation)
+	lnT := math.Log(tempK)
+	s.Trans = sp.translation(lnT, presPa)
+	s.Rot = sp.rotation(tempK, lnT, tr.Rotation)
 	if tr.Vibration == VibrationHarmonic {
 		s.Vib = sp.vibration(tempK)
 	} else {

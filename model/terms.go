@@ -15,10 +15,9 @@ func (t Terms) S() float64 { return t.LnQ + t.U }
 
 func (t Terms) add(o Terms) Terms { return Terms{t.LnQ + o.LnQ, t.U + o.U, t.Cv + o.Cv} }
 
-// translation returns the translational terms at (T, P), with the 1/N! of
+// translation returns the translational terms at (T, P), given ln T, with the 1/N! of
 // indistinguishable molecules folded in (Sackur-Tetrode).
-func (sp *Species) translation(tempK, presPa float64) Terms {
-	lnT := math.Log(tempK)
+func (sp *Species) translation(lnT, presPa float64) Terms {
 	lnNQ := sp.lnNQ0 + 1.5*lnT
 	// V/N = kT/P, taken in logs so that no product over- or underflows.
 	lnVPerN := lnBoltzmann + lnT - math.Log(presPa)
@@ -29,31 +28,31 @@ func (sp *Species) translation(tempK, presPa float64) Terms {
 const rotorSumLimit = 50
 
 // rotation returns the rigid-rotor terms.
-func (sp *Species) rotation(tempK float64, how RotationTreatment) Terms {
+func (sp *Species) rotation(tempK, lnT float64, how RotationTreatment) Terms {
 	switch sp.Rotor {
 	case Atom:
 		return Terms{}
 	case Nonlinear:
 		// ln q = const + (3/2) ln T: U = 3/2 and Cv = ∂(T·U)/∂T = 3/2.
-		return Terms{LnQ: sp.lnRotClassical + 1.5*math.Log(tempK), U: 1.5, Cv: 1.5}
+		return Terms{LnQ: sp.lnRotClassical + 1.5*lnT, U: 1.5, Cv: 1.5}
 	}
 	theta := sp.rotThetaK[0]
 	switch how {
 	case RotationClassical:
-		return Terms{LnQ: sp.lnRotClassical + math.Log(tempK), U: 1, Cv: 1}
+		return Terms{LnQ: sp.lnRotClassical + lnT, U: 1, Cv: 1}
 	case RotationSummed:
 		return sp.linearRotorSum(tempK)
 	}
 	if tempK < rotorSumLimit*theta {
 		return sp.linearRotorSum(tempK)
 	}
-	return linearRotorSeries(sp.lnRotClassical, theta, tempK)
+	return linearRotorSeries(sp.lnRotClassical, theta, tempK, lnT)
 }
 
 // linearRotorSeries is the Euler–Maclaurin expansion of the rigid-rotor
 // sum, q = T/(σΘ)·(1 + y/3 + y²/15 + 4y³/315) with y = Θ/T. Its error at
 // T ≥ 50 Θ is below 1e-8 in ln q.
-func linearRotorSeries(lnInvSigmaTheta, theta, tempK float64) Terms {
+func linearRotorSeries(lnInvSigmaTheta, theta, tempK, lnT float64) Terms {
 	y := theta / tempK
 	f := 1 + y/3 + y*y/15 + 4*y*y*y/315
 	// y·df/dy and y²·d²f/dy², to carry the derivatives through T = Θ/y.
@@ -64,7 +63,7 @@ func linearRotorSeries(lnInvSigmaTheta, theta, tempK float64) Terms {
 	g1 := yf1 / f
 	u := 1 - g1
 	d2 := g1 + y2f2/f - g1*g1
-	return Terms{LnQ: lnInvSigmaTheta + math.Log(tempK) + math.Log(f), U: u, Cv: u + d2}
+	return Terms{LnQ: lnInvSigmaTheta + lnT + math.Log(f), U: u, Cv: u + d2}
 }
 
 // linearRotorSum sums Σ g_J (2J+1) exp(−J(J+1)Θ/T) directly, with the
@@ -115,22 +114,43 @@ func (sp *Species) linearRotorSum(tempK float64) Terms {
 }
 
 // vibration returns the harmonic-oscillator terms, energy zero at v = 0.
+// ln q = −Σ g ln(1 − e^{−x}) is taken as the log of one product, so that a
+// mode costs a single exponential.
 func (sp *Species) vibration(tempK float64) Terms {
-	var t Terms
-	for i, theta := range sp.vibThetaK {
-		g := sp.vibDeg[i]
-		x := theta / tempK
+	var lnQ, u, cv float64
+	invT := 1 / tempK
+	prod := 1.0 // Π (1 − e^{−x})^g not yet logged
+	for _, m := range sp.vibModes {
+		x := m.thetaK * invT
 		if x > 700 {
 			continue // exp(−x) underflows: the mode is frozen
 		}
-		em := math.Exp(-x)    // e^{−x}
-		om := -math.Expm1(-x) // 1 − e^{−x}, accurate when x is small
-		t.LnQ -= g * math.Log(om)
-		xe := x * em / om // x/(e^x − 1)
-		t.U += g * xe
-		t.Cv += g * xe * xe / em // x² e^x/(e^x−1)²
+		em := math.Exp(-x) // e^{−x}
+		om := 1 - em       // 1 − e^{−x}: exact enough while e^{−x} < 1/2
+		if em > 0.5 {
+			om = -math.Expm1(-x)
+		}
+		switch m.nDeg {
+		case 1:
+			prod *= om
+		case 2:
+			prod *= om * om
+		case 3:
+			prod *= om * om * om
+		default:
+			prod *= math.Pow(om, m.deg)
+		}
+		if prod < 1e-250 { // keep the product clear of underflow
+			lnQ -= math.Log(prod)
+			prod = 1
+		}
+		r := x / om  // x/(1 − e^{−x})
+		xe := r * em // x/(e^x − 1)
+		u += m.deg * xe
+		cv += m.deg * xe * r // x² e^x/(e^x − 1)²
 	}
-	return t
+	lnQ -= math.Log(prod)
+	return Terms{LnQ: lnQ, U: u, Cv: cv}
 }
 
 // electronic returns the terms of the listed electronic levels.
@@ -138,8 +158,8 @@ func (sp *Species) electronic(tempK float64, how ElectronicTreatment) Terms {
 	if len(sp.elecThetaK) == 0 {
 		return Terms{}
 	}
-	if how == ElectronicGroundOnly {
-		return Terms{LnQ: math.Log(sp.elecDeg[0])}
+	if how == ElectronicGroundOnly || len(sp.elecThetaK) == 1 {
+		return Terms{LnQ: sp.lnElecG0}
 	}
 	var z, m1, m2 float64
 	for i, theta := range sp.elecThetaK {
