@@ -1,12 +1,181 @@
+// Command zmix computes the thermodynamic state of ideal-gas mixtures from
+// molecular partition functions. With no arguments it opens the keyboard
+// workbench; its commands give every figure to scripts:
+//
+//	zmix                      the workbench, on the built-in demo blend
+//	zmix open FILE            the workbench, on a saved blend file
+//	zmix state  --blend SPEC --temp T --pres P [--json | --csv]
+//	zmix sweep  --blend SPEC (--temp A..B | --pres A..B) [--steps N] [--log]
+//	zmix catalog [FORMULA]
+//
+// main.go only parses flags into a config, runs the command and maps its
+// error to an exit status; the physics lives in packages model and
+// mixtures.
 package main
 
 import (
-	_ "github.com/NimbleMarkets/ntcharts/canvas"
-	_ "github.com/charmbracelet/bubbles/key"
-	_ "github.com/charmbracelet/bubbletea"
-	_ "github.com/charmbracelet/lipgloss"
-	_ "gonum.org/v1/gonum/unit/constant"
-	_ "github.com/charmbracelet/x/exp/teatest"
+	"errors"
+	"fmt"
+	"io"
+	"os"
+	"strings"
+
+	"zmix/ui"
 )
 
-func main() {}
+// Exit statuses.
+const (
+	exitOK      = 0
+	exitFailure = 1 // reading or writing a file or the terminal failed
+	exitUsage   = 2 // the input was wrong; the message says how
+)
+
+func main() {
+	os.Exit(run(os.Args[1:], os.Stdout, os.Stderr))
+}
+
+// run is the whole program, with its streams passed in so that tests can
+// drive it without starting a process.
+func run(args []string, stdout, stderr io.Writer) int {
+	a := &app{
+		stdout:     stdout,
+		stderr:     stderr,
+		getenv:     os.Getenv,
+		workbench:  ui.Run,
+		isTerminal: isTerminal,
+	}
+	return a.run(args)
+}
+
+// app holds what a command needs from the outside world.
+type app struct {
+	stdout, stderr io.Writer
+	getenv         func(string) string
+	workbench      func(ui.Config) error
+	isTerminal     func(io.Writer) bool
+}
+
+// command is one subcommand: its name, one-line summary and runner.
+type command struct {
+	name, summary string
+	run           func(a *app, g *globalOpts, args []string) error
+	usage         func(w io.Writer)
+}
+
+var commands []command
+
+func init() {
+	// Set here rather than in the declaration: help refers back to the list.
+	commands = []command{
+		{"state", "the full readout of a blend at one temperature and pressure", (*app).cmdState, usageState},
+		{"sweep", "a blend's properties over a range of temperature or pressure", (*app).cmdSweep, usageSweep},
+		{"catalog", "the species list, or one species' data, sources and table", (*app).cmdCatalog, usageCatalog},
+		{"open", "the workbench on a saved blend file", (*app).cmdOpen, usageOpen},
+		{"help", "help on zmix or on one command", (*app).cmdHelp, usageHelp},
+	}
+}
+
+func lookupCommand(name string) (command, bool) {
+	for _, c := range commands {
+		if c.name == name {
+			return c, true
+		}
+	}
+	return command{}, false
+}
+
+func commandNames() string {
+	names := make([]string, len(commands))
+	for i, c := range commands {
+		names[i] = c.name
+	}
+	return strings.Join(names, ", ")
+}
+
+func (a *app) run(args []string) int {
+	g := &globalOpts{}
+	fs := newFlagSet("zmix")
+	g.register(fs, true)
+	rest, err := parseFlags(fs, args, false)
+	if errors.Is(err, errHelp) {
+		usageMain(a.stdout)
+		return exitOK
+	}
+	if err != nil {
+		return a.fail("zmix", err)
+	}
+	g.fromEnv(a.getenv)
+	if len(rest) == 0 {
+		return a.fail("zmix", a.openWorkbench(g, ""))
+	}
+	c, ok := lookupCommand(rest[0])
+	if !ok {
+		return a.fail("zmix", badInput("unknown command %q; the commands are %s (zmix --help shows them all)", rest[0], commandNames()))
+	}
+	err = c.run(a, g, rest[1:])
+	if errors.Is(err, errHelp) {
+		c.usage(a.stdout)
+		return exitOK
+	}
+	return a.fail("zmix "+c.name, err)
+}
+
+// cliError is an error with the exit status it calls for.
+type cliError struct {
+	code int
+	msg  string
+}
+
+func (e *cliError) Error() string { return e.msg }
+
+// badInput is an error in what the user typed or saved: exit status 2.
+func badInput(format string, args ...any) error {
+	return &cliError{exitUsage, fmt.Sprintf(format, args...)}
+}
+
+// ioFailure is a file or terminal that could not be read or written:
+// exit status 1.
+func ioFailure(err error) error {
+	return &cliError{exitFailure, err.Error()}
+}
+
+// fail reports err, if any, as one line on stderr and returns the exit
+// status. Errors that did not come through badInput or ioFailure are
+// taken as bad input: the engine's errors describe the input.
+func (a *app) fail(prefix string, err error) int {
+	if err == nil {
+		return exitOK
+	}
+	code := exitUsage
+	var ce *cliError
+	if errors.As(err, &ce) {
+		code = ce.code
+	}
+	fmt.Fprintf(a.stderr, "%s: %s\n", prefix, oneLine(err.Error()))
+	return code
+}
+
+// packagePrefixes are stripped from engine errors: the user needs to know
+// what was wrong, not which package noticed.
+var packagePrefixes = strings.NewReplacer(
+	"mixtures: bad value: ", "",
+	"mixtures: bad sweep: ", "",
+	"mixtures: ", "",
+	"model: ", "",
+)
+
+func oneLine(msg string) string {
+	msg = packagePrefixes.Replace(msg)
+	msg = strings.ReplaceAll(msg, "\r", " ")
+	return strings.ReplaceAll(msg, "\n", " ")
+}
+
+// isTerminal reports whether w is a character device such as a terminal.
+func isTerminal(w io.Writer) bool {
+	f, ok := w.(*os.File)
+	if !ok {
+		return false
+	}
+	info, err := f.Stat()
+	return err == nil && info.Mode()&os.ModeCharDevice != 0
+}

@@ -1,0 +1,323 @@
+package main
+
+import (
+	"bytes"
+	"errors"
+	"flag"
+	"fmt"
+	"io"
+	"io/fs"
+	"sort"
+	"strconv"
+	"strings"
+
+	"zmix/mixtures"
+	"zmix/model"
+)
+
+// errHelp is what parseFlags returns for -h or --help.
+var errHelp = flag.ErrHelp
+
+// globalOpts are the options every command shares: the display mode and
+// the user's species files.
+type globalOpts struct {
+	ascii        bool
+	noColor      bool
+	speciesFiles []string
+}
+
+// fromEnv takes the defaults from the environment; flags given later win.
+func (g *globalOpts) fromEnv(getenv func(string) string) {
+	if v := strings.ToLower(strings.TrimSpace(getenv("ZMIX_ASCII"))); v != "" && v != "0" && v != "false" && v != "no" {
+		g.ascii = true
+	}
+	// no-color.org: any non-empty value turns colour off.
+	if getenv("NO_COLOR") != "" {
+		g.noColor = true
+	}
+}
+
+// register adds the shared flags to fs; the colour flag only matters where
+// the workbench may open.
+func (g *globalOpts) register(fs *flag.FlagSet, workbench bool) {
+	fs.BoolVar(&g.ascii, "ascii", g.ascii, "plain ASCII output: no Greek letters, superscripts, braille or box drawing (also ZMIX_ASCII=1)")
+	fs.Func("species", "merge the species of `FILE` over the built-in catalogue (may be repeated)", func(s string) error {
+		if strings.TrimSpace(s) == "" {
+			return errors.New("want the path of a species file")
+		}
+		g.speciesFiles = append(g.speciesFiles, s)
+		return nil
+	})
+	if workbench {
+		fs.BoolVar(&g.noColor, "no-color", g.noColor, "no colour in the workbench (also NO_COLOR=1)")
+	}
+}
+
+// catalogue returns the built-in catalogue with the user's files merged
+// over it, in the order given.
+func (g *globalOpts) catalogue() (*model.Catalogue, error) {
+	cat := model.Builtin()
+	for _, path := range g.speciesFiles {
+		next, err := cat.WithFile(path)
+		if err != nil {
+			var pe *fs.PathError
+			if errors.As(err, &pe) {
+				return nil, ioFailure(fmt.Errorf("--species %s: cannot read it: %v", path, pe.Err))
+			}
+			return nil, badInput("--species %s: %v", path, err)
+		}
+		cat = next
+	}
+	return cat, nil
+}
+
+func newFlagSet(name string) *flag.FlagSet {
+	fs := flag.NewFlagSet(name, flag.ContinueOnError)
+	fs.SetOutput(io.Discard) // errors are reported as one line by the caller
+	fs.Usage = func() {}
+	return fs
+}
+
+// parseFlags parses args into fs. With interleave, positional arguments may
+// stand between flags ("catalog CO2 --std 1atm"); without, parsing stops at
+// the first one (the command name after the global flags).
+func parseFlags(fs *flag.FlagSet, args []string, interleave bool) ([]string, error) {
+	var positional []string
+	for {
+		if err := fs.Parse(args); err != nil {
+			if errors.Is(err, flag.ErrHelp) {
+				return nil, errHelp
+			}
+			return nil, flagError(fs, err)
+		}
+		args = fs.Args()
+		if !interleave || len(args) == 0 {
+			return append(positional, args...), nil
+		}
+		positional = append(positional, args[0])
+		args = args[1:]
+	}
+}
+
+// flagError rewrites the flag package's messages into zmix's one-line
+// form, listing the flags where a flag was unknown.
+func flagError(fs *flag.FlagSet, err error) error {
+	// The flag package names flags with one dash; zmix documents two.
+	msg := strings.ReplaceAll(err.Error(), "flag -", "flag --")
+	if name, ok := strings.CutPrefix(msg, "flag provided but not defined: "); ok {
+		return badInput("unknown flag --%s; the flags are %s (see %s --help)", strings.TrimLeft(name, "-"), flagList(fs), fs.Name())
+	}
+	if name, ok := strings.CutPrefix(msg, "flag needs an argument: "); ok {
+		return badInput("flag --%s needs a value (see %s --help)", strings.TrimLeft(name, "-"), fs.Name())
+	}
+	return badInput("%s (see %s --help)", msg, fs.Name())
+}
+
+func flagList(fs *flag.FlagSet) string {
+	var names []string
+	fs.VisitAll(func(f *flag.Flag) { names = append(names, "--"+f.Name) })
+	sort.Strings(names)
+	return strings.Join(names, ", ")
+}
+
+// flagsGiven returns the names of the flags that were set on the command
+// line.
+func flagsGiven(fs *flag.FlagSet) map[string]bool {
+	set := map[string]bool{}
+	fs.Visit(func(f *flag.Flag) { set[f.Name] = true })
+	return set
+}
+
+// noArgs rejects positional arguments for commands that take none.
+func noArgs(cmd string, rest []string) error {
+	if len(rest) > 0 {
+		return badInput("unexpected argument %q; every input is a flag, and a value with a space needs quotes, e.g. --pres \"1 bar\" (see zmix %s --help)", rest[0], cmd)
+	}
+	return nil
+}
+
+// outputFormat is how a command writes its result.
+type outputFormat int
+
+const (
+	formatText outputFormat = iota
+	formatJSON
+	formatCSV
+)
+
+func pickFormat(asJSON, asCSV bool) (outputFormat, error) {
+	switch {
+	case asJSON && asCSV:
+		return 0, badInput("--json and --csv both given; choose one output format")
+	case asJSON:
+		return formatJSON, nil
+	case asCSV:
+		return formatCSV, nil
+	}
+	return formatText, nil
+}
+
+// page returns where a text output is rendered: out itself, or a writer
+// that turns it into plain ASCII.
+func page(out *bytes.Buffer, ascii bool) io.Writer {
+	if ascii {
+		return &asciiWriter{out}
+	}
+	return out
+}
+
+// emit writes a finished output in one go, so that a failure part-way
+// never leaves half a readout on the screen.
+func (a *app) emit(out *bytes.Buffer) error {
+	if _, err := a.stdout.Write(out.Bytes()); err != nil {
+		return ioFailure(fmt.Errorf("writing the output: %v", err))
+	}
+	return nil
+}
+
+// blendSource is the blend a command works on, from --blend text or from a
+// saved blend file (--blend @FILE).
+type blendSource struct {
+	blend *mixtures.Blend
+	file  *mixtures.BlendFile // nil for blend text
+	path  string
+}
+
+const blendForms = `blend text such as "N2 78.08%, O2 20.95%, Ar 0.93%, CO2 0.04%" or @FILE for a saved blend file`
+
+func readBlend(spec string) (*blendSource, error) {
+	if strings.TrimSpace(spec) == "" {
+		return nil, badInput("--blend is missing; give %s", blendForms)
+	}
+	if path, ok := strings.CutPrefix(spec, "@"); ok {
+		if path == "" {
+			return nil, badInput("--blend @: the file name is missing; give %s", blendForms)
+		}
+		f, err := mixtures.LoadBlendFile(path)
+		if err != nil {
+			var pe *fs.PathError
+			if errors.As(err, &pe) {
+				return nil, ioFailure(fmt.Errorf("--blend @%s: cannot read it: %v", path, pe.Err))
+			}
+			return nil, badInput("--blend @%s: %v", path, err)
+		}
+		b, err := f.Parse()
+		if err != nil {
+			return nil, badInput("--blend @%s: %v", path, err)
+		}
+		return &blendSource{blend: b, file: f, path: path}, nil
+	}
+	b, err := mixtures.ParseBlend(spec)
+	if err != nil {
+		return nil, badInput("--blend: %v", err)
+	}
+	return &blendSource{blend: b}, nil
+}
+
+// label is how the blend is named in a readout.
+func (s *blendSource) label() string {
+	if s.file == nil {
+		return s.blend.Text
+	}
+	text := s.file.BlendText()
+	if s.file.Name != "" {
+		return fmt.Sprintf("%s  [%s: %s]", text, s.path, s.file.Name)
+	}
+	return fmt.Sprintf("%s  [%s]", text, s.path)
+}
+
+// fileValue returns the value saved in the blend file for a condition, or
+// "" if there is no file or it holds none.
+func (s *blendSource) fileValue(which string) string {
+	if s.file == nil {
+		return ""
+	}
+	switch which {
+	case "temp":
+		return s.file.Temperature
+	case "pres":
+		return s.file.Pressure
+	case "std":
+		return s.file.StandardPressure
+	}
+	return ""
+}
+
+// pick returns the flag's value if it was given, else the blend file's.
+func (s *blendSource) pick(given map[string]bool, name, flagValue string) string {
+	if given[name] {
+		return flagValue
+	}
+	return s.fileValue(name)
+}
+
+// temperature is a parsed temperature with the text it came from.
+type temperature struct {
+	kelvin float64
+	text   string
+}
+
+func parseTemperature(flagName, text string) (temperature, error) {
+	k, err := mixtures.ParseTemperature(text)
+	if err != nil {
+		return temperature{}, badInput("%s: %v", flagName, err)
+	}
+	return temperature{k, text}, nil
+}
+
+// pressure is a parsed total pressure, with the text it came from; text is
+// empty when the total is the sum of the blend's partial pressures.
+type pressure struct {
+	mixtures.Pressure
+	text string
+}
+
+func parsePressure(flagName, text string) (pressure, error) {
+	p, err := mixtures.ParsePressure(text)
+	if err != nil {
+		return pressure{}, badInput("%s: %v", flagName, err)
+	}
+	return pressure{p, text}, nil
+}
+
+// totalPressure reads the total pressure, or, if none is given and every
+// amount of the blend is a partial pressure, takes their sum.
+func totalPressure(src *blendSource, text string) (pressure, error) {
+	if strings.TrimSpace(text) != "" {
+		return parsePressure("--pres", text)
+	}
+	if sum, all := src.blend.SumPartialPa(); all && sum > 0 {
+		return pressure{Pressure: mixtures.Pressure{Pa: sum}}, nil
+	}
+	return pressure{}, badInput("--pres is missing; give the total pressure with a unit (%s), e.g. --pres 1atm or --pres 2barg", mixtures.PressureUnits)
+}
+
+func parseStd(text string) (float64, error) {
+	pa, err := mixtures.StdPressureFromText(text)
+	if err != nil {
+		return 0, badInput("--std: %v", err)
+	}
+	return pa, nil
+}
+
+// stdLabel names a standard pressure the way the user chooses it.
+func stdLabel(pa float64) string {
+	if pa == model.StdPressureAtmPa {
+		return "1 atm (101325 Pa)"
+	}
+	return "1 bar (100000 Pa)"
+}
+
+// stepsFlag is --steps: a whole number of points, end points included.
+type stepsFlag struct{ n int }
+
+func (s *stepsFlag) String() string { return strconv.Itoa(s.n) }
+
+func (s *stepsFlag) Set(v string) error {
+	n, err := strconv.Atoi(strings.TrimSpace(v))
+	if err != nil || n < 2 || n > mixtures.MaxSweepSteps {
+		return fmt.Errorf("want a whole number of points from 2 to %d, end points included", mixtures.MaxSweepSteps)
+	}
+	s.n = n
+	return nil
+}

@@ -1,0 +1,176 @@
+package main
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+	"io"
+	"io/fs"
+	"strings"
+
+	"zmix/mixtures"
+	"zmix/model"
+	"zmix/ui"
+)
+
+func (a *app) cmdOpen(g *globalOpts, args []string) error {
+	flags := newFlagSet("zmix open")
+	g.register(flags, true)
+	rest, err := parseFlags(flags, args, true)
+	if err != nil {
+		return err
+	}
+	switch len(rest) {
+	case 0:
+		return badInput("the blend file is missing; give one, e.g. zmix open line3.json (zmix with no arguments opens the demo)")
+	case 1:
+	default:
+		return badInput("one blend file at a time; got %d: %s", len(rest), strings.Join(rest, " "))
+	}
+	return a.openWorkbench(g, rest[0])
+}
+
+// openWorkbench starts the workbench on blendFile, or on the saved state
+// or the demo when blendFile is "". Where the workbench cannot run (no
+// terminal, or not built into this version) the readout of the same blend
+// is printed instead, so that zmix always answers.
+func (a *app) openWorkbench(g *globalOpts, blendFile string) error {
+	cat, err := g.catalogue()
+	if err != nil {
+		return err
+	}
+	// Check the file before the screen is taken over, so that a bad file
+	// gets the same one-line error as everywhere else.
+	src, err := workbenchBlend(blendFile)
+	if err != nil {
+		return err
+	}
+	if a.isTerminal(a.stdout) {
+		err := a.workbench(ui.Config{Catalogue: cat, BlendFile: blendFile, ASCII: g.ascii, NoColor: g.noColor})
+		if err == nil {
+			return nil
+		}
+		if !workbenchMissing(err) {
+			return ioFailure(fmt.Errorf("workbench: %v", err))
+		}
+		fmt.Fprintln(a.stderr, "zmix: the workbench is not in this build yet; printing the readout instead")
+	} else {
+		fmt.Fprintln(a.stderr, "zmix: standard output is not a terminal, so the workbench cannot open; printing the readout instead")
+	}
+	return a.printFileReadout(cat, g, src)
+}
+
+// workbenchMissing recognises the error of a build without the workbench.
+func workbenchMissing(err error) bool {
+	return strings.Contains(err.Error(), "not built yet")
+}
+
+// workbenchBlend loads the blend file the workbench was asked to open, or
+// the built-in demo.
+func workbenchBlend(path string) (*blendSource, error) {
+	if path == "" {
+		demo := mixtures.DemoFile()
+		b, err := demo.Parse()
+		if err != nil {
+			return nil, fmt.Errorf("the built-in demo blend: %v", err)
+		}
+		return &blendSource{blend: b, file: demo, path: "built-in demo"}, nil
+	}
+	f, err := mixtures.LoadBlendFile(path)
+	if err != nil {
+		var pe *fs.PathError
+		if errors.As(err, &pe) {
+			return nil, ioFailure(fmt.Errorf("%s: cannot read it: %v", path, pe.Err))
+		}
+		return nil, badInput("%v", err)
+	}
+	b, err := f.Parse()
+	if err != nil {
+		return nil, badInput("%s: %v", path, err)
+	}
+	return &blendSource{blend: b, file: f, path: path}, nil
+}
+
+// printFileReadout prints what `zmix state --blend @FILE` prints.
+func (a *app) printFileReadout(cat *model.Catalogue, g *globalOpts, src *blendSource) error {
+	if src.file.Temperature == "" {
+		return badInput("%s holds no temperature; zmix state --blend @%s --temp T --pres P gives its readout", src.path, src.path)
+	}
+	cfg, err := stateConditions(src, src.file.Temperature, src.file.Pressure, src.file.StandardPressure)
+	if err != nil {
+		return err
+	}
+	cfg.ascii = g.ascii
+	return a.printState(cat, cfg)
+}
+
+func (a *app) cmdHelp(g *globalOpts, args []string) error {
+	switch len(args) {
+	case 0:
+		usageMain(a.stdout)
+		return nil
+	case 1:
+		c, ok := lookupCommand(args[0])
+		if !ok {
+			return badInput("no help on %q; the commands are %s", args[0], commandNames())
+		}
+		c.usage(a.stdout)
+		return nil
+	}
+	return badInput("help takes one command name at most; the commands are %s", commandNames())
+}
+
+func usageMain(w io.Writer) {
+	var b bytes.Buffer
+	b.WriteString(`zmix: the state of an ideal-gas mixture, from molecular partition functions
+
+Usage:
+  zmix [--ascii] [--no-color] [--species FILE]     open the workbench on the demo blend
+  zmix open FILE                                   open the workbench on a saved blend file
+  zmix COMMAND [flags]
+
+Commands:
+`)
+	for _, c := range commands {
+		fmt.Fprintf(&b, "  %-8s %s\n", c.name, c.summary)
+	}
+	b.WriteString(`
+Flags for every command:
+  --species FILE   merge the species of FILE over the built-in catalogue (repeatable)
+  --ascii          plain ASCII output (also ZMIX_ASCII=1)
+  --no-color       no colour in the workbench (also NO_COLOR=1)
+
+Examples:
+  zmix state --blend "N2 78.08%, O2 20.95%, Ar 0.93%, CO2 0.04%" --temp 25C --pres 1atm
+  zmix sweep --blend "SiH4 2%, H2 500ppm, N2 bal" --temp 300..900K --pres 2barg --steps 7
+  zmix catalog SF6
+
+Run zmix COMMAND --help for a command's flags. Exit status: 0 done, 1 a file or
+the terminal could not be read or written, 2 the input was wrong.
+`)
+	w.Write(b.Bytes())
+}
+
+func usageOpen(w io.Writer) {
+	io.WriteString(w, `Usage: zmix open [--ascii] [--no-color] [--species FILE] FILE
+
+Opens the workbench on a saved blend file (JSON, format "zmix-blend/1"; see
+the README). Without a terminal, or in a build without the workbench, it
+prints the file's readout, as zmix state --blend @FILE does.
+
+Examples:
+  zmix open line3-nitride.json
+  zmix open --ascii --no-color line3-nitride.json
+`)
+}
+
+func usageHelp(w io.Writer) {
+	io.WriteString(w, `Usage: zmix help [COMMAND]
+
+Shows the overview, or the flags and examples of one command.
+
+Examples:
+  zmix help
+  zmix help sweep
+`)
+}
