@@ -7,8 +7,6 @@ import (
 	"math"
 
 	"gonum.org/v1/gonum/floats"
-
-	"zmix/model"
 )
 
 // SweepVar is the variable a sweep moves.
@@ -61,13 +59,18 @@ func (sw Sweep) Check() error {
 	return nil
 }
 
-// Grid returns the sweep's points.
+// Grid returns the sweep's points, the end points exactly as given.
 func (sw Sweep) Grid() []float64 {
 	xs := make([]float64, sw.Steps)
 	if sw.Log || sw.Var == SweepPressure {
-		return floats.LogSpan(xs, sw.From, sw.To)
+		floats.LogSpan(xs, sw.From, sw.To)
+	} else {
+		floats.Span(xs, sw.From, sw.To)
 	}
-	return floats.Span(xs, sw.From, sw.To)
+	// exp(ln x) and From + (n−1)·step round off; the ends are what the
+	// user typed and would print as 299.99999999999994.
+	xs[0], xs[len(xs)-1] = sw.From, sw.To
+	return xs
 }
 
 // SweepResult holds one mixture state per grid point.
@@ -78,7 +81,8 @@ type SweepResult struct {
 }
 
 // Run computes the mixture at every point of the sweep, holding the other
-// variable at fixedTempK or fixedPresPa.
+// variable at fixedTempK or fixedPresPa; the fixed value of the variable
+// being swept is not used.
 func (m *Mixture) Run(sw Sweep, fixedTempK, fixedPresPa float64, opts Options) (*SweepResult, error) {
 	return m.RunContext(context.Background(), sw, fixedTempK, fixedPresPa, opts, nil)
 }
@@ -92,8 +96,16 @@ func (m *Mixture) RunContext(ctx context.Context, sw Sweep, fixedTempK, fixedPre
 	if err := sw.Check(); err != nil {
 		return nil, err
 	}
-	if err := model.CheckConditions(fixedTempK, fixedPresPa); err != nil {
-		return nil, err
+	// The grid runs monotonically between its ends, so checking both ends
+	// checks every point.
+	for _, x := range []float64{sw.From, sw.To} {
+		t, p := x, fixedPresPa
+		if sw.Var == SweepPressure {
+			t, p = fixedTempK, x
+		}
+		if err := m.CheckConditions(t, p); err != nil {
+			return nil, err
+		}
 	}
 	res := &SweepResult{Sweep: sw, Grid: sw.Grid(), Points: make([]State, sw.Steps)}
 	// One backing array for every point's species terms: the result is
