@@ -3,9 +3,13 @@ package mixtures
 import (
 	"bytes"
 	"encoding/json"
+	"errors"
 	"fmt"
+	"io"
 	"os"
 	"path/filepath"
+	"reflect"
+	"strconv"
 	"strings"
 )
 
@@ -54,41 +58,107 @@ func FileFromBlend(b *Blend) *BlendFile {
 // Parse checks the file's blend text and returns it parsed.
 func (f *BlendFile) Parse() (*Blend, error) { return ParseBlend(f.BlendText()) }
 
-// LoadBlendFile reads and checks a blend file.
+// LoadBlendFile reads and checks a blend file. Errors name the file and,
+// where the fault is on one line, the line: "blend file b.json:5: …".
 func LoadBlendFile(path string) (*BlendFile, error) {
 	data, err := os.ReadFile(path)
 	if err != nil {
 		return nil, fmt.Errorf("mixtures: blend file: %w", err)
 	}
+	f, line, err := decodeBlendFile(data)
+	if err == nil {
+		if field, comp, cerr := f.check(); cerr != nil {
+			err, line = cerr, fieldLine(data, field, comp)
+		}
+	}
+	if err != nil {
+		return nil, blendFileError(path, line, err)
+	}
+	return f, nil
+}
+
+func blendFileError(path string, line int, err error) error {
+	if line > 0 {
+		return fmt.Errorf("mixtures: blend file %s:%d: %w", path, line, err)
+	}
+	return fmt.Errorf("mixtures: blend file %s: %w", path, err)
+}
+
+// decodeBlendFile decodes the JSON of a blend file, with the line of a
+// fault (0 if it has none).
+func decodeBlendFile(data []byte) (*BlendFile, int, error) {
+	if len(bytes.TrimSpace(data)) == 0 {
+		return nil, 0, fmt.Errorf("the file is empty; want the JSON written by zmix, format %q", BlendFormat)
+	}
 	var f BlendFile
 	dec := json.NewDecoder(bytes.NewReader(data))
 	dec.DisallowUnknownFields()
 	if err := dec.Decode(&f); err != nil {
-		return nil, fmt.Errorf("mixtures: blend file %s: %v (want the JSON written by zmix, format %q)", path, jsonErrorLine(data, err), BlendFormat)
+		line, msg := jsonErrorLine(data, err)
+		return nil, line, fmt.Errorf("%s (want the JSON written by zmix, format %q)", msg, BlendFormat)
 	}
+	rest := bytes.TrimLeft(data[dec.InputOffset():], " \t\r\n")
+	if len(rest) > 0 {
+		return nil, lineAt(data, len(data)-len(rest)), errors.New("unexpected data after the blend object (a file holds one blend)")
+	}
+	return &f, 0, nil
+}
+
+// check validates a decoded file the way LoadBlendFile and Save need it.
+// On failure it names the JSON field at fault and, for a component, its
+// index (−1 for the field as a whole), so that the caller can give the
+// line.
+func (f *BlendFile) check() (field string, comp int, err error) {
 	if f.Format != BlendFormat {
-		return nil, fmt.Errorf("mixtures: blend file %s: format %q; want %q", path, f.Format, BlendFormat)
+		return "format", -1, fmt.Errorf("format %q; want %q", f.Format, BlendFormat)
 	}
 	if len(f.Components) == 0 {
-		return nil, fmt.Errorf("mixtures: blend file %s: no components", path)
+		return "components", -1, errors.New(`no components; want a list of {"species": "N2", "amount": "bal"}`)
+	}
+	// Each component must stay one item when joined into blend text.
+	for i, c := range f.Components {
+		if c.Species == "" || strings.ContainsAny(c.Species, " \t,;\n") {
+			return "components", i, fmt.Errorf("species %q; want one formula or name such as N2, with no spaces or separators", c.Species)
+		}
+		if strings.ContainsAny(c.Amount, ",;\n") {
+			return "components", i, fmt.Errorf("%s amount %q holds a separator (, ; or a new line); want one amount such as 21%% or bal", c.Species, c.Amount)
+		}
 	}
 	if _, err := f.Parse(); err != nil {
-		return nil, fmt.Errorf("mixtures: blend file %s: %w", path, err)
+		return "components", f.componentAt(err), err
 	}
 	if f.Temperature != "" {
 		if _, err := ParseTemperature(f.Temperature); err != nil {
-			return nil, fmt.Errorf("mixtures: blend file %s: %w", path, err)
+			return "temperature", -1, err
 		}
 	}
 	if f.Pressure != "" {
 		if _, err := ParsePressure(f.Pressure); err != nil {
-			return nil, fmt.Errorf("mixtures: blend file %s: %w", path, err)
+			return "pressure", -1, err
 		}
 	}
 	if _, err := StdPressureFromText(f.StandardPressure); err != nil {
-		return nil, fmt.Errorf("mixtures: blend file %s: %w", path, err)
+		return "standard_pressure", -1, err
 	}
-	return &f, nil
+	return "", -1, nil
+}
+
+// componentAt returns the index of the component a blend error points at,
+// or −1 if it concerns the blend as a whole.
+func (f *BlendFile) componentAt(err error) int {
+	var be *BlendError
+	if !errors.As(err, &be) || be.Offset < 0 {
+		return -1
+	}
+	start := 0
+	for i, c := range f.Components {
+		end := start + len(c.Species) + 1 + len(c.Amount) // as BlendText joins them
+		if be.Offset < end {
+			return i
+		}
+		start = end + len(", ")
+	}
+	return -1
 }
 
 // StdPressureFromText reads "1 bar" or "1 atm" (empty means 1 bar).
@@ -102,30 +172,130 @@ func StdPressureFromText(s string) (float64, error) {
 	return 0, fmt.Errorf("%w: standard pressure %q; want 1 bar or 1 atm", ErrValue, s)
 }
 
-// jsonErrorLine adds the line number to a JSON syntax error.
-func jsonErrorLine(data []byte, err error) string {
-	var off int64 = -1
-	switch e := err.(type) {
-	case *json.SyntaxError:
-		off = e.Offset
-	case *json.UnmarshalTypeError:
-		off = e.Offset
-	}
-	if off < 0 || off > int64(len(data)) {
-		return err.Error()
-	}
-	line := 1 + bytes.Count(data[:off], []byte("\n"))
-	return fmt.Sprintf("line %d: %v", line, err)
+// lineAt returns the 1-based line of byte offset off in data.
+func lineAt(data []byte, off int) int {
+	off = max(0, min(off, len(data)))
+	return 1 + bytes.Count(data[:off], []byte("\n"))
 }
 
-// Save writes the blend file atomically.
+// jsonErrorLine returns the line of a JSON decoding error and a message
+// in plain words.
+func jsonErrorLine(data []byte, err error) (int, string) {
+	var syn *json.SyntaxError
+	var typ *json.UnmarshalTypeError
+	switch {
+	case errors.As(err, &syn):
+		// Offset counts the bytes read, the bad one included.
+		return lineAt(data, int(syn.Offset)-1), err.Error()
+	case errors.As(err, &typ):
+		want := map[reflect.Kind]string{reflect.String: "text in quotes", reflect.Slice: "list [...]", reflect.Struct: "object {...}"}[typ.Type.Kind()]
+		if want == "" {
+			want = typ.Type.String()
+		}
+		return lineAt(data, int(typ.Offset)-1), fmt.Sprintf("field %q holds a %s; want %s", typ.Field, typ.Value, want)
+	case errors.Is(err, io.ErrUnexpectedEOF):
+		end := len(bytes.TrimRight(data, " \t\r\n"))
+		return lineAt(data, end), "the file is cut short (JSON ends in the middle)"
+	}
+	// DisallowUnknownFields reports `json: unknown field "name"` with no
+	// offset; the field's key gives the line.
+	if name, ok := strings.CutPrefix(err.Error(), "json: unknown field "); ok {
+		if key, uerr := strconv.Unquote(name); uerr == nil {
+			if off := keyOffset(data, key, -1); off >= 0 {
+				return lineAt(data, off), fmt.Sprintf("unknown field %q", key)
+			}
+		}
+	}
+	return 0, err.Error()
+}
+
+// fieldLine returns the line of a top-level field of a blend file, or of
+// element comp of its array when comp ≥ 0; 0 if it cannot be found.
+func fieldLine(data []byte, field string, comp int) int {
+	if off := keyOffset(data, field, comp); off >= 0 {
+		return lineAt(data, off)
+	}
+	return 0
+}
+
+// keyOffset walks the JSON tokens of data and returns the byte offset of
+// the key field of the top-level object (any depth when it is not found
+// there, for unknown fields inside components), or with elem ≥ 0, of
+// element elem of the array that key holds. It returns −1 if not found.
+func keyOffset(data []byte, field string, elem int) int {
+	type frame struct {
+		object  bool
+		wantKey bool   // an object's next string is a key
+		key     string // the key whose value is being read
+		target  bool   // this is the array of field at the top level
+		n       int    // elements seen in an array
+	}
+	dec := json.NewDecoder(bytes.NewReader(data))
+	var stack []frame
+	nested := -1 // offset of field found below the top level
+	for {
+		off := int(dec.InputOffset())
+		tok, err := dec.Token()
+		if err != nil {
+			return nested
+		}
+		// The token starts after any separators that precede it.
+		for off < len(data) && strings.IndexByte(" \t\r\n,:", data[off]) >= 0 {
+			off++
+		}
+		var top *frame
+		if len(stack) > 0 {
+			top = &stack[len(stack)-1]
+		}
+		if top != nil && top.object && top.wantKey {
+			if key, ok := tok.(string); ok {
+				top.wantKey, top.key = false, key
+				if key == field {
+					if len(stack) == 1 && elem < 0 {
+						return off
+					}
+					if len(stack) > 1 && nested < 0 {
+						nested = off
+					}
+				}
+				continue
+			}
+		}
+		if top != nil && !top.object && top.target {
+			if top.n == elem && tok != json.Delim(']') {
+				return off
+			}
+			top.n++
+		}
+		switch tok {
+		case json.Delim('{'), json.Delim('['):
+			target := tok == json.Delim('[') && len(stack) == 1 && top.key == field
+			stack = append(stack, frame{object: tok == json.Delim('{'), wantKey: true, target: target})
+			continue
+		case json.Delim('}'), json.Delim(']'):
+			stack = stack[:len(stack)-1]
+		}
+		if len(stack) > 0 && stack[len(stack)-1].object {
+			stack[len(stack)-1].wantKey = true
+		}
+	}
+}
+
+// Save checks the blend file, so that a file that could not be loaded
+// again is never written, then writes it atomically.
 func (f *BlendFile) Save(path string) error {
 	f.Format = BlendFormat
-	data, err := json.MarshalIndent(f, "", "  ")
-	if err != nil {
+	if _, _, err := f.check(); err != nil {
+		return fmt.Errorf("mixtures: blend file %s not saved: %w", path, err)
+	}
+	var buf bytes.Buffer
+	enc := json.NewEncoder(&buf)
+	enc.SetIndent("", "  ")
+	enc.SetEscapeHTML(false) // the file is for people: keep <, > and & as typed
+	if err := enc.Encode(f); err != nil {
 		return fmt.Errorf("mixtures: %w", err)
 	}
-	return WriteFileAtomic(path, append(data, '\n'), 0o644)
+	return WriteFileAtomic(path, buf.Bytes(), 0o644)
 }
 
 // WriteFileAtomic writes data to a temporary file in the same directory,
