@@ -241,14 +241,19 @@ func writeStateText(w io.Writer, rep *stateReport) error {
 // pressureText shows the total pressure as entered, with its absolute
 // value, and flags gauge input.
 func pressureText(n *numbers, p pressure, presPa float64) string {
-	abs := n.short("pressure", presPa/1e5, 6) + " bar absolute"
+	bar := n.short("pressure", presPa/1e5, 6)
+	abs := bar + " bar absolute"
+	pa := n.short("pressure", presPa, 7) + " Pa"
+	typed := strings.ToLower(strings.Join(strings.Fields(p.text), ""))
 	switch {
 	case p.text == "":
 		return abs + "  (sum of the partial pressures)"
 	case p.Gauge:
 		return strings.TrimSpace(p.text) + " (gauge; " + abs + ")"
+	case typed == bar+"bar" || typed == bar+"bara":
+		return abs + " (" + pa + ")" // already in bar: say it once
 	}
-	return strings.TrimSpace(p.text) + " (" + abs + ", " + n.short("pressure", presPa, 7) + " Pa)"
+	return strings.TrimSpace(p.text) + " (" + abs + ", " + pa + ")"
 }
 
 func percent(n *numbers, what string, part, whole float64) string {

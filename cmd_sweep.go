@@ -157,15 +157,7 @@ func (a *app) printSweep(cat *model.Catalogue, cfg sweepConfig) error {
 	if err != nil {
 		return badInput("--blend: %v", err)
 	}
-	// Run checks both fixed values, though it uses only the one that is
-	// not swept; hand it the sweep's start point for the other.
-	fixedK, fixedPa := cfg.fixedTemp.kelvin, cfg.fixedPres.Pa
-	if cfg.sweep.Var == mixtures.SweepTemperature {
-		fixedK = cfg.sweep.From
-	} else {
-		fixedPa = cfg.sweep.From
-	}
-	res, err := mix.Run(cfg.sweep, fixedK, fixedPa, mixtures.Options{StdPresPa: cfg.stdPa})
+	res, err := mix.Run(cfg.sweep, cfg.fixedTemp.kelvin, cfg.fixedPres.Pa, mixtures.Options{StdPresPa: cfg.stdPa})
 	if err != nil {
 		return badInput("%v", err)
 	}
