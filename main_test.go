@@ -110,7 +110,7 @@ func TestBadInput(t *testing.T) {
 		{"help on nothing", []string{"help", "mix"}, 2, "no help on \"mix\""},
 		{"missing blend file", append([]string{"state", "--blend", "@testdata/blends/no-such-file.json"}, "--temp", "300K", "--pres", "1bar"), 1, "cannot read it"},
 		{"blend file with a bad amount", []string{"state", "--blend", "@testdata/blends/bad-amount.json", "--temp", "300K", "--pres", "1bar"}, 2, `"N2 lots"`},
-		{"blend file not JSON", []string{"state", "--blend", "@testdata/blends/not-json.json", "--temp", "300K", "--pres", "1bar"}, 2, "line 1"},
+		{"blend file not JSON", []string{"state", "--blend", "@testdata/blends/not-json.json", "--temp", "300K", "--pres", "1bar"}, 2, "not-json.json:1:"},
 		{"missing species file", append([]string{"state", "--species", "testdata/species/none.cat", "--temp", "300K", "--pres", "1bar"}, okBlend...), 1, "cannot read it"},
 		{"species file with a bad field", append([]string{"state", "--species", "testdata/species/bad-field.cat", "--temp", "300K", "--pres", "1bar"}, okBlend...), 2, `bad-field.cat:5: field "colour": unknown field`},
 		{"open missing file", []string{"open", "testdata/blends/no-such-file.json"}, 1, "cannot read it"},
