@@ -1,0 +1,49 @@
+package mixtures
+
+import (
+	"strings"
+	"testing"
+
+	"zmix/model"
+)
+
+func TestNotes(t *testing.T) {
+	cases := []struct {
+		name          string
+		blend         string
+		tempK, presPa float64
+		// want lists "SPECIES:severity" for every note above Info; a blank
+		// species is the blend as a whole.
+		want []string
+	}{
+		{"air at room conditions", dryAir, 298.15, atmPa, nil},
+		// 10 bar: compressibility of common gases near room temperature
+		// departs from 1 by about a percent (common practice).
+		{"air at 20 bar", dryAir, 298.15, 20e5, []string{":caution"}},
+		// Normal boiling point of CO2 (sublimation), 194.7 K, from memory.
+		{"CO2 below its sublimation point", "CO2 10%, N2 bal", 150, atmPa, []string{"CO2:outside model"}},
+		{"CO2 near its sublimation point", "CO2 10%, N2 bal", 250, atmPa, []string{"CO2:caution"}},
+		// Helium at 2 K and 20 bar: n/nQ is far from small, and T is below
+		// the boiling point (4.22 K, from memory).
+		{"cold dense helium", "He 100%", 2, 20e5, []string{":caution", "He:outside model", "He:outside model"}},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			s := mustState(t, mustMixture(t, c.blend, c.presPa), c.tempK, c.presPa)
+			var got []string
+			for _, n := range Notes(&s, false) {
+				if n.Severity == model.Info {
+					t.Errorf("info note %q shown without all", n.Text)
+				}
+				got = append(got, n.Species+":"+n.Severity.String())
+			}
+			if strings.Join(got, " ") != strings.Join(c.want, " ") {
+				t.Errorf("notes %q, want %q", got, c.want)
+			}
+			all := Notes(&s, true)
+			if len(all) < len(got) || len(all) == 0 {
+				t.Errorf("Notes(all) gave %d notes, want every note (%d above info, and the info ones)", len(all), len(got))
+			}
+		})
+	}
+}
