@@ -2,6 +2,7 @@ package model
 
 import (
 	"fmt"
+	"math"
 
 	"gonum.org/v1/gonum/floats"
 )
@@ -28,8 +29,9 @@ type Validity struct {
 // Validity returns the validity figures of the species at (T, P).
 func (sp *Species) Validity(tempK, presPa float64) Validity {
 	var v Validity
-	n := presPa / (boltzmannJPerK * tempK)
-	v.Degeneracy = n / sp.QuantumConcentration(tempK)
+	// n/nQ = P/(kT) / nQ, in logs so that n alone cannot overflow.
+	lnT := math.Log(tempK)
+	v.Degeneracy = math.Exp(math.Log(presPa) - lnBoltzmann - lnT - sp.lnNQ0 - 1.5*lnT)
 	if len(sp.rotThetaK) > 0 {
 		v.TOverThetaRot = tempK / floats.Max(sp.rotThetaK)
 		v.RotorSummed = sp.Rotor == Linear && tempK < rotorSumLimit*sp.rotThetaK[0]

@@ -1,0 +1,116 @@
+package model
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"gonum.org/v1/gonum/unit/constant"
+)
+
+// TestDegeneracyHelium checks n/nQ of helium at 1 bar against the
+// quantum concentration written out with gonum's constants and the IUPAC
+// atomic weight of He (4.002602, from memory): about 0.15 at 4 K, where
+// classical statistics fails, and about 3e-6 at 300 K, where it holds. n/nQ
+// goes as P/T^{5/2}, so the two differ by (300/4)^{5/2}.
+func TestDegeneracyHelium(t *testing.T) {
+	k := float64(constant.Boltzmann)
+	h := float64(constant.Planck)
+	m := 4.002602 * float64(constant.AtomicMass)
+	want := func(tempK, presPa float64) float64 {
+		return presPa / (k * tempK) / math.Pow(2*math.Pi*m*k*tempK/(h*h), 1.5)
+	}
+	he := mustSpecies(t, "He")
+	tests := []struct {
+		tempK    float64
+		severity Severity
+	}{
+		{4, Invalid},
+		{300, Info},
+	}
+	for _, tt := range tests {
+		v := he.Validity(tt.tempK, 1e5)
+		if w := want(tt.tempK, 1e5); relDiff(v.Degeneracy, w) > 1e-9 {
+			t.Errorf("He n/nQ at %g K, 1 bar = %.6g, want %.6g", tt.tempK, v.Degeneracy, w)
+		}
+		notes := v.Notes(he)
+		if len(notes) == 0 || notes[0].Severity != tt.severity || !strings.Contains(notes[0].Text, "n/nQ") {
+			t.Errorf("He at %g K: first note %+v, want a %v note on n/nQ", tt.tempK, notes, tt.severity)
+		}
+	}
+	cold, warm := he.Validity(4, 1e5).Degeneracy, he.Validity(300, 1e5).Degeneracy
+	if d := relDiff(cold/warm, math.Pow(75, 2.5)); d > 1e-12 {
+		t.Errorf("He n/nQ(4 K)/n/nQ(300 K) = %.10g, want 75^2.5 = %.10g", cold/warm, math.Pow(75, 2.5))
+	}
+	if cold < 0.1 || cold > 0.2 || warm > 1e-5 {
+		t.Errorf("He n/nQ = %.3g at 4 K and %.3g at 300 K, want about 0.15 and 3e-6", cold, warm)
+	}
+}
+
+// TestValidityNotes checks the plain-word notes at states chosen to trip
+// each one. Boiling points are the catalogue's (CRC, from memory).
+func TestValidityNotes(t *testing.T) {
+	tests := []struct {
+		name          string
+		formula       string
+		tempK, presPa float64
+		severity      Severity
+		text          string // in the note's text
+	}{
+		{"below the boiling point", "N2", 70, 101325, Invalid, "below the normal boiling point"},
+		{"near the boiling point", "N2", 100, 101325, Caution, "within 1.5× the boiling point"},
+		{"rotor summed", "N2", 100, 101325, Info, "rotor levels summed"},
+		{"rotor classical", "N2", 300, 101325, Info, "rotation fully classical"},
+		{"nonlinear rotor near Θrot", "H2O", 150, 100, Caution, "classical rotor is rough"},
+		{"vibrations frozen", "N2", 300, 101325, Info, "vibrations frozen out"},
+		{"vibrations partly excited", "CO2", 300, 101325, Info, "vibrations partly excited"},
+		{"anharmonic drift", "CH4", 3000, 101325, Caution, "harmonic vibration drifts"},
+		{"quantum corrections", "H2", 20.5, 101325, Caution, "quantum corrections may matter"},
+	}
+	for _, tt := range tests {
+		sp := mustSpecies(t, tt.formula)
+		found := false
+		for _, n := range sp.Validity(tt.tempK, tt.presPa).Notes(sp) {
+			if strings.Contains(n.Text, tt.text) {
+				found = true
+				if n.Severity != tt.severity {
+					t.Errorf("%s: %s at %g K: note %q is %v, want %v", tt.name, tt.formula, tt.tempK, n.Text, n.Severity, tt.severity)
+				}
+			}
+		}
+		if !found {
+			t.Errorf("%s: %s at %g K, %g Pa: no note containing %q", tt.name, tt.formula, tt.tempK, tt.presPa, tt.text)
+		}
+	}
+}
+
+// TestValidityQuiet: a plain room-temperature state of a permanent gas
+// draws no caution (SF6 would: 298 K is within 1.5× its sublimation
+// point), and
+// species without a boiling point or a rotor get no notes about them.
+func TestValidityQuiet(t *testing.T) {
+	for _, f := range []string{"N2", "Ar", "CO2", "He"} {
+		sp := mustSpecies(t, f)
+		for _, n := range sp.Validity(RefTempK, StdPressureBarPa).Notes(sp) {
+			if n.Severity != Info {
+				t.Errorf("%s at 298.15 K, 1 bar: note %q is %v, want only info", f, n.Text, n.Severity)
+			}
+		}
+	}
+	o := mustSpecies(t, "O")
+	v := o.Validity(1000, 1e5)
+	if v.TOverThetaRot != 0 || v.TOverThetaVib != 0 || v.TOverBoiling != 0 || v.RotorSummed {
+		t.Errorf("O atom validity %+v: want no rotor, vibration or boiling figures", v)
+	}
+	if notes := v.Notes(o); len(notes) != 1 {
+		t.Errorf("O atom at 1000 K: notes %+v, want only the n/nQ note", notes)
+	}
+}
+
+func TestSeverityString(t *testing.T) {
+	for s, want := range map[Severity]string{Info: "note", Caution: "caution", Invalid: "outside model"} {
+		if s.String() != want {
+			t.Errorf("Severity(%d).String() = %q, want %q", s, s.String(), want)
+		}
+	}
+}
