@@ -1,0 +1,200 @@
+package mixtures
+
+import (
+	"bytes"
+	"encoding/csv"
+	"encoding/json"
+	"math"
+	"math/rand/v2"
+	"slices"
+	"strconv"
+	"strings"
+	"testing"
+
+	"zmix/model"
+)
+
+// The keys the issue requires of every exported state.
+var (
+	requiredKeys = []string{
+		"temperature_K", "pressure_Pa", "molar_mass_kg_mol", "density_kg_m3",
+		"cp_J_molK", "cv_J_molK", "gamma", "sound_speed_m_s",
+		"h_J_mol", "s_J_molK", "g_J_mol", "s_mix_J_molK", "species",
+	}
+	requiredSpeciesKeys = []string{"name", "x", "partial_pressure_Pa", "mu_J_mol", "s_J_molK", "cp_J_molK"}
+)
+
+func TestWriteJSON(t *testing.T) {
+	m := mustMixture(t, "SiH4 2%, H2 500ppm, N2 bal", 1e5)
+	s := mustState(t, m, 295.15, 1.4e5)
+	var buf bytes.Buffer
+	if err := WriteJSON(&buf, &s, true); err != nil {
+		t.Fatal(err)
+	}
+	var obj map[string]any
+	if err := json.Unmarshal(buf.Bytes(), &obj); err != nil {
+		t.Fatalf("output is not JSON: %v\n%s", err, buf.Bytes())
+	}
+	for _, k := range requiredKeys {
+		if _, ok := obj[k]; !ok {
+			t.Errorf("JSON lacks %q", k)
+		}
+	}
+	checks := map[string]float64{
+		"temperature_K": 295.15, "pressure_Pa": 1.4e5, "gamma": s.Gamma, "s_mix_J_molK": s.SMixJPerMolK,
+		"h_J_mol": s.HJPerMol, "cp_J_kgK": s.CpJPerMolK / s.MolarMassKgPerMol,
+	}
+	for k, want := range checks {
+		if got, _ := obj[k].(float64); got != want {
+			t.Errorf("%s = %v, want %v", k, obj[k], want)
+		}
+	}
+	if obj["pressure_given_as_gauge"] != true {
+		t.Errorf("pressure_given_as_gauge = %v, want true", obj["pressure_given_as_gauge"])
+	}
+	species, _ := obj["species"].([]any)
+	if len(species) != 3 {
+		t.Fatalf("species = %v, want 3 entries", obj["species"])
+	}
+	for i, e := range species {
+		sp, _ := e.(map[string]any)
+		for _, k := range requiredSpeciesKeys {
+			if _, ok := sp[k]; !ok {
+				t.Errorf("species %d lacks %q", i, k)
+			}
+		}
+		if sp["name"] != s.Species[i].Species.Formula || sp["x"] != s.Species[i].X {
+			t.Errorf("species %d = %v, want %s x=%g", i, sp, s.Species[i].Species.Formula, s.Species[i].X)
+		}
+	}
+}
+
+func TestWriteCSVAndSweepJSON(t *testing.T) {
+	m := mustMixture(t, dryAir, 1e5)
+	res, err := m.Run(Sweep{Var: SweepTemperature, From: 300, To: 1500, Steps: 7}, 0, 1e5, Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	var buf bytes.Buffer
+	if err := WriteCSV(&buf, res.Points, false); err != nil {
+		t.Fatal(err)
+	}
+	rows, err := csv.NewReader(&buf).ReadAll()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(rows) != 1+7 {
+		t.Fatalf("%d rows, want a header and 7", len(rows))
+	}
+	header := rows[0]
+	for _, k := range requiredKeys {
+		if k == "species" {
+			continue
+		}
+		if !slices.Contains(header, k) {
+			t.Errorf("CSV header lacks %q", k)
+		}
+	}
+	for _, c := range m.Components {
+		for _, k := range requiredSpeciesKeys[1:] {
+			if col := c.Species.Formula + "." + k; !slices.Contains(header, col) {
+				t.Errorf("CSV header lacks %q", col)
+			}
+		}
+	}
+
+	// The CSV columns carry the JSON names: every scalar JSON key is a
+	// column, and every species key is a FORMULA.key column.
+	var recs []map[string]any
+	buf.Reset()
+	if err := WriteSweepJSON(&buf, res, false); err != nil {
+		t.Fatal(err)
+	}
+	if err := json.Unmarshal(buf.Bytes(), &recs); err != nil || len(recs) != 7 {
+		t.Fatalf("sweep JSON: %v, %d records; want a list of 7", err, len(recs))
+	}
+	var jsonCols []string
+	for k := range recs[0] {
+		if k != "species" {
+			jsonCols = append(jsonCols, k)
+		}
+	}
+	for _, e := range recs[0]["species"].([]any) {
+		sp := e.(map[string]any)
+		for k := range sp {
+			if k != "name" {
+				jsonCols = append(jsonCols, sp["name"].(string)+"."+k)
+			}
+		}
+	}
+	slices.Sort(jsonCols)
+	csvCols := slices.Clone(header)
+	slices.Sort(csvCols)
+	if !slices.Equal(jsonCols, csvCols) {
+		t.Errorf("CSV columns %q\ndiffer from JSON keys %q", csvCols, jsonCols)
+	}
+
+	// Every cell is a finite number (or the gauge flag), and each row
+	// matches its JSON record.
+	for i, row := range rows[1:] {
+		for j, cell := range row {
+			if header[j] == "pressure_given_as_gauge" {
+				if cell != "false" {
+					t.Errorf("row %d gauge flag %q", i, cell)
+				}
+				continue
+			}
+			x, err := strconv.ParseFloat(cell, 64)
+			if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
+				t.Errorf("row %d, %s = %q: not a finite number", i, header[j], cell)
+			}
+			if k := header[j]; !strings.Contains(k, ".") && recs[i][k] != x {
+				t.Errorf("row %d, %s: CSV %v, JSON %v", i, k, x, recs[i][k])
+			}
+		}
+	}
+	if rows[1][slices.Index(header, "temperature_K")] != "300" || rows[7][slices.Index(header, "temperature_K")] != "1500" {
+		t.Errorf("sweep ends in CSV: %q and %q, want 300 and 1500", rows[1][1], rows[7][1])
+	}
+
+	buf.Reset()
+	if err := WriteCSV(&buf, nil, false); err != nil || buf.Len() != 0 {
+		t.Errorf("WriteCSV of no states: %v, %q", err, buf.String())
+	}
+}
+
+// No NaN or infinity anywhere in the export, for any state the mixture
+// accepts: random blends with fractions down to 1e-20, over the model's
+// whole temperature range and pressures from 1e-320 Pa (where partial
+// pressures underflow to 0) to 1e120 Pa. JSON encoding fails on NaN and
+// ±Inf, so a successful encode is the check.
+func TestExportFinite(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 1))
+	all := model.Builtin().All()
+	accepted := 0
+	for n := 0; n < 500; n++ {
+		k := 1 + rng.IntN(8)
+		comps := make([]Component, k)
+		for i, j := range rng.Perm(len(all))[:k] {
+			comps[i] = Component{Species: all[j], X: math.Pow(10, -20*rng.Float64())}
+		}
+		m, err := NewMixture(comps)
+		if err != nil {
+			t.Fatal(err)
+		}
+		tempK := model.MinTempK * math.Pow(model.MaxTempK/model.MinTempK, rng.Float64())
+		presPa := math.Pow(10, -320+440*rng.Float64())
+		s, err := m.State(tempK, presPa, Options{})
+		if err != nil {
+			continue // refused states are checked in TestStateErrors
+		}
+		accepted++
+		rec := s.Record(false)
+		if _, err := json.Marshal(rec); err != nil {
+			t.Errorf("%s at %g K, %g Pa: %v", blendName(m), tempK, presPa, err)
+		}
+	}
+	if accepted < 400 {
+		t.Errorf("only %d of 500 random states accepted; the check covers too little", accepted)
+	}
+}
