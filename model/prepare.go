@@ -60,7 +60,7 @@ func (sp *Species) Prepare() error {
 		}
 		sp.vibThetaK = append(sp.vibThetaK, WavenumberToKelvin(v.WavenumberPerCm))
 		sp.vibDeg = append(sp.vibDeg, float64(v.Degeneracy))
-		sp.vibModes = append(sp.vibModes, vibTerm{WavenumberToKelvin(v.WavenumberPerCm), float64(v.Degeneracy), v.Degeneracy})
+		sp.vibModes = addVibTerm(sp.vibModes, WavenumberToKelvin(v.WavenumberPerCm), v.Degeneracy)
 	}
 
 	if len(sp.Elec) == 0 {
@@ -79,4 +79,18 @@ func (sp *Species) Prepare() error {
 		return fmt.Errorf("model: %s: boiling point %g K must not be negative", sp.Formula, sp.BoilingK)
 	}
 	return nil
+}
+
+// addVibTerm appends a mode to the packed list, or adds its degeneracy to
+// a mode of the same wavenumber already there: the terms are the same, so
+// one exponential serves both.
+func addVibTerm(modes []vibTerm, thetaK float64, deg int) []vibTerm {
+	for i := range modes {
+		if modes[i].thetaK == thetaK {
+			modes[i].nDeg += deg
+			modes[i].deg = float64(modes[i].nDeg)
+			return modes
+		}
+	}
+	return append(modes, vibTerm{thetaK, float64(deg), deg})
 }
