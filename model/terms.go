@@ -15,8 +15,8 @@ func (t Terms) S() float64 { return t.LnQ + t.U }
 
 func (t Terms) add(o Terms) Terms { return Terms{t.LnQ + o.LnQ, t.U + o.U, t.Cv + o.Cv} }
 
-// translation returns the translational terms at (T, P), given ln T, with the 1/N! of
-// indistinguishable molecules folded in (Sackur-Tetrode).
+// translation returns the translational terms at (T, P), given ln T,
+// with the 1/N! of indistinguishable molecules folded in (Sackur-Tetrode).
 func (sp *Species) translation(lnT, presPa float64) Terms {
 	lnNQ := sp.lnNQ0 + 1.5*lnT
 	// V/N = kT/P, taken in logs so that no product over- or underflows.
