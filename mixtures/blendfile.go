@@ -65,6 +65,11 @@ func LoadBlendFile(path string) (*BlendFile, error) {
 	if err != nil {
 		return nil, fmt.Errorf("mixtures: blend file: %w", err)
 	}
+	return parseBlendFile(path, data)
+}
+
+// parseBlendFile decodes and checks the contents of the blend file path.
+func parseBlendFile(path string, data []byte) (*BlendFile, error) {
 	f, line, err := decodeBlendFile(data)
 	if err == nil {
 		if field, comp, cerr := f.check(); cerr != nil {
