@@ -115,6 +115,7 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 	rt := r * tempK
 	s.TempK, s.PresPa, s.StdPresPa = tempK, presPa, p0
 	s.MolarMassKgPerMol = m.MolarMassKgPerMol
+	lnPOverP0 := math.Log(presPa / p0)
 	var cp, cv, h, u, sEnt, g, a, smix float64
 	for i, c := range m.Components {
 		t := &s.Species[i]
@@ -123,9 +124,11 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 		t.PartialPresPa = pi
 		c.Species.Fill(&t.State, tempK, pi, opts.Treatment)
 		st := &t.State
+		lnX := math.Log(c.X)
 		t.MuJPerMol = st.GJPerMol
-		// μ° at P°: the species' G shifted from pᵢ to P°.
-		t.Mu0JPerMol = st.GJPerMol - rt*math.Log(pi/p0)
+		// μ° at P°: the species' G shifted from pᵢ to P°, with
+		// ln(pᵢ/P°) = ln xᵢ + ln(P/P°) so that one logarithm serves both.
+		t.Mu0JPerMol = st.GJPerMol - rt*(lnX+lnPOverP0)
 		t.SJPerMolK, t.CpJPerMolK, t.HJPerMol = st.SJPerMolK, st.CpJPerMolK, st.HJPerMol
 		t.SShareJPerMolK = c.X * st.SJPerMolK
 		t.CpShareJPerMolK = c.X * st.CpJPerMolK
@@ -136,7 +139,7 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 		sEnt += t.SShareJPerMolK
 		g += c.X * st.GJPerMol
 		a += c.X * st.AJPerMol
-		smix -= r * c.X * math.Log(c.X)
+		smix -= r * c.X * lnX
 	}
 	s.CpJPerMolK, s.CvJPerMolK = cp, cv
 	s.Gamma = cp / cv
