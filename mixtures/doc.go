@@ -38,5 +38,11 @@
 // An amount is a bare mole fraction (0.21), a mole percent (21% or
 // 21 mol%), ppm or ppb by moles, a mass fraction (0.3 kg/kg), a mass
 // percent (30 wt% or 30 mass%), a partial pressure with a pressure unit
-// (0.2 bar, 150 Pa), or "bal" for the one balance species.
+// (0.2 bar, 150 Pa), or "bal" for the one balance species. Amounts that
+// sum to 100 % within 0.05 % are renormalised. A species listed twice is
+// one species: its amounts add, and it adds no mixing entropy.
+//
+// Unit words ignore case, except that "mPa" is refused: read as MPa it
+// would be 10⁹ times off. Gauge units (barg, psig) add 101 325 Pa and
+// are not accepted as partial pressures.
 package mixtures
