@@ -70,7 +70,9 @@ func Cautions(m *Mixture, presPa float64) []Caution {
 	if sp := byClass[model.Corrosive]; len(sp) > 0 {
 		add("Corrosive", sp, "attacks tissue and many metals, worse with moisture; use compatible materials and keep lines dry.")
 	}
-	if sp := byClass[model.Asphyxiant]; len(sp) > 0 && xO2 < oxygenDeficientX {
+	// Any gas short of oxygen suffocates, whatever its classes; the list
+	// names the species whose main harm is just that.
+	if sp := byClass[model.Asphyxiant]; xO2 < oxygenDeficientX {
 		add("Asphyxiant", sp, fmt.Sprintf("the blend holds %.3g %% O2, below the 19.5 %% of a safe breathing atmosphere; a release in a closed space can cause collapse without warning. Ventilate and monitor oxygen.", 100*xO2))
 	}
 	if xO2 > oxygenEnrichedX {

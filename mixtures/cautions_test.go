@@ -29,6 +29,8 @@ func TestCautions(t *testing.T) {
 		{"enriched air", "O2 30%, N2 bal", atmPa, []string{"Oxidizer", "Oxygen-enriched"}},
 		{"forming gas", "H2 5%, N2 bal", atmPa, []string{"Flammable", "Asphyxiant"}},
 		{"hydrogen in air", "H2 2%, O2 20.9%, N2 bal", atmPa, []string{"Flammable", "Fuel with oxidizer"}},
+		// No asphyxiant-class species, but no oxygen either: still a caution.
+		{"ammonia alone", "NH3 100%", atmPa, []string{"Flammable", "Toxic", "Corrosive", "Asphyxiant"}},
 		{"demo feed", DemoFile().BlendText(), 1.4e5, []string{"Pyrophoric", "Flammable", "Toxic", "Corrosive", "Asphyxiant"}},
 	}
 	for _, c := range cases {
