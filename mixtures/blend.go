@@ -133,15 +133,26 @@ func parseItem(s string) (Item, *BlendError) {
 	}
 	key := fields[0]
 	amountText := strings.Join(fields[1:], " ")
-	a, err := ParseAmount(amountText)
+	a, err := parseAmount(amountText)
 	if err != nil {
 		return Item{}, err
 	}
 	return Item{Key: key, Amount: a, Text: amountText}, nil
 }
 
-// ParseAmount reads one amount; see the package documentation.
-func ParseAmount(s string) (Amount, *BlendError) {
+// ParseAmount reads one amount; see the package documentation. Its
+// errors are *BlendError values.
+func ParseAmount(s string) (Amount, error) {
+	a, err := parseAmount(s)
+	if err != nil {
+		return Amount{}, err
+	}
+	return a, nil
+}
+
+// parseAmount is ParseAmount with the concrete error type, whose position
+// fields the blend parser fills in.
+func parseAmount(s string) (Amount, *BlendError) {
 	trimmed := strings.TrimSpace(s)
 	if low := strings.ToLower(trimmed); low == "bal" || low == "balance" {
 		return Amount{Basis: Balance}, nil

@@ -186,7 +186,8 @@ func FuzzParseAmount(f *testing.F) {
 	f.Fuzz(func(t *testing.T, s string) {
 		a, err := ParseAmount(s)
 		if err != nil {
-			if err.Err == nil || strings.Contains(err.Error(), "\n") {
+			var be *BlendError
+			if !errors.As(err, &be) || be.Err == nil || strings.Contains(err.Error(), "\n") {
 				t.Fatalf("ParseAmount(%q): bad error %+v", s, err)
 			}
 			return
