@@ -54,7 +54,11 @@ func (sw Sweep) Check() error {
 		}
 	}
 	if sw.From == sw.To {
-		return fmt.Errorf("%w: the range starts and ends at %g; want two different end points", ErrSweep, sw.From)
+		unit := "K"
+		if sw.Var == SweepPressure {
+			unit = "Pa"
+		}
+		return fmt.Errorf("%w: the range starts and ends at %g %s; want two different end points", ErrSweep, sw.From, unit)
 	}
 	return nil
 }

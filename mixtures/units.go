@@ -166,9 +166,16 @@ func ParseRange(s string) (from, to string, err error) {
 	if !ok || a == "" || b == "" {
 		return "", "", fmt.Errorf("%w: range %q: want FROM..TO, e.g. 300..1500 K or 1 bar..50 bar", ErrValue, s)
 	}
-	if _, ua, err := splitNumber(a); err == nil && ua == "" {
-		if _, ub, err := splitNumber(b); err == nil && ub != "" {
+	// A unit written on one end only applies to both ("300..1500 K",
+	// "300 K..1500").
+	_, ua, errA := splitNumber(a)
+	_, ub, errB := splitNumber(b)
+	if errA == nil && errB == nil {
+		switch {
+		case ua == "" && ub != "":
 			a += " " + ub
+		case ub == "" && ua != "":
+			b += " " + ua
 		}
 	}
 	return a, b, nil

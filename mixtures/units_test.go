@@ -200,6 +200,8 @@ func TestParseRange(t *testing.T) {
 		{"-40..120 C", "-40 C", "120 C"},
 		{"0 C..500 K", "0 C", "500 K"},
 		{"1e-3..1e5 Pa", "1e-3 Pa", "1e5 Pa"},
+		{"300 K..1500", "300 K", "1500 K"},
+		{"1 bar..50", "1 bar", "50 bar"},
 	}
 	for _, c := range cases {
 		from, to, err := ParseRange(c.in)
