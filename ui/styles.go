@@ -22,14 +22,31 @@ type Styles struct {
 	// Series styles tell overlaid curves apart; plots must also tell them
 	// apart without colour (markers or line patterns).
 	Series [4]lipgloss.Style
+
+	// Frame glyphs. The focused pane has its own border shape, so that
+	// focus shows without colour too.
+	Border        lipgloss.Border
+	FocusedBorder lipgloss.Border
+	TabActive     lipgloss.Style
+	Tab           lipgloss.Style
+	HelpKey       lipgloss.Style
+	Prompt        lipgloss.Style
+	Edit          lipgloss.Style // a field being typed in
+	Cursor        lipgloss.Style
 }
+
+// asciiBorder and asciiFocusedBorder draw frames with ASCII only.
+var (
+	asciiBorder        = lipgloss.Border{Top: "-", Bottom: "-", Left: "|", Right: "|", TopLeft: "+", TopRight: "+", BottomLeft: "+", BottomRight: "+"}
+	asciiFocusedBorder = lipgloss.Border{Top: "=", Bottom: "=", Left: "#", Right: "#", TopLeft: "#", TopRight: "#", BottomLeft: "#", BottomRight: "#"}
+)
 
 // DefaultStyles builds the styles; mono drops all colour (NO_COLOR,
 // monochrome terminals) and ascii uses ASCII-only borders.
 func DefaultStyles(mono, ascii bool) *Styles {
-	border := lipgloss.RoundedBorder()
+	border, focused := lipgloss.RoundedBorder(), lipgloss.ThickBorder()
 	if ascii {
-		border = lipgloss.Border{Top: "-", Bottom: "-", Left: "|", Right: "|", TopLeft: "+", TopRight: "+", BottomLeft: "+", BottomRight: "+"}
+		border, focused = asciiBorder, asciiFocusedBorder
 	}
 	color := func(c string) lipgloss.TerminalColor {
 		if mono {
@@ -37,9 +54,9 @@ func DefaultStyles(mono, ascii bool) *Styles {
 		}
 		return lipgloss.Color(c)
 	}
-	s := &Styles{}
-	s.Pane = lipgloss.NewStyle().Border(border).BorderForeground(color("240"))
-	s.FocusedPane = lipgloss.NewStyle().Border(border).BorderForeground(color("37"))
+	s := &Styles{Border: border, FocusedBorder: focused}
+	s.Pane = lipgloss.NewStyle().Border(border).BorderForeground(color("240")).Foreground(color("240"))
+	s.FocusedPane = lipgloss.NewStyle().Border(focused).BorderForeground(color("37")).Foreground(color("37"))
 	s.Title = lipgloss.NewStyle().Bold(true).Foreground(color("37"))
 	s.Label = lipgloss.NewStyle().Foreground(color("250"))
 	s.Value = lipgloss.NewStyle().Bold(true)
@@ -56,5 +73,13 @@ func DefaultStyles(mono, ascii bool) *Styles {
 	for i, c := range []string{"37", "170", "143", "75"} {
 		s.Series[i] = lipgloss.NewStyle().Foreground(color(c))
 	}
+	s.TabActive = lipgloss.NewStyle().Bold(true).Foreground(color("37"))
+	s.Tab = lipgloss.NewStyle().Foreground(color("246"))
+	s.HelpKey = lipgloss.NewStyle().Bold(true).Foreground(color("37"))
+	s.Prompt = lipgloss.NewStyle().Bold(true)
+	// Bold rather than underline: lipgloss styles the spaces of underlined
+	// text one by one, which would cut the cursor's own escape codes.
+	s.Edit = lipgloss.NewStyle().Bold(true)
+	s.Cursor = lipgloss.NewStyle().Reverse(true)
 	return s
 }

@@ -1,0 +1,49 @@
+// Package ui is zmix's keyboard workbench: a bubbletea program in which a
+// blend is put together, its conditions set, and its properties read as
+// they respond to every edit. It only shows and edits; every figure comes
+// from packages model and mixtures, the same code as the commands.
+//
+// # Panes
+//
+//	1 Recipe      species and amounts as typed (mol %, ppm, wt %, fraction,
+//	              partial pressure, bal), with the catalogue search
+//	2 Setpoint    temperature and pressure with units, P° (1 bar or 1 atm),
+//	              pressures shown as absolute or gauge
+//	3 Properties  the readout of the state command: M, ρ, Cp, Cv, γ, c, H,
+//	              U, S, G, A per mole and per kg, the mixing entropy, and a
+//	              line per species at its partial pressure
+//	4 Sweep       a sweep of T or P and its plot (sweep*.go, plot*.go)
+//	5 Anatomy     one species taken apart: translation, rotation, vibration
+//	              and electronic shares of S and Cp, its characteristic
+//	              temperatures and the model's validity notes
+//
+// A safety strip with the blend's hazard classes and the line that defers
+// to site codes, data sheets and licensed practice stays on screen while
+// any caution applies.
+//
+// # Conventions
+//
+// The text the user typed is the document (type bench). What the panes
+// compute from, Inputs, changes only when all of the text resolves; a
+// typing slip is shown in place with its error and the last valid state
+// stays in force. Inputs carry a generation number, so that results of
+// background work (the sweep) that arrive late are dropped.
+//
+// The S and Cp shares of the Anatomy pane are those of package model's
+// factor terms: S_f = R(ln q_f + U_f) and Cv_f = R·Cv_f; the R of
+// Cp − Cv (the P dV work at constant pressure) is shown with translation.
+//
+// # Files
+//
+// The workbench state (everything as typed, the sweep settings, the pane,
+// the path of the blend file in use) is written atomically to
+// $XDG_STATE_HOME/zmix/state.json (default ~/.local/state/zmix) after
+// every change, and read back on the next start. A state file that cannot
+// be read is renamed state.json.corrupt-TIME. SIGHUP, SIGTERM and SIGINT
+// save and quit. A panic saves the state and writes crash-TIME.txt in the
+// same directory; Run returns an error that names it.
+//
+// View is pure and cheap: panes render their lines when their data or size
+// changes, and View only frames them. Nothing ticks: no cursor blinks, no
+// timers, so an idle workbench writes nothing to the terminal.
+package ui

@@ -1,0 +1,226 @@
+package ui
+
+import (
+	"math"
+	"strconv"
+	"strings"
+	"unicode/utf8"
+
+	"github.com/charmbracelet/lipgloss"
+)
+
+// asciiReplacer spells out the non-ASCII glyphs that the engine's notes and
+// our own labels use, for terminals and fonts without them.
+var asciiReplacer = strings.NewReplacer(
+	"μ", "mu", "µ", "mu", "°", "deg", "²", "^2", "³", "^3", "⁻¹", "^-1", "⁻", "^-",
+	"·", "*", "—", "--", "–", "-", "−", "-", "×", "x", "≪", "<<", "≫", ">>",
+	"≤", "<=", "≥", ">=", "≈", "~", "Θrot", "Theta_rot", "Θvib", "Theta_vib", "Θel", "Theta_el",
+	"Θ", "Theta", "θ", "theta", "γ", "gamma", "σ", "sigma", "α", "alpha", "β", "beta", "ε", "eps",
+	"λ", "lambda", "ω", "omega", "Π", "Pi", "Λ", "Lambda",
+	"ρ", "rho", "Σ", "sum ", "Δ", "d", "ν", "nu", "π", "pi", "ᵢ", "_i", "∞", "inf",
+	"₀", "0", "₁", "1", "₂", "2", "₃", "3", "₄", "4", "₅", "5", "₆", "6", "₇", "7", "₈", "8", "₉", "9",
+	"⁰", "^0", "¹", "^1", "⁴", "^4",
+	"→", "->", "←", "<-", "↑", "^", "↓", "v", "…", "...", "•", "*", "▸", ">",
+	"’", "'", "‘", "'", "“", "\"", "”", "\"", "√", "sqrt", "∂", "d", "≠", "!=",
+)
+
+// keyWords spells out arrow glyphs in key help, where a word reads better
+// than an ASCII arrow.
+var keyWords = strings.NewReplacer("←", "left", "→", "right", "↑", "up", "↓", "down")
+
+// Text returns s as it may be drawn: unchanged, or with every non-ASCII
+// glyph spelled out in ASCII mode. Any glyph not in the table becomes "?",
+// so that ASCII mode never sends a byte above 127.
+func (c *Common) Text(s string) string {
+	if !c.ASCII {
+		return s
+	}
+	return toASCII(s)
+}
+
+// KeyText is Text for key names: arrows become words in ASCII mode.
+func (c *Common) KeyText(s string) string {
+	if !c.ASCII {
+		return s
+	}
+	return toASCII(keyWords.Replace(s))
+}
+
+func toASCII(s string) string {
+	if isASCII(s) {
+		return s
+	}
+	s = asciiReplacer.Replace(s)
+	if isASCII(s) {
+		return s
+	}
+	return strings.Map(func(r rune) rune {
+		if r >= utf8.RuneSelf {
+			return '?'
+		}
+		return r
+	}, s)
+}
+
+func isASCII(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if s[i] >= utf8.RuneSelf {
+			return false
+		}
+	}
+	return true
+}
+
+// sig formats x with n significant figures, in plain notation for everyday
+// magnitudes and in e-notation for very large or small ones.
+func sig(x float64, n int) string {
+	switch {
+	case math.IsNaN(x) || math.IsInf(x, 0):
+		return "n/a"
+	case x == 0:
+		return "0"
+	}
+	a := math.Abs(x)
+	if a < 1e-4 || a >= 1e9 {
+		return strconv.FormatFloat(x, 'e', n-1, 64)
+	}
+	exp := int(math.Floor(math.Log10(a)))
+	// Rounding can carry into the next decade (9.9996 → 10.000).
+	dec := n - 1 - exp
+	if dec < 0 {
+		dec = 0
+	}
+	s := strconv.FormatFloat(x, 'f', dec, 64)
+	if r, err := strconv.ParseFloat(s, 64); err == nil && math.Abs(r) >= math.Pow(10, float64(exp+1)) && dec > 0 {
+		s = strconv.FormatFloat(x, 'f', dec-1, 64)
+	}
+	return s
+}
+
+// short formats x with up to n significant figures and no trailing
+// zeros, for values the user typed, such as a temperature.
+func short(x float64, n int) string {
+	if math.IsNaN(x) || math.IsInf(x, 0) {
+		return "n/a"
+	}
+	return strconv.FormatFloat(x, 'g', n, 64)
+}
+
+// fixed formats x with a fixed number of decimals.
+func fixed(x float64, decimals int) string {
+	if math.IsNaN(x) || math.IsInf(x, 0) {
+		return "n/a"
+	}
+	s := strconv.FormatFloat(x, 'f', decimals, 64)
+	if s == "-0" || strings.HasPrefix(s, "-0.") && strings.Trim(s[3:], "0") == "" {
+		s = s[1:]
+	}
+	return s
+}
+
+// presText writes a pressure in Pa with a unit chosen by its size.
+func presText(pa float64) string {
+	a := math.Abs(pa)
+	switch {
+	case a >= 1e6:
+		return short(pa/1e6, 5) + " MPa"
+	case a >= 1e4:
+		return short(pa/1e5, 5) + " bar"
+	case a >= 1e3:
+		return short(pa/1e3, 5) + " kPa"
+	}
+	return short(pa, 5) + " Pa"
+}
+
+// fitLine cuts s (which may hold styles) to width w cells and pads it to
+// exactly w, so that frames line up.
+func fitLine(s string, w int) string {
+	if w <= 0 {
+		return ""
+	}
+	n := lipgloss.Width(s)
+	if n > w {
+		s = truncate(s, w)
+		n = lipgloss.Width(s)
+	}
+	if n < w {
+		s += strings.Repeat(" ", w-n)
+	}
+	return s
+}
+
+var truncStyle = lipgloss.NewStyle()
+
+func truncate(s string, w int) string {
+	if isASCII(s) && !strings.Contains(s, "\x1b") {
+		if len(s) > w {
+			return s[:w]
+		}
+		return s
+	}
+	return truncStyle.MaxWidth(w).Render(s)
+}
+
+// wrap breaks plain text into lines of at most w cells at spaces.
+func wrap(s string, w int) []string {
+	if w < 8 {
+		w = 8
+	}
+	var out []string
+	for _, para := range strings.Split(s, "\n") {
+		words := strings.Fields(para)
+		var line strings.Builder
+		n := 0
+		for _, word := range words {
+			ww := lipgloss.Width(word)
+			for ww > w { // a word longer than the line is cut
+				if n > 0 {
+					out = append(out, line.String())
+					line.Reset()
+					n = 0
+				}
+				r := []rune(word)
+				cut := min(len(r), w)
+				out = append(out, string(r[:cut]))
+				word = string(r[cut:])
+				ww = lipgloss.Width(word)
+			}
+			if ww == 0 {
+				continue
+			}
+			if n > 0 && n+1+ww > w {
+				out = append(out, line.String())
+				line.Reset()
+				n = 0
+			}
+			if n > 0 {
+				line.WriteByte(' ')
+				n++
+			}
+			line.WriteString(word)
+			n += ww
+		}
+		if n > 0 || len(words) == 0 {
+			out = append(out, line.String())
+		}
+	}
+	return out
+}
+
+// padRight pads plain text to w cells.
+func padRight(s string, w int) string {
+	n := lipgloss.Width(s)
+	if n >= w {
+		return s
+	}
+	return s + strings.Repeat(" ", w-n)
+}
+
+// padLeft right-aligns plain text in w cells.
+func padLeft(s string, w int) string {
+	n := lipgloss.Width(s)
+	if n >= w {
+		return s
+	}
+	return strings.Repeat(" ", w-n) + s
+}
