@@ -1,0 +1,478 @@
+package ui
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+
+	"zmix/mixtures"
+	"zmix/model"
+)
+
+// entry is one line of the recipe, kept exactly as typed.
+type entry struct {
+	Species string `json:"species"`
+	Amount  string `json:"amount"`
+}
+
+// bench is the document the panes edit: the recipe and the conditions as
+// typed, and everything derived from them. The text is the truth; the
+// derived Inputs change only when the text resolves, so a typing slip never
+// replaces the last valid state.
+type bench struct {
+	cat *model.Catalogue
+
+	entries            []entry
+	name, note         string // carried from a blend file
+	tempText, presText string
+	stdAtm             bool // standard pressure 1 atm instead of 1 bar
+	showGauge          bool // show the total pressure as gauge
+
+	// Derived by update.
+	rowErr   []string // per entry; "" when the entry reads
+	blendErr string   // the recipe as a whole does not resolve
+	tempErr  string
+	presErr  string
+	in       Inputs
+	state    mixtures.State // valid when stateErr == "" and in.Valid()
+	stateErr string
+	cautions []mixtures.Caution
+	notes    []mixtures.StateNote
+
+	// The text of the last valid recipe and conditions, saved with the
+	// state so that a restart with a typing slip still has a state.
+	validEntries         []entry
+	validTemp, validPres string
+
+	content uint64 // grows with every edit of what a blend file holds
+	changed bool   // an edit since the last update
+}
+
+func newBench(cat *model.Catalogue) *bench { return &bench{cat: cat} }
+
+// loadFile replaces the recipe and conditions with those of a blend file.
+func (b *bench) loadFile(f *mixtures.BlendFile) {
+	b.entries = b.entries[:0]
+	for _, c := range f.Components {
+		b.entries = append(b.entries, entry{Species: c.Species, Amount: c.Amount})
+	}
+	b.name, b.note = f.Name, f.Note
+	if f.Temperature != "" {
+		b.tempText = f.Temperature
+	}
+	if f.Pressure != "" {
+		b.presText = f.Pressure
+	}
+	std, _ := mixtures.StdPressureFromText(f.StandardPressure)
+	b.stdAtm = std == model.StdPressureAtmPa
+	if p, err := mixtures.ParsePressure(b.presText); err == nil {
+		b.showGauge = p.Gauge
+	}
+	b.touch()
+}
+
+// blendFile returns the recipe and conditions in blend-file form.
+func (b *bench) blendFile() *mixtures.BlendFile {
+	f := &mixtures.BlendFile{Format: mixtures.BlendFormat, Name: b.name, Note: b.note,
+		Temperature: b.tempText, Pressure: b.presText, StandardPressure: b.stdText()}
+	for _, e := range b.entries {
+		f.Components = append(f.Components, mixtures.FileComponent{Species: e.Species, Amount: e.Amount})
+	}
+	return f
+}
+
+func (b *bench) stdText() string {
+	if b.stdAtm {
+		return "1 atm"
+	}
+	return "1 bar"
+}
+
+func (b *bench) touch() { b.content++; b.changed = true }
+
+// valid reports whether everything typed reads, so that the screen shows
+// what was typed rather than an older state.
+func (b *bench) valid() bool {
+	return b.blendErr == "" && b.tempErr == "" && b.presErr == "" && b.stateErr == ""
+}
+
+func (b *bench) setAmount(i int, text string) {
+	if i >= 0 && i < len(b.entries) && b.entries[i].Amount != text {
+		b.entries[i].Amount = text
+		b.touch()
+	}
+}
+
+// addSpecies appends a species with an empty amount, or finds it if it is
+// already there; it returns the entry's index and whether it was added.
+func (b *bench) addSpecies(formula string) (int, bool) {
+	for i, e := range b.entries {
+		if e.Species == formula {
+			return i, false
+		}
+	}
+	b.entries = append(b.entries, entry{Species: formula})
+	b.touch()
+	return len(b.entries) - 1, true
+}
+
+func (b *bench) remove(i int) {
+	if i >= 0 && i < len(b.entries) {
+		b.entries = append(b.entries[:i], b.entries[i+1:]...)
+		b.touch()
+	}
+}
+
+func isBalance(amount string) bool {
+	a := strings.ToLower(strings.TrimSpace(amount))
+	return a == "bal" || a == "balance"
+}
+
+// setBalance makes entry i the balance. The entry that was the balance
+// before keeps the share it had, written as mol %, so the blend does not
+// change under the user's feet. Marking the balance again clears it to
+// its share, too.
+func (b *bench) setBalance(i int) {
+	if i < 0 || i >= len(b.entries) {
+		return
+	}
+	share := func(j int) string {
+		if x, ok := b.moleFraction(b.entries[j].Species); ok {
+			return short(100*x, 6) + "%"
+		}
+		return ""
+	}
+	if isBalance(b.entries[i].Amount) {
+		b.entries[i].Amount = share(i)
+		b.touch()
+		return
+	}
+	for j := range b.entries {
+		if j != i && isBalance(b.entries[j].Amount) {
+			b.entries[j].Amount = share(j)
+		}
+	}
+	b.entries[i].Amount = "bal"
+	b.touch()
+}
+
+// moleFraction returns the species' mole fraction in the last valid
+// mixture.
+func (b *bench) moleFraction(formula string) (float64, bool) {
+	if b.in.Mixture == nil {
+		return 0, false
+	}
+	for _, c := range b.in.Mixture.Components {
+		if c.Species.Formula == formula {
+			return c.X, true
+		}
+	}
+	return 0, false
+}
+
+// Normalise errors; the text is what the status line shows.
+var (
+	errNormBalance = errors.New("normalise: the recipe has a balance species, which already closes it to 100 %; clear the balance first (b)")
+	errNormMixed   = errors.New("normalise: the amounts mix mole and mass bases; write them all on one basis first")
+	errNormPartial = errors.New("normalise: partial pressures are absolute amounts and cannot be scaled; write them as fractions first")
+	errNormBad     = errors.New("normalise: fix the entries marked in red first")
+	errNormEmpty   = errors.New("normalise: nothing to scale: every amount is zero")
+)
+
+// normalise scales every amount so that they sum to 100 %, keeping each
+// amount's own unit: "30%" and "0.5" become "37.5%" and "0.625". It works
+// on text, as an editor does; the mixing itself stays in mixtures.
+func (b *bench) normalise() error {
+	if len(b.entries) == 0 {
+		return errNormEmpty
+	}
+	var sum float64
+	basis := -1
+	amounts := make([]mixtures.Amount, len(b.entries))
+	for i, e := range b.entries {
+		a, err := mixtures.ParseAmount(e.Amount)
+		if err != nil {
+			return errNormBad
+		}
+		switch a.Basis {
+		case mixtures.Balance:
+			return errNormBalance
+		case mixtures.PartialPres:
+			return errNormPartial
+		}
+		if basis >= 0 && int(a.Basis) != basis {
+			return errNormMixed
+		}
+		basis = int(a.Basis)
+		amounts[i] = a
+		sum += a.Value
+	}
+	if !(sum > 0) {
+		return errNormEmpty
+	}
+	for i := range b.entries {
+		b.entries[i].Amount = scaleAmountText(b.entries[i].Amount, 1/sum)
+	}
+	b.touch()
+	return nil
+}
+
+// scaleAmountText multiplies the number that leads an amount by k and keeps
+// the unit text after it. Every fraction unit is a pure scale, so this
+// scales the amount.
+func scaleAmountText(text string, k float64) string {
+	t := strings.TrimSpace(text)
+	end := 0
+	for end < len(t) && (t[end] >= '0' && t[end] <= '9' || t[end] == '.' || t[end] == 'e' || t[end] == 'E' || t[end] == '+' || t[end] == '-') {
+		end++
+	}
+	for end > 0 {
+		if x, err := strconv.ParseFloat(t[:end], 64); err == nil {
+			return short(x*k, 6) + t[end:]
+		}
+		end--
+	}
+	return text
+}
+
+func (b *bench) setTemp(text string) {
+	if b.tempText != text {
+		b.tempText = text
+		b.touch()
+	}
+}
+
+func (b *bench) setPres(text string) {
+	if b.presText != text {
+		b.presText = text
+		b.touch()
+	}
+}
+
+func (b *bench) toggleStd() { b.stdAtm = !b.stdAtm; b.touch() }
+
+// toggleGauge changes only how pressures are shown, which a blend file
+// does not hold.
+func (b *bench) toggleGauge() { b.showGauge = !b.showGauge; b.changed = true }
+
+// cleanErr drops the package prefixes from an engine error, which the user
+// does not need in a one-line message.
+func cleanErr(err error) string {
+	s := err.Error()
+	for _, p := range []string{"mixtures: ", "model: ", "bad value: "} {
+		s = strings.TrimPrefix(s, p)
+	}
+	return s
+}
+
+// blendErrText writes a blend error without the blend text, which the
+// pane already shows line by line.
+func blendErrText(err error) string {
+	var be *mixtures.BlendError
+	if errors.As(err, &be) {
+		if be.Detail != "" {
+			return be.Err.Error() + ": " + be.Detail
+		}
+		return be.Err.Error()
+	}
+	return cleanErr(err)
+}
+
+// update derives everything from the text. It reports whether the Inputs
+// changed (their Gen grew).
+func (b *bench) update() bool {
+	b.changed = false
+	next := b.in
+
+	b.tempErr = ""
+	if t, err := mixtures.ParseTemperature(b.tempText); err != nil {
+		b.tempErr = cleanErr(err)
+	} else {
+		next.TempK = t
+		b.validTemp = b.tempText
+	}
+	b.presErr = ""
+	if p, err := mixtures.ParsePressure(b.presText); err != nil {
+		b.presErr = cleanErr(err)
+	} else {
+		next.PresPa, next.Gauge = p.Pa, p.Gauge
+		b.validPres = b.presText
+	}
+	next.Opts = mixtures.Options{StdPresPa: model.StdPressureBarPa}
+	if b.stdAtm {
+		next.Opts.StdPresPa = model.StdPressureAtmPa
+	}
+
+	if mix := b.resolve(next.PresPa); mix != nil {
+		next.Mixture = mix
+		b.validEntries = append(b.validEntries[:0], b.entries...)
+	}
+
+	changed := !sameInputs(b.in, next)
+	if changed {
+		next.Gen = b.in.Gen + 1
+		b.in = next
+	}
+	b.derive()
+	return changed
+}
+
+// resolve checks every entry, then the recipe as a whole; it returns the
+// mixture, or nil with the errors recorded.
+func (b *bench) resolve(presPa float64) *mixtures.Mixture {
+	b.rowErr = b.rowErr[:0]
+	b.blendErr = ""
+	bad := false
+	for _, e := range b.entries {
+		msg := ""
+		switch {
+		case strings.TrimSpace(e.Amount) == "":
+			msg = "type an amount: 2%, 500 ppm, 0.3 kg/kg, 30 wt%, 0.2 bar or bal"
+		default:
+			if _, ok := b.cat.Lookup(e.Species); !ok {
+				msg = fmt.Sprintf("unknown species %q", e.Species)
+				if sug := b.cat.Suggest(e.Species, 3); len(sug) > 0 {
+					msg += "; did you mean " + strings.Join(sug, ", ") + "?"
+				}
+			} else if _, err := mixtures.ParseAmount(e.Amount); err != nil {
+				msg = blendErrText(err)
+			}
+		}
+		if strings.ContainsAny(e.Amount, ",;\n") {
+			msg = "one amount per line: remove the , ; or line break"
+		}
+		b.rowErr = append(b.rowErr, msg)
+		bad = bad || msg != ""
+	}
+	if len(b.entries) == 0 {
+		b.blendErr = "the recipe is empty: add a species"
+		return nil
+	}
+	if bad {
+		return nil
+	}
+	text, offsets := b.blendText()
+	blend, err := mixtures.ParseBlend(text)
+	if err == nil {
+		if !(presPa > 0) && blend.HasPartialPressures() {
+			b.blendErr = "partial pressures need a valid total pressure"
+			return nil
+		}
+		var mix *mixtures.Mixture
+		if mix, err = blend.Resolve(b.cat, presPa); err == nil {
+			return mix
+		}
+	}
+	var be *mixtures.BlendError
+	if errors.As(err, &be) && be.Offset >= 0 {
+		for i := len(offsets) - 1; i >= 0; i-- {
+			if be.Offset >= offsets[i] {
+				b.rowErr[i] = blendErrText(err)
+				return nil
+			}
+		}
+	}
+	b.blendErr = blendErrText(err)
+	return nil
+}
+
+// blendText joins the entries into blend text and returns each entry's
+// byte offset in it, so that errors can be put back on their line.
+func (b *bench) blendText() (string, []int) {
+	var sb strings.Builder
+	offsets := make([]int, len(b.entries))
+	for i, e := range b.entries {
+		if i > 0 {
+			sb.WriteString(", ")
+		}
+		offsets[i] = sb.Len()
+		sb.WriteString(e.Species + " " + e.Amount)
+	}
+	return sb.String(), offsets
+}
+
+func sameInputs(a, b Inputs) bool {
+	if a.TempK != b.TempK || a.PresPa != b.PresPa || a.Gauge != b.Gauge || a.Opts != b.Opts {
+		return false
+	}
+	if (a.Mixture == nil) != (b.Mixture == nil) {
+		return false
+	}
+	if a.Mixture == nil {
+		return true
+	}
+	if len(a.Mixture.Components) != len(b.Mixture.Components) {
+		return false
+	}
+	for i, c := range a.Mixture.Components {
+		d := b.Mixture.Components[i]
+		if c.Species != d.Species || c.X != d.X {
+			return false
+		}
+	}
+	return true
+}
+
+// derive computes the state of the current Inputs, its cautions and its
+// validity notes.
+func (b *bench) derive() {
+	b.stateErr = ""
+	b.cautions, b.notes = nil, nil
+	if !b.in.Valid() {
+		b.stateErr = "no valid recipe and conditions yet"
+		return
+	}
+	st, err := b.in.Mixture.State(b.in.TempK, b.in.PresPa, b.in.Opts)
+	if err != nil {
+		b.stateErr = cleanErr(err)
+		return
+	}
+	if name := nonFinite(&st); name != "" {
+		b.stateErr = fmt.Sprintf("the model gives no finite %s at %s and %s; try another temperature or pressure",
+			name, mixtures.FormatTemperature(b.in.TempK), presText(b.in.PresPa))
+		return
+	}
+	b.state = st
+	b.cautions = mixtures.Cautions(b.in.Mixture, b.in.PresPa)
+	b.notes = mixtures.Notes(&b.state, true)
+}
+
+// nonFinite names the first shown quantity of s that is not a finite
+// number, or returns "".
+func nonFinite(s *mixtures.State) string {
+	for _, q := range []struct {
+		name string
+		v    float64
+	}{
+		{"molar mass", s.MolarMassKgPerMol}, {"density", s.DensityKgPerM3}, {"Cp", s.CpJPerMolK},
+		{"Cv", s.CvJPerMolK}, {"heat-capacity ratio", s.Gamma}, {"speed of sound", s.SoundSpeedMPerS},
+		{"enthalpy", s.HJPerMol}, {"internal energy", s.UJPerMol}, {"entropy", s.SJPerMolK},
+		{"Gibbs energy", s.GJPerMol}, {"Helmholtz energy", s.AJPerMol}, {"mixing entropy", s.SMixJPerMolK},
+	} {
+		if math.IsNaN(q.v) || math.IsInf(q.v, 0) {
+			return q.name
+		}
+	}
+	for i := range s.Species {
+		t := &s.Species[i]
+		st := &t.State
+		for _, v := range []float64{t.X, t.PartialPresPa, t.MuJPerMol, t.SJPerMolK, t.CpJPerMolK,
+			st.Trans.LnQ, st.Trans.U, st.Trans.Cv, st.Rot.LnQ, st.Rot.U, st.Rot.Cv,
+			st.Vib.LnQ, st.Vib.U, st.Vib.Cv, st.Elec.LnQ, st.Elec.U, st.Elec.Cv} {
+			if math.IsNaN(v) || math.IsInf(v, 0) {
+				return "value for " + t.Species.Formula
+			}
+		}
+	}
+	return ""
+}
+
+// presShown writes the total pressure as absolute or gauge, as chosen.
+func (b *bench) presShown(presPa float64) string {
+	if b.showGauge {
+		return presText(presPa-mixtures.AtmospherePa) + " gauge"
+	}
+	return presText(presPa) + " abs"
+}
