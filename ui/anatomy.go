@@ -1,0 +1,236 @@
+package ui
+
+import (
+	"fmt"
+	"strings"
+
+	"github.com/charmbracelet/bubbles/key"
+	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
+
+	"zmix/model"
+)
+
+// anatomyPane takes one species of the blend apart: what translation,
+// rotation, vibration and electronic levels each give to S and Cp, its
+// characteristic temperatures, and whether the model holds for it here.
+type anatomyPane struct {
+	c    *Common
+	b    *bench
+	w, h int
+
+	formula string // the species shown; the first one if it is not in the blend
+	scroll  scroller
+}
+
+func newAnatomyPane(c *Common, b *bench) *anatomyPane { return &anatomyPane{c: c, b: b} }
+
+func (p *anatomyPane) SetSize(w, h int) {
+	p.w, p.h = max(w, 0), max(h, 0)
+	p.scroll.setHeight(p.h)
+	p.refresh()
+}
+
+func (p *anatomyPane) Editing() bool { return false }
+
+func (p *anatomyPane) KeyHelp() []key.Binding {
+	k, s := p.c.Keys.Anatomy, p.c.Keys.Scroll
+	return []key.Binding{k.PrevSpecies, k.NextSpecies, s.Up, s.Down, s.PageUp, s.PageDown}
+}
+
+func (p *anatomyPane) ShortHelp() []key.Binding {
+	k := p.c.Keys.Anatomy
+	return []key.Binding{k.PrevSpecies, k.NextSpecies}
+}
+
+func (p *anatomyPane) Update(msg tea.KeyMsg) tea.Cmd {
+	k := p.c.Keys.Anatomy
+	switch {
+	case key.Matches(msg, k.PrevSpecies):
+		p.step(-1)
+	case key.Matches(msg, k.NextSpecies):
+		p.step(1)
+	default:
+		scrollKeys(&p.scroll, p.c.Keys.Scroll, msg)
+		return nil
+	}
+	p.refresh()
+	return nil
+}
+
+// index returns the shown species' place in the state, or -1.
+func (p *anatomyPane) index() int {
+	sp := p.b.state.Species
+	if p.b.stateErr != "" || len(sp) == 0 {
+		return -1
+	}
+	for i := range sp {
+		if sp[i].Species.Formula == p.formula {
+			return i
+		}
+	}
+	return 0
+}
+
+func (p *anatomyPane) step(by int) {
+	i := p.index()
+	if i < 0 {
+		return
+	}
+	n := len(p.b.state.Species)
+	p.formula = p.b.state.Species[(i+by+n)%n].Species.Formula
+}
+
+func (p *anatomyPane) title() string {
+	if i := p.index(); i >= 0 {
+		return "Anatomy: " + p.b.state.Species[i].Species.Formula
+	}
+	return "Anatomy"
+}
+
+func (p *anatomyPane) View() string { return p.scroll.view() }
+
+func (p *anatomyPane) refresh() { p.scroll.setLines(p.render()) }
+
+func (p *anatomyPane) render() []string {
+	s := p.c.Styles
+	t := p.c.Text
+	var lines []string
+	add := func(l string) { lines = append(lines, l) }
+	addWrapped := func(style func(...string) string, indent, text string) {
+		for i, l := range wrap(t(text), p.w-len(indent)) {
+			if i > 0 {
+				l = strings.Repeat(" ", len(indent)) + l
+			} else {
+				l = indent + l
+			}
+			add(style(l))
+		}
+	}
+	// addLabeled hangs wrapped text after a label column.
+	addLabeled := func(label, text string) {
+		lw := lipgloss.Width(t("Θvib")) + 3
+		for i, l := range wrap(t(text), p.w-lw) {
+			head := strings.Repeat(" ", lw)
+			if i == 0 {
+				head = padRight(t(label), lw)
+			}
+			add(s.Label.Render(head) + l)
+		}
+	}
+	i := p.index()
+	if i < 0 {
+		addWrapped(s.Error.Render, "", p.b.stateErr)
+		return lines
+	}
+	term := &p.b.state.Species[i]
+	sp := term.Species
+	st := &term.State
+	n := len(p.b.state.Species)
+	addWrapped(s.Title.Render, "", fmt.Sprintf("%s, %s: x %s at pᵢ %s, %s K", sp.Formula, sp.Name, sig(term.X, 4), presText(term.PartialPresPa), short(st.TempK, 6)))
+	if n > 1 {
+		add(s.Muted.Render(t(fmt.Sprintf("species %d of %d (←/→ for the others)", i+1, n))))
+	}
+
+	// S_f = R(ln q_f + U_f) and Cv_f = R·Cv_f for each factor; the R of
+	// Cp − Cv is the work P dV of the gas and is booked with translation.
+	r := model.GasConstant
+	const lw, vw = 13, 13
+	add(s.Label.Render(padRight("", lw) + padLeft(t("S J/(mol·K)"), vw) + padLeft(t("Cp J/(mol·K)"), vw+1)))
+	rows := []struct {
+		name  string
+		terms model.Terms
+		plusR bool
+	}{
+		{"translation", st.Trans, true},
+		{"rotation", st.Rot, false},
+		{"vibration", st.Vib, false},
+		{"electronic", st.Elec, false},
+	}
+	var sumS, sumCp float64
+	for _, row := range rows {
+		sf := r * row.terms.S()
+		cpf := r * row.terms.Cv
+		mark := ""
+		if row.plusR {
+			cpf += r
+			mark = " *"
+		}
+		sumS += sf
+		sumCp += cpf
+		add(s.Label.Render(padRight(row.name, lw)) + s.Value.Render(padLeft(fixed(sf, 3), vw)+padLeft(fixed(cpf, 3), vw+1)) + mark)
+	}
+	add(s.Label.Render(padRight("total", lw)) + s.Value.Render(padLeft(fixed(sumS, 3), vw)+padLeft(fixed(sumCp, 3), vw+1)))
+	addWrapped(s.Muted.Render, "", "* Cp = Cv + R: the R, the P dV work of heating at constant pressure, is booked with translation.")
+
+	add("")
+	p.thetas(sp, addLabeled)
+
+	add("")
+	add(s.Label.Render("Does the model hold here?"))
+	for _, note := range p.b.notes {
+		if note.Species == sp.Formula {
+			addWrapped(noteStyle(s, note.Severity), "  ", note.Severity.String()+": "+note.Text)
+		}
+	}
+	if sp.Notes != "" {
+		addWrapped(s.Muted.Render, "  ", "about "+sp.Formula+": "+sp.Notes)
+	}
+	first := true
+	for _, note := range p.b.notes {
+		if note.Species == "" {
+			if first {
+				add(s.Label.Render("The blend as a whole"))
+				first = false
+			}
+			addWrapped(noteStyle(s, note.Severity), "  ", note.Severity.String()+": "+note.Text)
+		}
+	}
+	return lines
+}
+
+func noteStyle(s *Styles, sev model.Severity) func(...string) string {
+	switch sev {
+	case model.Invalid:
+		return s.Error.Render
+	case model.Caution:
+		return s.Warning.Render
+	}
+	return s.Value.Render
+}
+
+// thetas writes the characteristic temperatures, each with its degeneracy.
+func (p *anatomyPane) thetas(sp *model.Species, addLabeled func(label, text string)) {
+	list := func(ks []float64, deg func(int) int) string {
+		parts := make([]string, len(ks))
+		for i, k := range ks {
+			parts[i] = sig(k, 4)
+			if g := deg(i); g > 1 {
+				parts[i] += fmt.Sprintf(" ×%d", g)
+			}
+		}
+		return strings.Join(parts, ", ") + " K"
+	}
+	one := func(int) int { return 1 }
+	switch sp.Rotor {
+	case model.Atom:
+		addLabeled("Θrot", "none: an atom does not rotate")
+	default:
+		addLabeled("Θrot", fmt.Sprintf("%s (%s, σ = %d)", list(sp.RotThetaK(), one), sp.Rotor, sp.Symmetry))
+	}
+	if vib := sp.VibThetaK(); len(vib) > 0 {
+		addLabeled("Θvib", list(vib, func(i int) int { return sp.Vib[i].Degeneracy }))
+	} else {
+		addLabeled("Θvib", "none: no vibration")
+	}
+	el := sp.ElecThetaK()
+	ground := fmt.Sprintf("ground level g = %d", sp.Elec[0].Degeneracy)
+	if len(el) > 1 {
+		addLabeled("Θel", ground+"; then "+list(el[1:], func(i int) int { return sp.Elec[i+1].Degeneracy }))
+	} else {
+		addLabeled("Θel", ground+" only")
+	}
+	if sp.BoilingK > 0 {
+		addLabeled("Tb", sig(sp.BoilingK, 5)+" K at 1 atm")
+	}
+}

@@ -1,0 +1,134 @@
+package ui
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"zmix/mixtures"
+	"zmix/model"
+)
+
+func testProps(t *testing.T, w, h int) (*propertiesPane, *bench) {
+	t.Helper()
+	c := testPaneCommon(false)
+	b := newBench(c.Catalogue)
+	b.loadFile(mixtures.DemoFile())
+	b.update()
+	p := newPropertiesPane(c, b)
+	p.SetSize(w, h)
+	return p, b
+}
+
+// engineState computes the demo blend at (T, P) with mixtures alone.
+func engineState(t *testing.T, blend string, tempK, presPa float64) mixtures.State {
+	t.Helper()
+	bl, err := mixtures.ParseBlend(blend)
+	if err != nil {
+		t.Fatal(err)
+	}
+	mix, err := bl.Resolve(model.Builtin(), presPa)
+	if err != nil {
+		t.Fatal(err)
+	}
+	st, err := mix.State(tempK, presPa, mixtures.Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	return st
+}
+
+// wantReadout lists the figures the readout must show for st, formatted
+// as the state command formats them.
+func wantReadout(st *mixtures.State, perKg bool) []string {
+	want := []string{
+		sig(1000*st.MolarMassKgPerMol, 6), sig(st.DensityKgPerM3, 5), sig(st.CpJPerMolK, 5), sig(st.CvJPerMolK, 5),
+		sig(st.Gamma, 5), sig(st.SoundSpeedMPerS, 5), fixed(st.HJPerMol/1000, 3), fixed(st.UJPerMol/1000, 3),
+		sig(st.SJPerMolK, 6), fixed(st.GJPerMol/1000, 3), fixed(st.AJPerMol/1000, 3), sig(st.SMixJPerMolK, 5),
+	}
+	if perKg {
+		want = append(want, sig(st.PerKg(st.CpJPerMolK), 5), fixed(st.PerKg(st.GJPerMol)/1000, 3))
+	}
+	for _, t := range st.Species {
+		want = append(want, t.Species.Formula+" ", sig(t.X, 4), sig(t.PartialPresPa/1000, 4),
+			fixed(t.MuJPerMol/1000, 3), sig(t.SJPerMolK, 5), sig(t.CpJPerMolK, 4))
+	}
+	return want
+}
+
+func TestPropertiesShowsEngineValues(t *testing.T) {
+	for _, size := range []struct {
+		name  string
+		w, h  int
+		perKg bool
+	}{
+		{"roomy, per kg too", 90, 40, true},
+		{"short, two columns", 78, 16, false},
+		{"narrow", 62, 40, false},
+	} {
+		t.Run(size.name, func(t *testing.T) {
+			p, _ := testProps(t, size.w, size.h)
+			p.scroll.setHeight(1000) // the whole text, not only what fits
+			v := p.View()
+			st := engineState(t, mixtures.DemoFile().BlendText(), 295.15, 1.4e5)
+			for _, w := range wantReadout(&st, size.perKg) {
+				if !strings.Contains(v, w) {
+					t.Errorf("readout lacks %q:\n%s", w, v)
+				}
+			}
+			for _, l := range strings.Split(v, "\n") {
+				if lw := len([]rune(l)); lw > size.w {
+					t.Errorf("line wider (%d) than the pane (%d): %q", lw, size.w, l)
+				}
+			}
+			if strings.Contains(v, "NaN") || strings.Contains(v, "Inf") {
+				t.Errorf("non-finite value on screen:\n%s", v)
+			}
+		})
+	}
+}
+
+func TestPropertiesScroll(t *testing.T) {
+	p, _ := testProps(t, 70, 5)
+	top := p.View()
+	p.Update(testKey("down"))
+	if p.View() == top {
+		t.Errorf("down did not scroll")
+	}
+	p.Update(testKey("end"))
+	if _, below := p.scroll.more(); below {
+		t.Errorf("end did not reach the bottom")
+	}
+	p.Update(testKey("home"))
+	if p.View() != top {
+		t.Errorf("home did not go back to the top")
+	}
+}
+
+// A state the model cannot compute shows an error, never a NaN.
+func TestPropertiesNonFiniteIsAnError(t *testing.T) {
+	p, b := testProps(t, 80, 30)
+	b.state.CpJPerMolK = math.NaN()
+	if name := nonFinite(&b.state); name != "Cp" {
+		t.Fatalf("nonFinite = %q, want Cp", name)
+	}
+	b.derive() // from good inputs again: finite
+	if b.stateErr != "" {
+		t.Fatalf("stateErr = %q", b.stateErr)
+	}
+	b.stateErr = "the model gives no finite Cp"
+	p.refresh()
+	if v := p.View(); !strings.Contains(v, "no finite Cp") || strings.Contains(v, "NaN") {
+		t.Errorf("view:\n%s", v)
+	}
+}
+
+func TestPropertiesShowsStaleState(t *testing.T) {
+	p, b := testProps(t, 80, 30)
+	b.setTemp("hot")
+	b.update()
+	p.refresh()
+	if !strings.Contains(p.View(), "last valid state") {
+		t.Errorf("no notice that the readout is the last valid state:\n%s", p.View())
+	}
+}

@@ -1,0 +1,307 @@
+package ui
+
+import (
+	"fmt"
+
+	"github.com/charmbracelet/bubbles/key"
+	tea "github.com/charmbracelet/bubbletea"
+
+	"zmix/model"
+)
+
+type recipeMode int
+
+const (
+	recipeBrowse recipeMode = iota
+	recipeEditing
+	recipeSearching
+)
+
+// recipePane is the composition: species and amounts as typed, each with
+// its error in place, and a search of the catalogue to add species.
+type recipePane struct {
+	c    *Common
+	b    *bench
+	w, h int
+
+	sel    int
+	mode   recipeMode
+	amount field
+	before string // the amount before editing, for esc
+	search field
+	hits   []*model.Species
+	hit    int
+	msg    string // the pane's last remark, e.g. why normalise refused
+
+	scroll scroller
+}
+
+func newRecipePane(c *Common, b *bench) *recipePane {
+	p := &recipePane{c: c, b: b, amount: newField(c), search: newField(c)}
+	return p
+}
+
+func (p *recipePane) SetSize(w, h int) {
+	p.w, p.h = max(w, 0), max(h, 0)
+	p.amount.setWidth(p.amountWidth())
+	p.search.setWidth(p.w - 14)
+	p.scroll.setHeight(p.h)
+	p.refresh()
+}
+
+func (p *recipePane) Editing() bool { return p.mode != recipeBrowse }
+
+func (p *recipePane) KeyHelp() []key.Binding {
+	k := p.c.Keys.Recipe
+	switch p.mode {
+	case recipeEditing:
+		return []key.Binding{k.Done, p.c.Keys.Back, p.c.Keys.Interrupt}
+	case recipeSearching:
+		return []key.Binding{k.Pick, k.SearchUp, k.SearchDown, p.c.Keys.Back}
+	}
+	return []key.Binding{k.Up, k.Down, k.Add, k.Edit, k.Balance, k.Remove, k.Normalise}
+}
+
+// ShortHelp is the few keys the status line names.
+func (p *recipePane) ShortHelp() []key.Binding {
+	k := p.c.Keys.Recipe
+	switch p.mode {
+	case recipeEditing:
+		return []key.Binding{k.Done, p.c.Keys.Back}
+	case recipeSearching:
+		return []key.Binding{k.Pick, p.c.Keys.Back}
+	}
+	return []key.Binding{k.Add, k.Edit, k.Balance, k.Remove, k.Normalise}
+}
+
+func (p *recipePane) Update(msg tea.KeyMsg) tea.Cmd {
+	k := p.c.Keys.Recipe
+	var cmd tea.Cmd
+	switch p.mode {
+	case recipeEditing:
+		switch {
+		case key.Matches(msg, p.c.Keys.Back):
+			p.b.setAmount(p.sel, p.before)
+			p.stopEdit()
+		case key.Matches(msg, k.Done):
+			p.stopEdit()
+		default:
+			cmd = p.amount.update(msg)
+			p.b.setAmount(p.sel, p.amount.value())
+		}
+	case recipeSearching:
+		switch {
+		case key.Matches(msg, p.c.Keys.Back):
+			p.mode = recipeBrowse
+			p.search.stop()
+		case key.Matches(msg, k.Pick):
+			p.pick()
+		case key.Matches(msg, k.SearchUp):
+			p.hit = max(p.hit-1, 0)
+		case key.Matches(msg, k.SearchDown):
+			p.hit = min(p.hit+1, len(p.hits)-1)
+		default:
+			cmd = p.search.update(msg)
+			p.hits = p.c.Catalogue.Search(p.search.value())
+			p.hit = 0
+		}
+	default:
+		p.msg = ""
+		switch {
+		case key.Matches(msg, k.Up):
+			p.sel = max(p.sel-1, 0)
+		case key.Matches(msg, k.Down):
+			p.sel = min(p.sel+1, len(p.b.entries)-1)
+		case key.Matches(msg, k.Add):
+			p.mode = recipeSearching
+			p.search.start("")
+			p.hits = p.c.Catalogue.Search("")
+			p.hit = 0
+		case key.Matches(msg, k.Edit):
+			if len(p.b.entries) > 0 {
+				p.startEdit()
+			}
+		case key.Matches(msg, k.Balance):
+			p.b.setBalance(p.sel)
+		case key.Matches(msg, k.Remove):
+			if len(p.b.entries) > 0 {
+				p.msg = "removed " + p.b.entries[p.sel].Species
+				p.b.remove(p.sel)
+			}
+		case key.Matches(msg, k.Normalise):
+			if err := p.b.normalise(); err != nil {
+				p.msg = err.Error()
+			} else {
+				p.msg = "amounts scaled to sum to 100 %"
+			}
+		}
+	}
+	p.sel = max(0, min(p.sel, len(p.b.entries)-1))
+	p.refresh()
+	return cmd
+}
+
+func (p *recipePane) startEdit() {
+	p.mode = recipeEditing
+	p.before = p.b.entries[p.sel].Amount
+	p.amount.start(p.before)
+}
+
+func (p *recipePane) stopEdit() {
+	p.mode = recipeBrowse
+	p.amount.stop()
+}
+
+// pick adds the marked search hit and opens its amount for typing.
+func (p *recipePane) pick() {
+	p.search.stop()
+	p.mode = recipeBrowse
+	if len(p.hits) == 0 {
+		p.msg = fmt.Sprintf("no species matches %q; try a formula (SiH4) or a name (silane)", p.search.value())
+		return
+	}
+	sp := p.hits[p.hit]
+	i, added := p.b.addSpecies(sp.Formula)
+	p.sel = i
+	if !added {
+		p.msg = sp.Formula + " is in the recipe already; edit its amount"
+	}
+	p.startEdit()
+}
+
+// selectSpecies marks the entry of a formula, if present.
+func (p *recipePane) selectSpecies(formula string) {
+	for i, e := range p.b.entries {
+		if e.Species == formula {
+			p.sel = i
+		}
+	}
+	p.refresh()
+}
+
+func (p *recipePane) amountWidth() int { return max(10, min(22, p.w-24)) }
+
+func (p *recipePane) speciesWidth() int {
+	w := 7
+	for _, e := range p.b.entries {
+		w = max(w, len(p.c.Text(e.Species))+1)
+	}
+	return min(w, max(p.w/3, 7))
+}
+
+// refresh rebuilds the lines from the bench; it runs on every change and
+// resize, so that View only slices.
+func (p *recipePane) refresh() {
+	if p.mode == recipeSearching {
+		p.scroll.setLines(p.searchLines())
+		p.scroll.top()
+		return
+	}
+	s := p.c.Styles
+	var lines []string
+	if p.b.name != "" {
+		lines = append(lines, s.Muted.Render(p.c.Text(p.b.name)))
+	}
+	sw, aw := p.speciesWidth(), p.amountWidth()
+	xHead := "x mol/mol"
+	if p.b.blendErr != "" || anyErr(p.b.rowErr) {
+		xHead = "x (last valid)"
+	}
+	lines = append(lines, s.Label.Render("  "+padRight("species", sw)+" "+padRight("amount", aw)+" "+xHead))
+	selFirst, selLast := 0, 0
+	for i, e := range p.b.entries {
+		mark := "  "
+		if i == p.sel {
+			mark = "> "
+		}
+		amt := padRight(p.c.Text(e.Amount), aw)
+		if p.mode == recipeEditing && i == p.sel {
+			amt = padRight(p.amount.view(aw), aw)
+		} else if e.Amount == "" {
+			amt = s.Muted.Render(padRight("(type one)", aw))
+		}
+		x := ""
+		if v, ok := p.b.moleFraction(e.Species); ok {
+			x = sig(v, 4)
+		}
+		name := padRight(p.c.Text(e.Species), sw)
+		if i == p.sel {
+			name = s.Selected.Render(name)
+		}
+		if i == p.sel {
+			selFirst = len(lines)
+		}
+		lines = append(lines, mark+name+" "+amt+" "+s.Value.Render(x))
+		if i < len(p.b.rowErr) && p.b.rowErr[i] != "" {
+			for _, l := range wrap(p.c.Text(p.b.rowErr[i]), p.w-4) {
+				lines = append(lines, "    "+s.Error.Render(l))
+			}
+		}
+		if i == p.sel {
+			selLast = len(lines) - 1
+		}
+	}
+	if len(p.b.entries) == 0 {
+		lines = append(lines, s.Muted.Render("  (no species: press a to add one)"))
+	}
+	if p.b.blendErr != "" {
+		for _, l := range wrap(p.c.Text(p.b.blendErr), p.w-2) {
+			lines = append(lines, s.Error.Render(l))
+		}
+	}
+	if p.msg != "" {
+		for _, l := range wrap(p.c.Text(p.msg), p.w) {
+			lines = append(lines, s.Warning.Render(l))
+		}
+	}
+	p.scroll.setLines(lines)
+	p.scroll.show(selFirst, selLast)
+	if p.msg != "" || p.b.blendErr != "" {
+		p.scroll.show(len(lines)-1, len(lines)-1)
+		p.scroll.show(selFirst, selLast)
+	}
+}
+
+func (p *recipePane) searchLines() []string {
+	s := p.c.Styles
+	lines := []string{
+		s.Label.Render("add species: ") + p.search.view(max(p.w-14, 4)),
+		s.Muted.Render(p.c.Text("type a formula or name; ↑↓ choose, enter adds, esc cancels")),
+	}
+	if len(p.hits) == 0 {
+		lines = append(lines, s.Error.Render("  no match in the catalogue"))
+	}
+	// The query stays in view; the list scrolls under it.
+	room := max(p.h-len(lines), 1)
+	first := max(0, p.hit-room+1)
+	for i := first; i < len(p.hits) && i < first+room; i++ {
+		sp := p.hits[i]
+		mark := "  "
+		f := padRight(p.c.Text(sp.Formula), 7)
+		if i == p.hit {
+			mark = "> "
+			f = s.Selected.Render(f)
+		}
+		lines = append(lines, mark+f+" "+p.c.Text(sp.Name))
+	}
+	return lines
+}
+
+func anyErr(errs []string) bool {
+	for _, e := range errs {
+		if e != "" {
+			return true
+		}
+	}
+	return false
+}
+
+func (p *recipePane) View() string { return p.scroll.view() }
+
+// title names the pane in its frame.
+func (p *recipePane) title() string {
+	if n := len(p.b.entries); n > 0 {
+		return fmt.Sprintf("Recipe (%d)", n)
+	}
+	return "Recipe"
+}

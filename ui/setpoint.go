@@ -1,0 +1,216 @@
+package ui
+
+import (
+	"github.com/charmbracelet/bubbles/key"
+	tea "github.com/charmbracelet/bubbletea"
+
+	"zmix/mixtures"
+)
+
+// The setpoint pane's lines.
+const (
+	spTemp = iota
+	spPres
+	spStd
+	spView
+	spCount
+)
+
+// setpointPane holds the conditions: temperature and pressure typed with
+// units, the standard pressure of μ°, and whether pressures show as gauge.
+type setpointPane struct {
+	c    *Common
+	b    *bench
+	w, h int
+
+	sel     int
+	editing bool
+	input   field
+	before  string
+
+	scroll scroller
+}
+
+func newSetpointPane(c *Common, b *bench) *setpointPane {
+	return &setpointPane{c: c, b: b, input: newField(c)}
+}
+
+func (p *setpointPane) SetSize(w, h int) {
+	p.w, p.h = max(w, 0), max(h, 0)
+	p.input.setWidth(p.fieldWidth())
+	p.scroll.setHeight(p.h)
+	p.refresh()
+}
+
+func (p *setpointPane) Editing() bool { return p.editing }
+
+func (p *setpointPane) KeyHelp() []key.Binding {
+	k := p.c.Keys.Setpoint
+	if p.editing {
+		return []key.Binding{p.c.Keys.Accept, p.c.Keys.Back, p.c.Keys.Interrupt}
+	}
+	return []key.Binding{k.Up, k.Down, k.Edit, k.Temperature, k.Pressure, k.Standard, k.Gauge}
+}
+
+func (p *setpointPane) ShortHelp() []key.Binding {
+	k := p.c.Keys.Setpoint
+	if p.editing {
+		return []key.Binding{p.c.Keys.Accept, p.c.Keys.Back}
+	}
+	return []key.Binding{k.Temperature, k.Pressure, k.Standard, k.Gauge}
+}
+
+func (p *setpointPane) Update(msg tea.KeyMsg) tea.Cmd {
+	var cmd tea.Cmd
+	if p.editing {
+		switch {
+		case key.Matches(msg, p.c.Keys.Back):
+			p.set(p.before)
+			p.stopEdit()
+		case key.Matches(msg, p.c.Keys.Accept):
+			p.stopEdit()
+		default:
+			cmd = p.input.update(msg)
+			p.set(p.input.value())
+		}
+		p.refresh()
+		return cmd
+	}
+	k := p.c.Keys.Setpoint
+	switch {
+	case key.Matches(msg, k.Up):
+		p.sel = max(p.sel-1, 0)
+	case key.Matches(msg, k.Down):
+		p.sel = min(p.sel+1, spCount-1)
+	case key.Matches(msg, k.Temperature):
+		p.sel = spTemp
+		p.startEdit()
+	case key.Matches(msg, k.Pressure):
+		p.sel = spPres
+		p.startEdit()
+	case key.Matches(msg, k.Standard):
+		p.sel = spStd
+		p.b.toggleStd()
+	case key.Matches(msg, k.Gauge):
+		p.sel = spView
+		p.b.toggleGauge()
+	case key.Matches(msg, k.Edit):
+		switch p.sel {
+		case spTemp, spPres:
+			p.startEdit()
+		case spStd:
+			p.b.toggleStd()
+		case spView:
+			p.b.toggleGauge()
+		}
+	}
+	p.refresh()
+	return nil
+}
+
+func (p *setpointPane) typed() string {
+	if p.sel == spTemp {
+		return p.b.tempText
+	}
+	return p.b.presText
+}
+
+func (p *setpointPane) set(s string) {
+	if p.sel == spTemp {
+		p.b.setTemp(s)
+	} else {
+		p.b.setPres(s)
+	}
+}
+
+func (p *setpointPane) startEdit() {
+	p.editing = true
+	p.before = p.typed()
+	p.input.start(p.before)
+}
+
+func (p *setpointPane) stopEdit() {
+	p.editing = false
+	p.input.stop()
+}
+
+// fieldWidth leaves room for the label and for the value in kelvin.
+func (p *setpointPane) fieldWidth() int { return max(8, min(18, p.w-16-22)) }
+
+func (p *setpointPane) refresh() {
+	s := p.c.Styles
+	fw := p.fieldWidth()
+	const lw = 12
+	var lines []string
+	selLine := 0
+	row := func(i int, label, value, note string) {
+		mark := "  "
+		l := padRight(label, lw)
+		if i == p.sel {
+			mark = "> "
+			l = s.Selected.Render(l)
+			selLine = len(lines)
+		}
+		line := mark + l + " " + value
+		if note != "" {
+			line += "  " + s.Muted.Render(note)
+		}
+		lines = append(lines, line)
+	}
+	typed := func(i int, text string) string {
+		if p.editing && p.sel == i {
+			return padRight(p.input.view(fw), fw)
+		}
+		if text == "" {
+			return s.Muted.Render(padRight("(type one)", fw))
+		}
+		return padRight(p.c.Text(text), fw)
+	}
+	errLines := func(msg string) {
+		for _, l := range wrap(p.c.Text(msg), p.w-4) {
+			lines = append(lines, "    "+s.Error.Render(l))
+		}
+	}
+
+	in := p.b.in
+	tNote, pNote := "", ""
+	if p.b.tempErr == "" && in.TempK > 0 {
+		tNote = p.c.Text(short(in.TempK, 6) + " K, " + fixed(in.TempK-273.15, 2) + " °C")
+	}
+	if p.b.presErr == "" && in.PresPa > 0 {
+		if p.b.showGauge {
+			pNote = presText(in.PresPa) + " abs"
+		} else {
+			pNote = p.b.presShown(in.PresPa)
+			if in.Gauge {
+				pNote += ", entered as gauge"
+			}
+		}
+	}
+	row(spTemp, "temperature", typed(spTemp, p.b.tempText), tNote)
+	if p.b.tempErr != "" {
+		msg := p.b.tempErr
+		if in.TempK > 0 {
+			msg += " (" + mixtures.FormatTemperature(in.TempK) + " still in force)"
+		}
+		errLines(msg)
+	}
+	row(spPres, "pressure", typed(spPres, p.b.presText), pNote)
+	if p.b.presErr != "" {
+		msg := p.b.presErr
+		if in.PresPa > 0 {
+			msg += " (" + presText(in.PresPa) + " abs still in force)"
+		}
+		errLines(msg)
+	}
+	row(spStd, p.c.Text("P° (std)"), padRight(p.b.stdText(), fw), p.c.Text("reference of μ°"))
+	view := "absolute"
+	if p.b.showGauge {
+		view = "gauge"
+	}
+	row(spView, "show P as", padRight(view, fw), "1 atm = 0 gauge")
+	p.scroll.setLines(lines)
+	p.scroll.show(selLine, selLine)
+}
+
+func (p *setpointPane) View() string { return p.scroll.view() }
