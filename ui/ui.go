@@ -2,6 +2,16 @@ package ui
 
 import (
 	"errors"
+	"fmt"
+	"os"
+	"os/signal"
+	"runtime/debug"
+	"syscall"
+	"time"
+
+	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
+	"github.com/muesli/termenv"
 
 	"zmix/model"
 )
@@ -17,5 +27,57 @@ type Config struct {
 
 // Run opens the workbench and blocks until the user quits.
 func Run(cfg Config) error {
-	return errors.New("ui: the workbench is not built yet")
+	dir := cfg.StateDir
+	if dir == "" {
+		var err error
+		if dir, err = DefaultStateDir(); err != nil {
+			return err
+		}
+	}
+	mono := cfg.NoColor || os.Getenv("NO_COLOR") != ""
+	if mono {
+		lipgloss.SetColorProfile(termenv.Ascii)
+	}
+	cwd, _ := os.Getwd()
+
+	// Bubble Tea's own handler would end the program on SIGTERM without our
+	// save, and it does not watch SIGHUP, which a dropped SSH link sends.
+	sigs := make(chan os.Signal, 1)
+	signal.Notify(sigs, syscall.SIGHUP, syscall.SIGTERM, syscall.SIGINT)
+	defer signal.Stop(sigs)
+
+	store := newStateStore(dir)
+	r, err := newRoot(cfg, rootOptions{store: store, now: time.Now, cwd: cwd, signals: sigs, mono: mono})
+	if err != nil {
+		return err
+	}
+	g := newGuard(r, dir, time.Now)
+	p := tea.NewProgram(g, tea.WithAltScreen(), tea.WithoutSignalHandler())
+	g.kill = p.Kill
+	_, runErr := p.Run()
+
+	if g.crashed {
+		return g.exitError()
+	}
+	// Whatever ended the program, the last state goes to disk before exit.
+	saveErr := func() (err error) {
+		defer func() {
+			if v := recover(); v != nil {
+				err = fmt.Errorf("%v", v)
+			}
+		}()
+		return r.finalSave()
+	}()
+	switch {
+	case errors.Is(runErr, tea.ErrProgramPanic):
+		// A panic our guard did not see; Bubble Tea printed its stack.
+		report := writeCrashReport(dir, time.Now(), runErr, debug.Stack(), saveErr)
+		return fmt.Errorf("ui: internal error (%v); crash report: %s", runErr, report)
+	case runErr != nil && !errors.Is(runErr, tea.ErrProgramKilled):
+		return fmt.Errorf("ui: %w", runErr)
+	}
+	if saveErr != nil {
+		return fmt.Errorf("ui: could not save the workbench state to %s: %v", store.path, saveErr)
+	}
+	return nil
 }
