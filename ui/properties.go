@@ -128,7 +128,9 @@ func (p *propertiesPane) render() []string {
 	head := short(in.TempK, 6) + " K, " + p.b.presShown(in.PresPa) + ", P° " + p.b.stdText()
 	add(s.Title.Render(t(head)))
 	if !p.b.valid() {
-		add(s.Warning.Render(t("last valid state: an entry has an error (see Recipe / Setpoint)")))
+		for _, l := range wrap(t("last valid state: an entry has an error (see Recipe / Setpoint)"), p.w) {
+			add(s.Warning.Render(l))
+		}
 	}
 	rows := p.readoutRows()
 	n := len(p.b.state.Species)
@@ -200,8 +202,8 @@ var speciesColumns = []struct {
 	head, unit string
 	width      int
 }{
-	{"species", "", 8}, {"x", "mol/mol", 10}, {"mass", "kg/kg", 10}, {"pᵢ", "kPa", 10},
-	{"μᵢ", "kJ/mol", 11}, {"Sᵢ", "J/(mol·K)", 10}, {"Cpᵢ", "J/(mol·K)", 10},
+	{"species", "", 7}, {"x", "mol/mol", 10}, {"mass", "kg/kg", 10}, {"pᵢ", "kPa", 9},
+	{"μᵢ", "kJ/mol", 10}, {"Sᵢ", "J/(mol·K)", 10}, {"Cpᵢ", "J/(mol·K)", 10},
 }
 
 func (p *propertiesPane) speciesTable(add func(string)) {

@@ -147,7 +147,7 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 		}
 		b.loadFile(f)
 		r.blendPath = r.absPath(cfg.BlendFile)
-		r.setStatus("opened " + r.blendPath)
+		r.setStatus("opened " + r.shortPath(r.blendPath))
 		if saved != nil && saved.Unsaved {
 			// The workbench held changes nobody saved; keep them on disk.
 			if aside, err := opt.store.setAside(opt.now()); err == nil {
@@ -1041,10 +1041,10 @@ func (r *root) promptLine() string {
 	k := r.c.Keys
 	switch r.prompt {
 	case promptQuit:
-		return s.Prompt.Render(t(fmt.Sprintf(" %s has changes not saved to it. Quit? %s quit · %s save, then quit · %s stay",
+		return s.Prompt.Render(t(fmt.Sprintf(" %s: changes not saved. Quit? %s quit · %s save and quit · %s stay",
 			filepath.Base(r.blendPath), k.Yes.Help().Key, k.SaveQuit.Help().Key, k.No.Help().Key)))
 	case promptReplace:
-		return s.Prompt.Render(t(fmt.Sprintf(" %s has changes not saved to it. Open another file anyway? %s yes · %s no",
+		return s.Prompt.Render(t(fmt.Sprintf(" %s: changes not saved. Open another file? %s yes · %s no",
 			filepath.Base(r.blendPath), k.Yes.Help().Key, k.No.Help().Key)))
 	case promptOverwrite:
 		return s.Prompt.Render(t(fmt.Sprintf(" %s exists. Replace it? %s yes · %s no", r.shortPath(r.pending), k.Yes.Help().Key, k.No.Help().Key)))

@@ -10,18 +10,21 @@ import (
 )
 
 // asciiReplacer spells out the non-ASCII glyphs that the engine's notes and
-// our own labels use, for terminals and fonts without them.
+// our own labels use, for terminals and fonts without them. It follows the
+// commands' ASCII output: a degree sign of a unit goes, the one left marks
+// a standard state (P°, μ°) and becomes 0, and J/(mol·K) is J/(mol.K).
 var asciiReplacer = strings.NewReplacer(
-	"μ", "mu", "µ", "mu", "°", "deg", "²", "^2", "³", "^3", "⁻¹", "^-1", "⁻", "^-",
-	"·", "*", "—", "--", "–", "-", "−", "-", "×", "x", "≪", "<<", "≫", ">>",
-	"≤", "<=", "≥", ">=", "≈", "~", "Θrot", "Theta_rot", "Θvib", "Theta_vib", "Θel", "Theta_el",
-	"Θ", "Theta", "θ", "theta", "γ", "gamma", "σ", "sigma", "α", "alpha", "β", "beta", "ε", "eps",
-	"λ", "lambda", "ω", "omega", "Π", "Pi", "Λ", "Lambda",
-	"ρ", "rho", "Σ", "sum ", "Δ", "d", "ν", "nu", "π", "pi", "ᵢ", "_i", "∞", "inf",
+	"°C", "C", "°F", "F", "°", "0", "³", "3", "²", "2", "·", ".",
+	"μ", "mu", "µ", "mu", "γ", "gamma", "ρ", "rho", "σ", "sigma",
+	"Θrot", "Theta_rot", "Θvib", "Theta_vib", "Θel", "Theta_el", "Θ", "Theta", "θ", "theta",
+	"Δf", "Delta_f", "Δ", "Delta", "ν̃", "nu", "ν", "nu", "Σ", "sum", "Π", "Pi", "Λ", "Lambda",
+	"α", "alpha", "β", "beta", "ε", "eps", "λ", "lambda", "ω", "omega", "π", "pi",
+	"≪", "<<", "≫", ">>", "≈", "~", "≤", "<=", "≥", ">=", "≠", "!=", "×", "x",
+	"−", "-", "–", "-", "—", "-", "ᵢ", "_i", "⁻¹", "^-1", "⁻", "^-", "∞", "inf", "√", "sqrt", "∂", "d",
 	"₀", "0", "₁", "1", "₂", "2", "₃", "3", "₄", "4", "₅", "5", "₆", "6", "₇", "7", "₈", "8", "₉", "9",
 	"⁰", "^0", "¹", "^1", "⁴", "^4",
 	"→", "->", "←", "<-", "↑", "^", "↓", "v", "…", "...", "•", "*", "▸", ">",
-	"’", "'", "‘", "'", "“", "\"", "”", "\"", "√", "sqrt", "∂", "d", "≠", "!=",
+	"’", "'", "‘", "'", "“", "\"", "”", "\"",
 )
 
 // keyWords spells out arrow glyphs in key help, where a word reads better

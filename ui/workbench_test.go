@@ -239,9 +239,9 @@ func TestSig(t *testing.T) {
 
 func TestToASCII(t *testing.T) {
 	cases := []struct{ in, want string }{
-		{"μᵢ = μᵢ°(T)", "mu_i = mu_ideg(T)"},
-		{"J/(mol·K)", "J/(mol*K)"},
-		{"kg/m³", "kg/m^3"},
+		{"μᵢ = μᵢ°(T), P° 1 bar, 25 °C", "mu_i = mu_i0(T), P0 1 bar, 25 C"},
+		{"J/(mol·K)", "J/(mol.K)"},
+		{"kg/m³, J mol⁻¹", "kg/m3, J mol^-1"},
 		{"n/nQ ≪ 1", "n/nQ << 1"},
 		{"Θrot ×2, T/Θvib", "Theta_rot x2, T/Theta_vib"},
 		{"odd ☃", "odd ?"},
