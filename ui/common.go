@@ -62,4 +62,13 @@ type SweepKeys struct {
 	CursorRight key.Binding
 	CursorHome  key.Binding
 	CursorEnd   key.Binding
+
+	PrevProperty    key.Binding
+	PrevSpecies     key.Binding
+	CursorStepLeft  key.Binding // one grid point, however dense the grid
+	CursorStepRight key.Binding
+	// While the range is typed in.
+	NextField key.Binding
+	PrevField key.Binding
+	Apply     key.Binding
 }

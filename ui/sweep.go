@@ -1,0 +1,683 @@
+package ui
+
+import (
+	"math"
+	"strconv"
+	"strings"
+
+	"github.com/charmbracelet/bubbles/key"
+	tea "github.com/charmbracelet/bubbletea"
+
+	"zmix/mixtures"
+)
+
+// The sweep pane moves T or P across a grid, plots one property of the
+// blend (or of its species, overlaid) and reads exact values off the grid
+// at a cursor. Sweeps run as chains of commands (sweep_run.go); the chart
+// is drawn in Update (plot.go), so View only joins finished lines.
+
+// Sweep variables by index: the pane remembers a range for each.
+const (
+	sweepVarT = 0
+	sweepVarP = 1
+)
+
+// Fields of the range editor.
+const (
+	sweepFieldFrom = iota
+	sweepFieldTo
+	sweepFieldSteps
+	sweepFieldCount
+)
+
+// sweepDefaultRanges are the ranges a variable starts with.
+var sweepDefaultRanges = [2][2]string{{"200 K", "1500 K"}, {"1 bar", "100 bar"}}
+
+var sweepVarNames = [2]string{"T", "P"}
+
+type sweepPane struct {
+	c    *Common
+	w, h int
+
+	// In force: always a valid sweep. applied remembers the last valid
+	// range of each variable; drafts hold what was typed, valid or not.
+	set        SweepSettings
+	sweep      mixtures.Sweep
+	applied    [2][2]string
+	drafts     [2][2]string
+	stepsDraft string
+	fields     [sweepFieldCount]field
+	errs       [sweepFieldCount]string
+	rangeErr   string // the range as a whole (e.g. equal end points)
+	editing    bool
+	focus      int
+	changed    bool
+	note       string // a notice about the last key, until the next
+
+	in     Inputs
+	haveIn bool
+
+	// The sweep being computed, if any.
+	gen     uint64
+	running bool
+	runKey  sweepKey
+	done    int
+	total   int
+	runErr  string
+
+	result    *mixtures.SweepResult
+	resultKey sweepKey
+
+	plot      *plotModel
+	series    []plotSeries
+	plotNote  string // what the plot leaves out, or why it is empty
+	xScale    float64
+	xUnit     string
+	cursor    int
+	chartRows int
+	view      string
+}
+
+func newSweepPane(c *Common, s SweepSettings) *sweepPane {
+	p := &sweepPane{c: c, plot: newPlotModel(c.Styles, c.ASCII), applied: sweepDefaultRanges, drafts: sweepDefaultRanges}
+	for i := range p.fields {
+		p.fields[i] = newField(c)
+	}
+	def := DefaultSweepSettings()
+	if s == (SweepSettings{}) {
+		s = def
+	}
+	if s.Var != "P" {
+		s.Var = "T"
+	}
+	if _, ok := sweepPropIndex(s.Property); !ok {
+		s.Property = def.Property
+	}
+	vi := sweepVarIndex(s.Var)
+	// Start from a range known to be good, then take the saved text as
+	// if typed: a saved entry that no longer parses is shown with its
+	// error instead of being dropped.
+	p.set = s
+	p.set.From, p.set.To, p.set.Steps = p.applied[vi][0], p.applied[vi][1], def.Steps
+	p.sweep, _, _ = sweepParse(vi, p.set.From, p.set.To, strconv.Itoa(p.set.Steps), p.set.Log)
+	p.drafts[vi] = [2]string{s.From, s.To}
+	p.stepsDraft = strconv.Itoa(s.Steps)
+	if s.Steps == 0 {
+		p.stepsDraft = strconv.Itoa(def.Steps)
+	}
+	p.tryApply()
+	p.changed = false
+	p.refresh()
+	return p
+}
+
+func sweepVarIndex(v string) int {
+	if v == "P" {
+		return sweepVarP
+	}
+	return sweepVarT
+}
+
+func (p *sweepPane) vi() int { return sweepVarIndex(p.set.Var) }
+
+// sweepParse reads a range and a number of points as typed. It returns
+// the sweep, an error per field, and an error for the range as a whole.
+func sweepParse(vi int, fromText, toText, stepsText string, logGrid bool) (sw mixtures.Sweep, errs [sweepFieldCount]string, rangeErr string) {
+	sw.Log = logGrid
+	parse := func(s string) (float64, error) { return mixtures.ParseTemperature(s) }
+	if vi == sweepVarP {
+		sw.Var, sw.Log = mixtures.SweepPressure, true
+		parse = func(s string) (float64, error) {
+			pr, err := mixtures.ParsePressure(s)
+			return pr.Pa, err
+		}
+	}
+	var err error
+	if sw.From, err = parse(fromText); err != nil {
+		errs[sweepFieldFrom] = "from: " + cleanErr(err)
+	}
+	if sw.To, err = parse(toText); err != nil {
+		errs[sweepFieldTo] = "to: " + cleanErr(err)
+	}
+	if sw.Steps, err = sweepParseSteps(stepsText); err != nil {
+		errs[sweepFieldSteps] = err.Error()
+	}
+	if errs == [sweepFieldCount]string{} {
+		if err := sw.Check(); err != nil {
+			rangeErr = cleanErr(err)
+		}
+	}
+	return sw, errs, rangeErr
+}
+
+// sweepStepsError is the one-line error for a bad number of points.
+type sweepStepsError struct{ text string }
+
+func (e sweepStepsError) Error() string {
+	return "points " + strconv.Quote(e.text) + ": want a whole number from 2 to " + strconv.Itoa(mixtures.MaxSweepSteps)
+}
+
+// sweepParseSteps reads a number of points: digits, optionally grouped
+// with spaces, commas or underscores ("20 000"), or an exact "1e5".
+func sweepParseSteps(s string) (int, error) {
+	clean := strings.Map(func(r rune) rune {
+		if r == ' ' || r == ',' || r == '_' {
+			return -1
+		}
+		return r
+	}, s)
+	n, err := strconv.Atoi(clean)
+	if err != nil {
+		f, ferr := strconv.ParseFloat(clean, 64)
+		if ferr != nil || f != math.Trunc(f) || f > math.MaxInt32 || f < 0 {
+			return 0, sweepStepsError{s}
+		}
+		n = int(f)
+	}
+	if n < 2 || n > mixtures.MaxSweepSteps {
+		return 0, sweepStepsError{s}
+	}
+	return n, nil
+}
+
+// tryApply puts the typed range in force if it is valid, and reports
+// whether it did. Invalid text stays, with its error; the settings in
+// force do not change.
+func (p *sweepPane) tryApply() bool {
+	vi := p.vi()
+	from, to := p.drafts[vi][0], p.drafts[vi][1]
+	if strings.Contains(from, "..") { // a whole range typed at once
+		if a, b, err := mixtures.ParseRange(from); err == nil {
+			from, to = a, b
+			p.drafts[vi] = [2]string{a, b}
+		}
+	}
+	sw, errs, rangeErr := sweepParse(vi, from, to, p.stepsDraft, p.set.Log)
+	p.errs, p.rangeErr = errs, rangeErr
+	if errs != [sweepFieldCount]string{} || rangeErr != "" {
+		return false
+	}
+	next := p.set
+	next.From, next.To, next.Steps = from, to, sw.Steps
+	if next != p.set {
+		p.set = next
+		p.changed = true
+	}
+	p.applied[vi] = [2]string{from, to}
+	p.stepsDraft = strconv.Itoa(sw.Steps)
+	p.sweep = sw
+	return true
+}
+
+// hasErrors reports whether typed text is waiting to be fixed.
+func (p *sweepPane) hasErrors() bool {
+	return p.errs != [sweepFieldCount]string{} || p.rangeErr != ""
+}
+
+// SetInputs takes new inputs and returns the command that sweeps them,
+// or nil when the sweep would not change.
+func (p *sweepPane) SetInputs(in Inputs) tea.Cmd {
+	if p.haveIn && in.Gen == p.in.Gen {
+		return nil
+	}
+	p.in, p.haveIn = in, true
+	cmd := p.recompute()
+	p.refresh()
+	return cmd
+}
+
+// wanted is the sweep the inputs and settings ask for.
+func (p *sweepPane) wanted() (sweepKey, bool) {
+	if !p.haveIn || !p.in.Valid() {
+		return sweepKey{}, false
+	}
+	k := sweepKey{mix: p.in.Mixture, sweep: p.sweep, opts: p.in.Opts}
+	if p.sweep.Var == mixtures.SweepPressure {
+		k.fixedTempK = p.in.TempK
+	} else {
+		k.fixedPresPa = p.in.PresPa
+	}
+	return k, true
+}
+
+// recompute starts the wanted sweep unless it is running or shown
+// already. Starting one makes every older message stale.
+func (p *sweepPane) recompute() tea.Cmd {
+	k, ok := p.wanted()
+	if !ok {
+		return nil
+	}
+	if p.running && k == p.runKey {
+		return nil
+	}
+	if p.result != nil && k == p.resultKey {
+		if p.running { // back to what is on screen: drop the newer run
+			p.gen++
+			p.running = false
+		}
+		return nil
+	}
+	p.gen++
+	p.running, p.runKey, p.done, p.total = true, k, 0, k.sweep.Steps
+	return sweepStartCmd(p.gen, k)
+}
+
+// Update handles a key (when the pane has focus) or any other message.
+func (p *sweepPane) Update(msg tea.Msg) tea.Cmd {
+	var cmd tea.Cmd
+	switch msg := msg.(type) {
+	case sweepProgressMsg:
+		if msg.gen != p.gen || !p.running {
+			return nil // stale: a newer request replaced it
+		}
+		cmd = p.progress(msg)
+	case tea.KeyMsg:
+		if p.editing {
+			cmd = p.editKey(msg)
+		} else {
+			cmd = p.key(msg)
+		}
+	default:
+		return nil
+	}
+	p.refresh()
+	return cmd
+}
+
+func (p *sweepPane) progress(msg sweepProgressMsg) tea.Cmd {
+	if msg.err != nil {
+		p.running = false
+		p.result, p.series = nil, nil
+		p.runErr = cleanErr(msg.err)
+		p.plot.clear()
+		return nil
+	}
+	p.done, p.total = msg.done, msg.total
+	if msg.done < msg.total {
+		return sweepNextCmd(p.gen, msg.job, msg.done)
+	}
+	old := p.result
+	p.running, p.runErr = false, ""
+	p.result, p.resultKey = msg.job.res, msg.job.key
+	p.placeCursor(old)
+	p.rebuildPlot()
+	return nil
+}
+
+// placeCursor puts the cursor on a new result: where it was, in
+// proportion, or else (first result, other variable) at the grid point
+// nearest the current state.
+func (p *sweepPane) placeCursor(old *mixtures.SweepResult) {
+	n := len(p.result.Grid)
+	if old != nil && len(old.Grid) > 1 && old.Sweep.Var == p.result.Sweep.Var {
+		f := float64(p.cursor) / float64(len(old.Grid)-1)
+		p.cursor = min(max(int(math.Round(f*float64(n-1))), 0), n-1)
+		return
+	}
+	here := p.in.TempK
+	if p.result.Sweep.Var == mixtures.SweepPressure {
+		here = p.in.PresPa
+	}
+	p.cursor = n / 2
+	lo, hi := math.Min(p.result.Grid[0], p.result.Grid[n-1]), math.Max(p.result.Grid[0], p.result.Grid[n-1])
+	if here < lo || here > hi {
+		return
+	}
+	best := math.Inf(1)
+	for i, x := range p.result.Grid {
+		if d := math.Abs(x - here); d < best {
+			best, p.cursor = d, i
+		}
+	}
+}
+
+func (p *sweepPane) key(msg tea.KeyMsg) tea.Cmd {
+	k := &p.c.Keys.Sweep
+	p.note = ""
+	switch {
+	case key.Matches(msg, k.Variable):
+		return p.toggleVar()
+	case key.Matches(msg, k.EditRange):
+		p.startEdit()
+	case key.Matches(msg, k.ToggleLog):
+		if p.sweep.Var == mixtures.SweepPressure {
+			p.note = "pressure sweeps always use a log grid"
+			return nil
+		}
+		p.set.Log = !p.set.Log
+		p.sweep.Log = p.set.Log
+		p.changed = true
+		return p.recompute()
+	case key.Matches(msg, k.Property):
+		p.cycleProperty(1)
+	case key.Matches(msg, k.PrevProperty):
+		p.cycleProperty(-1)
+	case key.Matches(msg, k.NextSpecies):
+		p.cycleSpecies(1)
+	case key.Matches(msg, k.PrevSpecies):
+		p.cycleSpecies(-1)
+	case key.Matches(msg, k.Overlay):
+		p.set.Overlay = !p.set.Overlay
+		p.changed = true
+		p.rebuildPlot()
+	case key.Matches(msg, k.CursorLeft):
+		p.moveCursor(-p.plot.columnWidth())
+	case key.Matches(msg, k.CursorRight):
+		p.moveCursor(p.plot.columnWidth())
+	case key.Matches(msg, k.CursorStepLeft):
+		p.moveCursor(-1)
+	case key.Matches(msg, k.CursorStepRight):
+		p.moveCursor(1)
+	case key.Matches(msg, k.CursorHome):
+		p.moveCursor(-mixtures.MaxSweepSteps)
+	case key.Matches(msg, k.CursorEnd):
+		p.moveCursor(mixtures.MaxSweepSteps)
+	}
+	return nil
+}
+
+// moveCursor moves the cursor by d grid points to the right on screen
+// (left for d < 0), whichever way the grid runs.
+func (p *sweepPane) moveCursor(d int) {
+	if p.result == nil {
+		return
+	}
+	g := p.result.Grid
+	n := len(g)
+	if g[0] > g[n-1] {
+		d = -d
+	}
+	p.cursor = min(max(p.cursor+d, 0), n-1)
+	p.plot.setCursor(p.cursor)
+}
+
+func (p *sweepPane) toggleVar() tea.Cmd {
+	p.saveDrafts()
+	vi := 1 - p.vi()
+	p.set.Var = sweepVarNames[vi]
+	p.set.From, p.set.To = p.applied[vi][0], p.applied[vi][1]
+	// The remembered range is valid; the drafts may be too.
+	p.sweep, _, _ = sweepParse(vi, p.set.From, p.set.To, strconv.Itoa(p.set.Steps), p.set.Log)
+	p.tryApply()
+	p.loadFields()
+	p.changed = true
+	return p.recompute()
+}
+
+func (p *sweepPane) cycleProperty(d int) {
+	i, _ := sweepPropIndex(p.set.Property)
+	i = (i + d + len(sweepProps)) % len(sweepProps)
+	p.set.Property = sweepProps[i].key
+	p.changed = true
+	p.rebuildPlot()
+}
+
+// speciesChoices are the formulas s steps through, after "" (the blend).
+func (p *sweepPane) speciesChoices() []string {
+	mix := p.resultKey.mix
+	if p.result == nil && p.haveIn {
+		mix = p.in.Mixture
+	}
+	if mix == nil {
+		return nil
+	}
+	out := make([]string, len(mix.Components))
+	for i, c := range mix.Components {
+		out[i] = c.Species.Formula
+	}
+	return out
+}
+
+func (p *sweepPane) cycleSpecies(d int) {
+	choices := append([]string{""}, p.speciesChoices()...)
+	i := 0
+	for j, f := range choices {
+		if f == p.set.Species {
+			i = j
+		}
+	}
+	i = (i + d + len(choices)) % len(choices)
+	p.set.Species = choices[i]
+	p.changed = true
+	p.rebuildPlot()
+}
+
+func (p *sweepPane) propIndex() int {
+	i, _ := sweepPropIndex(p.set.Property)
+	return i
+}
+
+// Editing the range.
+
+func (p *sweepPane) saveDrafts() {
+	if !p.editing {
+		return
+	}
+	vi := p.vi()
+	p.drafts[vi] = [2]string{p.fields[sweepFieldFrom].value(), p.fields[sweepFieldTo].value()}
+	p.stepsDraft = p.fields[sweepFieldSteps].value()
+}
+
+func (p *sweepPane) loadFields() {
+	vi := p.vi()
+	for i, v := range []string{p.drafts[vi][0], p.drafts[vi][1], p.stepsDraft} {
+		focused := p.editing && i == p.focus
+		p.fields[i].start(v)
+		if !focused {
+			p.fields[i].stop()
+		}
+	}
+}
+
+func (p *sweepPane) startEdit() {
+	p.editing = true
+	p.loadFields()
+	p.setFocus(sweepFieldFrom)
+}
+
+func (p *sweepPane) setFocus(i int) {
+	p.fields[p.focus].stop()
+	p.focus = i
+	p.fields[i].start(p.fields[i].value())
+}
+
+func (p *sweepPane) stopEdit() {
+	p.fields[p.focus].stop()
+	p.editing = false
+}
+
+func (p *sweepPane) editKey(msg tea.KeyMsg) tea.Cmd {
+	k := &p.c.Keys.Sweep
+	switch {
+	case key.Matches(msg, p.c.Keys.Back):
+		// Leaving keeps what was typed: valid text is applied, invalid
+		// text stays with its error until it is fixed.
+		p.saveDrafts()
+		p.stopEdit()
+		ok := p.tryApply()
+		p.loadFields()
+		if ok {
+			return p.recompute()
+		}
+		return nil
+	case key.Matches(msg, k.Apply):
+		p.saveDrafts()
+		ok := p.tryApply()
+		p.loadFields()
+		if ok {
+			p.stopEdit()
+			return p.recompute()
+		}
+		for i, e := range p.errs {
+			if e != "" {
+				p.setFocus(i)
+				break
+			}
+		}
+		return nil
+	case key.Matches(msg, k.NextField), key.Matches(msg, k.PrevField):
+		d := 1
+		if key.Matches(msg, k.PrevField) {
+			d = sweepFieldCount - 1
+		}
+		p.saveDrafts()
+		vi := p.vi()
+		_, p.errs, p.rangeErr = sweepParse(vi, p.drafts[vi][0], p.drafts[vi][1], p.stepsDraft, p.set.Log)
+		p.setFocus((p.focus + d) % sweepFieldCount)
+		return nil
+	}
+	return p.fields[p.focus].update(msg)
+}
+
+// The plot.
+
+// rebuildPlot hands the plot the curves of the current property. It
+// scans the whole result, so it runs only when the result or the choice
+// of curves changes.
+func (p *sweepPane) rebuildPlot() {
+	p.plotNote = ""
+	if p.result == nil {
+		p.series = nil
+		p.plot.clear()
+		return
+	}
+	res := p.result
+	ascii := p.c.ASCII
+	prop := sweepProps[p.propIndex()]
+	scale := prop.scale
+	blend := plotSeries{name: "blend", y: func(i int) float64 { return prop.blend(&res.Points[i]) * scale }}
+	comps := p.resultKey.mix.Components
+	speciesSeries := func(j int) plotSeries {
+		get := prop.species
+		return plotSeries{name: comps[j].Species.Formula, y: func(i int) float64 { return get(&res.Points[i].Species[j]) * scale }}
+	}
+	var series []plotSeries
+	var of string
+	overlay := false
+	switch {
+	case prop.species == nil:
+		series = []plotSeries{blend}
+		if p.set.Overlay || p.set.Species != "" {
+			p.plotNote = prop.sym(ascii) + " is plotted for the blend only"
+		}
+	case p.set.Overlay:
+		overlay = true
+		series = []plotSeries{blend}
+		for j := range comps {
+			if len(series) == plotMaxSeries {
+				p.plotNote = strconv.Itoa(len(comps)-j) + " more species not shown (the plot tells " + strconv.Itoa(plotMaxSeries) + " curves apart)"
+				break
+			}
+			series = append(series, speciesSeries(j))
+		}
+	case p.set.Species != "":
+		series = []plotSeries{blend}
+		for j, c := range comps {
+			if c.Species.Formula == p.set.Species {
+				series, of = []plotSeries{speciesSeries(j)}, c.Species.Formula
+			}
+		}
+		if of == "" {
+			p.plotNote = p.set.Species + " is not in this blend; showing the blend"
+		}
+	default:
+		series = []plotSeries{blend}
+	}
+	p.series = series
+
+	// The x axis: kelvin, or pressure in bar (Pa for ranges below 0.1 bar).
+	sw := res.Sweep
+	p.xScale, p.xUnit = 1, "K"
+	name := "T"
+	if sw.Var == mixtures.SweepPressure {
+		name = "P"
+		p.xUnit = "Pa"
+		if math.Max(sw.From, sw.To) >= 1e4 {
+			p.xScale, p.xUnit = 1e-5, "bar"
+		}
+	}
+	xLog := sw.Log || sw.Var == mixtures.SweepPressure
+	xLabel := name + " / " + p.xUnit
+	p.plot.cursor = p.cursor
+	p.plot.setSpec(plotSpec{
+		grid: res.Grid, xScale: p.xScale, xLog: xLog, xLabel: xLabel,
+		yLabel: prop.axisLabel(ascii, of, overlay), series: series,
+	})
+	if p.plotNote == "" {
+		p.plotNote = p.nonFiniteNote()
+	}
+}
+
+// nonFiniteNote names the first curve with a value that is not a finite
+// number; such points are left out of the plot.
+func (p *sweepPane) nonFiniteNote() string {
+	for _, s := range p.series {
+		bad, first := 0, -1
+		for i := range p.result.Grid {
+			if v := s.y(i); math.IsNaN(v) || math.IsInf(v, 0) {
+				if bad++; first < 0 {
+					first = i
+				}
+			}
+		}
+		if bad > 0 {
+			return s.name + ": " + strconv.Itoa(bad) + " points are not finite (first at " + p.xText(p.result.Grid[first]) + "); they are left out"
+		}
+	}
+	return ""
+}
+
+// xText writes a grid value in the x axis unit.
+func (p *sweepPane) xText(x float64) string {
+	name := "T"
+	if p.result != nil && p.result.Sweep.Var == mixtures.SweepPressure {
+		name = "P"
+	}
+	return name + " = " + sweepTrimZeros(sig(x*p.xScale, 6)) + " " + p.xUnit
+}
+
+// sweepTrimZeros drops trailing zeros after a decimal point: grid points
+// are often the round numbers typed, and 200 K reads better than 200.000 K.
+func sweepTrimZeros(s string) string {
+	if !strings.Contains(s, ".") || strings.ContainsAny(s, "eE") {
+		return s
+	}
+	return strings.TrimSuffix(strings.TrimRight(s, "0"), ".")
+}
+
+// SetSize sets the cells the pane may draw in.
+func (p *sweepPane) SetSize(w, h int) {
+	p.w, p.h = max(w, 0), max(h, 0)
+	p.refresh()
+}
+
+// View draws the pane from lines built in Update.
+func (p *sweepPane) View() string { return p.view }
+
+// Settings returns the settings in force, for autosave.
+func (p *sweepPane) Settings() SweepSettings { return p.set }
+
+// Editing reports whether a range field is being typed in.
+func (p *sweepPane) Editing() bool { return p.editing }
+
+// Result returns the last finished sweep, or nil.
+func (p *sweepPane) Result() *mixtures.SweepResult { return p.result }
+
+// Changed reports whether the settings changed since the last call.
+func (p *sweepPane) Changed() bool {
+	c := p.changed
+	p.changed = false
+	return c
+}
+
+// KeyHelp lists every binding of the pane.
+func (p *sweepPane) KeyHelp() []key.Binding {
+	k := &p.c.Keys.Sweep
+	// The most used first: the first few may serve as short help.
+	return []key.Binding{
+		k.EditRange, k.Variable, k.Property, k.Overlay,
+		k.PrevProperty, k.NextSpecies, k.PrevSpecies, k.ToggleLog,
+		k.CursorLeft, k.CursorRight, k.CursorStepLeft, k.CursorStepRight, k.CursorHome, k.CursorEnd,
+		k.NextField, k.PrevField, k.Apply, p.c.Keys.Back,
+	}
+}

@@ -1,0 +1,110 @@
+package ui
+
+import (
+	"errors"
+
+	tea "github.com/charmbracelet/bubbletea"
+
+	"zmix/mixtures"
+)
+
+// A sweep is computed by a chain of commands, one chunk of grid points
+// each. Every chunk returns a sweepProgressMsg; Update then asks for the
+// next chunk, so progress shows between chunks and typing is never
+// blocked, without a goroutine of our own. Each message carries the
+// generation it was started for: a newer request makes it stale, and a
+// stale message is dropped and ends its chain.
+
+// sweepChunkWork is about how many species states one chunk computes
+// (some tens of milliseconds), so a chunk holds sweepChunkWork/k points of
+// a k-species blend, and never more than sweepChunkPoints: any sweep
+// longer than that shows its progress.
+const (
+	sweepChunkWork   = 1 << 16
+	sweepChunkPoints = 1 << 14
+)
+
+// sweepKey is everything a sweep result depends on. Equal keys give
+// equal results, so a request equal to the shown result is not rerun.
+type sweepKey struct {
+	mix         *mixtures.Mixture
+	sweep       mixtures.Sweep
+	fixedTempK  float64 // T held during a pressure sweep (else 0)
+	fixedPresPa float64 // P held during a temperature sweep (else 0)
+	opts        mixtures.Options
+}
+
+// sweepJob is one sweep in progress. Only the command computing its next
+// chunk writes to it; Update reads it once that command has returned.
+type sweepJob struct {
+	key   sweepKey
+	res   *mixtures.SweepResult
+	chunk int
+}
+
+// sweepProgressMsg reports a chunk done: done of total points are
+// computed. It ends the chain when done == total or err is set.
+type sweepProgressMsg struct {
+	gen         uint64
+	job         *sweepJob
+	done, total int
+	err         error
+}
+
+// conditions returns the (T, P) of grid value x.
+func (k *sweepKey) conditions(x float64) (tempK, presPa float64) {
+	if k.sweep.Var == mixtures.SweepPressure {
+		return k.fixedTempK, x
+	}
+	return x, k.fixedPresPa
+}
+
+// sweepStartCmd checks the sweep, lays out its grid and computes the
+// first chunk.
+func sweepStartCmd(gen uint64, key sweepKey) tea.Cmd {
+	return func() tea.Msg {
+		if key.mix == nil || len(key.mix.Components) == 0 {
+			return sweepProgressMsg{gen: gen, err: errors.New("no blend to sweep")}
+		}
+		if err := key.sweep.Check(); err != nil {
+			return sweepProgressMsg{gen: gen, err: err}
+		}
+		// As in Mixture.RunContext: the grid is monotone between its
+		// ends, so checking both ends checks every point.
+		for _, x := range []float64{key.sweep.From, key.sweep.To} {
+			if err := key.mix.CheckConditions(key.conditions(x)); err != nil {
+				return sweepProgressMsg{gen: gen, err: err}
+			}
+		}
+		grid := key.sweep.Grid()
+		job := &sweepJob{
+			key:   key,
+			res:   &mixtures.SweepResult{Sweep: key.sweep, Grid: grid, Points: make([]mixtures.State, len(grid))},
+			chunk: min(sweepChunkPoints, max(64, sweepChunkWork/len(key.mix.Components))),
+		}
+		return job.compute(gen, 0)
+	}
+}
+
+// sweepNextCmd computes the chunk of job that starts at point from.
+func sweepNextCmd(gen uint64, job *sweepJob, from int) tea.Cmd {
+	return func() tea.Msg { return job.compute(gen, from) }
+}
+
+// compute fills points [from, from+chunk) with the same Mixture.Fill the
+// engine's Run uses, so the result equals Run's point for point. Each
+// chunk keeps its species terms in one backing array, as Run does.
+func (j *sweepJob) compute(gen uint64, from int) sweepProgressMsg {
+	n := len(j.res.Grid)
+	to := min(from+j.chunk, n)
+	k := len(j.key.mix.Components)
+	terms := make([]mixtures.SpeciesTerm, (to-from)*k)
+	for i := from; i < to; i++ {
+		pt := &j.res.Points[i]
+		off := (i - from) * k
+		pt.Species = terms[off : off+k : off+k]
+		t, p := j.key.conditions(j.res.Grid[i])
+		j.key.mix.Fill(pt, t, p, j.key.opts)
+	}
+	return sweepProgressMsg{gen: gen, job: j, done: to, total: n}
+}
