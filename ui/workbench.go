@@ -108,8 +108,9 @@ func (b *bench) setAmount(i int, text string) {
 // addSpecies appends a species with an empty amount, or finds it if it is
 // already there; it returns the entry's index and whether it was added.
 func (b *bench) addSpecies(formula string) (int, bool) {
+	want, _ := b.cat.Lookup(formula)
 	for i, e := range b.entries {
-		if e.Species == formula {
+		if sp, ok := b.cat.Lookup(e.Species); e.Species == formula || ok && sp == want {
 			return i, false
 		}
 	}
@@ -158,14 +159,18 @@ func (b *bench) setBalance(i int) {
 	b.touch()
 }
 
-// moleFraction returns the species' mole fraction in the last valid
-// mixture.
-func (b *bench) moleFraction(formula string) (float64, bool) {
+// moleFraction returns the mole fraction, in the last valid mixture, of
+// the species an entry names (by formula or name).
+func (b *bench) moleFraction(key string) (float64, bool) {
 	if b.in.Mixture == nil {
 		return 0, false
 	}
+	sp, ok := b.cat.Lookup(key)
+	if !ok {
+		return 0, false
+	}
 	for _, c := range b.in.Mixture.Components {
-		if c.Species.Formula == formula {
+		if c.Species == sp {
 			return c.X, true
 		}
 	}

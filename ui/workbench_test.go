@@ -179,6 +179,18 @@ func TestBenchSetBalance(t *testing.T) {
 	}
 }
 
+// An entry may name its species instead of giving the formula.
+func TestBenchSpeciesByName(t *testing.T) {
+	b := testBench(t, []entry{{"nitrogen", "bal"}, {"argon", "1%"}}, "300 K", "1 bar")
+	if x, ok := b.moleFraction("argon"); !ok || x != 0.01 {
+		t.Errorf("x(argon) = %g, %v", x, ok)
+	}
+	b.setBalance(1)
+	if got := b.entries[0].Amount; got != "99%" {
+		t.Errorf("nitrogen after moving the balance: %q, want 99%%", got)
+	}
+}
+
 func TestScaleAmountText(t *testing.T) {
 	cases := []struct {
 		in   string
