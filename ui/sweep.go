@@ -46,6 +46,7 @@ type sweepPane struct {
 	applied    [2][2]string
 	drafts     [2][2]string
 	stepsDraft string
+	before     sweepDrafts // the text when the fields were opened, for Esc
 	fields     [sweepFieldCount]field
 	errs       [sweepFieldCount]string
 	rangeErr   string // the range as a whole (e.g. equal end points)
@@ -109,6 +110,12 @@ func newSweepPane(c *Common, s SweepSettings) *sweepPane {
 	p.changed = false
 	p.refresh()
 	return p
+}
+
+// sweepDrafts is the typed text of the three fields.
+type sweepDrafts struct {
+	fromTo [2]string
+	steps  string
 }
 
 func sweepVarIndex(v string) int {
@@ -469,10 +476,19 @@ func (p *sweepPane) loadFields() {
 	}
 }
 
+// startEdit opens the fields, on the first one with an error if any.
 func (p *sweepPane) startEdit() {
+	vi := p.vi()
+	p.before = sweepDrafts{p.drafts[vi], p.stepsDraft}
 	p.editing = true
+	first := sweepFieldFrom
+	for i := sweepFieldCount - 1; i >= 0; i-- {
+		if p.errs[i] != "" {
+			first = i
+		}
+	}
+	p.focus = first
 	p.loadFields()
-	p.setFocus(sweepFieldFrom)
 }
 
 func (p *sweepPane) setFocus(i int) {
@@ -486,12 +502,35 @@ func (p *sweepPane) stopEdit() {
 	p.editing = false
 }
 
+// validate checks the typed text, showing errors as they are typed,
+// without putting anything in force.
+func (p *sweepPane) validate() {
+	p.saveDrafts()
+	vi := p.vi()
+	from, to := p.drafts[vi][0], p.drafts[vi][1]
+	if strings.Contains(from, "..") {
+		if a, b, err := mixtures.ParseRange(from); err == nil {
+			from, to = a, b
+		}
+	}
+	_, p.errs, p.rangeErr = sweepParse(vi, from, to, p.stepsDraft, p.set.Log)
+}
+
+// editKey handles a key while the fields are open. As in every field of
+// the workbench, Enter keeps what was typed (putting it in force if it
+// is valid, else leaving it on screen with its error) and Esc undoes the
+// edit.
 func (p *sweepPane) editKey(msg tea.KeyMsg) tea.Cmd {
 	k := &p.c.Keys.Sweep
 	switch {
 	case key.Matches(msg, p.c.Keys.Back):
-		// Leaving keeps what was typed: valid text is applied, invalid
-		// text stays with its error until it is fixed.
+		vi := p.vi()
+		p.drafts[vi], p.stepsDraft = p.before.fromTo, p.before.steps
+		p.stopEdit()
+		p.loadFields()
+		p.validate()
+		return nil
+	case key.Matches(msg, k.Apply):
 		p.saveDrafts()
 		p.stopEdit()
 		ok := p.tryApply()
@@ -500,33 +539,17 @@ func (p *sweepPane) editKey(msg tea.KeyMsg) tea.Cmd {
 			return p.recompute()
 		}
 		return nil
-	case key.Matches(msg, k.Apply):
-		p.saveDrafts()
-		ok := p.tryApply()
-		p.loadFields()
-		if ok {
-			p.stopEdit()
-			return p.recompute()
-		}
-		for i, e := range p.errs {
-			if e != "" {
-				p.setFocus(i)
-				break
-			}
-		}
-		return nil
 	case key.Matches(msg, k.NextField), key.Matches(msg, k.PrevField):
 		d := 1
 		if key.Matches(msg, k.PrevField) {
 			d = sweepFieldCount - 1
 		}
-		p.saveDrafts()
-		vi := p.vi()
-		_, p.errs, p.rangeErr = sweepParse(vi, p.drafts[vi][0], p.drafts[vi][1], p.stepsDraft, p.set.Log)
 		p.setFocus((p.focus + d) % sweepFieldCount)
 		return nil
 	}
-	return p.fields[p.focus].update(msg)
+	cmd := p.fields[p.focus].update(msg)
+	p.validate()
+	return cmd
 }
 
 // The plot.

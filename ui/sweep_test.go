@@ -221,35 +221,67 @@ func TestSweepRangeEntry(t *testing.T) {
 				}
 				return
 			}
-			if !p.Editing() {
-				t.Errorf("an invalid enter left the fields")
+			// Enter keeps the text on screen, with its error and the
+			// settings still in force.
+			if p.Editing() {
+				t.Errorf("enter left the fields open")
 			}
-			if !strings.Contains(view, tc.wantErr) {
-				t.Errorf("view lacks the error %q:\n%s", tc.wantErr, view)
+			for _, typed := range []string{tc.from, tc.to, tc.pts} {
+				if typed != "" && !strings.Contains(view, typed) {
+					t.Errorf("typed text %q not shown:\n%s", typed, view)
+				}
 			}
-			// The typed text is kept, also after leaving with esc.
-			sweepPress(t, p, "esc")
-			typed := tc.from + tc.to + tc.pts
-			if p.Editing() || !strings.Contains(p.View(), strings.TrimSpace(typed[:min(len(typed), 5)])) {
-				t.Errorf("after esc: editing %v, typed text %q not shown:\n%s", p.Editing(), typed, p.View())
+			if !strings.Contains(view, tc.wantErr) || !strings.Contains(view, "in force until the entry is fixed: 200 K to 1500 K, 200 points") {
+				t.Errorf("view lacks the error %q or the settings in force:\n%s", tc.wantErr, view)
 			}
-			if !strings.Contains(p.View(), tc.wantErr) || !strings.Contains(p.View(), "in force") {
-				t.Errorf("after esc the error and the settings in force are not shown:\n%s", p.View())
+			// Opening the fields again goes to the bad one; fixing it
+			// puts the whole range in force.
+			sweepPress(t, p, "e")
+			if p.errs[p.focus] == "" && p.rangeErr == "" {
+				t.Errorf("the fields open on %d, which has no error", p.focus)
 			}
-			if p.Settings() != got {
-				t.Errorf("esc changed the settings in force to %+v", p.Settings())
+			fix := map[int]string{sweepFieldFrom: "300 K", sweepFieldTo: "900 K", sweepFieldSteps: "50"}[p.focus]
+			sweepType(t, p, fix)
+			if p.focus != sweepFieldSteps && p.rangeErr != "" {
+				sweepPress(t, p, "tab")
+				sweepType(t, p, "900 K")
+			}
+			sweepPress(t, p, "enter")
+			fixed := p.Settings()
+			from, _ := mixtures.ParseTemperature(fixed.From)
+			if p.hasErrors() || fixed == got || len(p.Result().Grid) != fixed.Steps || p.Result().Grid[0] != from {
+				t.Errorf("after the fix: errors %q %q, in force %+v, grid of %d from %g", p.errs, p.rangeErr, fixed, len(p.Result().Grid), p.Result().Grid[0])
 			}
 		})
 	}
 }
 
-func TestSweepEscAppliesValidText(t *testing.T) {
+func TestSweepEscUndoesEdit(t *testing.T) {
 	p := sweepTestPane(t, false, DefaultSweepSettings(), 100, 30)
+	first := p.Result()
 	sweepPress(t, p, "e")
-	sweepType(t, p, "400 K")
+	sweepType(t, p, "4OO K")
+	if !strings.Contains(p.View(), `unknown unit "OO K"`) {
+		t.Errorf("no error while typing:\n%s", p.View())
+	}
+	sweepPress(t, p, "tab")
+	sweepType(t, p, "900 K")
 	sweepPress(t, p, "esc")
-	if p.Editing() || p.Settings().From != "400 K" || p.Result().Grid[0] != 400 {
-		t.Errorf("esc with valid text: editing %v, from %q, grid from %g; want the text applied", p.Editing(), p.Settings().From, p.Result().Grid[0])
+	v := p.View()
+	if p.Editing() || p.Settings() != DefaultSweepSettings() || p.Result() != first || p.hasErrors() {
+		t.Errorf("esc: editing %v, settings %+v, errors %v; want the edit undone", p.Editing(), p.Settings(), p.errs)
+	}
+	if strings.Contains(v, "4OO") || strings.Contains(v, "900 K") || !strings.Contains(v, "from 200 K to 1500 K") {
+		t.Errorf("esc left the typed text on screen:\n%s", v)
+	}
+	// Esc goes back to the text the fields opened on, error and all.
+	sweepPress(t, p, "e")
+	sweepType(t, p, "1 bar")
+	sweepPress(t, p, "enter", "e")
+	sweepType(t, p, "300 K")
+	sweepPress(t, p, "esc")
+	if v := p.View(); !strings.Contains(v, "1 bar") || !strings.Contains(v, `unknown unit "bar"`) {
+		t.Errorf("esc did not restore the kept entry and its error:\n%s", v)
 	}
 }
 

@@ -235,7 +235,7 @@ func (p *sweepPane) statusLine() string {
 	}
 	k := &p.c.Keys.Sweep
 	if p.editing {
-		return p.hint(sweepHint{k.Apply, "apply"}, sweepHint{k.NextField, "next field"}, sweepHint{p.c.Keys.Back, "leave (keeps the text)"})
+		return p.hint(sweepHint{k.Apply, "apply"}, sweepHint{k.NextField, "next field"}, sweepHint{p.c.Keys.Back, "undo"})
 	}
 	return p.hint(sweepHint{k.EditRange, "range"}, sweepHint{k.Variable, "T/P"}, sweepHint{k.Property, "property"},
 		sweepHint{k.NextSpecies, "species"}, sweepHint{k.Overlay, "overlay"}, sweepHint{k.CursorLeft, "cursor"}, sweepHint{k.CursorRight, ""})
