@@ -297,3 +297,27 @@ func TestStandardPressure(t *testing.T) {
 		}
 	}
 }
+
+// The four factor shares of S and Cp add up to the species' totals, and
+// translation carries 5R/2 of Cp (3R/2 of motion plus R of P dV work).
+func TestBreakdownSums(t *testing.T) {
+	for _, sp := range Builtin().All() {
+		for _, tempK := range []float64{50, 298.15, 1500} {
+			st, err := sp.State(tempK, 1e5)
+			if err != nil {
+				t.Fatal(err)
+			}
+			var sumS, sumCp float64
+			for _, f := range st.Breakdown() {
+				sumS += f.SJPerMolK
+				sumCp += f.CpJPerMolK
+			}
+			if math.Abs(sumS-st.SJPerMolK) > 1e-9*math.Abs(st.SJPerMolK) || math.Abs(sumCp-st.CpJPerMolK) > 1e-9*st.CpJPerMolK {
+				t.Errorf("%s at %g K: shares sum to S %g, Cp %g; want %g, %g", sp.Formula, tempK, sumS, sumCp, st.SJPerMolK, st.CpJPerMolK)
+			}
+			if tr := st.Breakdown()[0]; math.Abs(tr.CpJPerMolK-2.5*GasConstant) > 1e-9 {
+				t.Errorf("%s: translational Cp %g, want 5R/2", sp.Formula, tr.CpJPerMolK)
+			}
+		}
+	}
+}

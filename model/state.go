@@ -139,3 +139,26 @@ func (sp *Species) fill(s *State, tempK, presPa float64, tr Treatment) {
 func (sp *Species) QuantumConcentration(tempK float64) float64 {
 	return math.Exp(sp.lnNQ0 + 1.5*math.Log(tempK))
 }
+
+// FactorShare is one degree of freedom's share of a species' S and Cp.
+type FactorShare struct {
+	Name       string // "translation", "rotation", "vibration", "electronic"
+	SJPerMolK  float64
+	CpJPerMolK float64
+}
+
+// Breakdown splits S and Cp among the four factors. The R of Cp − Cv, the
+// P dV work of heating at constant pressure, is booked with translation,
+// so the shares sum to the state's S and Cp.
+func (s *State) Breakdown() [4]FactorShare {
+	r := GasConstant
+	share := func(name string, t Terms, cpExtra float64) FactorShare {
+		return FactorShare{Name: name, SJPerMolK: r * t.S(), CpJPerMolK: r*t.Cv + cpExtra}
+	}
+	return [4]FactorShare{
+		share("translation", s.Trans, r),
+		share("rotation", s.Rot, 0),
+		share("vibration", s.Vib, 0),
+		share("electronic", s.Elec, 0),
+	}
+}

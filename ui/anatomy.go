@@ -132,35 +132,16 @@ func (p *anatomyPane) render() []string {
 		add(s.Muted.Render(t(fmt.Sprintf("species %d of %d (←/→ for the others)", i+1, n))))
 	}
 
-	// S_f = R(ln q_f + U_f) and Cv_f = R·Cv_f for each factor; the R of
-	// Cp − Cv is the work P dV of the gas and is booked with translation.
-	r := model.GasConstant
 	const lw, vw = 13, 13
 	add(s.Label.Render(padRight("", lw) + padLeft(t("S J/(mol·K)"), vw) + padLeft(t("Cp J/(mol·K)"), vw+1)))
-	rows := []struct {
-		name  string
-		terms model.Terms
-		plusR bool
-	}{
-		{"translation", st.Trans, true},
-		{"rotation", st.Rot, false},
-		{"vibration", st.Vib, false},
-		{"electronic", st.Elec, false},
-	}
-	var sumS, sumCp float64
-	for _, row := range rows {
-		sf := r * row.terms.S()
-		cpf := r * row.terms.Cv
+	for _, f := range st.Breakdown() {
 		mark := ""
-		if row.plusR {
-			cpf += r
+		if f.Name == "translation" {
 			mark = " *"
 		}
-		sumS += sf
-		sumCp += cpf
-		add(s.Label.Render(padRight(row.name, lw)) + s.Value.Render(padLeft(fixed(sf, 3), vw)+padLeft(fixed(cpf, 3), vw+1)) + mark)
+		add(s.Label.Render(padRight(f.Name, lw)) + s.Value.Render(padLeft(fixed(f.SJPerMolK, 3), vw)+padLeft(fixed(f.CpJPerMolK, 3), vw+1)) + mark)
 	}
-	add(s.Label.Render(padRight("total", lw)) + s.Value.Render(padLeft(fixed(sumS, 3), vw)+padLeft(fixed(sumCp, 3), vw+1)))
+	add(s.Label.Render(padRight("total", lw)) + s.Value.Render(padLeft(fixed(st.SJPerMolK, 3), vw)+padLeft(fixed(st.CpJPerMolK, 3), vw+1)))
 	addWrapped(s.Muted.Render, "", "* Cp = Cv + R: the R, the P dV work of heating at constant pressure, is booked with translation.")
 
 	add("")
