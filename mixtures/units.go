@@ -64,7 +64,7 @@ func ParseTemperature(s string) (float64, error) {
 	case "k":
 		k = x
 	case "c", "degc":
-		k = x + 273.15
+		k = x + celsiusZeroK
 	case "f", "degf":
 		k = (x + 459.67) * 5 / 9
 	case "r", "degr":
@@ -180,6 +180,12 @@ func ParseRange(s string) (from, to string, err error) {
 	}
 	return a, b, nil
 }
+
+// celsiusZeroK is 0 °C in kelvin, by definition of the Celsius scale.
+const celsiusZeroK = 273.15
+
+// KelvinToCelsius converts a temperature for display in °C.
+func KelvinToCelsius(tempK float64) float64 { return tempK - celsiusZeroK }
 
 // FormatTemperature writes a temperature in kelvin with sensible digits.
 func FormatTemperature(tempK float64) string {

@@ -175,7 +175,7 @@ func (p *setpointPane) refresh() {
 	in := p.b.in
 	tNote, pNote := "", ""
 	if p.b.tempErr == "" && in.TempK > 0 {
-		tNote = p.c.Text(short(in.TempK, 6) + " K, " + fixed(in.TempK-273.15, 2) + " °C")
+		tNote = p.c.Text(short(in.TempK, 6) + " K, " + fixed(mixtures.KelvinToCelsius(in.TempK), 2) + " °C")
 	}
 	if p.b.presErr == "" && in.PresPa > 0 {
 		if p.b.showGauge {
