@@ -32,8 +32,8 @@ func (a *app) cmdOpen(g *globalOpts, args []string) error {
 
 // openWorkbench starts the workbench on blendFile, or on the saved state
 // or the demo when blendFile is "". Where the workbench cannot run (no
-// terminal, or not built into this version) the readout of the same blend
-// is printed instead, so that zmix always answers.
+// terminal) the readout of the same blend is printed instead, so that zmix
+// always answers, in a pipe too.
 func (a *app) openWorkbench(g *globalOpts, blendFile string) error {
 	cat, err := g.catalogue()
 	if err != nil {
@@ -46,23 +46,13 @@ func (a *app) openWorkbench(g *globalOpts, blendFile string) error {
 		return err
 	}
 	if a.isTerminal(a.stdout) {
-		err := a.workbench(ui.Config{Catalogue: cat, BlendFile: blendFile, ASCII: g.ascii, NoColor: g.noColor})
-		if err == nil {
-			return nil
-		}
-		if !workbenchMissing(err) {
+		if err := a.workbench(ui.Config{Catalogue: cat, BlendFile: blendFile, ASCII: g.ascii, NoColor: g.noColor}); err != nil {
 			return ioFailure(fmt.Errorf("workbench: %v", err))
 		}
-		fmt.Fprintln(a.stderr, "zmix: the workbench is not in this build yet; printing the readout instead")
-	} else {
-		fmt.Fprintln(a.stderr, "zmix: standard output is not a terminal, so the workbench cannot open; printing the readout instead")
+		return nil
 	}
+	fmt.Fprintln(a.stderr, "zmix: standard output is not a terminal, so the workbench cannot open; printing the readout instead")
 	return a.printFileReadout(cat, g, src)
-}
-
-// workbenchMissing recognises the error of a build without the workbench.
-func workbenchMissing(err error) bool {
-	return strings.Contains(err.Error(), "not built yet")
 }
 
 // workbenchBlend loads the blend file the workbench was asked to open, or
