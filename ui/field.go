@@ -22,6 +22,9 @@ type field struct {
 	pos     int
 	focused bool
 	width   int
+	// suggested marks text offered by zmix (a default file name): the first
+	// typed character replaces it whole, and any edit key keeps it.
+	suggested bool
 }
 
 // maxFieldRunes bounds a field, so that a runaway paste cannot grow it
@@ -35,9 +38,16 @@ func (f *field) start(value string) {
 	f.runes = []rune(value)
 	f.pos = len(f.runes)
 	f.focused = true
+	f.suggested = false
 }
 
-func (f *field) stop() { f.focused = false }
+// suggest opens the field on a proposed value that typing replaces.
+func (f *field) suggest(value string) {
+	f.start(value)
+	f.suggested = true
+}
+
+func (f *field) stop() { f.focused, f.suggested = false, false }
 
 func (f *field) active() bool { return f.focused }
 
@@ -50,6 +60,12 @@ func (f *field) setWidth(w int) { f.width = max(w, 1) }
 // update edits the text by one key. It never gives a command.
 func (f *field) update(msg tea.KeyMsg) tea.Cmd {
 	k := f.c.Keys.Field
+	if f.suggested {
+		f.suggested = false
+		if msg.Type == tea.KeyRunes || msg.Type == tea.KeySpace {
+			f.runes, f.pos = f.runes[:0], 0
+		}
+	}
 	switch {
 	case key.Matches(msg, k.Left):
 		f.pos = max(f.pos-1, 0)
@@ -146,6 +162,13 @@ func (f *field) view(w int) string {
 	}
 	if !f.focused {
 		return string(rs[start:end])
+	}
+	if f.suggested {
+		// The whole proposal is marked, so the user can see typing replaces it.
+		if lipgloss.ColorProfile() == termenv.Ascii {
+			return "[" + string(rs[start:end]) + "]"
+		}
+		return f.c.Styles.Selected.Render(string(rs[start:end]))
 	}
 	if lipgloss.ColorProfile() == termenv.Ascii {
 		// No reverse video: a bar marks the cursor.

@@ -280,3 +280,23 @@ func TestOpenFileAtStart(t *testing.T) {
 		t.Errorf("earlier unsaved workbench not kept: %v, status %q", err, r2.status)
 	}
 }
+
+// The proposed file name is replaced by what the user types, and kept to
+// edit when the first key is an edit key.
+func TestSavePromptProposalReplacedByTyping(t *testing.T) {
+	dir := t.TempDir()
+	r := testRoot(t, 80, 24, testRootOpts{stateDir: dir})
+	press(t, r, "ctrl+s")
+	if got := r.input.value(); got != "blend.json" {
+		t.Fatalf("proposed name %q, want blend.json", got)
+	}
+	typeIn(t, r, "line3.json")
+	if got := r.input.value(); got != "line3.json" {
+		t.Errorf("typing over the proposal gave %q, want line3.json", got)
+	}
+	press(t, r, "esc", "ctrl+s", "left")
+	typeIn(t, r, "X")
+	if got := r.input.value(); got != "blend.jsoXn" {
+		t.Errorf("editing the proposal gave %q, want blend.jsoXn", got)
+	}
+}

@@ -626,10 +626,16 @@ func (r *root) openPrompt(kind promptKind) {
 		}
 	}
 	if last, ok := r.lastTyped[kind]; ok {
-		value = last
+		// The user's own text comes back as they left it, to edit.
 		delete(r.lastTyped, kind)
+		r.input.start(last)
+		return
 	}
-	r.input.start(value)
+	if kind == promptOpen {
+		r.input.start(value) // a folder to go on typing in
+		return
+	}
+	r.input.suggest(value)
 }
 
 func (r *root) closePrompt() {
