@@ -30,7 +30,13 @@ var ErrValue = errors.New("mixtures: bad value")
 
 // splitNumber splits "25 °C" or "1.5bar" into the number and the unit text.
 func splitNumber(s string) (float64, string, error) {
-	s = strings.TrimSpace(s)
+	x, rest, err := splitNumberRaw(strings.TrimSpace(s))
+	return x, strings.TrimSpace(rest), err
+}
+
+// splitNumberRaw reads the number that leads s and returns the rest of s
+// untouched, spacing included.
+func splitNumberRaw(s string) (float64, string, error) {
 	end := 0
 	for end < len(s) {
 		c := s[end]
@@ -48,7 +54,7 @@ func splitNumber(s string) (float64, string, error) {
 	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
 		return 0, "", fmt.Errorf("%q is not a number", s[:end])
 	}
-	return x, strings.TrimSpace(s[end:]), nil
+	return x, s[end:], nil
 }
 
 // ParseTemperature reads a temperature with its unit ("300 K", "25 C",

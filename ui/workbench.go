@@ -4,7 +4,6 @@ import (
 	"errors"
 	"fmt"
 	"math"
-	"strconv"
 	"strings"
 
 	"zmix/mixtures"
@@ -187,59 +186,30 @@ var (
 )
 
 // normalise scales every amount so that they sum to 100 %, keeping each
-// amount's own unit: "30%" and "0.5" become "37.5%" and "0.625". It works
-// on text, as an editor does; the mixing itself stays in mixtures.
+// amount's own unit; the arithmetic is mixtures.NormaliseAmounts.
 func (b *bench) normalise() error {
-	if len(b.entries) == 0 {
-		return errNormEmpty
-	}
-	var sum float64
-	basis := -1
-	amounts := make([]mixtures.Amount, len(b.entries))
+	texts := make([]string, len(b.entries))
 	for i, e := range b.entries {
-		a, err := mixtures.ParseAmount(e.Amount)
-		if err != nil {
-			return errNormBad
-		}
-		switch a.Basis {
-		case mixtures.Balance:
-			return errNormBalance
-		case mixtures.PartialPres:
-			return errNormPartial
-		}
-		if basis >= 0 && int(a.Basis) != basis {
-			return errNormMixed
-		}
-		basis = int(a.Basis)
-		amounts[i] = a
-		sum += a.Value
+		texts[i] = e.Amount
 	}
-	if !(sum > 0) {
+	scaled, err := mixtures.NormaliseAmounts(texts)
+	switch {
+	case errors.Is(err, mixtures.ErrNormaliseBalance):
+		return errNormBalance
+	case errors.Is(err, mixtures.ErrNormaliseMixed):
+		return errNormMixed
+	case errors.Is(err, mixtures.ErrNormalisePartial):
+		return errNormPartial
+	case errors.Is(err, mixtures.ErrNormaliseEmpty):
 		return errNormEmpty
+	case err != nil:
+		return errNormBad
 	}
 	for i := range b.entries {
-		b.entries[i].Amount = scaleAmountText(b.entries[i].Amount, 1/sum)
+		b.entries[i].Amount = scaled[i]
 	}
 	b.touch()
 	return nil
-}
-
-// scaleAmountText multiplies the number that leads an amount by k and keeps
-// the unit text after it. Every fraction unit is a pure scale, so this
-// scales the amount.
-func scaleAmountText(text string, k float64) string {
-	t := strings.TrimSpace(text)
-	end := 0
-	for end < len(t) && (t[end] >= '0' && t[end] <= '9' || t[end] == '.' || t[end] == 'e' || t[end] == 'E' || t[end] == '+' || t[end] == '-') {
-		end++
-	}
-	for end > 0 {
-		if x, err := strconv.ParseFloat(t[:end], 64); err == nil {
-			return short(x*k, 6) + t[end:]
-		}
-		end--
-	}
-	return text
 }
 
 func (b *bench) setTemp(text string) {

@@ -191,26 +191,6 @@ func TestBenchSpeciesByName(t *testing.T) {
 	}
 }
 
-func TestScaleAmountText(t *testing.T) {
-	cases := []struct {
-		in   string
-		k    float64
-		want string
-	}{
-		{"4%", 2, "8%"},
-		{"500ppm", 0.5, "250ppm"},
-		{" 0.25 ", 2, "0.5"},
-		{"1e-3", 10, "0.01"},
-		{"3 wt%", 1.0 / 3, "1 wt%"},
-		{"bal", 2, "bal"},
-	}
-	for _, c := range cases {
-		if got := scaleAmountText(c.in, c.k); got != c.want {
-			t.Errorf("scaleAmountText(%q, %g) = %q, want %q", c.in, c.k, got, c.want)
-		}
-	}
-}
-
 func TestBenchBlendFileRoundTrip(t *testing.T) {
 	b := newBench(model.Builtin())
 	b.loadFile(mixtures.DemoFile())
