@@ -21,6 +21,15 @@ type Validity struct {
 	TOverThetaVib float64
 	// TOverBoiling is T over the normal boiling point; zero if unknown.
 	TOverBoiling float64
+	// PresOverSat is the pressure over a vapour pressure estimated from
+	// the normal boiling point with Trouton's rule (see troutonEntropyOverR);
+	// zero if the boiling point is unknown. At 1 or more the gas would
+	// condense; well below 1 it is far from condensing.
+	PresOverSat float64
+	// SatPresEstPa is that estimated vapour pressure in Pa.
+	SatPresEstPa float64
+
+	presPa float64 // the pressure the figures are for
 	// RotorSummed says the rotor levels were summed rather than taken in
 	// the high-temperature limit.
 	RotorSummed bool
@@ -28,7 +37,7 @@ type Validity struct {
 
 // Validity returns the validity figures of the species at (T, P).
 func (sp *Species) Validity(tempK, presPa float64) Validity {
-	var v Validity
+	v := Validity{presPa: presPa}
 	// n/nQ = P/(kT) / nQ, in logs so that n alone cannot overflow.
 	lnT := math.Log(tempK)
 	v.Degeneracy = math.Exp(math.Log(presPa) - lnBoltzmann - lnT - sp.lnNQ0 - 1.5*lnT)
@@ -41,9 +50,33 @@ func (sp *Species) Validity(tempK, presPa float64) Validity {
 	}
 	if sp.BoilingK > 0 {
 		v.TOverBoiling = tempK / sp.BoilingK
+		// Clausius-Clapeyron from the normal boiling point, with the
+		// enthalpy of vaporisation from Trouton's rule.
+		lnSat := math.Log(StdPressureAtmPa) - troutonEntropyOverR*(sp.BoilingK/tempK-1)
+		v.SatPresEstPa = math.Exp(min(lnSat, 700))
+		v.PresOverSat = math.Exp(max(math.Log(presPa)-lnSat, -700))
 	}
 	return v
 }
+
+// troutonEntropyOverR is the entropy of vaporisation at the normal boiling
+// point over R: about 10.5 (≈ 88 J/(mol·K)) for most liquids, by Trouton's
+// rule (common practice). It gives vapour pressures good to a factor of
+// about two away from the boiling point: enough to say whether a partial
+// pressure is near condensing, not to design a condenser.
+const troutonEntropyOverR = 10.5
+
+// Thresholds of the condensation and real-gas notes. nearSatFraction is
+// where a cooler spot or a compression may bring the gas to its vapour
+// pressure. Near its boiling point (T < 1.5 Tb) a gas departs from ideal
+// by a percent or more once its pressure reaches some tenths of a bar;
+// below realGasMinPa that departure stays small (a rough rule chosen here,
+// from the size of second virial coefficients near the boiling point).
+const (
+	nearSatFraction  = 0.5
+	nearBoilingRatio = 1.5
+	realGasMinPa     = 20e3
+)
 
 // Severity ranks a validity note.
 type Severity int
@@ -96,12 +129,40 @@ func (v Validity) Notes(sp *Species) []Note {
 		}
 	}
 	if v.TOverBoiling > 0 {
+		est := fmt.Sprintf("vapour pressure estimated from the boiling point (%.4g K), %s", sp.BoilingK, formatPaApprox(v.SatPresEstPa))
 		switch {
+		case v.PresOverSat >= 1:
+			out = append(out, Note{Invalid, fmt.Sprintf("pressure above its %s: it would condense", est)})
+		case v.PresOverSat >= nearSatFraction:
+			out = append(out, Note{Caution, fmt.Sprintf("pressure is %.2g %% of its %s: a cooler spot or a compression may condense it", 100*v.PresOverSat, est)})
+		case v.TOverBoiling < nearBoilingRatio && v.presPa >= realGasMinPa:
+			out = append(out, Note{Caution, fmt.Sprintf("T is within 1.5× the boiling point (%.4g K) at %s: real-gas effects may exceed ~1 %%", sp.BoilingK, formatPa(v.presPa))})
 		case v.TOverBoiling < 1:
-			out = append(out, Note{Invalid, fmt.Sprintf("T is below the normal boiling point (%.4g K): it condenses near 1 atm", sp.BoilingK)})
-		case v.TOverBoiling < 1.5:
-			out = append(out, Note{Caution, fmt.Sprintf("T is within 1.5× the boiling point (%.4g K): real-gas effects grow", sp.BoilingK)})
+			out = append(out, Note{Info, fmt.Sprintf("below the normal boiling point, but the pressure is only %.2g %% of its %s", 100*v.PresOverSat, est)})
+		default:
+			out = append(out, Note{Info, fmt.Sprintf("far from condensing: its vapour pressure, estimated from the boiling point (%.4g K), is %s", sp.BoilingK, formatPaApprox(v.SatPresEstPa))})
 		}
 	}
 	return out
+}
+
+// formatPaApprox writes an estimated pressure. Above 1000 bar the
+// vapour-pressure estimate means only "far above any working pressure",
+// so it says so.
+func formatPaApprox(pa float64) string {
+	if pa > 1e8 {
+		return "over 1000 bar"
+	}
+	return "about " + formatPa(pa)
+}
+
+// formatPa writes a pressure in the unit that suits its size.
+func formatPa(pa float64) string {
+	switch {
+	case pa >= 1e5:
+		return fmt.Sprintf("%.3g bar", pa/1e5)
+	case pa >= 1e3:
+		return fmt.Sprintf("%.3g kPa", pa/1e3)
+	}
+	return fmt.Sprintf("%.3g Pa", pa)
 }
