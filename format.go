@@ -9,6 +9,8 @@ import (
 	"strconv"
 	"strings"
 	"unicode/utf8"
+
+	"zmix/mixtures"
 )
 
 // numbers formats the figures of one text output. It remembers the first
@@ -35,20 +37,7 @@ func (n *numbers) sig(what string, x float64, sig int) string {
 	if !n.check(what, x) {
 		return "?"
 	}
-	if x == 0 {
-		return strconv.FormatFloat(0, 'f', max(sig-1, 0), 64)
-	}
-	ax := math.Abs(x)
-	if ax < 1e-4 || ax >= 1e7 {
-		return strconv.FormatFloat(x, 'e', max(sig-1, 0), 64)
-	}
-	exp := int(math.Floor(math.Log10(ax)))
-	// Rounding may carry into the next power of ten (9.99996 → 10.0000):
-	// then one decimal fewer keeps the count of figures.
-	if r, _ := strconv.ParseFloat(strconv.FormatFloat(ax, 'e', max(sig-1, 0), 64), 64); r >= math.Pow(10, float64(exp+1)) {
-		exp++
-	}
-	return strconv.FormatFloat(x, 'f', max(sig-1-exp, 0), 64)
+	return mixtures.FormatSig(x, sig)
 }
 
 // short writes x with up to sig significant figures and no trailing

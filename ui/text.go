@@ -7,6 +7,8 @@ import (
 	"unicode/utf8"
 
 	"github.com/charmbracelet/lipgloss"
+
+	"zmix/mixtures"
 )
 
 // asciiReplacer spells out the non-ASCII glyphs that the engine's notes and
@@ -76,29 +78,7 @@ func isASCII(s string) bool {
 
 // sig formats x with n significant figures, in plain notation for everyday
 // magnitudes and in e-notation for very large or small ones.
-func sig(x float64, n int) string {
-	switch {
-	case math.IsNaN(x) || math.IsInf(x, 0):
-		return "n/a"
-	case x == 0:
-		return "0"
-	}
-	a := math.Abs(x)
-	if a < 1e-4 || a >= 1e9 {
-		return strconv.FormatFloat(x, 'e', n-1, 64)
-	}
-	exp := int(math.Floor(math.Log10(a)))
-	// Rounding can carry into the next decade (9.9996 → 10.000).
-	dec := n - 1 - exp
-	if dec < 0 {
-		dec = 0
-	}
-	s := strconv.FormatFloat(x, 'f', dec, 64)
-	if r, err := strconv.ParseFloat(s, 64); err == nil && math.Abs(r) >= math.Pow(10, float64(exp+1)) && dec > 0 {
-		s = strconv.FormatFloat(x, 'f', dec-1, 64)
-	}
-	return s
-}
+func sig(x float64, n int) string { return mixtures.FormatSig(x, n) }
 
 // short formats x with up to n significant figures and no trailing
 // zeros, for values the user typed, such as a temperature.
