@@ -33,8 +33,10 @@ type Sweep struct {
 	Log      bool
 }
 
-// MaxSweepSteps bounds a sweep so that a typing slip cannot exhaust memory.
-const MaxSweepSteps = 1_000_000
+// MaxSweepSteps bounds a sweep so that a typing slip cannot exhaust memory:
+// every point holds each species' full state (about 260 B per species),
+// so 200 000 points of a ten-species blend take about half a gigabyte.
+const MaxSweepSteps = 200_000
 
 // ErrSweep is wrapped by every sweep error.
 var ErrSweep = errors.New("mixtures: bad sweep")

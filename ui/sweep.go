@@ -157,18 +157,11 @@ func sweepParse(vi int, fromText, toText, stepsText string, logGrid bool) (sw mi
 	return sw, errs, rangeErr
 }
 
-// maxPanePoints caps the workbench's sweeps below mixtures.MaxSweepSteps:
-// every point holds each species' full state (about 400 B for a
-// four-species blend), and the old result stays on screen while the new
-// one runs, so a million points would take gigabytes on a shared
-// workstation. `zmix sweep` still takes the engine's full range.
-const maxPanePoints = 200_000
-
 // sweepStepsError is the one-line error for a bad number of points.
 type sweepStepsError struct{ text string }
 
 func (e sweepStepsError) Error() string {
-	return "points " + strconv.Quote(e.text) + ": want a whole number from 2 to " + strconv.Itoa(maxPanePoints) + " (zmix sweep takes more)"
+	return "points " + strconv.Quote(e.text) + ": want a whole number from 2 to " + strconv.Itoa(mixtures.MaxSweepSteps)
 }
 
 // sweepParseSteps reads a number of points: digits, optionally grouped
@@ -188,7 +181,7 @@ func sweepParseSteps(s string) (int, error) {
 		}
 		n = int(f)
 	}
-	if n < 2 || n > maxPanePoints {
+	if n < 2 || n > mixtures.MaxSweepSteps {
 		return 0, sweepStepsError{s}
 	}
 	return n, nil
