@@ -253,6 +253,17 @@ func (r *root) Update(msg tea.Msg) tea.Cmd {
 	case saveDoneMsg:
 		cmds = append(cmds, r.saveDone(msg))
 	case tea.KeyMsg:
+		if msg.Type == tea.KeyRunes && !msg.Paste && len(msg.Runes) > 1 {
+			// Keys typed fast, or sent in one packet over a slow SSH
+			// link, arrive as one message; here each is a key of its own.
+			for _, ru := range msg.Runes {
+				cmds = append(cmds, r.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune{ru}, Alt: msg.Alt}))
+				if r.quitting {
+					break
+				}
+			}
+			return tea.Batch(cmds...)
+		}
 		cmds = append(cmds, r.key(msg))
 	default:
 		cmds = append(cmds, r.sweep.Update(msg))

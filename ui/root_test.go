@@ -5,6 +5,7 @@ import (
 	"testing"
 	"unicode/utf8"
 
+	tea "github.com/charmbracelet/bubbletea"
 	"github.com/charmbracelet/lipgloss"
 )
 
@@ -231,5 +232,27 @@ func TestRootSafetyStrip(t *testing.T) {
 	settle(t, r, r.Update(nil))
 	if v := r.View(); strings.Contains(v, "SAFETY") {
 		t.Errorf("air at 1 bar shows a caution strip:\n%s", v)
+	}
+}
+
+// Keys that arrive in one message (fast typing, or one packet over a slow
+// SSH link) act one by one: "2" moves to Setpoint, "t" opens the
+// temperature, and the rest is typed into it.
+func TestRootCoalescedKeys(t *testing.T) {
+	r := testRoot(t, 80, 24, testRootOpts{stateDir: t.TempDir()})
+	settle(t, r, r.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune("2t")}))
+	if r.focus != paneSetpoint || !r.setpoint.Editing() {
+		t.Fatalf("after \"2t\" in one message: focus %d, editing %v; want Setpoint, editing", r.focus, r.setpoint.Editing())
+	}
+	press(t, r, "ctrl+u")
+	settle(t, r, r.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune("350")}))
+	press(t, r, " ", "K", "enter")
+	if got := r.b.in.TempK; got != 350 {
+		t.Errorf("temperature typed in coalesced keys: %g K in force, want 350 K", got)
+	}
+	// A bracketed paste stays whole: pasted text is never taken as keys.
+	settle(t, r, r.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune("qq"), Paste: true}))
+	if r.quitting {
+		t.Errorf("a paste of \"qq\" quit the workbench")
 	}
 }
