@@ -1,0 +1,61 @@
+package model
+
+import (
+	"math"
+	"testing"
+)
+
+// TestRecalledStandardValues checks catalogue species that no shared
+// table covers against S° and Cp° at 298.15 K and 1 bar recalled from the
+// published tables (NIST-JANAF 4th ed. 1998, or the NBS tables of 1982
+// where JANAF has no entry). Every value is from memory, so the
+// tolerances are those of the JANAF test at 298.15 K (0.3 J/(mol·K),
+// 1 %), which a wrong catalogue entry (a mistyped fundamental or
+// rotational constant, a wrong σ) would break. Ethane and propane are the
+// exception: their torsions are hindered rotors, taken as harmonic
+// vibrations, which leaves S and Cp low by more (see species.cat).
+func TestRecalledStandardValues(t *testing.T) {
+	tests := []struct {
+		formula    string
+		sJPerMolK  float64
+		cpJPerMolK float64
+		sTol       float64 // J/(mol·K)
+		cpTolFrac  float64
+		source     string
+	}{
+		{"CO", 197.660, 29.142, 0.3, 0.01, "NIST-JANAF, CO, from memory"},
+		{"HCl", 186.902, 29.136, 0.3, 0.01, "NIST-JANAF, HCl, from memory"},
+		{"HF", 173.779, 29.137, 0.3, 0.01, "NIST-JANAF, HF, from memory"},
+		{"NO", 210.758, 29.845, 0.3, 0.01, "NIST-JANAF, NO, from memory"},
+		{"N2O", 219.957, 38.617, 0.3, 0.01, "NIST-JANAF, N2O, from memory"},
+		{"NO2", 240.034, 36.974, 0.3, 0.01, "NIST-JANAF, NO2, from memory"},
+		{"SO2", 248.223, 39.842, 0.3, 0.01, "NIST-JANAF, SO2, from memory"},
+		{"H2S", 205.757, 34.248, 0.3, 0.01, "NIST-JANAF, H2S, from memory"},
+		{"Cl2", 223.081, 33.949, 0.3, 0.01, "NIST-JANAF, Cl2, from memory"},
+		{"F2", 202.789, 31.304, 0.3, 0.01, "NIST-JANAF, F2, from memory"},
+		{"C2H2", 200.958, 44.036, 0.3, 0.01, "NIST-JANAF, C2H2, from memory"},
+		{"C2H4", 219.330, 42.886, 0.3, 0.01, "NIST-JANAF, C2H4, from memory"},
+		{"D2", 144.960, 29.196, 0.3, 0.01, "NIST-JANAF, D2, from memory"},
+		{"SiH4", 204.653, 42.81, 0.3, 0.01, "NIST-JANAF, SiH4, from memory"},
+		{"PH3", 210.24, 37.11, 0.3, 0.01, "NBS tables 1982, PH3, from memory"},
+		// Harmonic torsion: about 0.8 and 1.3 J/(mol·K) low in S.
+		{"C2H6", 229.2, 52.49, 1.5, 0.04, "NBS tables 1982, C2H6, from memory"},
+		{"C3H8", 270.3, 73.6, 2.0, 0.05, "NBS tables 1982, C3H8, from memory"},
+	}
+	for _, tt := range tests {
+		sp := mustSpecies(t, tt.formula)
+		row, err := sp.Table(RefTempK, StdPressureBarPa, Treatment{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		dS := row.SJPerMolK - tt.sJPerMolK
+		dCp := row.CpJPerMolK/tt.cpJPerMolK - 1
+		t.Logf("%-5s S° %+.3f J/(mol·K), Cp° %+.2f %% against %s", tt.formula, dS, 100*dCp, tt.source)
+		if math.Abs(dS) > tt.sTol {
+			t.Errorf("%s: S°(298.15 K) = %.3f, want %.3f ± %.1f (%s)", tt.formula, row.SJPerMolK, tt.sJPerMolK, tt.sTol, tt.source)
+		}
+		if math.Abs(dCp) > tt.cpTolFrac {
+			t.Errorf("%s: Cp°(298.15 K) = %.3f, want %.3f ± %.0f %% (%s)", tt.formula, row.CpJPerMolK, tt.cpJPerMolK, 100*tt.cpTolFrac, tt.source)
+		}
+	}
+}
