@@ -202,26 +202,12 @@ func TestBenchBlendFileRoundTrip(t *testing.T) {
 	}
 }
 
-// Numbers on screen: significant figures and the special values.
+// Numbers on screen are mixtures.FormatSig's (its table, special values
+// included, is in mixtures/format_test.go), the same as the commands'.
 func TestSig(t *testing.T) {
-	cases := []struct {
-		x    float64
-		n    int
-		want string
-	}{
-		{29.1234, 5, "29.123"},
-		{0.000523, 4, "0.0005230"},
-		{9.99996, 5, "10.000"},
-		{-13.0114, 5, "-13.011"},
-		{1234567, 4, "1234567"},
-		{2.5e-7, 3, "2.50e-07"},
-		{0, 4, "0.000"},
-		{math.NaN(), 4, "n/a"},
-		{math.Inf(1), 4, "n/a"},
-	}
-	for _, c := range cases {
-		if got := sig(c.x, c.n); got != c.want {
-			t.Errorf("sig(%g, %d) = %q, want %q", c.x, c.n, got, c.want)
+	for _, x := range []float64{29.1234, 0, math.NaN()} {
+		if got, want := sig(x, 5), mixtures.FormatSig(x, 5); got != want {
+			t.Errorf("sig(%g, 5) = %q, want %q", x, got, want)
 		}
 	}
 	if got := fixed(-0.0001, 3); got != "0.000" {
