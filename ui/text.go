@@ -26,6 +26,7 @@ var asciiReplacer = strings.NewReplacer(
 	"₀", "0", "₁", "1", "₂", "2", "₃", "3", "₄", "4", "₅", "5", "₆", "6", "₇", "7", "₈", "8", "₉", "9",
 	"⁰", "^0", "¹", "^1", "⁴", "^4",
 	"→", "->", "←", "<-", "↑", "^", "↓", "v", "…", "...", "•", "*", "▸", ">",
+	"│", "|", "┊", ":", "─", "-",
 	"’", "'", "‘", "'", "“", "\"", "”", "\"",
 )
 
@@ -40,7 +41,7 @@ func (c *Common) Text(s string) string {
 	if !c.ASCII {
 		return s
 	}
-	return toASCII(s)
+	return c.toASCII(s)
 }
 
 // KeyText is Text for key names: arrows become words in ASCII mode.
@@ -48,7 +49,22 @@ func (c *Common) KeyText(s string) string {
 	if !c.ASCII {
 		return s
 	}
-	return toASCII(keyWords.Replace(s))
+	return c.toASCII(keyWords.Replace(s))
+}
+
+// toASCII is the package's toASCII that also tells the test hook of every
+// glyph the table lacks, so that a test can fail on a "?" that stands in
+// for a glyph of ours.
+func (c *Common) toASCII(s string) string {
+	out := toASCII(s)
+	if c.missingGlyph != nil && strings.Contains(out, "?") {
+		for _, r := range asciiReplacer.Replace(s) {
+			if r >= utf8.RuneSelf {
+				c.missingGlyph(r)
+			}
+		}
+	}
+	return out
 }
 
 func toASCII(s string) string {
