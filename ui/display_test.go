@@ -74,3 +74,53 @@ func TestASCIIModeEveryScreen(t *testing.T) {
 		}
 	}
 }
+
+// The model's cautions stay in sight: a line in Properties and a marker
+// on every pane while one applies (issue 7, item 5). The demo blend at
+// -40 °C and 30 psig brings NH3 near condensing.
+func TestValidityCautionInSight(t *testing.T) {
+	cold := []string{"2", "t", "ctrl+u", "type:-40 C", "enter", "p", "ctrl+u", "type:30 psig", "enter"}
+	for _, size := range [][2]int{{80, 24}, {120, 40}} {
+		r := testRoot(t, size[0], size[1], testRootOpts{})
+		walk(t, r, cold)
+		for _, pane := range []string{"1", "2", "3", "4", "5"} {
+			press(t, r, pane)
+			if screen := r.View(); !strings.Contains(screen, "MODEL CAUTION (NH3)") {
+				t.Errorf("%dx%d pane %s: no marker of the model's caution:\n%s", size[0], size[1], pane, screen)
+			}
+		}
+		press(t, r, "3")
+		if screen := r.View(); !strings.Contains(screen, "! caution: NH3: pressure is") {
+			t.Errorf("%dx%d: Properties lacks the caution line:\n%s", size[0], size[1], screen)
+		}
+		press(t, r, "!")
+		if screen := r.View(); !strings.Contains(screen, "* caution: NH3: pressure is") {
+			t.Errorf("%dx%d: the safety overlay lacks the caution in full:\n%s", size[0], size[1], screen)
+		}
+	}
+}
+
+// At 80×24 the key-figures line says when it shows the last valid state
+// (issue 7, item 11), and leaves out whole figures rather than cutting one.
+func TestHeadlineMarkedStale(t *testing.T) {
+	r := testRoot(t, 80, 24, testRootOpts{})
+	head := func() string {
+		for _, l := range strings.Split(r.View(), "\n") {
+			if strings.HasPrefix(l, "= ") || strings.HasPrefix(l, "last valid") {
+				return l
+			}
+		}
+		return ""
+	}
+	if h := head(); !strings.HasPrefix(h, "= M ") || !strings.Contains(h, "m/s") {
+		t.Fatalf("key figures = %q, want every figure", h)
+	}
+	walk(t, r, []string{"enter", "ctrl+u", "type:two percent", "enter"})
+	h := head()
+	if !strings.HasPrefix(h, "last valid: M ") {
+		t.Fatalf("key figures with an entry in error = %q, want it marked last valid", h)
+	}
+	if f := strings.Fields(h); len(f) > 0 && strings.Contains("MρCpγc", f[len(f)-1]) {
+		t.Errorf("key figures = %q: a figure's value is cut off", h)
+	}
+}

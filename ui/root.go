@@ -307,12 +307,12 @@ func (r *root) refreshPanes() {
 // relayout places the panes for the current size and caution strip, and
 // tells each pane its size when it changed.
 func (r *root) relayout() {
-	r.safety = safetyLines(r.c, r.b.cautions, r.width)
+	r.safety = safetyLines(r.c, r.b.cautions, r.b.notes, r.width)
 	r.statusRows = r.wantStatusRows()
 	bodyH := r.height - 1 - r.statusRows - len(r.safety)
 	nSpecies := 0
 	if r.b.in.Mixture != nil {
-		nSpecies = len(r.b.in.Mixture.Components)
+		nSpecies = len(r.b.in.Mixture.Components) + len(cautionNotes(r.b.notes)) // rows of the readout
 	}
 	r.lay = computeLayout(r.width, r.height, bodyH, r.focus, r.viewer, len(r.b.entries), nSpecies)
 	if r.lay.kind == layoutTooSmall {
@@ -500,7 +500,7 @@ func (r *root) buildOverlay() {
 	iw, ih := bx.inner()
 	r.overlayScroll.setHeight(ih)
 	if r.overlay == overlaySafety {
-		r.overlayScroll.setLines(safetyDetail(r.c, r.b.cautions, iw))
+		r.overlayScroll.setLines(safetyDetail(r.c, r.b.cautions, r.b.notes, iw))
 		return
 	}
 	s := r.c.Styles
@@ -986,7 +986,7 @@ func (r *root) body() string {
 }
 
 func (r *root) headlineLine() string {
-	return fitLine(r.c.Styles.Muted.Render(r.c.Text("= "))+r.c.Styles.Value.Render(r.props.headline()), r.width)
+	return r.props.headline(r.width)
 }
 
 // bottomLine is the prompt while one is open, else the status line: the

@@ -206,6 +206,40 @@ func wrap(s string, w int) []string {
 	return out
 }
 
+// shorten fits plain text into w cells, as it may be drawn (Text): whole
+// when it fits, else cut at the last space that leaves room for an
+// ellipsis, so that no word is cut.
+func (c *Common) shorten(s string, w int) string {
+	s = c.Text(s)
+	if lipgloss.Width(s) <= w {
+		return s
+	}
+	ell := c.Text("…")
+	ew := lipgloss.Width(ell)
+	if w <= ew {
+		return ""
+	}
+	rs := []rune(s)
+	cut := 0
+	for i, n := 0, 0; i < len(rs); i++ {
+		n += lipgloss.Width(string(rs[i]))
+		if n > w-ew {
+			break
+		}
+		if rs[i] == ' ' {
+			cut = i
+		}
+	}
+	if cut == 0 { // one long word: cut it, and say so
+		for n := 0; cut < len(rs); cut++ {
+			if n += lipgloss.Width(string(rs[cut])); n > w-ew {
+				break
+			}
+		}
+	}
+	return strings.TrimRight(string(rs[:cut]), " ,;:") + ell
+}
+
 // padRight pads plain text to w cells.
 func padRight(s string, w int) string {
 	n := lipgloss.Width(s)
