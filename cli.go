@@ -301,7 +301,6 @@ func parseStd(text string) (float64, error) {
 	return pa, nil
 }
 
-
 // stepsFlag is --steps: a whole number of points, end points included.
 type stepsFlag struct{ n int }
 

@@ -116,4 +116,3 @@ func parseTempList(text string) ([]float64, error) {
 	}
 	return out, nil
 }
-
