@@ -55,8 +55,8 @@ func TestASCIIModeEveryScreen(t *testing.T) {
 			r := testRoot(t, size[0], size[1], testRootOpts{ascii: true})
 			missing := map[rune]bool{}
 			r.c.missingGlyph = func(ru rune) { missing[ru] = true }
-			r.refreshPanes()
-			r.sizes = [paneCount]box{} // every pane draws its lines again
+			settle(t, r, r.syncPanes())
+			r.sizes = make([]box, len(r.panes)) // every pane draws its lines again
 			r.relayout()
 			walk(t, r, step.keys)
 			screen := r.View()

@@ -54,7 +54,7 @@ func TestAutosaveAndRestore(t *testing.T) {
 
 	r2 := testRoot(t, 100, 30, testRootOpts{stateDir: dir})
 	if r2.b.entries[1].Amount != "2%x" || r2.b.tempText != "350 K" || !r2.b.stdAtm || !r2.b.showGauge || r2.focus != paneAnatomy {
-		t.Errorf("restored: entries %v temp %q stdAtm %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.stdAtm, r2.b.showGauge, paneNames[r2.focus])
+		t.Errorf("restored: entries %v temp %q stdAtm %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.stdAtm, r2.b.showGauge, r2.focus.name())
 	}
 	// The typo is still there, and so is the last valid blend behind it.
 	if r2.b.rowErr[1] == "" || r2.b.in.Mixture == nil || r2.b.in.TempK != 350 {
@@ -63,8 +63,8 @@ func TestAutosaveAndRestore(t *testing.T) {
 	if x, _ := r2.b.moleFraction("NH3"); x != 0.02 {
 		t.Errorf("last valid x(NH3) = %g, want 0.02 (from 2%%, the text before the typo)", x)
 	}
-	if r2.anatomy.formula != "NH3" {
-		t.Errorf("anatomy species %q", r2.anatomy.formula)
+	if r2.panes[paneAnatomy].(*anatomyPane).formula != "NH3" {
+		t.Errorf("anatomy species %q", r2.panes[paneAnatomy].(*anatomyPane).formula)
 	}
 }
 
@@ -243,7 +243,7 @@ func TestExportReadout(t *testing.T) {
 func TestExportSweep(t *testing.T) {
 	dir := t.TempDir()
 	r := testRoot(t, 80, 24, testRootOpts{stateDir: dir})
-	res := r.sweep.Result()
+	res := r.panes[paneSweep].(*sweepPane).Result()
 	if res == nil {
 		t.Fatal("no sweep after start-up")
 	}

@@ -44,7 +44,11 @@ func (p *propertiesPane) ShortHelp() []key.Binding {
 	return []key.Binding{k.Up, k.Down}
 }
 
-func (p *propertiesPane) Update(msg tea.KeyMsg) tea.Cmd {
+func (p *propertiesPane) Update(m tea.Msg) tea.Cmd {
+	msg, ok := m.(tea.KeyMsg)
+	if !ok {
+		return nil
+	}
 	scrollKeys(&p.scroll, p.c.Keys.Scroll, msg)
 	return nil
 }
@@ -68,6 +72,22 @@ func scrollKeys(s *scroller, k ScrollKeys, msg tea.KeyMsg) {
 }
 
 func (p *propertiesPane) View() string { return p.scroll.view() }
+
+func (p *propertiesPane) Title() string { return "Properties" }
+
+func (p *propertiesPane) Sync() tea.Cmd { p.refresh(); return nil }
+
+func (p *propertiesPane) More() (above, below bool) { return p.scroll.more() }
+
+// wantHeight is what the one-column readout needs, leaving 16 rows of
+// the column to the panes under it (the plot).
+func (p *propertiesPane) wantHeight(avail int) int {
+	nSpecies := 0
+	if p.b.in.Mixture != nil {
+		nSpecies = len(p.b.in.Mixture.Components) + len(cautionNotes(p.b.notes)) // a caution line each
+	}
+	return max(10, min(20+nSpecies, avail-16))
+}
 
 // readoutRow is one figure of the blend, per mole and per kilogram.
 type readoutRow struct {

@@ -46,6 +46,7 @@ type bench struct {
 	validTemp, validPres string
 
 	content uint64 // grows with every edit of what a blend file holds
+	loads   uint64 // grows with every blend file loaded over the recipe
 	changed bool   // an edit since the last update
 }
 
@@ -58,6 +59,7 @@ func (b *bench) loadFile(f *mixtures.BlendFile) {
 		b.entries = append(b.entries, entry{Species: c.Species, Amount: c.Amount})
 	}
 	b.name, b.note = f.Name, f.Note
+	b.loads++
 	if f.Temperature != "" {
 		b.tempText = f.Temperature
 	}
