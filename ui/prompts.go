@@ -12,6 +12,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // The prompts on the bottom line: save, open and export paths, and the
@@ -261,11 +262,13 @@ func (r *root) export(path string) {
 			r.setError("nothing to export: " + r.b.stateErr)
 			return
 		}
-		st := r.b.state
+		// The state command's writers: the file holds what
+		// zmix state --json (or --csv) prints, cautions and notes included.
+		rep := r.b.stateReport()
 		if asJSON {
-			err = mixtures.WriteJSON(&buf, &st, gauge)
+			err = report.WriteStateJSON(&buf, rep)
 		} else {
-			err = mixtures.WriteCSV(&buf, []mixtures.State{st}, gauge)
+			err = report.WriteStateCSV(&buf, rep)
 		}
 	}
 	if err == nil {

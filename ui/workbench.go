@@ -7,6 +7,7 @@ import (
 	"strings"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -452,4 +453,19 @@ func (b *bench) presShown(presPa float64) string {
 		return presText(presPa-mixtures.AtmospherePa) + " gauge"
 	}
 	return presText(presPa) + " abs"
+}
+
+// stateReport is the current state as the state command reports it: the
+// figures, the hazard cautions and the validity notes at caution level
+// (those the command prints without --all-notes).
+func (b *bench) stateReport() *report.StateReport {
+	st := b.state
+	return &report.StateReport{
+		Label:    b.name,
+		State:    &st,
+		PresText: b.validPres,
+		Gauge:    b.in.Gauge,
+		Cautions: b.cautions,
+		Notes:    cautionNotes(b.notes),
+	}
 }
