@@ -5,6 +5,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // The setpoint pane's lines.
@@ -171,7 +172,7 @@ func (p *setpointPane) refresh() {
 		return padRight(p.c.Text(text), fw)
 	}
 	errLines := func(msg string) {
-		for _, l := range wrap(p.c.Text(msg), p.w-4) {
+		for _, l := range report.Wrap(p.c.Text(msg), p.w-4) {
 			lines = append(lines, "    "+s.Error.Render(l))
 		}
 	}
@@ -179,11 +180,11 @@ func (p *setpointPane) refresh() {
 	in := p.b.in
 	tNote, pNote := "", ""
 	if p.b.tempErr == "" && in.TempK > 0 {
-		tNote = p.c.Text(short(in.TempK, 6) + " K, " + fixed(mixtures.KelvinToCelsius(in.TempK), 2) + " °C")
+		tNote = p.c.Text(report.Short(in.TempK, 6) + " K, " + report.Fixed(mixtures.KelvinToCelsius(in.TempK), 2) + " °C")
 	}
 	if p.b.presErr == "" && in.PresPa > 0 {
 		if p.b.showGauge {
-			pNote = presText(in.PresPa) + " abs"
+			pNote = report.PressureAuto(in.PresPa) + " abs"
 		} else {
 			pNote = p.b.presShown(in.PresPa)
 			if in.Gauge {
@@ -203,7 +204,7 @@ func (p *setpointPane) refresh() {
 	if p.b.presErr != "" {
 		msg := p.b.presErr
 		if in.PresPa > 0 {
-			msg += " (" + presText(in.PresPa) + " abs still in force)"
+			msg += " (" + report.PressureAuto(in.PresPa) + " abs still in force)"
 		}
 		errLines(msg)
 	}

@@ -9,6 +9,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // The sweep pane moves T or P across a grid, plots one property of the
@@ -672,7 +673,7 @@ func (p *sweepPane) xText(x float64) string {
 	if p.result != nil && p.result.Sweep.Var == mixtures.SweepPressure {
 		name = "P"
 	}
-	return name + " = " + sweepTrimZeros(sig(x*p.xScale, 6)) + " " + p.xUnit
+	return name + " = " + sweepTrimZeros(report.Sig(x*p.xScale, 6)) + " " + p.xUnit
 }
 
 // sweepTrimZeros drops trailing zeros after a decimal point: grid points

@@ -13,6 +13,7 @@ import (
 	"github.com/charmbracelet/x/exp/teatest"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -566,7 +567,7 @@ func TestSweepCursorReadsEngineValues(t *testing.T) {
 				t.Errorf("cursor value at point %d = %v, want %v (engine)", i, got, want)
 			}
 			view := p.View()
-			for _, s := range []string{sig(want, 5), p.xText(res.Grid[i])} {
+			for _, s := range []string{report.Sig(want, 5), p.xText(res.Grid[i])} {
 				if !strings.Contains(view, s) {
 					t.Errorf("readout lacks %q:\n%s", s, view)
 				}

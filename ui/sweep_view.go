@@ -8,6 +8,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // refresh lays the pane out and builds the lines View returns. It runs at
@@ -102,12 +103,12 @@ func (p *sweepPane) settingsLine() string {
 		label("  from ") + field(sweepFieldFrom) + label(" to ") + field(sweepFieldTo) +
 		"  " + field(sweepFieldSteps) + label(" points") + "  " + label(grid)
 	if p.haveIn && p.in.Valid() {
-		held := "  at P = " + presText(p.in.PresPa)
+		held := "  at P = " + report.PressureAuto(p.in.PresPa)
 		if p.in.Gauge {
 			held += " abs"
 		}
 		if p.sweep.Var == mixtures.SweepPressure {
-			held = "  at T = " + sig(p.in.TempK, 6) + " K"
+			held = "  at T = " + report.Sig(p.in.TempK, 6) + " K"
 		}
 		line += st.Muted.Render(held)
 	}
@@ -205,7 +206,7 @@ func (p *sweepPane) readoutLines(w int) []string {
 		v := s.y(i)
 		val := "not finite"
 		if plotFinite(v) {
-			val = sig(v, 5)
+			val = report.Sig(v, 5)
 		}
 		sample := plotSample(k, p.c.ASCII)
 		add(sample+" "+s.name+" "+val,

@@ -143,7 +143,7 @@ func (b *bench) setBalance(i int) {
 	}
 	share := func(j int) string {
 		if x, ok := b.moleFraction(b.entries[j].Species); ok {
-			return short(100*x, 6) + "%"
+			return report.Short(100*x, 6) + "%"
 		}
 		return ""
 	}
@@ -409,7 +409,7 @@ func (b *bench) derive() {
 	}
 	if name := nonFinite(&st); name != "" {
 		b.stateErr = fmt.Sprintf("the model gives no finite %s at %s and %s; try another temperature or pressure",
-			name, mixtures.FormatTemperature(b.in.TempK), presText(b.in.PresPa))
+			name, mixtures.FormatTemperature(b.in.TempK), report.PressureAuto(b.in.PresPa))
 		return
 	}
 	b.state = st
@@ -450,9 +450,9 @@ func nonFinite(s *mixtures.State) string {
 // presShown writes the total pressure as absolute or gauge, as chosen.
 func (b *bench) presShown(presPa float64) string {
 	if b.showGauge {
-		return presText(presPa-mixtures.AtmospherePa) + " gauge"
+		return report.PressureAuto(presPa-mixtures.AtmospherePa) + " gauge"
 	}
-	return presText(presPa) + " abs"
+	return report.PressureAuto(presPa) + " abs"
 }
 
 // stateReport is the current state as the state command reports it: the
