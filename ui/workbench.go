@@ -54,6 +54,8 @@ type bench struct {
 func newBench(cat *model.Catalogue) *bench { return &bench{cat: cat} }
 
 // loadFile replaces the recipe and conditions with those of a blend file.
+// How pressures are shown (absolute or gauge) is the user's setting, which
+// a file does not change; see viewFromFile.
 func (b *bench) loadFile(f *mixtures.BlendFile) {
 	b.entries = b.entries[:0]
 	for _, c := range f.Components {
@@ -69,9 +71,6 @@ func (b *bench) loadFile(f *mixtures.BlendFile) {
 	}
 	std, _ := mixtures.StdPressureFromText(f.StandardPressure)
 	b.stdAtm = std == model.StdPressureAtmPa
-	if p, err := mixtures.ParsePressure(b.presText); err == nil {
-		b.showGauge = p.Gauge
-	}
 	b.touch()
 }
 
@@ -233,6 +232,14 @@ func (b *bench) toggleStd() { b.stdAtm = !b.stdAtm; b.touch() }
 
 // toggleGauge changes only how pressures are shown, which a blend file
 // does not hold.
+// viewFromFile shows pressures the way a file's pressure was written, for
+// a workbench that starts on the file with no setting of its own.
+func (b *bench) viewFromFile(f *mixtures.BlendFile) {
+	if p, err := mixtures.ParsePressure(f.Pressure); err == nil {
+		b.showGauge = p.Gauge
+	}
+}
+
 func (b *bench) toggleGauge() { b.showGauge = !b.showGauge; b.changed = true }
 
 // cleanErr drops the package prefixes from an engine error, which the user
@@ -409,7 +416,7 @@ func (b *bench) derive() {
 	}
 	if name := nonFinite(&st); name != "" {
 		b.stateErr = fmt.Sprintf("the model gives no finite %s at %s and %s; try another temperature or pressure",
-			name, mixtures.FormatTemperature(b.in.TempK), report.PressureAuto(b.in.PresPa))
+			name, mixtures.FormatTemperature(b.in.TempK), b.presShown(b.in.PresPa))
 		return
 	}
 	b.state = st
@@ -449,10 +456,17 @@ func nonFinite(s *mixtures.State) string {
 
 // presShown writes the total pressure as absolute or gauge, as chosen.
 func (b *bench) presShown(presPa float64) string {
-	if b.showGauge {
-		return report.PressureAuto(presPa-mixtures.AtmospherePa) + " gauge"
+	return report.PressureIn(presPa, b.presUnit())
+}
+
+// presUnit is the unit pressures show in: the one of the pressure last
+// typed that read, as absolute or gauge as the user chose.
+func (b *bench) presUnit() mixtures.PressureUnit {
+	u, ok := mixtures.PressureUnitOf(b.validPres)
+	if !ok {
+		u = mixtures.BarAbsolute
 	}
-	return report.PressureAuto(presPa) + " abs"
+	return u.Reading(b.showGauge)
 }
 
 // stateReport is the current state as the state command reports it: the
