@@ -41,6 +41,9 @@ type (
 	statePane interface {
 		saveState(st *savedState)
 		restoreState(st *savedState)
+		// stateChanged reports whether what saveState writes may have
+		// changed since the last call; it must be cheap.
+		stateChanged() bool
 	}
 	// headlinePane gives the key figures in one line, shown under the
 	// input panes when no result pane is on screen.
