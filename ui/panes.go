@@ -45,9 +45,9 @@ type (
 		// changed since the last call; it must be cheap.
 		stateChanged() bool
 	}
-	// headlinePane gives the key figures in one line, shown under the
-	// input panes when no result pane is on screen.
-	headlinePane interface{ headline() string }
+	// headlinePane gives the key figures in one line of w cells, shown
+	// under the input panes when no result pane is on screen.
+	headlinePane interface{ headline(w int) string }
 	// sweepSource has a sweep to export instead of the readout.
 	sweepSource interface{ Result() *mixtures.SweepResult }
 	// heightPane asks for a height of its own in a column of the full

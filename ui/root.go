@@ -240,7 +240,7 @@ func (r *root) syncPanes() tea.Cmd {
 // relayout places the panes for the current size and caution strip, and
 // tells each pane its size when it changed.
 func (r *root) relayout() {
-	r.safety = safetyLines(r.c, r.b.cautions, r.width)
+	r.safety = safetyLines(r.c, r.b.cautions, r.b.notes, r.width)
 	r.statusRows = r.wantStatusRows()
 	bodyH := r.height - 1 - r.statusRows - len(r.safety)
 	r.lay = computeLayout(r.width, r.height, bodyH, r.focus, r.viewer, r.panes)

@@ -102,7 +102,7 @@ func (b *bench) touch() { b.content++; b.changed = true }
 // valid reports whether everything typed reads, so that the screen shows
 // what was typed rather than an older state.
 func (b *bench) valid() bool {
-	return b.blendErr == "" && b.tempErr == "" && b.presErr == "" && b.stateErr == ""
+	return b.blendErr == "" && !anyErr(b.rowErr) && b.tempErr == "" && b.presErr == "" && b.stateErr == ""
 }
 
 func (b *bench) setAmount(i int, text string) {
