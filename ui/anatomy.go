@@ -21,7 +21,7 @@ type anatomyPane struct {
 
 	formula      string // the species shown; the first one if it is not in the blend
 	savedFormula string // formula when stateChanged last looked
-	scroll  scroller
+	scroll       scroller
 }
 
 func newAnatomyPane(c *Common, b *bench) *anatomyPane { return &anatomyPane{c: c, b: b} }

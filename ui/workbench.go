@@ -18,7 +18,7 @@ type bench struct {
 	cat *model.Catalogue
 
 	entries            []mixtures.FileComponent // the recipe, each line as typed
-	name, note         string // carried from a blend file
+	name, note         string                   // carried from a blend file
 	tempText, presText string
 	stdAtm             bool // standard pressure 1 atm instead of 1 bar
 	showGauge          bool // show the total pressure as gauge
