@@ -12,6 +12,7 @@ import (
 	"strings"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -161,7 +162,7 @@ func pickFormat(asJSON, asCSV bool) (outputFormat, error) {
 // that turns it into plain ASCII.
 func page(out *bytes.Buffer, ascii bool) io.Writer {
 	if ascii {
-		return &asciiWriter{out}
+		return &report.ASCIIWriter{W: out}
 	}
 	return out
 }
@@ -296,14 +297,6 @@ func parseStd(text string) (float64, error) {
 		return 0, badInput("--std: %v", err)
 	}
 	return pa, nil
-}
-
-// stdLabel names a standard pressure the way the user chooses it.
-func stdLabel(pa float64) string {
-	if pa == model.StdPressureAtmPa {
-		return "1 atm (101325 Pa)"
-	}
-	return "1 bar (100000 Pa)"
 }
 
 // stepsFlag is --steps: a whole number of points, end points included.

@@ -17,8 +17,8 @@ type Digits struct {
 type Section int
 
 const (
-	SectionConditions Section = iota // T, P, P°: what the state was asked at
-	SectionMixture                   // the blend's own figures
+	SectionMixture    Section = iota // the blend's own figures (the zero value)
+	SectionConditions                // T, P, P°: what the state was asked at
 )
 
 // Quantity is one figure of the blend.
