@@ -44,11 +44,11 @@ func TestAutosaveAndRestore(t *testing.T) {
 	typeIn(t, r, "350 K")
 	press(t, r, "enter", "s", "g", "5", "right")
 	st := readState(t, dir)
-	if st.Recipe[1] != (entry{"NH3", "2%x"}) || st.Temperature != "350 K" || st.StandardPressure != "1 atm" ||
+	if st.Blend.Components[1] != (mixtures.FileComponent{Species: "NH3", Amount: "2%x"}) || st.Blend.Temperature != "350 K" || st.Blend.StandardPressure != "1 atm" ||
 		st.PressureView != "gauge" || st.Pane != "anatomy" || st.AnatomySpecies != "NH3" {
 		t.Errorf("saved state: %+v", st)
 	}
-	if st.LastValid == nil || st.LastValid.Recipe[1].Amount != "2%" {
+	if st.LastValid == nil || st.LastValid.Components[1].Amount != "2%" {
 		t.Errorf("last valid recipe not saved: %+v", st.LastValid)
 	}
 
@@ -110,8 +110,8 @@ func TestSignalSavesState(t *testing.T) {
 		if cmd := r.Update(signalMsg{sig}); !returnsQuit(cmd) {
 			t.Fatalf("%v: no quit", sig)
 		}
-		if st := readState(t, dir); st.Recipe[0].Amount != "3.5%" {
-			t.Errorf("%v: saved amount %q, want 3.5%%", sig, st.Recipe[0].Amount)
+		if st := readState(t, dir); st.Blend.Components[0].Amount != "3.5%" {
+			t.Errorf("%v: saved amount %q, want 3.5%%", sig, st.Blend.Components[0].Amount)
 		}
 	}
 }

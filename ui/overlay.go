@@ -52,7 +52,7 @@ func (r *root) buildOverlay() {
 	iw, ih := bx.inner()
 	r.overlayScroll.setHeight(ih)
 	if r.overlay == overlaySafety {
-		r.overlayScroll.setLines(safetyDetail(r.c, r.b.cautions, iw))
+		r.overlayScroll.setLines(safetyDetail(r.c, r.b.cautions, r.b.notes, iw))
 		return
 	}
 	s := r.c.Styles

@@ -722,6 +722,7 @@ func (p *sweepPane) More() (above, below bool) { return false, false }
 
 // The settings are kept with the workbench state.
 func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }
+func (p *sweepPane) stateChanged() bool       { return p.Changed() }
 func (p *sweepPane) restoreState(st *savedState) {
 	if st.Sweep.Var != "" {
 		p.load(st.Sweep)

@@ -128,14 +128,12 @@ func (r *root) body() string {
 
 // headlineLine is the key figures in one line, from the pane that has them.
 func (r *root) headlineLine() string {
-	text := ""
 	for _, p := range r.panes {
 		if h, ok := p.(headlinePane); ok {
-			text = h.headline()
-			break
+			return h.headline(r.width)
 		}
 	}
-	return fitLine(r.c.Styles.Muted.Render(r.c.Text("= "))+r.c.Styles.Value.Render(text), r.width)
+	return fitLine("", r.width)
 }
 
 // bottomLine is the prompt while one is open, else the status line: the

@@ -10,12 +10,6 @@ import (
 	"zmix/model"
 )
 
-// entry is one line of the recipe, kept exactly as typed.
-type entry struct {
-	Species string `json:"species"`
-	Amount  string `json:"amount"`
-}
-
 // bench is the document the panes edit: the recipe and the conditions as
 // typed, and everything derived from them. The text is the truth; the
 // derived Inputs change only when the text resolves, so a typing slip never
@@ -23,8 +17,8 @@ type entry struct {
 type bench struct {
 	cat *model.Catalogue
 
-	entries            []entry
-	name, note         string // carried from a blend file
+	entries            []mixtures.FileComponent // the recipe, each line as typed
+	name, note         string                   // carried from a blend file
 	tempText, presText string
 	stdAtm             bool // standard pressure 1 atm instead of 1 bar
 	showGauge          bool // show the total pressure as gauge
@@ -42,7 +36,7 @@ type bench struct {
 
 	// The text of the last valid recipe and conditions, saved with the
 	// state so that a restart with a typing slip still has a state.
-	validEntries         []entry
+	validEntries         []mixtures.FileComponent
 	validTemp, validPres string
 
 	content uint64 // grows with every edit of what a blend file holds
@@ -54,10 +48,7 @@ func newBench(cat *model.Catalogue) *bench { return &bench{cat: cat} }
 
 // loadFile replaces the recipe and conditions with those of a blend file.
 func (b *bench) loadFile(f *mixtures.BlendFile) {
-	b.entries = b.entries[:0]
-	for _, c := range f.Components {
-		b.entries = append(b.entries, entry{Species: c.Species, Amount: c.Amount})
-	}
+	b.entries = append(b.entries[:0], f.Components...)
 	b.name, b.note = f.Name, f.Note
 	b.loads++
 	if f.Temperature != "" {
@@ -76,12 +67,27 @@ func (b *bench) loadFile(f *mixtures.BlendFile) {
 
 // blendFile returns the recipe and conditions in blend-file form.
 func (b *bench) blendFile() *mixtures.BlendFile {
-	f := &mixtures.BlendFile{Format: mixtures.BlendFormat, Name: b.name, Note: b.note,
+	return &mixtures.BlendFile{Format: mixtures.BlendFormat, Name: b.name, Note: b.note,
+		Components:  append([]mixtures.FileComponent(nil), b.entries...),
 		Temperature: b.tempText, Pressure: b.presText, StandardPressure: b.stdText()}
-	for _, e := range b.entries {
-		f.Components = append(f.Components, mixtures.FileComponent{Species: e.Species, Amount: e.Amount})
-	}
-	return f
+}
+
+// lastValidFile is the recipe and conditions that last resolved.
+func (b *bench) lastValidFile() *mixtures.BlendFile {
+	return &mixtures.BlendFile{Format: mixtures.BlendFormat,
+		Components:  append([]mixtures.FileComponent(nil), b.validEntries...),
+		Temperature: b.validTemp, Pressure: b.validPres, StandardPressure: b.stdText()}
+}
+
+// setText takes the recipe and conditions of f exactly as written, for a
+// restart; unlike loadFile it keeps empty conditions empty.
+func (b *bench) setText(f *mixtures.BlendFile) {
+	b.entries = append(b.entries[:0], f.Components...)
+	b.name, b.note = f.Name, f.Note
+	b.tempText, b.presText = f.Temperature, f.Pressure
+	std, _ := mixtures.StdPressureFromText(f.StandardPressure)
+	b.stdAtm = std == model.StdPressureAtmPa
+	b.changed = true
 }
 
 func (b *bench) stdText() string {
@@ -96,7 +102,7 @@ func (b *bench) touch() { b.content++; b.changed = true }
 // valid reports whether everything typed reads, so that the screen shows
 // what was typed rather than an older state.
 func (b *bench) valid() bool {
-	return b.blendErr == "" && b.tempErr == "" && b.presErr == "" && b.stateErr == ""
+	return b.blendErr == "" && !anyErr(b.rowErr) && b.tempErr == "" && b.presErr == "" && b.stateErr == ""
 }
 
 func (b *bench) setAmount(i int, text string) {
@@ -115,7 +121,7 @@ func (b *bench) addSpecies(formula string) (int, bool) {
 			return i, false
 		}
 	}
-	b.entries = append(b.entries, entry{Species: formula})
+	b.entries = append(b.entries, mixtures.FileComponent{Species: formula})
 	b.touch()
 	return len(b.entries) - 1, true
 }
