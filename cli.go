@@ -12,6 +12,7 @@ import (
 	"strings"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -161,7 +162,7 @@ func pickFormat(asJSON, asCSV bool) (outputFormat, error) {
 // that turns it into plain ASCII.
 func page(out *bytes.Buffer, ascii bool) io.Writer {
 	if ascii {
-		return &asciiWriter{out}
+		return &report.ASCIIWriter{W: out}
 	}
 	return out
 }
@@ -193,16 +194,14 @@ func readBlend(spec string) (*blendSource, error) {
 		if path == "" {
 			return nil, badInput("--blend @: the file name is missing; give %s", blendForms)
 		}
-		f, err := mixtures.LoadBlendFile(path)
+		// The blend's items carry their file and line, so that an error
+		// found when it is resolved still names them.
+		f, b, err := mixtures.ReadBlendFile(path)
 		if err != nil {
 			var pe *fs.PathError
 			if errors.As(err, &pe) {
 				return nil, ioFailure(fmt.Errorf("--blend @%s: cannot read it: %v", path, pe.Err))
 			}
-			return nil, badInput("--blend @%s: %v", path, err)
-		}
-		b, err := f.Parse()
-		if err != nil {
 			return nil, badInput("--blend @%s: %v", path, err)
 		}
 		return &blendSource{blend: b, file: f, path: path}, nil
@@ -298,14 +297,6 @@ func parseStd(text string) (float64, error) {
 		return 0, badInput("--std: %v", err)
 	}
 	return pa, nil
-}
-
-// stdLabel names a standard pressure the way the user chooses it.
-func stdLabel(pa float64) string {
-	if pa == model.StdPressureAtmPa {
-		return "1 atm (101325 Pa)"
-	}
-	return "1 bar (100000 Pa)"
 }
 
 // stepsFlag is --steps: a whole number of points, end points included.

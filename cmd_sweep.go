@@ -1,12 +1,13 @@
 package main
 
 import (
-	"bytes"
+	"context"
 	"fmt"
 	"io"
 	"strings"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -155,113 +156,63 @@ func (a *app) printSweep(cat *model.Catalogue, cfg sweepConfig) error {
 	}
 	mix, err := cfg.src.blend.Resolve(cat, resolvePa)
 	if err != nil {
-		return badInput("--blend: %v", err)
+		return badInput("--blend: %s", model.UserMessage(err))
 	}
-	res, err := mix.Run(cfg.sweep, cfg.fixedTemp.kelvin, cfg.fixedPres.Pa, mixtures.Options{StdPresPa: cfg.stdPa})
-	if err != nil {
-		return badInput("%v", err)
+	opts := mixtures.Options{StdPresPa: cfg.stdPa}
+	if err := mix.CheckSweep(cfg.sweep, cfg.fixedTemp.kelvin, cfg.fixedPres.Pa); err != nil {
+		return badInput("%s", model.UserMessage(err))
 	}
-	gauge := cfg.gauge()
-	for i := range res.Points {
-		if err := checkFinite(res.Points[i].Record(gauge)); err != nil {
-			return badInput("at point %d of the sweep: %v", i+1, err)
-		}
+	highPa := cfg.fixedPres.Pa
+	if cfg.sweep.Var == mixtures.SweepPressure {
+		highPa = max(cfg.sweep.From, cfg.sweep.To)
 	}
-	highPa := res.Points[0].PresPa
-	for i := range res.Points {
-		highPa = max(highPa, res.Points[i].PresPa)
+	rep := &report.SweepReport{
+		Label: cfg.src.label(), Mix: mix, Sweep: cfg.sweep, RangeText: cfg.rangeText, RangeGauge: cfg.rangeGauge,
+		FixedTempK: cfg.fixedTemp.kelvin, FixedPresText: cfg.fixedPres.text, FixedGauge: cfg.fixedPres.Gauge,
+		FixedPresPa: cfg.fixedPres.Pa, StdPresPa: cfg.stdPa, Cautions: mixtures.Cautions(mix, highPa),
 	}
-	cautions := mixtures.Cautions(mix, highPa)
-
-	var out bytes.Buffer
+	points := func(yield func(i int, s *mixtures.State) error) error {
+		return mix.Stream(context.Background(), cfg.sweep, cfg.fixedTemp.kelvin, cfg.fixedPres.Pa, opts,
+			func(i int, _ float64, s *mixtures.State) error { return yield(i, s) })
+	}
+	// Rows go out as they are computed: a buffered writer over stdout.
+	w := &errWriter{w: a.stdout}
 	switch cfg.format {
 	case formatJSON:
-		err = mixtures.WriteSweepJSON(&out, res, gauge)
+		err = report.WriteSweepJSON(w, rep.Gauge(), points)
 	case formatCSV:
-		err = mixtures.WriteCSV(&out, res.Points, gauge)
+		err = report.WriteSweepCSV(w, rep.Gauge(), points)
 	default:
-		err = writeSweepText(page(&out, cfg.ascii), cfg, mix, res, cautions)
+		var out io.Writer = w
+		if cfg.ascii {
+			out = &report.ASCIIWriter{W: w}
+		}
+		err = report.WriteSweepText(out, rep, points)
+	}
+	if w.err != nil {
+		return ioFailure(fmt.Errorf("writing the output: %v", w.err))
 	}
 	if err != nil {
-		return err
+		return badInput("%s", model.UserMessage(err))
 	}
 	if cfg.format != formatText {
-		a.cautionsToStderr(cautions)
+		a.cautionsToStderr(rep.Cautions)
 	}
-	return a.emit(&out)
+	return nil
 }
 
-func writeSweepText(w io.Writer, cfg sweepConfig, mix *mixtures.Mixture, res *mixtures.SweepResult, cautions []mixtures.Caution) error {
-	var n numbers
-	fmt.Fprintf(w, "Blend  %s\n", cfg.src.label())
-	fmt.Fprintf(w, "       M = %s g/mol\n", n.sig("molar mass", 1000*mix.MolarMassKgPerMol, 6))
-	grid := "linear grid"
-	if cfg.sweep.Log || cfg.sweep.Var == mixtures.SweepPressure {
-		grid = "log grid"
-	}
-	if cfg.sweep.Var == mixtures.SweepTemperature {
-		fmt.Fprintf(w, "Sweep  T %s (%s to %s K), %d points, %s; P = %s\n",
-			strings.TrimSpace(cfg.rangeText), n.short("T", cfg.sweep.From, 6), n.short("T", cfg.sweep.To, 6),
-			cfg.sweep.Steps, grid, pressureText(&n, cfg.fixedPres, cfg.fixedPres.Pa))
-	} else {
-		kind := "absolute"
-		if cfg.rangeGauge {
-			kind = "entered as gauge"
-		}
-		fmt.Fprintf(w, "Sweep  P %s (%s to %s bar %s), %d points, %s; T = %s K\n",
-			strings.TrimSpace(cfg.rangeText), n.short("P", cfg.sweep.From/1e5, 6), n.short("P", cfg.sweep.To/1e5, 6), kind,
-			cfg.sweep.Steps, grid, n.short("T", cfg.fixedTemp.kelvin, 6))
-	}
-	fmt.Fprintf(w, "       P° = %s; μ = μ°(T) + RT ln(xP/P°), on the scale of the elements at 0 K\n\n", stdLabel(cfg.stdPa))
+// errWriter remembers the first write error, so that a closed pipe is
+// reported as an output failure and not as bad input.
+type errWriter struct {
+	w   io.Writer
+	err error
+}
 
-	aligns := []align{}
-	for range 9 + len(mix.Components) {
-		aligns = append(aligns, right)
+func (e *errWriter) Write(p []byte) (int, error) {
+	if e.err != nil {
+		return 0, e.err
 	}
-	t := newTable("  ", aligns...)
-	names := []string{"T", "P", "ρ", "Cp", "γ", "c", "H", "S", "G"}
-	units := []string{"K", "bar", "kg/m³", "J/(mol·K)", "", "m/s", "kJ/mol", "J/(mol·K)", "kJ/mol"}
-	for _, c := range mix.Components {
-		names = append(names, "μ "+c.Species.Formula)
-		units = append(units, "kJ/mol")
-	}
-	t.row(names...)
-	t.row(units...)
-	for i := range res.Points {
-		p := &res.Points[i]
-		cells := []string{
-			n.short("T", p.TempK, 6),
-			n.sig("P", p.PresPa/1e5, 5),
-			n.sig("density", p.DensityKgPerM3, 5),
-			n.sig("Cp", p.CpJPerMolK, 5),
-			n.sig("gamma", p.Gamma, 5),
-			n.sig("speed of sound", p.SoundSpeedMPerS, 5),
-			n.fixed("H", p.HJPerMol/1000, 3),
-			n.sig("S", p.SJPerMolK, 6),
-			n.fixed("G", p.GJPerMol/1000, 3),
-		}
-		for _, sp := range p.Species {
-			cells = append(cells, n.fixed("μ "+sp.Species.Formula, sp.MuJPerMol/1000, 3))
-		}
-		t.row(cells...)
-	}
-	t.write(w)
-	fmt.Fprintln(w)
-
-	// Validity is worst at one end or the other of a monotone sweep.
-	first, last := &res.Points[0], &res.Points[len(res.Points)-1]
-	fmt.Fprintln(w, "Validity at the end points")
-	noted := false
-	for _, end := range []*mixtures.State{first, last} {
-		for _, note := range mixtures.Notes(end, false) {
-			writeWrapped(w, "  ", "    ", fmt.Sprintf("at %s K, %s bar: %s", n.short("T", end.TempK, 6), n.short("P", end.PresPa/1e5, 6), noteText(note)))
-			noted = true
-		}
-	}
-	if !noted {
-		fmt.Fprintln(w, "  no cautions from the model at either end of the sweep")
-	}
-	fmt.Fprintln(w)
-	writeCautions(w, cautions)
-	return n.err()
+	n, err := e.w.Write(p)
+	e.err = err
+	return n, err
 }

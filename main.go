@@ -20,6 +20,7 @@ import (
 	"os"
 	"strings"
 
+	"zmix/model"
 	"zmix/ui"
 )
 
@@ -129,14 +130,15 @@ type cliError struct {
 func (e *cliError) Error() string { return e.msg }
 
 // badInput is an error in what the user typed or saved: exit status 2.
+// Errors among args contribute their user's line, with no package prefix.
 func badInput(format string, args ...any) error {
-	return &cliError{exitUsage, fmt.Sprintf(format, args...)}
+	return &cliError{exitUsage, model.UserMessage(model.Errorf("", format, args...))}
 }
 
 // ioFailure is a file or terminal that could not be read or written:
 // exit status 1.
 func ioFailure(err error) error {
-	return &cliError{exitFailure, err.Error()}
+	return &cliError{exitFailure, model.UserMessage(err)}
 }
 
 // fail reports err, if any, as one line on stderr and returns the exit
@@ -151,24 +153,20 @@ func (a *app) fail(prefix string, err error) int {
 	if errors.As(err, &ce) {
 		code = ce.code
 	}
-	fmt.Fprintf(a.stderr, "%s: %s\n", prefix, oneLine(err.Error()))
+	// One line, and nothing in it that a terminal would act on: the
+	// message may quote a file's contents.
+	fmt.Fprintf(a.stderr, "%s: %s\n", prefix, model.Printable(untypedPrefixes.Replace(model.UserMessage(err))))
 	return code
 }
 
-// packagePrefixes are stripped from engine errors: the user needs to know
-// what was wrong, not which package noticed.
-var packagePrefixes = strings.NewReplacer(
+// untypedPrefixes is transitional: it goes once every engine error is
+// built with model.Errorf (work in flight in mixtures and model).
+var untypedPrefixes = strings.NewReplacer(
 	"mixtures: bad value: ", "",
 	"mixtures: bad sweep: ", "",
 	"mixtures: ", "",
 	"model: ", "",
 )
-
-func oneLine(msg string) string {
-	msg = packagePrefixes.Replace(msg)
-	msg = strings.ReplaceAll(msg, "\r", " ")
-	return strings.ReplaceAll(msg, "\n", " ")
-}
 
 // isTerminal reports whether w is a character device such as a terminal.
 func isTerminal(w io.Writer) bool {

@@ -16,6 +16,7 @@ import (
 	"testing"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 	"zmix/ui"
 )
@@ -242,15 +243,14 @@ func TestStateMatchesEngine(t *testing.T) {
 	}
 
 	// The text readout shows the same figures, rounded (the rounding
-	// itself is checked in TestNumberFormats).
+	// itself is checked in mixtures/report).
 	_, text, _ := zmix(t, "state", "--blend", air, "--temp", "25C", "--pres", "1atm")
-	var n numbers
 	for _, piece := range []string{
-		n.sig("", st.DensityKgPerM3, 5) + "  kg/m³",
-		n.sig("", st.SoundSpeedMPerS, 5) + "  m/s",
-		n.fixed("", st.GJPerMol/1000, 3) + "  kJ/mol",
-		"mixing entropy  " + n.sig("", st.SMixJPerMolK, 5) + " J/(mol·K)",
-		n.sig("", st.Species[0].X, 4),
+		report.Sig(st.DensityKgPerM3, 5) + "  kg/m³",
+		report.Sig(st.SoundSpeedMPerS, 5) + "  m/s",
+		report.Fixed(st.GJPerMol/1000, 3) + "  kJ/mol",
+		"mixing entropy  " + report.Sig(st.SMixJPerMolK, 5) + " J/(mol·K)",
+		report.Sig(st.Species[0].X, 4),
 	} {
 		if !strings.Contains(text, piece) {
 			t.Errorf("text readout lacks %q:\n%s", piece, text)
@@ -677,39 +677,6 @@ func TestNeverNaN(t *testing.T) {
 	}
 }
 
-func TestCheckFinite(t *testing.T) {
-	rec := mixtures.Record{Species: []mixtures.SpeciesRecord{{Name: "N2"}, {Name: "O2", MuJPerMol: math.NaN()}}}
-	err := checkFinite(stateJSON{Record: rec})
-	if err == nil || !strings.Contains(err.Error(), "species[1].mu_J_mol") {
-		t.Errorf("checkFinite = %v, want an error naming species[1].mu_J_mol", err)
-	}
-	rec = mixtures.Record{DensityKgPerM3: math.Inf(1)}
-	if err := checkFinite(rec); err == nil || !strings.Contains(err.Error(), "density_kg_m3") {
-		t.Errorf("checkFinite = %v, want an error naming density_kg_m3", err)
-	}
-	if err := checkFinite(mixtures.Record{}); err != nil {
-		t.Errorf("checkFinite(zero record) = %v, want nil", err)
-	}
-	var n numbers
-	if got := n.sig("x", math.NaN(), 4); got == "NaN" || n.err() == nil {
-		t.Errorf("numbers.sig(NaN) = %q with error %v, want a placeholder and an error", got, n.err())
-	}
-}
-
-// The readout's digits are mixtures.FormatSig's (its table is in
-// mixtures/format_test.go); numbers.sig adds only the finiteness check.
-func TestNumberFormats(t *testing.T) {
-	var n numbers
-	for _, x := range []float64{1.18385, 0, 4e-7, 2.5e7} {
-		if got, want := n.sig("x", x, 5), mixtures.FormatSig(x, 5); got != want {
-			t.Errorf("sig(%v, 5) = %q, want %q as mixtures.FormatSig writes it", x, got, want)
-		}
-	}
-	if n.err() != nil {
-		t.Errorf("finite numbers recorded an error: %v", n.err())
-	}
-}
-
 // TestGolden compares whole text outputs with testdata/golden/*.golden.
 // Each NAME.args holds the arguments, one per line. The goldens use a
 // frozen copy of the air species (testdata/species/frozen-air.cat), so they
@@ -748,4 +715,13 @@ func TestGolden(t *testing.T) {
 			}
 		})
 	}
+}
+
+func isASCII(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if s[i] >= 0x80 {
+			return false
+		}
+	}
+	return true
 }

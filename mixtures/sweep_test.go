@@ -3,6 +3,7 @@ package mixtures
 import (
 	"context"
 	"errors"
+	"fmt"
 	"math"
 	"reflect"
 	"testing"
@@ -195,5 +196,146 @@ func TestSweepCancelAndProgress(t *testing.T) {
 func TestSweepVarString(t *testing.T) {
 	if SweepTemperature.String() != "temperature" || SweepPressure.String() != "pressure" {
 		t.Errorf("names %q, %q", SweepTemperature, SweepPressure)
+	}
+}
+
+// Stream hands out, point by point, exactly the state a direct State call
+// gives, in grid order, reusing one State.
+func TestStreamEqualsState(t *testing.T) {
+	m := mustMixture(t, "SiH4 2%, H2 500ppm, N2 bal", 1e5)
+	for _, sw := range []Sweep{
+		{Var: SweepTemperature, From: 20, To: 3000, Steps: 37},
+		{Var: SweepTemperature, From: 3000, To: 20, Steps: 25, Log: true},
+		{Var: SweepPressure, From: 1, To: 1e7, Steps: 29},
+	} {
+		var first *State
+		next := 0
+		err := m.Stream(context.Background(), sw, 450, 2e5, Options{}, func(i int, x float64, s *State) error {
+			if i != next {
+				t.Fatalf("point %d after %d", i, next-1)
+			}
+			next++
+			if first == nil {
+				first = s
+			} else if s != first {
+				t.Fatalf("%v sweep: point %d in a new State; want the one State reused", sw.Var, i)
+			}
+			if x != sw.Point(i) {
+				t.Fatalf("point %d: x = %g, want %g", i, x, sw.Point(i))
+			}
+			tempK, presPa := sw.Conditions(x, 450, 2e5)
+			if want := mustState(t, m, tempK, presPa); !reflect.DeepEqual(*s, want) {
+				t.Fatalf("%v sweep: point %d (%g) differs from State(%g K, %g Pa)", sw.Var, i, x, tempK, presPa)
+			}
+			return nil
+		})
+		if err != nil || next != sw.Steps {
+			t.Fatalf("%v sweep: %d points, error %v", sw.Var, next, err)
+		}
+	}
+}
+
+// A point function's error stops the sweep at once and comes back as is;
+// a cancelled context stops it too.
+func TestStreamStops(t *testing.T) {
+	m := mustMixture(t, dryAir, 1e5)
+	sw := Sweep{Var: SweepTemperature, From: 300, To: 1500, Steps: 3 * progressEvery}
+	stop := errors.New("enough")
+	n := 0
+	err := m.Stream(context.Background(), sw, 0, 1e5, Options{}, func(i int, x float64, s *State) error {
+		n++
+		if i == 9 {
+			return stop
+		}
+		return nil
+	})
+	if err != stop || n != 10 {
+		t.Errorf("Stream stopped after %d points with %v; want 10 and the point function's error", n, err)
+	}
+	ctx, cancel := context.WithCancel(context.Background())
+	n = 0
+	err = m.Stream(ctx, sw, 0, 1e5, Options{}, func(i int, x float64, s *State) error {
+		n++
+		if i == 0 {
+			cancel()
+		}
+		return nil
+	})
+	if !errors.Is(err, context.Canceled) || n > progressEvery {
+		t.Errorf("cancelled Stream: %d points, error %v; want context.Canceled within %d points", n, err, progressEvery)
+	}
+}
+
+// A log grid between two finite ends stays finite and between them, even
+// where exp(ln x) rounds past an end near the largest float (issue 7,
+// item 16: 1e-300..1.7e308 Pa once gave +Inf at point 199 959).
+func TestSweepGridStaysBetweenEnds(t *testing.T) {
+	cases := []Sweep{
+		{Var: SweepPressure, From: 1e-300, To: 1.7e308, Steps: MaxSweepSteps},
+		{Var: SweepPressure, From: 1.7e308, To: 1e-300, Steps: 1001},
+		{Var: SweepPressure, From: math.SmallestNonzeroFloat64, To: math.MaxFloat64, Steps: 999},
+		{Var: SweepTemperature, From: 1e-3, To: 1e6, Steps: 777, Log: true},
+	}
+	for _, sw := range cases {
+		lo, hi := math.Min(sw.From, sw.To), math.Max(sw.From, sw.To)
+		prev := sw.Point(0)
+		for i := range sw.Steps {
+			x := sw.Point(i)
+			if !(x >= lo && x <= hi) {
+				t.Fatalf("%g..%g: point %d = %g, outside the ends", sw.From, sw.To, i, x)
+			}
+			if (sw.To > sw.From && x < prev) || (sw.To < sw.From && x > prev) {
+				t.Fatalf("%g..%g: point %d = %g steps back from %g", sw.From, sw.To, i, x, prev)
+			}
+			prev = x
+		}
+	}
+}
+
+// The whole grid is checked before the first point is computed: a sweep
+// that cannot be computed calls the point function never.
+func TestStreamChecksFirst(t *testing.T) {
+	m := mustMixture(t, dryAir, 1e5)
+	called := false
+	fn := func(int, float64, *State) error { called = true; return nil }
+	for _, c := range []struct {
+		sw   Sweep
+		want error
+	}{
+		{Sweep{Var: SweepPressure, From: 1e-320, To: 1e5, Steps: 4}, model.ErrPressure},
+		{Sweep{Var: SweepPressure, From: 1e5, To: 1e-320, Steps: 4}, model.ErrPressure},
+		{Sweep{Var: SweepTemperature, From: 300, To: 2 * model.MaxTempK, Steps: 4}, model.ErrTemperature},
+		{Sweep{Var: SweepTemperature, From: 300, To: 300, Steps: 4}, ErrSweep},
+	} {
+		if err := m.Stream(context.Background(), c.sw, 300, 1e5, Options{}, fn); !errors.Is(err, c.want) || called {
+			t.Errorf("%v %g..%g: error %v (point function called: %v); want %v before any point", c.sw.Var, c.sw.From, c.sw.To, err, called, c.want)
+		}
+	}
+	// 1e-300..1.7e308 Pa of dry air: every partial pressure is a normal
+	// float at every point, so the sweep runs to the end.
+	sw := Sweep{Var: SweepPressure, From: 1e-300, To: 1.7e308, Steps: 20_000}
+	n := 0
+	err := m.Stream(context.Background(), sw, 300, 0, Options{}, func(i int, x float64, s *State) error {
+		if name := FirstNonFinite(s); name != "" {
+			return fmt.Errorf("point %d (%g Pa): %s not finite", i, x, name)
+		}
+		n++
+		return nil
+	})
+	if err != nil || n != sw.Steps {
+		t.Errorf("1e-300..1.7e308 Pa: %d points, error %v; want all %d", n, err, sw.Steps)
+	}
+}
+
+func TestSweepVarText(t *testing.T) {
+	for _, v := range []SweepVar{SweepTemperature, SweepPressure} {
+		b, _ := v.MarshalText()
+		var got SweepVar
+		if err := got.UnmarshalText(b); err != nil || got != v {
+			t.Errorf("%v: text %q reads back as %v, %v", v, b, got, err)
+		}
+	}
+	if _, err := ParseSweepVar("X"); !errors.Is(err, ErrSweep) {
+		t.Errorf("ParseSweepVar(X) = %v, want ErrSweep", err)
 	}
 }

@@ -19,8 +19,9 @@ type anatomyPane struct {
 	b    *bench
 	w, h int
 
-	formula string // the species shown; the first one if it is not in the blend
-	scroll  scroller
+	formula      string // the species shown; the first one if it is not in the blend
+	savedFormula string // formula when stateChanged last looked
+	scroll       scroller
 }
 
 func newAnatomyPane(c *Common, b *bench) *anatomyPane { return &anatomyPane{c: c, b: b} }
@@ -43,7 +44,11 @@ func (p *anatomyPane) ShortHelp() []key.Binding {
 	return []key.Binding{k.PrevSpecies, k.NextSpecies}
 }
 
-func (p *anatomyPane) Update(msg tea.KeyMsg) tea.Cmd {
+func (p *anatomyPane) Update(m tea.Msg) tea.Cmd {
+	msg, ok := m.(tea.KeyMsg)
+	if !ok {
+		return nil
+	}
 	k := p.c.Keys.Anatomy
 	switch {
 	case key.Matches(msg, k.PrevSpecies):
@@ -81,7 +86,20 @@ func (p *anatomyPane) step(by int) {
 	p.formula = p.b.state.Species[(i+by+n)%n].Species.Formula
 }
 
-func (p *anatomyPane) title() string {
+func (p *anatomyPane) Sync() tea.Cmd { p.refresh(); return nil }
+
+func (p *anatomyPane) More() (above, below bool) { return p.scroll.more() }
+
+// The species shown is kept with the workbench state.
+func (p *anatomyPane) saveState(st *savedState)    { st.AnatomySpecies = p.formula }
+func (p *anatomyPane) restoreState(st *savedState) { p.formula = st.AnatomySpecies; p.refresh() }
+func (p *anatomyPane) stateChanged() bool {
+	c := p.formula != p.savedFormula
+	p.savedFormula = p.formula
+	return c
+}
+
+func (p *anatomyPane) Title() string {
 	if i := p.index(); i >= 0 {
 		return "Anatomy: " + p.b.state.Species[i].Species.Formula
 	}

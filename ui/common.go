@@ -15,6 +15,10 @@ type Common struct {
 	Keys          *KeyMap
 	ASCII         bool
 	Catalogue     *model.Catalogue
+
+	// missingGlyph, when set (by tests), hears of every non-ASCII glyph
+	// that ASCII mode could only write as "?".
+	missingGlyph func(rune)
 }
 
 // Inputs is the last valid computation input: what every result pane

@@ -32,8 +32,8 @@ func checkCrash(t *testing.T, g *guard, dir, wantAmount string) {
 	if !strings.HasPrefix(g.report, dir) {
 		t.Errorf("report %s not in the state directory %s", g.report, dir)
 	}
-	if st := readState(t, dir); st.Recipe[0].Amount != wantAmount {
-		t.Errorf("state saved with %q, want %q", st.Recipe[0].Amount, wantAmount)
+	if st := readState(t, dir); st.Blend.Components[0].Amount != wantAmount {
+		t.Errorf("state saved with %q, want %q", st.Blend.Components[0].Amount, wantAmount)
 	}
 	if err := g.exitError(); !strings.Contains(err.Error(), g.report) {
 		t.Errorf("exit error %q does not name the report", err)
@@ -51,7 +51,7 @@ func TestPanicInUpdate(t *testing.T) {
 	g, r := testGuard(t, dir)
 	press(t, r, "enter", "ctrl+u")
 	typeIn(t, r, "6%")
-	r.recipe = nil // the next key to the recipe pane panics
+	r.panes[paneRecipe] = panicPane{r.panes[paneRecipe]} // the next key to the recipe pane panics
 	_, cmd := g.Update(testKey("x"))
 	if !returnsQuit(cmd) {
 		t.Errorf("no quit after a panic in Update")
@@ -64,7 +64,7 @@ func TestPanicInView(t *testing.T) {
 	g, r := testGuard(t, dir)
 	killed := false
 	g.kill = func() { killed = true }
-	r.props = nil // the headline under the recipe needs it
+	r.panes[paneRecipe] = panicPane{r.panes[paneRecipe]} // drawing the recipe panics
 	g.View()
 	if !killed {
 		t.Errorf("a panic in View did not end the program")

@@ -17,6 +17,14 @@
 //	              and electronic shares of S and Cp, its characteristic
 //	              temperatures and the model's validity notes
 //
+// Every pane satisfies one interface (panes.go): size, update, view, key
+// help, title, whether it is editing, sync and scroll marks. The root holds
+// them in one list, in Tab order, and only paneSpecs, the registrations,
+// names their types. Abilities only some panes have (a state of their own
+// to save, a sweep to export, a one-line headline, a preferred height) are
+// small interfaces the root looks for. The root itself is split by
+// concern: root.go routes, prompts.go, autosave.go, overlay.go, view.go.
+//
 // A safety strip with the blend's hazard classes and the line that defers
 // to site codes, data sheets and licensed practice stays on screen while
 // any caution applies.

@@ -44,17 +44,17 @@ func TestAutosaveAndRestore(t *testing.T) {
 	typeIn(t, r, "350 K")
 	press(t, r, "enter", "s", "g", "5", "right")
 	st := readState(t, dir)
-	if st.Recipe[1] != (entry{"NH3", "2%x"}) || st.Temperature != "350 K" || st.StandardPressure != "1 atm" ||
+	if st.Blend.Components[1] != (mixtures.FileComponent{Species: "NH3", Amount: "2%x"}) || st.Blend.Temperature != "350 K" || st.Blend.StandardPressure != "1 atm" ||
 		st.PressureView != "gauge" || st.Pane != "anatomy" || st.AnatomySpecies != "NH3" {
 		t.Errorf("saved state: %+v", st)
 	}
-	if st.LastValid == nil || st.LastValid.Recipe[1].Amount != "2%" {
+	if st.LastValid == nil || st.LastValid.Components[1].Amount != "2%" {
 		t.Errorf("last valid recipe not saved: %+v", st.LastValid)
 	}
 
 	r2 := testRoot(t, 100, 30, testRootOpts{stateDir: dir})
 	if r2.b.entries[1].Amount != "2%x" || r2.b.tempText != "350 K" || !r2.b.stdAtm || !r2.b.showGauge || r2.focus != paneAnatomy {
-		t.Errorf("restored: entries %v temp %q stdAtm %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.stdAtm, r2.b.showGauge, paneNames[r2.focus])
+		t.Errorf("restored: entries %v temp %q stdAtm %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.stdAtm, r2.b.showGauge, r2.focus.name())
 	}
 	// The typo is still there, and so is the last valid blend behind it.
 	if r2.b.rowErr[1] == "" || r2.b.in.Mixture == nil || r2.b.in.TempK != 350 {
@@ -63,8 +63,8 @@ func TestAutosaveAndRestore(t *testing.T) {
 	if x, _ := r2.b.moleFraction("NH3"); x != 0.02 {
 		t.Errorf("last valid x(NH3) = %g, want 0.02 (from 2%%, the text before the typo)", x)
 	}
-	if r2.anatomy.formula != "NH3" {
-		t.Errorf("anatomy species %q", r2.anatomy.formula)
+	if r2.panes[paneAnatomy].(*anatomyPane).formula != "NH3" {
+		t.Errorf("anatomy species %q", r2.panes[paneAnatomy].(*anatomyPane).formula)
 	}
 }
 
@@ -110,8 +110,8 @@ func TestSignalSavesState(t *testing.T) {
 		if cmd := r.Update(signalMsg{sig}); !returnsQuit(cmd) {
 			t.Fatalf("%v: no quit", sig)
 		}
-		if st := readState(t, dir); st.Recipe[0].Amount != "3.5%" {
-			t.Errorf("%v: saved amount %q, want 3.5%%", sig, st.Recipe[0].Amount)
+		if st := readState(t, dir); st.Blend.Components[0].Amount != "3.5%" {
+			t.Errorf("%v: saved amount %q, want 3.5%%", sig, st.Blend.Components[0].Amount)
 		}
 	}
 }
@@ -243,7 +243,7 @@ func TestExportReadout(t *testing.T) {
 func TestExportSweep(t *testing.T) {
 	dir := t.TempDir()
 	r := testRoot(t, 80, 24, testRootOpts{stateDir: dir})
-	res := r.sweep.Result()
+	res := r.panes[paneSweep].(*sweepPane).Result()
 	if res == nil {
 		t.Fatal("no sweep after start-up")
 	}

@@ -1,6 +1,10 @@
 package ui
 
-import "github.com/charmbracelet/bubbles/key"
+import (
+	"fmt"
+
+	"github.com/charmbracelet/bubbles/key"
+)
 
 // KeyMap is every key binding of the workbench, with its help text.
 type KeyMap struct {
@@ -13,9 +17,9 @@ type KeyMap struct {
 
 	// Interrupt quits even while a field is being typed in.
 	Interrupt key.Binding
-	Safety    key.Binding // the full caution texts
-	Jump      [paneCount]key.Binding
-	JumpHelp  key.Binding // help text for Jump, matches nothing
+	Safety    key.Binding   // the full caution texts
+	Jump      []key.Binding // by paneID: the pane's number
+	JumpHelp  key.Binding   // help text for Jump, matches nothing
 	SaveBlend key.Binding
 	OpenBlend key.Binding
 	Export    key.Binding
@@ -140,10 +144,11 @@ func DefaultKeyMap() *KeyMap {
 			NextSpecies: key.NewBinding(key.WithKeys("right", "]"), key.WithHelp("→/]", "species: next one")),
 		},
 	}
-	k.JumpHelp = key.NewBinding(key.WithHelp("1-5", "go to a pane by its number"))
-	for i := range k.Jump {
+	n := min(paneCount(), 9)
+	k.JumpHelp = key.NewBinding(key.WithHelp(fmt.Sprintf("1-%d", n), "go to a pane by its number"))
+	for i := range n {
 		d := string(rune('1' + i))
-		k.Jump[i] = key.NewBinding(key.WithKeys(d), key.WithHelp(d, "go to "+paneNames[i]))
+		k.Jump = append(k.Jump, key.NewBinding(key.WithKeys(d), key.WithHelp(d, "go to "+paneSpecs[i].name)))
 	}
 	return k
 }

@@ -6,46 +6,12 @@ import (
 	"github.com/charmbracelet/lipgloss"
 )
 
-// paneID names the workbench's panes, in Tab order.
-type paneID int
-
-const (
-	paneRecipe paneID = iota
-	paneSetpoint
-	paneProperties
-	paneSweep
-	paneAnatomy
-	paneCount
-)
-
-// paneNames are the panes' names on screen; paneKeys name them in the
-// saved state.
-var (
-	paneNames = [paneCount]string{"Recipe", "Setpoint", "Properties", "Sweep", "Anatomy"}
-	paneKeys  = [paneCount]string{"recipe", "setpoint", "properties", "sweep", "anatomy"}
-)
-
-func paneByKey(s string) (paneID, bool) {
-	for i, k := range paneKeys {
-		if k == s {
-			return paneID(i), true
-		}
-	}
-	return 0, false
-}
-
-// isViewer reports whether a pane shows results rather than inputs.
-func (id paneID) isViewer() bool {
-	return id == paneProperties || id == paneSweep || id == paneAnatomy
-}
-
 // The smallest screen the workbench draws on, and the sizes from which it
 // shows more panes at once.
 const (
 	minWidth, minHeight     = 64, 18
 	splitWidth, splitHeight = 100, 24
 	fullWidth, fullHeight   = 120, 36
-	setpointBoxHeight       = 8
 )
 
 type layoutKind int
@@ -67,16 +33,19 @@ type layout struct {
 	kind      layoutKind
 	bodyH     int
 	leftW     int
-	headline  bool // single layout: a line of key figures under input panes
-	boxes     [paneCount]box
-	visible   [paneCount]bool
+	headline  bool     // single layout: a line of key figures under input panes
+	boxes     []box    // by paneID
+	visible   []bool   // by paneID
 	leftPanes []paneID // top to bottom, split and full layouts
 	right     []paneID
 }
 
-// computeLayout places the panes in a body of w × bodyH cells.
-func computeLayout(w, h, bodyH int, focus, viewer paneID, nEntries, nSpecies int) layout {
-	l := layout{bodyH: bodyH}
+// computeLayout places the panes in a body of w × bodyH cells. Where a
+// pane goes follows from its role in paneSpecs; only heights in a column
+// are asked of the panes themselves.
+func computeLayout(w, h, bodyH int, focus, viewer paneID, panes []pane) layout {
+	n := len(panes)
+	l := layout{bodyH: bodyH, boxes: make([]box, n), visible: make([]bool, n)}
 	switch {
 	case w < minWidth || h < minHeight || bodyH < 6:
 		l.kind = layoutTooSmall
@@ -88,58 +57,96 @@ func computeLayout(w, h, bodyH int, focus, viewer paneID, nEntries, nSpecies int
 	default:
 		l.kind = layoutSingle
 	}
+	var inputs, results, leftCol, rightCol []paneID
+	for id := range panes {
+		switch paneSpecs[id].role {
+		case roleInput:
+			inputs = append(inputs, paneID(id))
+			leftCol = append(leftCol, paneID(id))
+		case roleResultLeft:
+			results = append(results, paneID(id))
+			leftCol = append(leftCol, paneID(id))
+		default:
+			results = append(results, paneID(id))
+			rightCol = append(rightCol, paneID(id))
+		}
+	}
 	switch l.kind {
 	case layoutSingle:
 		// The inputs share the screen when there is room, with a line of
 		// key figures under them; a result pane has the screen to itself.
 		l.headline = !focus.isViewer()
-		for _, id := range []paneID{paneProperties, paneSweep, paneAnatomy} {
+		for _, id := range results {
 			l.boxes[id] = box{w, bodyH}
 		}
-		if recipeH := bodyH - 1 - setpointBoxHeight; recipeH >= 6 {
-			l.boxes[paneRecipe] = box{w, recipeH}
-			l.boxes[paneSetpoint] = box{w, setpointBoxHeight}
+		if l.stack(inputs, w, bodyH-1, panes) >= 6 {
 			if l.headline {
 				l.leftW = w
-				l.leftPanes = []paneID{paneRecipe, paneSetpoint}
-				l.visible[paneRecipe], l.visible[paneSetpoint] = true, true
+				l.leftPanes = inputs
+				for _, id := range inputs {
+					l.visible[id] = true
+				}
 			}
 		} else {
-			l.boxes[paneRecipe] = box{w, bodyH - 1}
-			l.boxes[paneSetpoint] = box{w, bodyH - 1}
+			for _, id := range inputs {
+				l.boxes[id] = box{w, bodyH - 1}
+			}
 		}
 		l.visible[focus] = true
 	case layoutSplit:
 		l.leftW = max(38, min(50, w*2/5))
-		rw := w - l.leftW
-		l.boxes[paneSetpoint] = box{l.leftW, setpointBoxHeight}
-		l.boxes[paneRecipe] = box{l.leftW, bodyH - setpointBoxHeight}
-		for _, id := range []paneID{paneProperties, paneSweep, paneAnatomy} {
-			l.boxes[id] = box{rw, bodyH}
+		l.stack(inputs, l.leftW, bodyH, panes)
+		for _, id := range results {
+			l.boxes[id] = box{w - l.leftW, bodyH}
 		}
-		l.leftPanes = []paneID{paneRecipe, paneSetpoint}
+		l.leftPanes = inputs
 		l.right = []paneID{viewer}
-		l.visible[paneRecipe], l.visible[paneSetpoint], l.visible[viewer] = true, true, true
+		for _, id := range inputs {
+			l.visible[id] = true
+		}
+		l.visible[viewer] = true
 	case layoutFull:
 		l.leftW = max(40, min(56, w*3/8))
-		rw := w - l.leftW
-		rest := bodyH - setpointBoxHeight
-		recipeH := max(7, min(nEntries+5, rest/2))
-		l.boxes[paneRecipe] = box{l.leftW, recipeH}
-		l.boxes[paneSetpoint] = box{l.leftW, setpointBoxHeight}
-		l.boxes[paneAnatomy] = box{l.leftW, rest - recipeH}
-		// The readout takes what its one-column form needs, but leaves the
-		// plot at least 16 rows.
-		propsH := max(10, min(20+nSpecies, bodyH-16))
-		l.boxes[paneProperties] = box{rw, propsH}
-		l.boxes[paneSweep] = box{rw, bodyH - propsH}
-		l.leftPanes = []paneID{paneRecipe, paneSetpoint, paneAnatomy}
-		l.right = []paneID{paneProperties, paneSweep}
+		l.stack(leftCol, l.leftW, bodyH, panes)
+		l.stack(rightCol, w-l.leftW, bodyH, panes)
+		l.leftPanes, l.right = leftCol, rightCol
 		for id := range l.visible {
 			l.visible[id] = true
 		}
 	}
 	return l
+}
+
+// stack gives the panes of one column, w wide, heights that fill avail
+// rows: fixed heights first, then each flexible pane what it asks of the
+// rows left (or an equal share), the last one the rest. It returns the
+// smallest flexible height, so that a layout can see whether they fit.
+func (l *layout) stack(ids []paneID, w, avail int, panes []pane) int {
+	rest := avail
+	var flex []paneID
+	for _, id := range ids {
+		if fh := paneSpecs[id].fixedH; fh > 0 {
+			l.boxes[id] = box{w, fh}
+			rest -= fh
+		} else {
+			flex = append(flex, id)
+		}
+	}
+	smallest, left := rest, rest
+	for i, id := range flex {
+		h := left
+		if i < len(flex)-1 {
+			if hp, ok := panes[id].(heightPane); ok {
+				h = hp.wantHeight(rest)
+			} else {
+				h = left / (len(flex) - i)
+			}
+		}
+		l.boxes[id] = box{w, h}
+		left -= h
+		smallest = min(smallest, h)
+	}
+	return smallest
 }
 
 // frame draws a pane's border with its title in the top edge, and marks

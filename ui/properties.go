@@ -5,6 +5,9 @@ import (
 
 	"github.com/charmbracelet/lipgloss"
 
+	"zmix/mixtures"
+	"zmix/model"
+
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
 )
@@ -41,7 +44,11 @@ func (p *propertiesPane) ShortHelp() []key.Binding {
 	return []key.Binding{k.Up, k.Down}
 }
 
-func (p *propertiesPane) Update(msg tea.KeyMsg) tea.Cmd {
+func (p *propertiesPane) Update(m tea.Msg) tea.Cmd {
+	msg, ok := m.(tea.KeyMsg)
+	if !ok {
+		return nil
+	}
 	scrollKeys(&p.scroll, p.c.Keys.Scroll, msg)
 	return nil
 }
@@ -65,6 +72,22 @@ func scrollKeys(s *scroller, k ScrollKeys, msg tea.KeyMsg) {
 }
 
 func (p *propertiesPane) View() string { return p.scroll.view() }
+
+func (p *propertiesPane) Title() string { return "Properties" }
+
+func (p *propertiesPane) Sync() tea.Cmd { p.refresh(); return nil }
+
+func (p *propertiesPane) More() (above, below bool) { return p.scroll.more() }
+
+// wantHeight is what the one-column readout needs, leaving 16 rows of
+// the column to the panes under it (the plot).
+func (p *propertiesPane) wantHeight(avail int) int {
+	nSpecies := 0
+	if p.b.in.Mixture != nil {
+		nSpecies = len(p.b.in.Mixture.Components) + len(cautionNotes(p.b.notes)) // a caution line each
+	}
+	return max(10, min(20+nSpecies, avail-16))
+}
 
 // readoutRow is one figure of the blend, per mole and per kilogram.
 type readoutRow struct {
@@ -134,6 +157,23 @@ func (p *propertiesPane) render() []string {
 	}
 	rows := p.readoutRows()
 	n := len(p.b.state.Species)
+	// The model's own cautions stand under the conditions they concern,
+	// not only in Anatomy: whole when the pane has the rows, else one line
+	// each, cut between words; the safety overlay has them in full.
+	notes := cautionNotes(p.b.notes)
+	var full []string
+	for _, note := range notes {
+		full = append(full, wrap(t("! "+noteLine(note)), p.w)...)
+	}
+	if len(lines)+len(full)+1+len(rows)+1+4+n <= p.h {
+		for _, l := range full {
+			add(s.Caution.Render(l))
+		}
+	} else {
+		for _, note := range notes {
+			add(s.Caution.Render(p.c.shorten("! "+noteLine(note), p.w)))
+		}
+	}
 	oneCol := len(lines) + 1 + len(rows) + 1 + 4 + n
 	if p.h < oneCol && p.w >= 60 {
 		p.twoColumns(rows, add)
@@ -250,13 +290,78 @@ func (p *propertiesPane) speciesTable(add func(string)) {
 	}
 }
 
-// headline is the blend in one line, for layouts that do not show the
-// readout beside the recipe.
-func (p *propertiesPane) headline() string {
+// headlineKeys are the figures of the one-line readout, most wanted first;
+// those that do not fit the width are left out whole.
+var headlineKeys = []string{"M", "rho", "Cp", "gamma", "c"}
+
+// headline is the blend in one line of w cells, for layouts that do not
+// show the readout beside the recipe. While an entry is in error the
+// figures are those of the last valid state, and the line says so, as
+// the readout does.
+func (p *propertiesPane) headline(w int) string {
+	s := p.c.Styles
+	t := p.c.Text
 	if p.b.stateErr != "" || !p.b.in.Valid() {
-		return p.c.Text(p.b.stateErr)
+		return fitLine(s.Error.Render(p.c.shorten(p.b.stateErr, w)), w)
 	}
+	lead, leadStyle := "= ", s.Muted
+	if !p.b.valid() {
+		lead, leadStyle = "last valid: ", s.Warning
+	}
+	line := leadStyle.Render(t(lead))
+	used := lipgloss.Width(t(lead))
 	st := &p.b.state
-	return p.c.Text("M " + sig(1000*st.MolarMassKgPerMol, 5) + " g/mol  ρ " + sig(st.DensityKgPerM3, 4) + " kg/m³  Cp " +
-		sig(st.CpJPerMolK, 4) + " J/(mol·K)  γ " + sig(st.Gamma, 4) + "  c " + sig(st.SoundSpeedMPerS, 4) + " m/s")
+	for i, k := range headlineKeys {
+		q, ok := mixtures.QuantityByKey(k)
+		if !ok {
+			continue
+		}
+		sym, unit := q.Symbol, q.Unit
+		if p.c.ASCII {
+			sym, unit = q.SymbolASCII, q.UnitASCII
+		}
+		item := sym + " " + quantityText(q, q.Get(st))
+		if unit != "" {
+			item += " " + unit
+		}
+		if i > 0 {
+			item = "  " + item
+		}
+		if used+lipgloss.Width(item) > w {
+			break
+		}
+		line += s.Value.Render(item)
+		used += lipgloss.Width(item)
+	}
+	return fitLine(line, w)
+}
+
+// quantityText writes a figure in display units with the digits its row
+// of the quantity table gives.
+func quantityText(q *mixtures.Quantity, si float64) string {
+	v := si * q.Scale
+	if q.Digits.Decimals > 0 {
+		return fixed(v, q.Digits.Decimals)
+	}
+	return sig(v, q.Digits.Sig)
+}
+
+// cautionNotes are the validity notes at caution level or worse: those the
+// workbench keeps in sight, as it does the safety strip.
+func cautionNotes(notes []mixtures.StateNote) []mixtures.StateNote {
+	var out []mixtures.StateNote
+	for _, n := range notes {
+		if n.Severity >= model.Caution {
+			out = append(out, n)
+		}
+	}
+	return out
+}
+
+// noteLine is a validity note as the state command writes it.
+func noteLine(n mixtures.StateNote) string {
+	if n.Species == "" {
+		return n.Severity.String() + ": " + n.Text
+	}
+	return n.Severity.String() + ": " + n.Species + ": " + n.Text
 }

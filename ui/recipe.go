@@ -32,12 +32,13 @@ type recipePane struct {
 	hits   []*model.Species
 	hit    int
 	msg    string // the pane's last remark, e.g. why normalise refused
+	loads  uint64 // the bench's loads when last synced
 
 	scroll scroller
 }
 
 func newRecipePane(c *Common, b *bench) *recipePane {
-	p := &recipePane{c: c, b: b, amount: newField(c), search: newField(c)}
+	p := &recipePane{c: c, b: b, amount: newField(c), search: newField(c), loads: b.loads}
 	return p
 }
 
@@ -74,7 +75,11 @@ func (p *recipePane) ShortHelp() []key.Binding {
 	return []key.Binding{k.Add, k.Edit, k.Balance, k.Remove, k.Normalise}
 }
 
-func (p *recipePane) Update(msg tea.KeyMsg) tea.Cmd {
+func (p *recipePane) Update(m tea.Msg) tea.Cmd {
+	msg, ok := m.(tea.KeyMsg)
+	if !ok {
+		return nil
+	}
 	k := p.c.Keys.Recipe
 	var cmd tea.Cmd
 	switch p.mode {
@@ -298,8 +303,23 @@ func anyErr(errs []string) bool {
 
 func (p *recipePane) View() string { return p.scroll.view() }
 
-// title names the pane in its frame.
-func (p *recipePane) title() string {
+// Sync follows the document; a newly loaded file starts at its first row.
+func (p *recipePane) Sync() tea.Cmd {
+	if p.loads != p.b.loads {
+		p.loads, p.sel = p.b.loads, 0
+	}
+	p.refresh()
+	return nil
+}
+
+func (p *recipePane) More() (above, below bool) { return p.scroll.more() }
+
+// wantHeight is a row per entry and the frame, header and a spare row,
+// but no more than half the column.
+func (p *recipePane) wantHeight(avail int) int { return max(7, min(len(p.b.entries)+5, avail/2)) }
+
+// Title names the pane in its frame.
+func (p *recipePane) Title() string {
 	if n := len(p.b.entries); n > 0 {
 		return fmt.Sprintf("Recipe (%d)", n)
 	}

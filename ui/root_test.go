@@ -21,10 +21,10 @@ func TestRootFocusKeys(t *testing.T) {
 	for _, s := range steps {
 		press(t, r, s.key)
 		if r.focus != s.want {
-			t.Fatalf("after %s: focus %s, want %s", s.key, paneNames[r.focus], paneNames[s.want])
+			t.Fatalf("after %s: focus %s, want %s", s.key, r.focus.name(), s.want.name())
 		}
-		if !strings.Contains(r.View(), "["+string(rune('1'+s.want))+" "+paneNames[s.want]+"]") {
-			t.Errorf("tab bar does not mark %s:\n%s", paneNames[s.want], r.View())
+		if !strings.Contains(r.View(), "["+string(rune('1'+s.want))+" "+s.want.name()+"]") {
+			t.Errorf("tab bar does not mark %s:\n%s", s.want.name(), r.View())
 		}
 	}
 }
@@ -45,8 +45,8 @@ func TestRootEditingTakesLetters(t *testing.T) {
 		t.Errorf("typed text = %q, want q?3!", got)
 	}
 	press(t, r, "esc")
-	if r.setpoint.Editing() || r.b.tempText != "22 C" {
-		t.Errorf("esc: editing %v, text %q", r.setpoint.Editing(), r.b.tempText)
+	if r.panes[paneSetpoint].Editing() || r.b.tempText != "22 C" {
+		t.Errorf("esc: editing %v, text %q", r.panes[paneSetpoint].Editing(), r.b.tempText)
 	}
 	if !press(t, r, "t", "ctrl+c") {
 		t.Errorf("ctrl+c did not quit while typing")
@@ -57,18 +57,18 @@ func TestRootEditingTakesLetters(t *testing.T) {
 // keys; esc closes it.
 func TestRootHelpOverlay(t *testing.T) {
 	r := testRoot(t, 120, 60, testRootOpts{})
-	for id := paneID(0); id < paneCount; id++ {
+	for id := paneID(0); id < paneID(paneCount()); id++ {
 		r.setFocus(id)
 		press(t, r, "?")
 		if r.overlay != overlayHelp {
-			t.Fatalf("%s: ? did not open the help", paneNames[id])
+			t.Fatalf("%s: ? did not open the help", id.name())
 		}
 		r.overlayScroll.setHeight(1000)
 		v := r.overlayScroll.view()
-		for _, b := range append(r.paneKeyHelp(id), r.c.Keys.globalHelp()...) {
+		for _, b := range append(r.panes[id].KeyHelp(), r.c.Keys.globalHelp()...) {
 			h := b.Help()
 			if !strings.Contains(v, h.Key) || !strings.Contains(v, h.Desc) {
-				t.Errorf("%s: help lacks %q %q", paneNames[id], h.Key, h.Desc)
+				t.Errorf("%s: help lacks %q %q", id.name(), h.Key, h.Desc)
 			}
 		}
 		press(t, r, "esc")
@@ -158,24 +158,24 @@ func TestRootScreenFits(t *testing.T) {
 	for _, size := range [][2]int{{64, 18}, {80, 23}, {80, 24}, {100, 30}, {119, 40}, {120, 40}, {200, 60}} {
 		for _, ascii := range []bool{false, true} {
 			r := testRoot(t, size[0], size[1], testRootOpts{ascii: ascii})
-			for id := paneID(0); id < paneCount; id++ {
+			for id := paneID(0); id < paneID(paneCount()); id++ {
 				r.setFocus(id)
 				for _, keys := range [][]string{nil, {"?"}, {"!"}} {
 					press(t, r, keys...)
 					v := r.View()
 					lines := strings.Split(v, "\n")
 					if len(lines) != size[1] {
-						t.Errorf("%v ascii=%v %s %v: %d lines", size, ascii, paneNames[id], keys, len(lines))
+						t.Errorf("%v ascii=%v %s %v: %d lines", size, ascii, id.name(), keys, len(lines))
 					}
 					for _, l := range lines {
 						if lipgloss.Width(l) > size[0] {
-							t.Errorf("%v %s: line of %d cells: %q", size, paneNames[id], lipgloss.Width(l), l)
+							t.Errorf("%v %s: line of %d cells: %q", size, id.name(), lipgloss.Width(l), l)
 						}
 					}
 					if ascii {
 						for i := 0; i < len(v); i++ {
 							if v[i] >= utf8.RuneSelf {
-								t.Fatalf("%v %s %v: non-ASCII in ASCII mode: %q", size, paneNames[id], keys, lineAt(v, i))
+								t.Fatalf("%v %s %v: non-ASCII in ASCII mode: %q", size, id.name(), keys, lineAt(v, i))
 							}
 						}
 					}
@@ -213,7 +213,7 @@ func TestRootLayouts(t *testing.T) {
 		v := r.View()
 		for _, id := range c.visible {
 			if !strings.Contains(v, paneTitleText(r, id)) {
-				t.Errorf("%d×%d: %s not on screen", c.w, c.h, paneNames[id])
+				t.Errorf("%d×%d: %s not on screen", c.w, c.h, id.name())
 			}
 		}
 	}
@@ -241,8 +241,8 @@ func TestRootSafetyStrip(t *testing.T) {
 func TestRootCoalescedKeys(t *testing.T) {
 	r := testRoot(t, 80, 24, testRootOpts{stateDir: t.TempDir()})
 	settle(t, r, r.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune("2t")}))
-	if r.focus != paneSetpoint || !r.setpoint.Editing() {
-		t.Fatalf("after \"2t\" in one message: focus %d, editing %v; want Setpoint, editing", r.focus, r.setpoint.Editing())
+	if r.focus != paneSetpoint || !r.panes[paneSetpoint].Editing() {
+		t.Fatalf("after \"2t\" in one message: focus %d, editing %v; want Setpoint, editing", r.focus, r.panes[paneSetpoint].Editing())
 	}
 	press(t, r, "ctrl+u")
 	settle(t, r, r.Update(tea.KeyMsg{Type: tea.KeyRunes, Runes: []rune("350")}))

@@ -13,11 +13,23 @@ const maxSafetyClassLines = 2
 // safetyLines is the strip that stays on screen while any caution applies:
 // the hazard classes with their species, then the line that defers to the
 // site's codes, the data sheets and licensed practice, never cut.
-func safetyLines(c *Common, cautions []mixtures.Caution, w int) []string {
-	if len(cautions) == 0 || w <= 0 {
+//
+// The model's validity cautions (a species near condensing, real-gas
+// effects) get a line of their own at the top, so that they stay in sight
+// whichever pane is shown.
+func safetyLines(c *Common, cautions []mixtures.Caution, notes []mixtures.StateNote, w int) []string {
+	notes = cautionNotes(notes)
+	if len(cautions) == 0 && len(notes) == 0 || w <= 0 {
 		return nil
 	}
 	s := c.Styles
+	var out []string
+	if len(notes) > 0 {
+		out = append(out, s.Caution.Render(c.shorten(validityMarker(c, notes), w)))
+	}
+	if len(cautions) == 0 {
+		return append(out, s.Warning.Render(c.shorten(mixtures.DeferLine, w)))
+	}
 	parts := make([]string, len(cautions))
 	for i, ca := range cautions {
 		parts[i] = ca.Title
@@ -34,7 +46,6 @@ func safetyLines(c *Common, cautions []mixtures.Caution, w int) []string {
 		cut := max(0, min(len(last), w-len([]rune(more))))
 		classes[maxSafetyClassLines-1] = string(last[:cut]) + more
 	}
-	var out []string
 	for _, l := range classes {
 		out = append(out, s.Caution.Render(l))
 	}
@@ -44,13 +55,49 @@ func safetyLines(c *Common, cautions []mixtures.Caution, w int) []string {
 	return out
 }
 
-// safetyDetail is the full text of every caution, for the overlay.
-func safetyDetail(c *Common, cautions []mixtures.Caution, w int) []string {
-	s := c.Styles
-	if len(cautions) == 0 {
-		return []string{s.Muted.Render(c.Text("No caution applies to this blend at this pressure. Gases still call for the care of the data sheets."))}
+// validityMarker names the species the model's cautions concern, ahead
+// of the first caution's text: "MODEL CAUTION (NH3): T is within ...".
+func validityMarker(c *Common, notes []mixtures.StateNote) string {
+	var who []string
+	seen := map[string]bool{}
+	for _, n := range notes {
+		name := n.Species
+		if name == "" {
+			name = "blend"
+		}
+		if !seen[name] {
+			seen[name] = true
+			who = append(who, name)
+		}
 	}
+	head := "MODEL CAUTION"
+	if len(notes) > 1 {
+		head = "MODEL CAUTIONS"
+	}
+	return head + " (" + strings.Join(who, ", ") + ") [" + c.Keys.Safety.Help().Key + " details]: " + notes[0].Text
+}
+
+// safetyDetail is the full text of every caution, for the overlay: the
+// model's validity cautions first, then the hazard classes.
+func safetyDetail(c *Common, cautions []mixtures.Caution, notes []mixtures.StateNote, w int) []string {
+	s := c.Styles
 	var out []string
+	notes = cautionNotes(notes)
+	for _, n := range notes {
+		for i, l := range wrap(c.Text(noteLine(n)), w-2) {
+			if i == 0 {
+				out = append(out, s.Caution.Render("* "+l))
+			} else {
+				out = append(out, "  "+l)
+			}
+		}
+	}
+	if len(notes) > 0 {
+		out = append(out, "")
+	}
+	if len(cautions) == 0 {
+		return append(out, s.Muted.Render(c.Text("No hazard class applies to this blend at this pressure. Gases still call for the care of the data sheets.")))
+	}
 	for _, ca := range cautions {
 		for i, l := range wrap(c.Text(mixtures.FormatCaution(ca)), w-2) {
 			if i == 0 {

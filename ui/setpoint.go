@@ -60,7 +60,11 @@ func (p *setpointPane) ShortHelp() []key.Binding {
 	return []key.Binding{k.Temperature, k.Pressure, k.Standard, k.Gauge}
 }
 
-func (p *setpointPane) Update(msg tea.KeyMsg) tea.Cmd {
+func (p *setpointPane) Update(m tea.Msg) tea.Cmd {
+	msg, ok := m.(tea.KeyMsg)
+	if !ok {
+		return nil
+	}
 	var cmd tea.Cmd
 	if p.editing {
 		switch {
@@ -214,3 +218,9 @@ func (p *setpointPane) refresh() {
 }
 
 func (p *setpointPane) View() string { return p.scroll.view() }
+
+func (p *setpointPane) Title() string { return "Setpoint" }
+
+func (p *setpointPane) Sync() tea.Cmd { p.refresh(); return nil }
+
+func (p *setpointPane) More() (above, below bool) { return p.scroll.more() }

@@ -37,6 +37,7 @@ var sweepVarNames = [2]string{"T", "P"}
 
 type sweepPane struct {
 	c    *Common
+	b    *bench // the document whose inputs are swept; nil in tests of the pane alone
 	w, h int
 
 	// In force: always a valid sweep. applied remembers the last valid
@@ -79,11 +80,27 @@ type sweepPane struct {
 	view      string
 }
 
+// newBenchSweepPane is the workbench's sweep pane, which sweeps the
+// bench's inputs.
+func newBenchSweepPane(c *Common, b *bench) *sweepPane {
+	p := newSweepPane(c, DefaultSweepSettings())
+	p.b = b
+	return p
+}
+
 func newSweepPane(c *Common, s SweepSettings) *sweepPane {
-	p := &sweepPane{c: c, plot: newPlotModel(c.Styles, c.ASCII), applied: sweepDefaultRanges, drafts: sweepDefaultRanges}
+	p := &sweepPane{c: c, plot: newPlotModel(c.Styles, c.ASCII)}
 	for i := range p.fields {
 		p.fields[i] = newField(c)
 	}
+	p.load(s)
+	return p
+}
+
+// load takes settings as saved: the ranges as typed are applied where
+// they read, and shown with their error where they do not.
+func (p *sweepPane) load(s SweepSettings) {
+	p.applied, p.drafts = sweepDefaultRanges, sweepDefaultRanges
 	def := DefaultSweepSettings()
 	if s == (SweepSettings{}) {
 		s = def
@@ -109,7 +126,6 @@ func newSweepPane(c *Common, s SweepSettings) *sweepPane {
 	p.tryApply()
 	p.changed = false
 	p.refresh()
-	return p
 }
 
 // sweepDrafts is the typed text of the three fields.
@@ -685,6 +701,33 @@ func (p *sweepPane) Editing() bool { return p.editing }
 
 // Result returns the last finished sweep, or nil.
 func (p *sweepPane) Result() *mixtures.SweepResult { return p.result }
+
+// ShortHelp is the first few bindings, the most used.
+func (p *sweepPane) ShortHelp() []key.Binding {
+	h := p.KeyHelp()
+	return h[:min(len(h), 4)]
+}
+
+func (p *sweepPane) Title() string { return "Sweep" }
+
+// Sync follows the document: a sweep of the new inputs, if they changed.
+func (p *sweepPane) Sync() tea.Cmd {
+	if p.b == nil {
+		return nil
+	}
+	return p.SetInputs(p.b.in)
+}
+
+func (p *sweepPane) More() (above, below bool) { return false, false }
+
+// The settings are kept with the workbench state.
+func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }
+func (p *sweepPane) stateChanged() bool       { return p.Changed() }
+func (p *sweepPane) restoreState(st *savedState) {
+	if st.Sweep.Var != "" {
+		p.load(st.Sweep)
+	}
+}
 
 // Changed reports whether the settings changed since the last call.
 func (p *sweepPane) Changed() bool {

@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"context"
 	"errors"
 
 	tea "github.com/charmbracelet/bubbletea"
@@ -40,6 +41,7 @@ type sweepJob struct {
 	key   sweepKey
 	res   *mixtures.SweepResult
 	chunk int
+	state mixtures.State // reused from point to point
 }
 
 // sweepProgressMsg reports a chunk done: done of total points are
@@ -51,14 +53,6 @@ type sweepProgressMsg struct {
 	err         error
 }
 
-// conditions returns the (T, P) of grid value x.
-func (k *sweepKey) conditions(x float64) (tempK, presPa float64) {
-	if k.sweep.Var == mixtures.SweepPressure {
-		return k.fixedTempK, x
-	}
-	return x, k.fixedPresPa
-}
-
 // sweepStartCmd checks the sweep, lays out its grid and computes the
 // first chunk.
 func sweepStartCmd(gen uint64, key sweepKey) tea.Cmd {
@@ -66,15 +60,8 @@ func sweepStartCmd(gen uint64, key sweepKey) tea.Cmd {
 		if key.mix == nil || len(key.mix.Components) == 0 {
 			return sweepProgressMsg{gen: gen, err: errors.New("no blend to sweep")}
 		}
-		if err := key.sweep.Check(); err != nil {
+		if err := key.mix.CheckSweep(key.sweep, key.fixedTempK, key.fixedPresPa); err != nil {
 			return sweepProgressMsg{gen: gen, err: err}
-		}
-		// As in Mixture.RunContext: the grid is monotone between its
-		// ends, so checking both ends checks every point.
-		for _, x := range []float64{key.sweep.From, key.sweep.To} {
-			if err := key.mix.CheckConditions(key.conditions(x)); err != nil {
-				return sweepProgressMsg{gen: gen, err: err}
-			}
 		}
 		grid := key.sweep.Grid()
 		job := &sweepJob{
@@ -91,20 +78,25 @@ func sweepNextCmd(gen uint64, job *sweepJob, from int) tea.Cmd {
 	return func() tea.Msg { return job.compute(gen, from) }
 }
 
-// compute fills points [from, from+chunk) with the same Mixture.Fill the
-// engine's Run uses, so the result equals Run's point for point. Each
-// chunk keeps its species terms in one backing array, as Run does.
+// compute fills points [from, from+chunk) with the engine's StreamSpan,
+// so the result equals the engine's point for point. Each chunk keeps
+// its species terms in one backing array.
 func (j *sweepJob) compute(gen uint64, from int) sweepProgressMsg {
 	n := len(j.res.Grid)
 	to := min(from+j.chunk, n)
 	k := len(j.key.mix.Components)
 	terms := make([]mixtures.SpeciesTerm, (to-from)*k)
-	for i := from; i < to; i++ {
-		pt := &j.res.Points[i]
-		off := (i - from) * k
-		pt.Species = terms[off : off+k : off+k]
-		t, p := j.key.conditions(j.res.Grid[i])
-		j.key.mix.Fill(pt, t, p, j.key.opts)
+	err := j.key.mix.StreamSpan(context.Background(), j.key.sweep, from, to, j.key.fixedTempK, j.key.fixedPresPa, j.key.opts, &j.state,
+		func(i int, x float64, s *mixtures.State) error {
+			pt := &j.res.Points[i]
+			*pt = *s
+			off := (i - from) * k
+			pt.Species = terms[off : off+k : off+k]
+			copy(pt.Species, s.Species)
+			return nil
+		})
+	if err != nil {
+		return sweepProgressMsg{gen: gen, err: err}
 	}
 	return sweepProgressMsg{gen: gen, job: j, done: to, total: n}
 }

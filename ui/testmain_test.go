@@ -11,6 +11,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 	"github.com/muesli/termenv"
 
+	"zmix/mixtures"
 	"zmix/model"
 )
 
@@ -140,4 +141,37 @@ func returnsQuit(cmd tea.Cmd) bool {
 		}
 	}
 	return false
+}
+
+// The panes by their keys in the saved state; the code itself never
+// names a pane by its place.
+var (
+	paneRecipe     = mustPane("recipe")
+	paneSetpoint   = mustPane("setpoint")
+	paneProperties = mustPane("properties")
+	paneSweep      = mustPane("sweep")
+	paneAnatomy    = mustPane("anatomy")
+)
+
+func mustPane(key string) paneID {
+	id, ok := paneByKey(key)
+	if !ok {
+		panic("no pane " + key)
+	}
+	return id
+}
+
+// panicPane panics in Update and View, to test the crash guard.
+type panicPane struct{ pane }
+
+func (panicPane) Update(tea.Msg) tea.Cmd { panic("test: a pane's Update fails") }
+func (panicPane) View() string           { panic("test: a pane's View fails") }
+
+// recipe makes recipe lines from species and amounts, in pairs.
+func recipe(speciesAmount ...string) []mixtures.FileComponent {
+	var r []mixtures.FileComponent
+	for i := 0; i+1 < len(speciesAmount); i += 2 {
+		r = append(r, mixtures.FileComponent{Species: speciesAmount[i], Amount: speciesAmount[i+1]})
+	}
+	return r
 }

@@ -26,6 +26,7 @@ var asciiReplacer = strings.NewReplacer(
 	"₀", "0", "₁", "1", "₂", "2", "₃", "3", "₄", "4", "₅", "5", "₆", "6", "₇", "7", "₈", "8", "₉", "9",
 	"⁰", "^0", "¹", "^1", "⁴", "^4",
 	"→", "->", "←", "<-", "↑", "^", "↓", "v", "…", "...", "•", "*", "▸", ">",
+	"│", "|", "┊", ":", "─", "-",
 	"’", "'", "‘", "'", "“", "\"", "”", "\"",
 )
 
@@ -40,7 +41,7 @@ func (c *Common) Text(s string) string {
 	if !c.ASCII {
 		return s
 	}
-	return toASCII(s)
+	return c.toASCII(s)
 }
 
 // KeyText is Text for key names: arrows become words in ASCII mode.
@@ -48,7 +49,22 @@ func (c *Common) KeyText(s string) string {
 	if !c.ASCII {
 		return s
 	}
-	return toASCII(keyWords.Replace(s))
+	return c.toASCII(keyWords.Replace(s))
+}
+
+// toASCII is the package's toASCII that also tells the test hook of every
+// glyph the table lacks, so that a test can fail on a "?" that stands in
+// for a glyph of ours.
+func (c *Common) toASCII(s string) string {
+	out := toASCII(s)
+	if c.missingGlyph != nil && strings.Contains(out, "?") {
+		for _, r := range asciiReplacer.Replace(s) {
+			if r >= utf8.RuneSelf {
+				c.missingGlyph(r)
+			}
+		}
+	}
+	return out
 }
 
 func toASCII(s string) string {
@@ -188,6 +204,40 @@ func wrap(s string, w int) []string {
 		}
 	}
 	return out
+}
+
+// shorten fits plain text into w cells, as it may be drawn (Text): whole
+// when it fits, else cut at the last space that leaves room for an
+// ellipsis, so that no word is cut.
+func (c *Common) shorten(s string, w int) string {
+	s = c.Text(s)
+	if lipgloss.Width(s) <= w {
+		return s
+	}
+	ell := c.Text("…")
+	ew := lipgloss.Width(ell)
+	if w <= ew {
+		return ""
+	}
+	rs := []rune(s)
+	cut := 0
+	for i, n := 0, 0; i < len(rs); i++ {
+		n += lipgloss.Width(string(rs[i]))
+		if n > w-ew {
+			break
+		}
+		if rs[i] == ' ' {
+			cut = i
+		}
+	}
+	if cut == 0 { // one long word: cut it, and say so
+		for n := 0; cut < len(rs); cut++ {
+			if n += lipgloss.Width(string(rs[cut])); n > w-ew {
+				break
+			}
+		}
+	}
+	return strings.TrimRight(string(rs[:cut]), " ,;:") + ell
 }
 
 // padRight pads plain text to w cells.

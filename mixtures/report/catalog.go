@@ -1,0 +1,275 @@
+package report
+
+import (
+	"encoding/csv"
+	"encoding/json"
+	"fmt"
+	"io"
+	"strconv"
+	"strings"
+
+	"zmix/model"
+)
+
+// builtinSpecies marks the species of the embedded catalogue, so that a
+// listing can tell them from the user's.
+func BuiltinSpecies() map[*model.Species]bool {
+	set := map[*model.Species]bool{}
+	for _, sp := range model.Builtin().All() {
+		set[sp] = true
+	}
+	return set
+}
+
+// WriteCatalogList lists the species of cat, marking those from the
+// user's files.
+func WriteCatalogList(w io.Writer, cat *model.Catalogue) {
+	builtin := BuiltinSpecies()
+	all := cat.All()
+	user := 0
+	t := NewTable("  ", Left, Left, Right, Left, Left)
+	t.Row("formula", "name", "M g/mol", "rotor", "hazards")
+	for _, sp := range all {
+		formula := sp.Formula
+		if !builtin[sp] {
+			formula += " *"
+			user++
+		}
+		hazards := sp.Hazards.String()
+		if hazards == "" {
+			hazards = "-"
+		}
+		t.Row(model.Printable(formula), model.Printable(sp.Name), Short(1000*sp.MolarMassKgPerMol, 7), sp.Rotor.String(), hazards)
+	}
+	fmt.Fprintf(w, "Species catalogue: %d species\n", len(all))
+	t.Write(w)
+	if user > 0 {
+		fmt.Fprintf(w, "  * %d from --species files (added, or replacing the built-in entry)\n", user)
+	}
+	fmt.Fprintln(w, "\nzmix catalog FORMULA shows one species' data, sources and standard-state table.")
+}
+
+// catalogueFieldLabels names the catalogue file's fields in display order,
+// for the sources list.
+var catalogueFieldLabels = []struct{ field, label string }{
+	{"name", "name"},
+	{"rotor", "rotor"},
+	{"rot_cm", "rotational constants"},
+	{"sigma", "symmetry number"},
+	{"spin", "nuclear-spin weights"},
+	{"vib_cm", "vibrations"},
+	{"elec_cm", "electronic levels"},
+	{"dHf0_kJ", "ΔfH°(0 K)"},
+	{"boil_K", "boiling point"},
+	{"hazards", "hazards"},
+	{"note", "note"},
+}
+
+// WriteSpecies writes one species' data, sources and standard-state
+// table at tempsK.
+func WriteSpecies(w io.Writer, sp *model.Species, builtin bool, stdPa float64, tempsK []float64) error {
+	origin := "built-in catalogue"
+	if !builtin {
+		origin = "from a --species file"
+	}
+	fmt.Fprintf(w, "%s  %s  (%s)\n\n", model.Printable(sp.Formula), model.Printable(sp.Name), origin)
+
+	d := NewTable("  ", Left, Left)
+	d.Row("molar mass", Short(1000*sp.MolarMassKgPerMol, 7)+" g/mol")
+	rotor := sp.Rotor.String()
+	if sp.Rotor != model.Atom {
+		rotor += fmt.Sprintf(", symmetry number σ = %d", sp.Symmetry)
+	}
+	d.Row("rotor", rotor)
+	if sp.Rotor != model.Atom {
+		labels := []string{"B"}
+		if sp.Rotor == model.Nonlinear {
+			labels = []string{"A", "B", "C"}
+		}
+		var parts []string
+		for i, b := range sp.RotConstPerCm {
+			parts = append(parts, fmt.Sprintf("%s = %s cm⁻¹ (Θ = %s K)", labels[i], Short(b, 7), Sig(sp.RotThetaK()[i], 4)))
+		}
+		d.Row("rotational constants", strings.Join(parts, ", "))
+	}
+	if sp.Homonuclear() {
+		d.Row("nuclear-spin weights", fmt.Sprintf("even J %g, odd J %g (spin isomers in equilibrium)", sp.SpinWeights[0], sp.SpinWeights[1]))
+	}
+	if len(sp.Vib) == 0 {
+		d.Row("vibrations", "none")
+	}
+	for i, v := range sp.Vib {
+		label := ""
+		if i == 0 {
+			label = "vibrations"
+		}
+		deg := ""
+		if v.Degeneracy > 1 {
+			deg = fmt.Sprintf(" ×%d", v.Degeneracy)
+		}
+		d.Row(label, fmt.Sprintf("%s cm⁻¹%s  (Θ = %s K)", Short(v.WavenumberPerCm, 7), deg, Sig(sp.VibThetaK()[i], 5)))
+	}
+	for i, e := range sp.Elec {
+		label, theta := "", ""
+		if i == 0 {
+			label = "electronic levels"
+		} else {
+			theta = "  (Θ = " + Sig(sp.ElecThetaK()[i], 5) + " K)"
+		}
+		d.Row(label, fmt.Sprintf("%s cm⁻¹, g = %d%s", Short(e.EnergyPerCm, 7), e.Degeneracy, theta))
+	}
+	if len(sp.Elec) == 1 {
+		d.Row("", "(ground level only)")
+	}
+	d.Row("ΔfH°(0 K)", Fixed(sp.EnergyZeroJPerMol/1000, 3)+" kJ/mol  (energy zero of G and μ)")
+	if sp.BoilingK > 0 {
+		d.Row("normal boiling point", Short(sp.BoilingK, 6)+" K")
+	} else {
+		d.Row("normal boiling point", "not recorded")
+	}
+	hazards := sp.Hazards.String()
+	if hazards == "" {
+		hazards = "none recorded (check the safety data sheet)"
+	}
+	d.Row("hazards", hazards)
+	d.Write(w)
+	if sp.Notes != "" {
+		WriteWrapped(w, "  note                  ", "                        ", model.Printable(sp.Notes))
+	}
+
+	fmt.Fprintln(w, "\nSources")
+	fmt.Fprintln(w, "  molar mass: IUPAC standard atomic weights, summed over the formula")
+	for _, f := range catalogueFieldLabels {
+		if src, ok := sp.Sources[f.field]; ok {
+			WriteWrapped(w, "  ", "    ", f.label+": "+model.Printable(src))
+		}
+	}
+	if len(sp.Sources) == 0 {
+		fmt.Fprintln(w, "  no source recorded for the other fields")
+	}
+
+	fmt.Fprintf(w, "\nStandard-state table, P° = %s\n", StdPressure(stdPa))
+	t := NewTable("  ", Right, Right, Right, Right, Right)
+	t.Row("T", "Cp°", "S°", "−[G°−H°(298.15 K)]/T", "H°−H°(298.15 K)")
+	t.Row("K", "J/(mol·K)", "J/(mol·K)", "J/(mol·K)", "kJ/mol")
+	for _, tempK := range tempsK {
+		row, err := sp.Table(tempK, stdPa, model.Treatment{})
+		if err != nil {
+			return err
+		}
+		t.Row(Short(row.TempK, 6),
+			Fixed(row.CpJPerMolK, 3),
+			Fixed(row.SJPerMolK, 3),
+			Fixed(row.GefJPerMolK, 3),
+			Fixed(row.HIncJPerMol/1000, 3))
+	}
+	t.Write(w)
+	fmt.Fprintln(w, "  rigid rotor and harmonic oscillator; see the README for the model's limits")
+	return nil
+}
+
+// catalogEntry is one species of the listing in JSON and CSV.
+type catalogEntry struct {
+	Formula           string   `json:"formula"`
+	Name              string   `json:"name"`
+	MolarMassKgPerMol float64  `json:"molar_mass_kg_mol"`
+	Rotor             string   `json:"rotor"`
+	Hazards           []string `json:"hazards"`
+	FromUserFile      bool     `json:"from_species_file"`
+}
+
+func newCatalogEntry(sp *model.Species, builtin bool) catalogEntry {
+	e := catalogEntry{Formula: sp.Formula, Name: sp.Name, MolarMassKgPerMol: sp.MolarMassKgPerMol,
+		Rotor: sp.Rotor.String(), Hazards: []string{}, FromUserFile: !builtin}
+	if h := sp.Hazards.String(); h != "" {
+		e.Hazards = strings.Split(h, ", ")
+	}
+	return e
+}
+
+// WriteCatalogJSON writes the species list as a JSON list.
+func WriteCatalogJSON(w io.Writer, cat *model.Catalogue) error {
+	builtin := BuiltinSpecies()
+	list := []catalogEntry{}
+	for _, sp := range cat.All() {
+		list = append(list, newCatalogEntry(sp, builtin[sp]))
+	}
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	return enc.Encode(list)
+}
+
+// WriteCatalogCSV writes the species list as CSV, with the JSON keys as
+// column names; hazards are separated by semicolons.
+func WriteCatalogCSV(w io.Writer, cat *model.Catalogue) error {
+	builtin := BuiltinSpecies()
+	cw := csv.NewWriter(w)
+	cw.Write([]string{"formula", "name", "molar_mass_kg_mol", "rotor", "hazards", "from_species_file"})
+	for _, sp := range cat.All() {
+		e := newCatalogEntry(sp, builtin[sp])
+		cw.Write([]string{e.Formula, e.Name, csvFloat(e.MolarMassKgPerMol), e.Rotor, strings.Join(e.Hazards, ";"), strconv.FormatBool(e.FromUserFile)})
+	}
+	cw.Flush()
+	return cw.Error()
+}
+
+// tableNames are the JSON keys and CSV columns of a standard-state table,
+// in SI units, after the published tables' columns.
+var tableNames = []string{"temperature_K", "cp_J_molK", "s_J_molK", "gef_J_molK", "h_minus_h298_J_mol"}
+
+func tableValues(r model.TableRow) []float64 {
+	return []float64{r.TempK, r.CpJPerMolK, r.SJPerMolK, r.GefJPerMolK, r.HIncJPerMol}
+}
+
+// WriteSpeciesJSON writes one species' data and standard-state table as a
+// JSON object.
+func WriteSpeciesJSON(w io.Writer, sp *model.Species, builtin bool, stdPa float64, tempsK []float64) error {
+	type tableDoc struct {
+		StdPresPa float64              `json:"standard_pressure_Pa"`
+		Rows      []map[string]float64 `json:"rows"`
+	}
+	doc := struct {
+		catalogEntry
+		RotConstPerCm []float64         `json:"rot_cm,omitempty"`
+		Symmetry      int               `json:"symmetry_number,omitempty"`
+		BoilingK      float64           `json:"boiling_K,omitempty"`
+		EnergyZero    float64           `json:"dHf0_J_mol"`
+		Sources       map[string]string `json:"sources"`
+		Table         tableDoc          `json:"table"`
+	}{catalogEntry: newCatalogEntry(sp, builtin), RotConstPerCm: sp.RotConstPerCm, Symmetry: sp.Symmetry,
+		BoilingK: sp.BoilingK, EnergyZero: sp.EnergyZeroJPerMol, Sources: sp.Sources,
+		Table: tableDoc{StdPresPa: stdPa, Rows: []map[string]float64{}}}
+	for _, tempK := range tempsK {
+		row, err := sp.Table(tempK, stdPa, model.Treatment{})
+		if err != nil {
+			return err
+		}
+		m := map[string]float64{}
+		for i, v := range tableValues(row) {
+			m[tableNames[i]] = v
+		}
+		doc.Table.Rows = append(doc.Table.Rows, m)
+	}
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	return enc.Encode(doc)
+}
+
+// WriteSpeciesCSV writes one species' standard-state table as CSV.
+func WriteSpeciesCSV(w io.Writer, sp *model.Species, stdPa float64, tempsK []float64) error {
+	cw := csv.NewWriter(w)
+	cw.Write(append([]string{"formula", "standard_pressure_Pa"}, tableNames...))
+	for _, tempK := range tempsK {
+		row, err := sp.Table(tempK, stdPa, model.Treatment{})
+		if err != nil {
+			return err
+		}
+		cells := []string{sp.Formula, csvFloat(stdPa)}
+		for _, v := range tableValues(row) {
+			cells = append(cells, csvFloat(v))
+		}
+		cw.Write(cells)
+	}
+	cw.Flush()
+	return cw.Error()
+}

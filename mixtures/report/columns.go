@@ -1,0 +1,253 @@
+package report
+
+import (
+	"encoding/json"
+	"strconv"
+
+	"zmix/mixtures"
+	"zmix/model"
+)
+
+// The JSON and CSV forms list the same figures in the same order: the
+// blend's quantities in table order, the gauge flag after the pressure,
+// the per-kilogram forms after the molar ones, then each species.
+
+const gaugeName = "pressure_given_as_gauge"
+
+// CSVHeader appends the CSV column names for states of s's blend.
+// Species columns are "FORMULA.name".
+func CSVHeader(row []string, s *mixtures.State) []string {
+	for i := range mixtures.Quantities {
+		q := &mixtures.Quantities[i]
+		row = append(row, q.Name)
+		if q.Key == "P" {
+			row = append(row, gaugeName)
+		}
+	}
+	for i := range mixtures.Quantities {
+		if q := &mixtures.Quantities[i]; q.HasPerKg() {
+			row = append(row, q.PerKgName)
+		}
+	}
+	for j := range s.Species {
+		f := model.Printable(s.Species[j].Species.Formula)
+		for i := range mixtures.SpeciesQuantities {
+			row = append(row, f+"."+mixtures.SpeciesQuantities[i].Name)
+		}
+	}
+	return row
+}
+
+// CSVRow appends the CSV cells of s, in SI units with every digit.
+func CSVRow(row []string, s *mixtures.State, gauge bool) []string {
+	for i := range mixtures.Quantities {
+		q := &mixtures.Quantities[i]
+		row = append(row, csvFloat(q.Get(s)))
+		if q.Key == "P" {
+			row = append(row, strconv.FormatBool(gauge))
+		}
+	}
+	for i := range mixtures.Quantities {
+		if q := &mixtures.Quantities[i]; q.HasPerKg() {
+			row = append(row, csvFloat(q.PerKg(s)))
+		}
+	}
+	for j := range s.Species {
+		t := &s.Species[j]
+		for i := range mixtures.SpeciesQuantities {
+			row = append(row, csvFloat(mixtures.SpeciesQuantities[i].Get(t)))
+		}
+	}
+	return row
+}
+
+func csvFloat(x float64) string { return strconv.FormatFloat(x, 'g', -1, 64) }
+
+// appendCSVRow appends the CSV line of s, the same cells as CSVRow, with
+// no string per cell: a number never needs CSV quoting.
+func appendCSVRow(b []byte, s *mixtures.State, gauge bool) []byte {
+	for i := range mixtures.Quantities {
+		q := &mixtures.Quantities[i]
+		if i > 0 {
+			b = append(b, ',')
+		}
+		b = strconv.AppendFloat(b, q.Get(s), 'g', -1, 64)
+		if q.Key == "P" {
+			b = append(b, ',')
+			b = strconv.AppendBool(b, gauge)
+		}
+	}
+	for i := range mixtures.Quantities {
+		if q := &mixtures.Quantities[i]; q.HasPerKg() {
+			b = append(b, ',')
+			b = strconv.AppendFloat(b, q.PerKg(s), 'g', -1, 64)
+		}
+	}
+	for j := range s.Species {
+		t := &s.Species[j]
+		for i := range mixtures.SpeciesQuantities {
+			b = append(b, ',')
+			b = strconv.AppendFloat(b, mixtures.SpeciesQuantities[i].Get(t), 'g', -1, 64)
+		}
+	}
+	return append(b, '\n')
+}
+
+// jsonWriter appends JSON by hand, in the table's order and with no
+// reflection, so that a sweep can stream a row at a time.
+type jsonWriter struct{ buf []byte }
+
+func (j *jsonWriter) key(indent, name string) {
+	j.buf = append(j.buf, indent...)
+	if q, ok := quotedNames[name]; ok {
+		j.buf = append(j.buf, q...)
+	} else {
+		j.buf = appendJSONString(j.buf, name)
+	}
+	j.buf = append(j.buf, ": "...)
+}
+
+// quotedNames holds the table's names already JSON-quoted: a sweep
+// writes each of them once per point.
+var quotedNames = func() map[string]string {
+	m := map[string]string{gaugeName: string(appendJSONString(nil, gaugeName)), "species": `"species"`, "name": `"name"`}
+	for _, q := range mixtures.Quantities {
+		m[q.Name] = string(appendJSONString(nil, q.Name))
+		if q.HasPerKg() {
+			m[q.PerKgName] = string(appendJSONString(nil, q.PerKgName))
+		}
+	}
+	for _, q := range mixtures.SpeciesQuantities {
+		m[q.Name] = string(appendJSONString(nil, q.Name))
+	}
+	return m
+}()
+
+// float appends x as encoding/json would write it.
+func (j *jsonWriter) float(x float64) {
+	j.buf = appendJSONFloat(j.buf, x)
+}
+
+// stateFields appends the figures of s as object members, without the
+// braces, each line indented by indent.
+func (j *jsonWriter) stateFields(s *mixtures.State, gauge bool, indent string) {
+	first := true
+	sep := func() {
+		if !first {
+			j.buf = append(j.buf, ",\n"...)
+		}
+		first = false
+	}
+	for i := range mixtures.Quantities {
+		q := &mixtures.Quantities[i]
+		sep()
+		j.key(indent, q.Name)
+		j.float(q.Get(s))
+		if q.Key == "P" {
+			sep()
+			j.key(indent, gaugeName)
+			j.buf = strconv.AppendBool(j.buf, gauge)
+		}
+	}
+	for i := range mixtures.Quantities {
+		if q := &mixtures.Quantities[i]; q.HasPerKg() {
+			sep()
+			j.key(indent, q.PerKgName)
+			j.float(q.PerKg(s))
+		}
+	}
+	sep()
+	j.key(indent, "species")
+	j.buf = append(j.buf, "[\n"...)
+	inner := indent + "  "
+	inner2 := inner + "  "
+	for k := range s.Species {
+		t := &s.Species[k]
+		if k > 0 {
+			j.buf = append(j.buf, ",\n"...)
+		}
+		j.buf = append(j.buf, inner...)
+		j.buf = append(j.buf, "{\n"...)
+		j.key(inner2, "name")
+		j.buf = appendJSONString(j.buf, t.Species.Formula)
+		for i := range mixtures.SpeciesQuantities {
+			q := &mixtures.SpeciesQuantities[i]
+			j.buf = append(j.buf, ",\n"...)
+			j.key(inner2, q.Name)
+			j.float(q.Get(t))
+		}
+		j.buf = append(j.buf, '\n')
+		j.buf = append(j.buf, inner...)
+		j.buf = append(j.buf, '}')
+	}
+	j.buf = append(j.buf, '\n')
+	j.buf = append(j.buf, indent...)
+	j.buf = append(j.buf, ']')
+}
+
+// strings appends a member holding a list of strings.
+func (j *jsonWriter) strings(indent, name string, list []string) {
+	j.key(indent, name)
+	if len(list) == 0 {
+		j.buf = append(j.buf, "[]"...)
+		return
+	}
+	j.buf = append(j.buf, "[\n"...)
+	for i, s := range list {
+		if i > 0 {
+			j.buf = append(j.buf, ",\n"...)
+		}
+		j.buf = append(j.buf, indent+"  "...)
+		j.buf = appendJSONString(j.buf, s)
+	}
+	j.buf = append(j.buf, '\n')
+	j.buf = append(j.buf, indent+"]"...)
+}
+
+// appendJSONFloat writes x the way encoding/json does for a float64: the
+// shortest form that reads back exactly, in exponent form below 1e-6 and
+// from 1e21, with a two-digit exponent cleaned to one ("1e-07" → "1e-7").
+func appendJSONFloat(b []byte, x float64) []byte {
+	abs := x
+	if abs < 0 {
+		abs = -abs
+	}
+	format := byte('f')
+	if abs != 0 && (abs < 1e-6 || abs >= 1e21) {
+		format = 'e'
+	}
+	b = strconv.AppendFloat(b, x, format, -1, 64)
+	if format == 'e' {
+		n := len(b)
+		if n >= 4 && b[n-4] == 'e' && b[n-3] == '-' && b[n-2] == '0' {
+			b[n-2] = b[n-1]
+			b = b[:n-1]
+		}
+	}
+	return b
+}
+
+// appendJSONString appends s as a JSON string, escaped as encoding/json
+// escapes it (control characters as \u00XX, so a name holding an escape
+// sequence cannot reach a terminal that shows the file).
+func appendJSONString(b []byte, s string) []byte {
+	if plainJSON(s) {
+		b = append(b, '"')
+		b = append(b, s...)
+		return append(b, '"')
+	}
+	q, _ := json.Marshal(s) // a string always marshals
+	return append(b, q...)
+}
+
+// plainJSON reports whether s needs no escaping in a JSON string, as is
+// the case for formulas and the table's names.
+func plainJSON(s string) bool {
+	for i := 0; i < len(s); i++ {
+		c := s[i]
+		if c < 0x20 || c >= 0x7f || c == '"' || c == '\\' || c == '<' || c == '>' || c == '&' {
+			return false
+		}
+	}
+	return true
+}

@@ -1,0 +1,126 @@
+package ui
+
+import (
+	"strings"
+	"testing"
+)
+
+// screenTour is a walk through every pane, overlay and prompt of the
+// workbench: each step is a name and the keys that reach it from the
+// start screen. A step's keys may start with "type:" to type text.
+var screenTour = []struct {
+	name string
+	keys []string
+}{
+	{"recipe", nil},
+	{"recipe_search", []string{"a", "type:si"}},
+	{"recipe_edit", []string{"enter"}},
+	{"setpoint", []string{"2"}},
+	{"setpoint_edit", []string{"2", "t"}},
+	{"setpoint_gauge", []string{"2", "g"}},
+	{"properties", []string{"3"}},
+	{"sweep", []string{"4"}},
+	{"sweep_edit", []string{"4", "e"}},
+	{"sweep_overlay", []string{"4", "o"}},
+	{"sweep_pressure", []string{"4", "v"}},
+	{"anatomy", []string{"5"}},
+	{"help", []string{"?"}},
+	{"help_sweep", []string{"4", "?"}},
+	{"safety", []string{"!"}},
+	{"prompt_save", []string{"ctrl+s"}},
+	{"prompt_open", []string{"ctrl+o"}},
+	{"prompt_export", []string{"ctrl+e"}},
+	{"prompt_export_sweep", []string{"4", "ctrl+e"}},
+	{"error_in_place", []string{"enter", "ctrl+u", "type:two percent", "enter"}},
+	{"cold_caution", []string{"2", "t", "ctrl+u", "type:-40 C", "enter", "p", "ctrl+u", "type:30 psig", "enter", "3"}},
+}
+
+// walk takes r through the keys of one tour step.
+func walk(t *testing.T, r *root, keys []string) {
+	t.Helper()
+	for _, k := range keys {
+		if text, ok := strings.CutPrefix(k, "type:"); ok {
+			typeIn(t, r, text)
+		} else {
+			press(t, r, k)
+		}
+	}
+}
+
+// ASCII mode sends no byte above 127 on any screen: panes, overlays,
+// prompts and the status bar (issue 7, item 7).
+func TestASCIIModeEveryScreen(t *testing.T) {
+	for _, size := range [][2]int{{80, 24}, {100, 30}, {120, 40}, {200, 50}} {
+		for _, step := range screenTour {
+			r := testRoot(t, size[0], size[1], testRootOpts{ascii: true})
+			missing := map[rune]bool{}
+			r.c.missingGlyph = func(ru rune) { missing[ru] = true }
+			settle(t, r, r.syncPanes())
+			r.sizes = make([]box, len(r.panes)) // every pane draws its lines again
+			r.relayout()
+			walk(t, r, step.keys)
+			screen := r.View()
+			for ru := range missing {
+				t.Errorf("%dx%d %s: ASCII mode has no spelling of %q and writes \"?\"", size[0], size[1], step.name, ru)
+			}
+			for i, line := range strings.Split(screen, "\n") {
+				for j, ru := range line {
+					if ru >= 0x80 {
+						t.Errorf("%dx%d %s: line %d col %d: %q is not ASCII in %q", size[0], size[1], step.name, i, j, ru, line)
+						break
+					}
+				}
+			}
+		}
+	}
+}
+
+// The model's cautions stay in sight: a line in Properties and a marker
+// on every pane while one applies (issue 7, item 5). The demo blend at
+// -40 °C and 30 psig brings NH3 near condensing.
+func TestValidityCautionInSight(t *testing.T) {
+	cold := []string{"2", "t", "ctrl+u", "type:-40 C", "enter", "p", "ctrl+u", "type:30 psig", "enter"}
+	for _, size := range [][2]int{{80, 24}, {120, 40}} {
+		r := testRoot(t, size[0], size[1], testRootOpts{})
+		walk(t, r, cold)
+		for _, pane := range []string{"1", "2", "3", "4", "5"} {
+			press(t, r, pane)
+			if screen := r.View(); !strings.Contains(screen, "MODEL CAUTION (NH3)") {
+				t.Errorf("%dx%d pane %s: no marker of the model's caution:\n%s", size[0], size[1], pane, screen)
+			}
+		}
+		press(t, r, "3")
+		if screen := r.View(); !strings.Contains(screen, "! caution: NH3: pressure is") {
+			t.Errorf("%dx%d: Properties lacks the caution line:\n%s", size[0], size[1], screen)
+		}
+		press(t, r, "!")
+		if screen := r.View(); !strings.Contains(screen, "* caution: NH3: pressure is") {
+			t.Errorf("%dx%d: the safety overlay lacks the caution in full:\n%s", size[0], size[1], screen)
+		}
+	}
+}
+
+// At 80×24 the key-figures line says when it shows the last valid state
+// (issue 7, item 11), and leaves out whole figures rather than cutting one.
+func TestHeadlineMarkedStale(t *testing.T) {
+	r := testRoot(t, 80, 24, testRootOpts{})
+	head := func() string {
+		for _, l := range strings.Split(r.View(), "\n") {
+			if strings.HasPrefix(l, "= ") || strings.HasPrefix(l, "last valid") {
+				return l
+			}
+		}
+		return ""
+	}
+	if h := head(); !strings.HasPrefix(h, "= M ") || !strings.Contains(h, "m/s") {
+		t.Fatalf("key figures = %q, want every figure", h)
+	}
+	walk(t, r, []string{"enter", "ctrl+u", "type:two percent", "enter"})
+	h := head()
+	if !strings.HasPrefix(h, "last valid: M ") {
+		t.Fatalf("key figures with an entry in error = %q, want it marked last valid", h)
+	}
+	if f := strings.Fields(h); len(f) > 0 && strings.Contains("MρCpγc", f[len(f)-1]) {
+		t.Errorf("key figures = %q: a figure's value is cut off", h)
+	}
+}

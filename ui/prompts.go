@@ -1,0 +1,309 @@
+package ui
+
+import (
+	"bytes"
+	"fmt"
+	"os"
+	"path/filepath"
+	"strings"
+
+	"github.com/charmbracelet/bubbles/key"
+	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
+
+	"zmix/mixtures"
+)
+
+// The prompts on the bottom line: save, open and export paths, and the
+// questions before replacing a file or dropping unsaved changes.
+
+type promptKind int
+
+const (
+	promptNone      promptKind = iota
+	promptSave                 // path to save the blend file to
+	promptOpen                 // path of a blend file to open
+	promptExport               // path to export the readout or sweep to
+	promptOverwrite            // the path exists: replace it?
+	promptQuit                 // unsaved changes to the blend file: quit?
+	promptReplace              // unsaved changes: open another file anyway?
+)
+
+// absPath resolves a typed path: ~ is the home directory, and a relative
+// path is taken from where zmix was started.
+func (r *root) absPath(p string) string {
+	p = strings.TrimSpace(p)
+	if p == "" {
+		return ""
+	}
+	if p == "~" || strings.HasPrefix(p, "~/") {
+		if home, err := os.UserHomeDir(); err == nil {
+			p = filepath.Join(home, p[1:])
+		}
+	}
+	if !filepath.IsAbs(p) && r.cwd != "" {
+		p = filepath.Join(r.cwd, p)
+	}
+	return filepath.Clean(p)
+}
+
+// shortPath shows a path relative to the start directory when inside it.
+func (r *root) shortPath(p string) string {
+	if r.cwd != "" {
+		if rel, err := filepath.Rel(r.cwd, p); err == nil && !strings.HasPrefix(rel, "..") {
+			return rel
+		}
+	}
+	return p
+}
+
+func (r *root) openPrompt(kind promptKind) {
+	r.prompt = kind
+	value := ""
+	switch kind {
+	case promptSave:
+		value = "blend.json"
+		if r.blendPath != "" {
+			value = r.shortPath(r.blendPath)
+		}
+	case promptOpen:
+		if r.blendPath != "" {
+			value = r.shortPath(filepath.Dir(r.blendPath)) + string(filepath.Separator)
+			if value == "."+string(filepath.Separator) {
+				value = ""
+			}
+		}
+	case promptExport:
+		r.exportSrc, _ = r.focused().(sweepSource)
+		value = "readout.csv"
+		if r.exportSrc != nil {
+			value = "sweep.csv"
+		}
+	}
+	if last, ok := r.lastTyped[kind]; ok {
+		// The user's own text comes back as they left it, to edit.
+		delete(r.lastTyped, kind)
+		r.input.start(last)
+		return
+	}
+	if kind == promptOpen {
+		r.input.start(value) // a folder to go on typing in
+		return
+	}
+	r.input.suggest(value)
+}
+
+func (r *root) closePrompt() {
+	r.prompt = promptNone
+	r.input.stop()
+}
+
+func (r *root) promptKey(msg tea.KeyMsg) tea.Cmd {
+	k := r.c.Keys
+	switch r.prompt {
+	case promptQuit:
+		switch {
+		case key.Matches(msg, k.Yes), key.Matches(msg, k.Interrupt):
+			return r.requestQuit()
+		case key.Matches(msg, k.SaveQuit):
+			if r.saveBlend(r.blendPath) {
+				return r.requestQuit()
+			}
+			r.prompt = promptNone
+		case key.Matches(msg, k.No), key.Matches(msg, k.Back):
+			r.prompt = promptNone
+		}
+		return nil
+	case promptReplace:
+		switch {
+		case key.Matches(msg, k.Yes):
+			r.openPrompt(promptOpen)
+		case key.Matches(msg, k.No), key.Matches(msg, k.Back):
+			r.prompt = promptNone
+		case key.Matches(msg, k.Interrupt):
+			r.prompt = promptNone
+			return r.requestQuit()
+		}
+		return nil
+	case promptOverwrite:
+		switch {
+		case key.Matches(msg, k.Yes):
+			r.prompt = promptNone
+			r.write(r.pendingKind, r.pending)
+		case key.Matches(msg, k.No), key.Matches(msg, k.Back):
+			r.openPrompt(r.pendingKind)
+			r.input.start(r.shortPath(r.pending))
+		case key.Matches(msg, k.Interrupt):
+			r.prompt = promptNone
+			return r.requestQuit()
+		}
+		return nil
+	}
+	switch {
+	case key.Matches(msg, k.Interrupt):
+		r.closePrompt()
+		return r.requestQuit()
+	case key.Matches(msg, k.Back):
+		r.closePrompt()
+		r.setStatus("cancelled")
+	case key.Matches(msg, k.Accept):
+		r.submitPrompt()
+	default:
+		return r.input.update(msg)
+	}
+	return nil
+}
+
+func (r *root) submitPrompt() {
+	kind := r.prompt
+	path := r.absPath(r.input.value())
+	if path == "" {
+		return // nothing typed yet; esc cancels
+	}
+	switch kind {
+	case promptOpen:
+		r.openBlend(path)
+		return
+	case promptExport:
+		if ext := strings.ToLower(filepath.Ext(path)); ext != ".csv" && ext != ".json" {
+			r.lastTyped[kind] = r.input.value()
+			r.closePrompt()
+			r.setError(fmt.Sprintf("not exported: %s: want a name ending in .csv or .json, which chooses the format", filepath.Base(path)))
+			return
+		}
+	}
+	r.closePrompt()
+	if _, err := os.Stat(path); err == nil && !(kind == promptSave && path == r.blendPath) {
+		r.pending, r.pendingKind = path, kind
+		r.prompt = promptOverwrite
+		return
+	}
+	r.write(kind, path)
+}
+
+func (r *root) write(kind promptKind, path string) {
+	if kind == promptSave {
+		r.saveBlend(path)
+	} else {
+		r.export(path)
+	}
+}
+
+// fileProblem names what must be fixed before the recipe can go to a blend
+// file, which must load again.
+func (r *root) fileProblem() string {
+	for i, e := range r.b.rowErr {
+		if e != "" {
+			return r.b.entries[i].Species + ": " + e
+		}
+	}
+	for _, e := range []string{r.b.blendErr, r.b.tempErr, r.b.presErr} {
+		if e != "" {
+			return e
+		}
+	}
+	return ""
+}
+
+func (r *root) saveBlend(path string) bool {
+	if p := r.fileProblem(); p != "" {
+		r.setError("not saved: fix this first: " + p)
+		return false
+	}
+	if err := r.b.blendFile().Save(path); err != nil {
+		r.setError("not saved: " + cleanErr(err))
+		return false
+	}
+	r.blendPath, r.unsaved, r.contentSeen = path, false, r.b.content
+	r.setStatus("saved the blend to " + r.shortPath(path))
+	return true
+}
+
+// openBlend replaces the document with a blend file; afterChange brings
+// the panes up to date, as after any edit.
+func (r *root) openBlend(path string) {
+	typed := r.input.value()
+	r.closePrompt()
+	f, err := mixtures.LoadBlendFile(path)
+	if err != nil {
+		r.setError(cleanErr(err) + " (" + r.c.Keys.OpenBlend.Help().Key + " to try again)")
+		r.lastTyped[promptOpen] = typed
+		return
+	}
+	r.b.loadFile(f)
+	r.contentSeen = r.b.content
+	r.blendPath, r.unsaved = path, false
+	r.setStatus("opened " + r.shortPath(path))
+}
+
+// export writes the readout, or the sweep when asked from the sweep pane,
+// with the columns of the state and sweep commands.
+func (r *root) export(path string) {
+	var buf bytes.Buffer
+	asJSON := strings.EqualFold(filepath.Ext(path), ".json")
+	gauge := r.b.in.Gauge
+	what := "readout"
+	var err error
+	if r.exportSrc != nil {
+		res := r.exportSrc.Result()
+		if res == nil {
+			r.setError("no finished sweep to export yet")
+			return
+		}
+		what = fmt.Sprintf("sweep (%d points)", len(res.Points))
+		if asJSON {
+			err = mixtures.WriteSweepJSON(&buf, res, gauge)
+		} else {
+			err = mixtures.WriteCSV(&buf, res.Points, gauge)
+		}
+	} else {
+		if r.b.stateErr != "" {
+			r.setError("nothing to export: " + r.b.stateErr)
+			return
+		}
+		st := r.b.state
+		if asJSON {
+			err = mixtures.WriteJSON(&buf, &st, gauge)
+		} else {
+			err = mixtures.WriteCSV(&buf, []mixtures.State{st}, gauge)
+		}
+	}
+	if err == nil {
+		err = mixtures.WriteFileAtomic(path, buf.Bytes(), 0o644)
+	}
+	if err != nil {
+		r.setError("export failed: " + cleanErr(err))
+		return
+	}
+	msg := "exported the " + what + " to " + r.shortPath(path)
+	if !r.b.valid() && r.exportSrc == nil {
+		msg += " (the last valid state: an entry has an error)"
+	}
+	r.setStatus(msg)
+}
+
+func (r *root) promptLine() string {
+	s := r.c.Styles
+	t := r.c.Text
+	k := r.c.Keys
+	switch r.prompt {
+	case promptQuit:
+		return s.Prompt.Render(t(fmt.Sprintf(" %s: changes not saved. Quit? %s quit · %s save and quit · %s stay",
+			filepath.Base(r.blendPath), k.Yes.Help().Key, k.SaveQuit.Help().Key, k.No.Help().Key)))
+	case promptReplace:
+		return s.Prompt.Render(t(fmt.Sprintf(" %s: changes not saved. Open another file? %s yes · %s no",
+			filepath.Base(r.blendPath), k.Yes.Help().Key, k.No.Help().Key)))
+	case promptOverwrite:
+		return s.Prompt.Render(t(fmt.Sprintf(" %s exists. Replace it? %s yes · %s no", r.shortPath(r.pending), k.Yes.Help().Key, k.No.Help().Key)))
+	}
+	label := map[promptKind]string{
+		promptSave:   " Save blend to: ",
+		promptOpen:   " Open blend file: ",
+		promptExport: " Export readout to (.csv/.json): ",
+	}[r.prompt]
+	if r.prompt == promptExport && r.exportSrc != nil {
+		label = " Export sweep to (.csv/.json): "
+	}
+	hint := t("  enter ok · esc cancel")
+	return s.Prompt.Render(label) + r.input.view(max(r.width-lipgloss.Width(label)-lipgloss.Width(hint)-2, 8)) + s.Muted.Render(hint)
+}
