@@ -174,6 +174,10 @@ func (e *CatalogueError) Error() string {
 // catalogueFields lists the keys a species block may hold.
 var catalogueFields = map[string]string{
 	"name":    "free text",
+	"Tc_K":    "critical temperature in K, above 0 and at most 5000",
+	"Pc_bar":  "critical pressure in bar, above 0 and at most 5000",
+	"omega":   "acentric factor, from -1 to 2",
+	"quantum": "yes or no: Tc_K and Pc_bar are a quantum gas's classical limits",
 	"rotor":   "atom, linear or nonlinear",
 	"rot_cm":  "rotational constants in cm⁻¹: B, or A B C",
 	"sigma":   "symmetry number, a whole number ≥ 1",
@@ -211,6 +215,12 @@ func ParseCatalogue(file string, r io.Reader) ([]*Species, error) {
 			if !seen[need] {
 				return &CatalogueError{file, curLine, need, "missing (every species needs name, rotor and dHf0_kJ)"}
 			}
+		}
+		if n := btoi(seen["Tc_K"]) + btoi(seen["Pc_bar"]) + btoi(seen["omega"]); n != 0 && n != 3 {
+			return &CatalogueError{file, curLine, "", "Tc_K, Pc_bar and omega come together: give all three, or none"}
+		}
+		if seen["quantum"] && cur.QuantumGas && !seen["Tc_K"] {
+			return &CatalogueError{file, curLine, "quantum", "needs Tc_K, Pc_bar and omega"}
 		}
 		if cur.Rotor != Atom && !seen["rot_cm"] {
 			return &CatalogueError{file, curLine, "rot_cm", "missing for a " + cur.Rotor.String() + " rotor"}
@@ -351,6 +361,33 @@ func setField(sp *Species, key, value string) error {
 			return err
 		}
 		sp.EnergyZeroJPerMol = x * 1000
+	case "Tc_K":
+		x, err := parseNumber(value)
+		if err != nil || !(x > 0 && x <= 5000) {
+			return fmt.Errorf("not a temperature above 0 K and at most 5000 K")
+		}
+		sp.CriticalK = x
+	case "Pc_bar":
+		x, err := parseNumber(value)
+		if err != nil || !(x > 0 && x <= 5000) {
+			return fmt.Errorf("not a pressure above 0 bar and at most 5000 bar")
+		}
+		sp.CriticalPa = x * 1e5
+	case "omega":
+		x, err := parseNumber(value)
+		if err != nil || !(x >= -1 && x <= 2) {
+			return fmt.Errorf("not an acentric factor from -1 to 2")
+		}
+		sp.Acentric = x
+	case "quantum":
+		switch value {
+		case "yes":
+			sp.QuantumGas = true
+		case "no":
+			sp.QuantumGas = false
+		default:
+			return fmt.Errorf("not yes or no")
+		}
 	case "boil_K":
 		x, err := parseNumber(value)
 		if err != nil || x <= 0 {
@@ -371,6 +408,13 @@ func setField(sp *Species, key, value string) error {
 		}
 	}
 	return nil
+}
+
+func btoi(b bool) int {
+	if b {
+		return 1
+	}
+	return 0
 }
 
 func parseNumber(s string) (float64, error) {

@@ -75,6 +75,13 @@ func (sp *Species) Prepare() error {
 		sp.elecDeg = append(sp.elecDeg, float64(e.Degeneracy))
 	}
 	sp.lnElecG0 = math.Log(sp.elecDeg[0])
+	// Species built in code, not read from a file, meet the same ranges
+	// as the catalogue's fields.
+	if sp.CriticalK != 0 || sp.CriticalPa != 0 {
+		if !(sp.CriticalK > 0 && sp.CriticalK <= 5000 && sp.CriticalPa > 0 && sp.CriticalPa <= 5000e5 && sp.Acentric >= -1 && sp.Acentric <= 2) {
+			return fmt.Errorf("model: %s: critical constants Tc = %g K, Pc = %g Pa, ω = %g: want 0 < Tc ≤ 5000 K, 0 < Pc ≤ 5000 bar and −1 ≤ ω ≤ 2", sp.Formula, sp.CriticalK, sp.CriticalPa, sp.Acentric)
+		}
+	}
 	if sp.BoilingK < 0 {
 		return fmt.Errorf("model: %s: boiling point %g K must not be negative", sp.Formula, sp.BoilingK)
 	}
