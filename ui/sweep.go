@@ -180,24 +180,11 @@ func (e sweepStepsError) Error() string {
 	return "points " + strconv.Quote(e.text) + ": want a whole number from 2 to " + strconv.Itoa(mixtures.MaxSweepSteps)
 }
 
-// sweepParseSteps reads a number of points: digits, optionally grouped
-// with spaces, commas or underscores ("20 000"), or an exact "1e5".
+// sweepParseSteps reads a number of points in the one syntax the
+// commands' --steps takes too (mixtures.ParseSteps).
 func sweepParseSteps(s string) (int, error) {
-	clean := strings.Map(func(r rune) rune {
-		if r == ' ' || r == ',' || r == '_' {
-			return -1
-		}
-		return r
-	}, s)
-	n, err := strconv.Atoi(clean)
+	n, err := mixtures.ParseSteps(s)
 	if err != nil {
-		f, ferr := strconv.ParseFloat(clean, 64)
-		if ferr != nil || f != math.Trunc(f) || f > math.MaxInt32 || f < 0 {
-			return 0, sweepStepsError{s}
-		}
-		n = int(f)
-	}
-	if n < 2 || n > mixtures.MaxSweepSteps {
 		return 0, sweepStepsError{s}
 	}
 	return n, nil
