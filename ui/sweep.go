@@ -67,7 +67,7 @@ type sweepPane struct {
 	total   int
 	runErr  string
 
-	result    *mixtures.SweepResult
+	result    *mixtures.SweepTable
 	resultKey sweepKey
 
 	plot      *plotModel
@@ -317,7 +317,7 @@ func (p *sweepPane) progress(msg sweepProgressMsg) tea.Cmd {
 // placeCursor puts the cursor on a new result: where it was, in
 // proportion, or else (first result, other variable) at the grid point
 // nearest the current state.
-func (p *sweepPane) placeCursor(old *mixtures.SweepResult) {
+func (p *sweepPane) placeCursor(old *mixtures.SweepTable) {
 	n := len(p.result.Grid)
 	if old != nil && len(old.Grid) > 1 && old.Sweep.Var == p.result.Sweep.Var {
 		f := float64(p.cursor) / float64(len(old.Grid)-1)
@@ -571,17 +571,18 @@ func (p *sweepPane) rebuildPlot() {
 	ascii := p.c.ASCII
 	prop := sweepProps[p.propIndex()]
 	scale := prop.scale
-	blend := plotSeries{name: "blend", y: func(i int) float64 { return prop.blend(&res.Points[i]) * scale }}
+	blendValues := res.Blend(prop.blend)
+	blend := plotSeries{name: "blend", y: func(i int) float64 { return blendValues[i] * scale }}
 	comps := p.resultKey.mix.Components
 	speciesSeries := func(j int) plotSeries {
-		get := prop.species
-		return plotSeries{name: comps[j].Species.Formula, y: func(i int) float64 { return get(&res.Points[i].Species[j]) * scale }}
+		values := res.Species(prop.species, j)
+		return plotSeries{name: comps[j].Species.Formula, y: func(i int) float64 { return values[i] * scale }}
 	}
 	var series []plotSeries
 	var of string
 	overlay := false
 	switch {
-	case prop.species == nil:
+	case prop.species == "":
 		series = []plotSeries{blend}
 		if p.set.Overlay || p.set.Species != "" {
 			p.plotNote = prop.sym(ascii) + " is plotted for the blend only"
@@ -687,7 +688,14 @@ func (p *sweepPane) Settings() SweepSettings { return p.set }
 func (p *sweepPane) Editing() bool { return p.editing }
 
 // Result returns the last finished sweep, or nil.
-func (p *sweepPane) Result() *mixtures.SweepResult { return p.result }
+func (p *sweepPane) Result() *mixtures.SweepTable { return p.result }
+
+// StreamResult computes the shown sweep again, point by point, with every
+// figure of every point, for an export; the pane keeps only what it
+// plots.
+func (p *sweepPane) StreamResult(yield func(i int, s *mixtures.State) error) error {
+	return p.resultKey.stream(yield)
+}
 
 // ShortHelp is the first few bindings, the most used.
 func (p *sweepPane) ShortHelp() []key.Binding {
