@@ -60,9 +60,9 @@ func TestCriticalConstantErrors(t *testing.T) {
 	for _, tt := range []struct {
 		name, text, field, msg string
 	}{
-		{"negative Tc", head + "Tc_K = -3\nPc_bar = 40\nomega = 0\n", "Tc_K", "above 0 K"},
-		{"huge Pc", head + "Tc_K = 150\nPc_bar = 1e9\nomega = 0\n", "Pc_bar", "at most 5000 bar"},
-		{"omega out of range", head + "Tc_K = 150\nPc_bar = 49\nomega = 7\n", "omega", "from -1 to 2"},
+		{"negative Tc", head + "Tc_K = -3\nPc_bar = 40\nomega = 0\n", "Tc_K", "critical temperature from 1 to 10000 K"},
+		{"huge Pc", head + "Tc_K = 150\nPc_bar = 1e9\nomega = 0\n", "Pc_bar", "critical pressure from 0.1 to 5000 bar"},
+		{"omega out of range", head + "Tc_K = 150\nPc_bar = 49\nomega = 7\n", "omega", "acentric factor from -1 to 2"},
 		{"quantum not yes or no", head + "quantum = maybe\n", "quantum", "yes or no"},
 		{"only Tc", head + "Tc_K = 150\n", "", "come together"},
 		{"quantum without constants", head + "quantum = yes\n", "quantum", "needs Tc_K"},
