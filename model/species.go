@@ -126,7 +126,7 @@ type Species struct {
 	CriticalPa float64
 	Acentric   float64 // acentric factor ω
 	QuantumGas bool
-	Hazards  Hazard
+	Hazards    Hazard
 
 	// Sources maps a field name of the catalogue file (for example "vib")
 	// to the publication its numbers come from.
