@@ -141,11 +141,11 @@ func (r numRange) parse(tok string) (float64, error) {
 	}
 	switch {
 	case errors.Is(err, strconv.ErrRange) || math.IsInf(x, 0):
-		return 0, fmt.Errorf("%s is out of range; want %s", Quote(tok), r)
+		return 0, Errorf("model", "%s is out of range; want %s", Quote(tok), r)
 	case err != nil || math.IsNaN(x):
-		return 0, fmt.Errorf("%s is not a %s; want %s", Quote(tok), kind, r)
+		return 0, Errorf("model", "%s is not a %s; want %s", Quote(tok), kind, r)
 	case x < r.min || x > r.max:
-		return 0, fmt.Errorf("%s is out of range; want %s", Quote(tok), r)
+		return 0, Errorf("model", "%s is out of range; want %s", Quote(tok), r)
 	}
 	return x, nil
 }
@@ -211,8 +211,10 @@ type catParser struct {
 	headerAt map[string]int // formula → line of its block
 }
 
+// errf makes the error of a line; errors among args contribute their
+// UserMessage, as with Errorf.
 func (p *catParser) errf(line int, field, format string, args ...any) *CatalogueError {
-	return &CatalogueError{p.file, line, field, fmt.Sprintf(format, args...)}
+	return &CatalogueError{p.file, line, field, UserMessage(Errorf("", format, args...))}
 }
 
 func (p *catParser) line(raw string) error {
@@ -364,11 +366,11 @@ func checkText(what, s string, maxRunes int) error {
 			if r == utf8.RuneError {
 				bad = fmt.Sprintf("byte %#02x (not UTF-8)", s[i])
 			}
-			return fmt.Errorf("%s %s holds %s at byte %d; want printable text", what, Quote(s), bad, i+1)
+			return Errorf("model", "%s %s holds %s at byte %d; want printable text", what, Quote(s), bad, i+1)
 		}
 	}
 	if n := utf8.RuneCountInString(s); maxRunes > 0 && n > maxRunes {
-		return fmt.Errorf("%s %s is %d characters long; want at most %d", what, Quote(s), n, maxRunes)
+		return Errorf("model", "%s %s is %d characters long; want at most %d", what, Quote(s), n, maxRunes)
 	}
 	return nil
 }
@@ -386,7 +388,7 @@ func setField(sp *Species, key, value string) error {
 	switch key {
 	case "name":
 		if value == "" {
-			return fmt.Errorf("empty; want %s", catalogueFields[key])
+			return Errorf("model", "empty; want %s", catalogueFields[key])
 		}
 		if err := checkText("name", value, maxNameRunes); err != nil {
 			return err
@@ -406,7 +408,7 @@ func setField(sp *Species, key, value string) error {
 		case "nonlinear":
 			sp.Rotor = Nonlinear
 		default:
-			return fmt.Errorf("%s: unknown rotor; want %s", Quote(value), catalogueFields[key])
+			return Errorf("model", "%s: unknown rotor; want %s", Quote(value), catalogueFields[key])
 		}
 	case "rot_cm":
 		xs, err := parseNumbers(value, rotRange, 3)
@@ -426,7 +428,7 @@ func setField(sp *Species, key, value string) error {
 			return err
 		}
 		if len(xs) != 2 || xs[0]+xs[1] == 0 {
-			return fmt.Errorf("%s: want two whole numbers from 0 to 100, not both 0 (even-J and odd-J weights)", Quote(value))
+			return Errorf("model", "%s: want two whole numbers from 0 to 100, not both 0 (even-J and odd-J weights)", Quote(value))
 		}
 		sp.SpinWeights = [2]float64{xs[0], xs[1]}
 	case "vib_cm":
@@ -443,7 +445,7 @@ func setField(sp *Species, key, value string) error {
 			return err
 		}
 		if levels[0].EnergyPerCm != 0 {
-			return fmt.Errorf("%s: the first level is the ground level; want it at 0 cm⁻¹", Quote(strings.Fields(value)[0]))
+			return Errorf("model", "%s: the first level is the ground level; want it at 0 cm⁻¹", Quote(strings.Fields(value)[0]))
 		}
 		sp.Elec = levels
 	case "dHf0_kJ":
@@ -466,7 +468,7 @@ func setField(sp *Species, key, value string) error {
 			}
 			h, ok := HazardByName(name)
 			if !ok {
-				return fmt.Errorf("unknown hazard %s; want %s", Quote(name), catalogueFields[key])
+				return Errorf("model", "unknown hazard %s; want %s", Quote(name), catalogueFields[key])
 			}
 			sp.Hazards |= h
 		}
@@ -479,7 +481,7 @@ func parseNumbers(s string, r numRange, maxN int) ([]float64, error) {
 	var out []float64
 	for _, f := range strings.Fields(s) {
 		if len(out) == maxN {
-			return nil, fmt.Errorf("%s: more than %d numbers", Quote(s), maxN)
+			return nil, Errorf("model", "%s: more than %d numbers", Quote(s), maxN)
 		}
 		x, err := r.parse(f)
 		if err != nil {
@@ -488,7 +490,7 @@ func parseNumbers(s string, r numRange, maxN int) ([]float64, error) {
 		out = append(out, x)
 	}
 	if len(out) == 0 {
-		return nil, fmt.Errorf("no numbers; want %s", r)
+		return nil, Errorf("model", "no numbers; want %s", r)
 	}
 	return out, nil
 }
@@ -499,7 +501,7 @@ func parseLevels(s string, energy, deg numRange, maxN int) ([]ElecLevel, error) 
 	var out []ElecLevel
 	for _, f := range strings.Fields(s) {
 		if len(out) == maxN {
-			return nil, fmt.Errorf("more than %d levels; want at most %d", maxN, maxN)
+			return nil, Errorf("model", "more than %d levels; want at most %d", maxN, maxN)
 		}
 		num, g := f, "1"
 		if a, b, ok := strings.Cut(f, "x"); ok {
@@ -507,16 +509,16 @@ func parseLevels(s string, energy, deg numRange, maxN int) ([]ElecLevel, error) 
 		}
 		x, err := energy.parse(num)
 		if err != nil {
-			return nil, fmt.Errorf("in %s: %v", Quote(f), err)
+			return nil, Errorf("model", "in %s: %v", Quote(f), err)
 		}
 		n, err := deg.parse(g)
 		if err != nil {
-			return nil, fmt.Errorf("in %s: degeneracy %v", Quote(f), err)
+			return nil, Errorf("model", "in %s: degeneracy %v", Quote(f), err)
 		}
 		out = append(out, ElecLevel{x, int(n)})
 	}
 	if len(out) == 0 {
-		return nil, fmt.Errorf("no levels; want %s", energy)
+		return nil, Errorf("model", "no levels; want %s", energy)
 	}
 	return out, nil
 }
