@@ -207,6 +207,66 @@ func ParsePressure(s string) (Pressure, error) {
 	return p, nil
 }
 
+// StdPressure is the standard pressure P° that μ° and the standard
+// tables refer to: 1 bar (the zero value, IUPAC's standard since 1982) or
+// 1 atm (older tables). It is the one representation of that choice in
+// the engine, the commands and the workbench.
+type StdPressure int
+
+const (
+	StdBar StdPressure = iota
+	StdAtm
+)
+
+// Pa is the standard pressure in pascals.
+func (p StdPressure) Pa() float64 {
+	if p == StdAtm {
+		return model.StdPressureAtmPa
+	}
+	return model.StdPressureBarPa
+}
+
+// String is how settings and blend files write it: "1 bar" or "1 atm".
+func (p StdPressure) String() string {
+	if p == StdAtm {
+		return "1 atm"
+	}
+	return "1 bar"
+}
+
+// Label names it with its value: "1 bar (100000 Pa)".
+func (p StdPressure) Label() string {
+	if p == StdAtm {
+		return "1 atm (101325 Pa)"
+	}
+	return "1 bar (100000 Pa)"
+}
+
+// MarshalText writes String.
+func (p StdPressure) MarshalText() ([]byte, error) { return []byte(p.String()), nil }
+
+// UnmarshalText reads what ParseStdPressure reads.
+func (p *StdPressure) UnmarshalText(b []byte) error {
+	got, err := ParseStdPressure(string(b))
+	if err != nil {
+		return err
+	}
+	*p = got
+	return nil
+}
+
+// ParseStdPressure reads "1 bar" or "1 atm" (any case and spacing); empty
+// text, as in a blend file that does not say, means 1 bar.
+func ParseStdPressure(s string) (StdPressure, error) {
+	switch strings.Join(strings.Fields(strings.ToLower(s)), "") {
+	case "", "1bar", "bar":
+		return StdBar, nil
+	case "1atm", "atm":
+		return StdAtm, nil
+	}
+	return StdBar, model.KindErrorf("mixtures", ErrValue, "standard pressure %s; want 1 bar or 1 atm", model.Quote(s))
+}
+
 // celsiusZeroK is 0 °C in kelvin, by definition of the Celsius scale.
 const celsiusZeroK = 273.15
 

@@ -55,8 +55,8 @@ func TestAutosaveAndRestore(t *testing.T) {
 	}
 
 	r2 := testRoot(t, 100, 30, testRootOpts{stateDir: dir})
-	if r2.b.entries[1].Amount != "2%x" || r2.b.tempText != "350 K" || !r2.b.stdAtm || !r2.b.showGauge || r2.focus != paneAnatomy {
-		t.Errorf("restored: entries %v temp %q stdAtm %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.stdAtm, r2.b.showGauge, r2.focus.name())
+	if r2.b.entries[1].Amount != "2%x" || r2.b.tempText != "350 K" || r2.b.std != mixtures.StdAtm || !r2.b.showGauge || r2.focus != paneAnatomy {
+		t.Errorf("restored: entries %v temp %q std %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.std, r2.b.showGauge, r2.focus.name())
 	}
 	// The typo is still there, and so is the last valid blend behind it.
 	if r2.b.rowErr[1] == "" || r2.b.in.Mixture == nil || r2.b.in.TempK != 350 {
