@@ -194,16 +194,14 @@ func readBlend(spec string) (*blendSource, error) {
 		if path == "" {
 			return nil, badInput("--blend @: the file name is missing; give %s", blendForms)
 		}
-		f, err := mixtures.LoadBlendFile(path)
+		// The blend's items carry their file and line, so that an error
+		// found when it is resolved still names them.
+		f, b, err := mixtures.ReadBlendFile(path)
 		if err != nil {
 			var pe *fs.PathError
 			if errors.As(err, &pe) {
 				return nil, ioFailure(fmt.Errorf("--blend @%s: cannot read it: %v", path, pe.Err))
 			}
-			return nil, badInput("--blend @%s: %v", path, err)
-		}
-		b, err := f.Parse()
-		if err != nil {
 			return nil, badInput("--blend @%s: %v", path, err)
 		}
 		return &blendSource{blend: b, file: f, path: path}, nil
@@ -293,12 +291,12 @@ func totalPressure(src *blendSource, text string) (pressure, error) {
 	return pressure{}, badInput("--pres is missing; give the total pressure with a unit (%s), e.g. --pres 1atm or --pres 2barg", mixtures.PressureUnits)
 }
 
-func parseStd(text string) (float64, error) {
-	pa, err := mixtures.StdPressureFromText(text)
+func parseStd(text string) (mixtures.StdPressure, error) {
+	std, err := mixtures.ParseStdPressure(text)
 	if err != nil {
 		return 0, badInput("--std: %v", err)
 	}
-	return pa, nil
+	return std, nil
 }
 
 // stepsFlag is --steps: a whole number of points, end points included.
@@ -307,8 +305,8 @@ type stepsFlag struct{ n int }
 func (s *stepsFlag) String() string { return strconv.Itoa(s.n) }
 
 func (s *stepsFlag) Set(v string) error {
-	n, err := strconv.Atoi(strings.TrimSpace(v))
-	if err != nil || n < 2 || n > mixtures.MaxSweepSteps {
+	n, err := mixtures.ParseSteps(strings.TrimSpace(v))
+	if err != nil {
 		return fmt.Errorf("want a whole number of points from 2 to %d, end points included", mixtures.MaxSweepSteps)
 	}
 	s.n = n

@@ -20,8 +20,9 @@ type anatomyPane struct {
 	b    *bench
 	w, h int
 
-	formula string // the species shown; the first one if it is not in the blend
-	scroll  scroller
+	formula      string // the species shown; the first one if it is not in the blend
+	savedFormula string // formula when stateChanged last looked
+	scroll       scroller
 }
 
 func newAnatomyPane(c *Common, b *bench) *anatomyPane { return &anatomyPane{c: c, b: b} }
@@ -93,6 +94,11 @@ func (p *anatomyPane) More() (above, below bool) { return p.scroll.more() }
 // The species shown is kept with the workbench state.
 func (p *anatomyPane) saveState(st *savedState)    { st.AnatomySpecies = p.formula }
 func (p *anatomyPane) restoreState(st *savedState) { p.formula = st.AnatomySpecies; p.refresh() }
+func (p *anatomyPane) stateChanged() bool {
+	c := p.formula != p.savedFormula
+	p.savedFormula = p.formula
+	return c
+}
 
 func (p *anatomyPane) Title() string {
 	if i := p.index(); i >= 0 {

@@ -6,9 +6,6 @@ import (
 	"os"
 
 	tea "github.com/charmbracelet/bubbletea"
-
-	"zmix/mixtures"
-	"zmix/model"
 )
 
 // saveDoneMsg reports an autosave write.
@@ -42,36 +39,26 @@ func (r *root) restore(st *savedState) {
 	if lv := st.LastValid; lv != nil {
 		// Establish the last valid state first; the typed text then
 		// replaces it only where it reads.
-		b.entries = append(b.entries[:0], lv.Recipe...)
-		b.tempText, b.presText = lv.Temperature, lv.Pressure
-		std, _ := mixtures.StdPressureFromText(st.StandardPressure)
-		b.stdAtm = std == model.StdPressureAtmPa
+		b.setText(lv)
 		b.update()
 	}
-	b.entries = append(b.entries[:0], st.Recipe...)
-	b.name, b.note = st.Name, st.Note
-	b.tempText, b.presText = st.Temperature, st.Pressure
-	std, _ := mixtures.StdPressureFromText(st.StandardPressure)
-	b.stdAtm = std == model.StdPressureAtmPa
+	b.setText(&st.Blend)
 	b.showGauge = st.PressureView == "gauge"
 	r.blendPath, r.unsaved = st.BlendPath, st.Unsaved
-	b.changed = true
 }
 
 // snapshot is the state to autosave.
 func (r *root) snapshot() savedState {
-	b := r.b
+	r.snapshots++
 	view := "absolute"
-	if b.showGauge {
+	if r.b.showGauge {
 		view = "gauge"
 	}
 	st := savedState{
-		Format: stateFormat, Name: b.name, Note: b.note,
-		Recipe:      append([]entry{}, b.entries...),
-		Temperature: b.tempText, Pressure: b.presText, StandardPressure: b.stdText(), PressureView: view,
+		Format: stateFormat, Blend: *r.b.blendFile(), PressureView: view,
 		Pane:      paneSpecs[r.focus].key,
 		BlendPath: r.blendPath, Unsaved: r.unsaved,
-		LastValid: &validText{Recipe: append([]entry{}, b.validEntries...), Temperature: b.validTemp, Pressure: b.validPres},
+		LastValid: r.b.lastValidFile(),
 	}
 	for _, p := range r.panes {
 		if sp, ok := p.(statePane); ok {
@@ -96,10 +83,40 @@ func (r *root) finalSave() error {
 	return r.store.write(r.saveSeq, data)
 }
 
+// stateKey is the part of the saved state that the root itself holds,
+// compared after every message to see cheaply whether it changed.
+type stateKey struct {
+	focus     paneID
+	blendPath string
+	unsaved   bool
+}
+
+// checkDirty notes whether anything the saved state holds may have
+// changed: the document (afterChange marks that), the root's own fields,
+// or a pane's own settings. It costs a few comparisons, not a snapshot.
+func (r *root) checkDirty() {
+	if k := (stateKey{r.focus, r.blendPath, r.unsaved}); k != r.dirtyKey {
+		r.dirtyKey, r.dirty = k, true
+	}
+	for _, p := range r.panes {
+		if sp, ok := p.(statePane); ok && sp.stateChanged() {
+			r.dirty = true
+		}
+	}
+}
+
+// autosave writes the state when it changed. Most messages (sweep
+// progress, cursor moves, sizes) change nothing saved and cost nothing
+// here; a change is marshalled once and written only if the bytes differ.
 func (r *root) autosave() tea.Cmd {
 	if r.store == nil {
 		return nil
 	}
+	r.checkDirty()
+	if !r.dirty {
+		return nil
+	}
+	r.dirty = false
 	data, err := json.MarshalIndent(r.snapshot(), "", "  ")
 	if err != nil || bytes.Equal(data, r.lastSaved) {
 		return nil

@@ -32,8 +32,8 @@ func checkCrash(t *testing.T, g *guard, dir, wantAmount string) {
 	if !strings.HasPrefix(g.report, dir) {
 		t.Errorf("report %s not in the state directory %s", g.report, dir)
 	}
-	if st := readState(t, dir); st.Recipe[0].Amount != wantAmount {
-		t.Errorf("state saved with %q, want %q", st.Recipe[0].Amount, wantAmount)
+	if st := readState(t, dir); st.Blend.Components[0].Amount != wantAmount {
+		t.Errorf("state saved with %q, want %q", st.Blend.Components[0].Amount, wantAmount)
 	}
 	if err := g.exitError(); !strings.Contains(err.Error(), g.report) {
 		t.Errorf("exit error %q does not name the report", err)

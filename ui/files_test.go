@@ -2,6 +2,7 @@ package ui
 
 import (
 	"bytes"
+	"context"
 	"encoding/json"
 	"os"
 	"os/signal"
@@ -46,17 +47,17 @@ func TestAutosaveAndRestore(t *testing.T) {
 	typeIn(t, r, "350 K")
 	press(t, r, "enter", "s", "g", "5", "right")
 	st := readState(t, dir)
-	if st.Recipe[1] != (entry{"NH3", "2%x"}) || st.Temperature != "350 K" || st.StandardPressure != "1 atm" ||
+	if st.Blend.Components[1] != (mixtures.FileComponent{Species: "NH3", Amount: "2%x"}) || st.Blend.Temperature != "350 K" || st.Blend.StandardPressure != "1 atm" ||
 		st.PressureView != "gauge" || st.Pane != "anatomy" || st.AnatomySpecies != "NH3" {
 		t.Errorf("saved state: %+v", st)
 	}
-	if st.LastValid == nil || st.LastValid.Recipe[1].Amount != "2%" {
+	if st.LastValid == nil || st.LastValid.Components[1].Amount != "2%" {
 		t.Errorf("last valid recipe not saved: %+v", st.LastValid)
 	}
 
 	r2 := testRoot(t, 100, 30, testRootOpts{stateDir: dir})
-	if r2.b.entries[1].Amount != "2%x" || r2.b.tempText != "350 K" || !r2.b.stdAtm || !r2.b.showGauge || r2.focus != paneAnatomy {
-		t.Errorf("restored: entries %v temp %q stdAtm %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.stdAtm, r2.b.showGauge, r2.focus.name())
+	if r2.b.entries[1].Amount != "2%x" || r2.b.tempText != "350 K" || r2.b.std != mixtures.StdAtm || !r2.b.showGauge || r2.focus != paneAnatomy {
+		t.Errorf("restored: entries %v temp %q std %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.std, r2.b.showGauge, r2.focus.name())
 	}
 	// The typo is still there, and so is the last valid blend behind it.
 	if r2.b.rowErr[1] == "" || r2.b.in.Mixture == nil || r2.b.in.TempK != 350 {
@@ -112,8 +113,8 @@ func TestSignalSavesState(t *testing.T) {
 		if cmd := r.Update(signalMsg{sig}); !returnsQuit(cmd) {
 			t.Fatalf("%v: no quit", sig)
 		}
-		if st := readState(t, dir); st.Recipe[0].Amount != "3.5%" {
-			t.Errorf("%v: saved amount %q, want 3.5%%", sig, st.Recipe[0].Amount)
+		if st := readState(t, dir); st.Blend.Components[0].Amount != "3.5%" {
+			t.Errorf("%v: saved amount %q, want 3.5%%", sig, st.Blend.Components[0].Amount)
 		}
 	}
 }
@@ -275,8 +276,13 @@ func TestExportSweep(t *testing.T) {
 	if err != nil {
 		t.Fatalf("%v (status %q)", err, r.status)
 	}
+	// What zmix sweep writes for the same sweep.
+	k := r.panes[paneSweep].(*sweepPane).resultKey
 	var want bytes.Buffer
-	mixtures.WriteSweepJSON(&want, res, false)
+	report.WriteSweepJSON(&want, false, func(yield func(i int, s *mixtures.State) error) error {
+		return k.mix.Stream(context.Background(), res.Sweep, k.fixedTempK, k.fixedPresPa, k.opts,
+			func(i int, _ float64, s *mixtures.State) error { return yield(i, s) })
+	})
 	if !bytes.Equal(got, want.Bytes()) {
 		t.Errorf("sweep export differs from the sweep command's output")
 	}

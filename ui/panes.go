@@ -41,12 +41,18 @@ type (
 	statePane interface {
 		saveState(st *savedState)
 		restoreState(st *savedState)
+		// stateChanged reports whether what saveState writes may have
+		// changed since the last call; it must be cheap.
+		stateChanged() bool
 	}
 	// headlinePane gives the key figures in one line of w cells, shown
 	// under the input panes when no result pane is on screen.
 	headlinePane interface{ headline(w int) string }
 	// sweepSource has a sweep to export instead of the readout.
-	sweepSource interface{ Result() *mixtures.SweepResult }
+	sweepSource interface {
+		Result() *mixtures.SweepTable
+		StreamResult(yield func(i int, s *mixtures.State) error) error
+	}
 	// heightPane asks for a height of its own in a column of the full
 	// layout, out of avail rows; the last pane of a column takes the rest.
 	heightPane interface{ wantHeight(avail int) int }

@@ -1,8 +1,8 @@
 package ui
 
 import (
-	"bytes"
 	"fmt"
+	"io"
 	"os"
 	"path/filepath"
 	"strings"
@@ -240,22 +240,25 @@ func (r *root) openBlend(path string) {
 // export writes the readout, or the sweep when asked from the sweep pane,
 // with the columns of the state and sweep commands.
 func (r *root) export(path string) {
-	var buf bytes.Buffer
 	asJSON := strings.EqualFold(filepath.Ext(path), ".json")
 	gauge := r.b.in.Gauge
 	what := "readout"
-	var err error
+	var write func(w io.Writer) error
 	if r.exportSrc != nil {
 		res := r.exportSrc.Result()
 		if res == nil {
 			r.setError("no finished sweep to export yet")
 			return
 		}
-		what = fmt.Sprintf("sweep (%d points)", len(res.Points))
-		if asJSON {
-			err = mixtures.WriteSweepJSON(&buf, res, gauge)
-		} else {
-			err = mixtures.WriteCSV(&buf, res.Points, gauge)
+		what = fmt.Sprintf("sweep (%d points)", res.Len())
+		// The pane keeps only what it plots: the export computes the
+		// sweep again and writes each point as it comes.
+		src := r.exportSrc
+		write = func(w io.Writer) error {
+			if asJSON {
+				return report.WriteSweepJSON(w, gauge, src.StreamResult)
+			}
+			return report.WriteSweepCSV(w, gauge, src.StreamResult)
 		}
 	} else {
 		if r.b.stateErr != "" {
@@ -265,16 +268,14 @@ func (r *root) export(path string) {
 		// The state command's writers: the file holds what
 		// zmix state --json (or --csv) prints, cautions and notes included.
 		rep := r.b.stateReport()
-		if asJSON {
-			err = report.WriteStateJSON(&buf, rep)
-		} else {
-			err = report.WriteStateCSV(&buf, rep)
+		write = func(w io.Writer) error {
+			if asJSON {
+				return report.WriteStateJSON(w, rep)
+			}
+			return report.WriteStateCSV(w, rep)
 		}
 	}
-	if err == nil {
-		err = mixtures.WriteFileAtomic(path, buf.Bytes(), 0o644)
-	}
-	if err != nil {
+	if err := mixtures.WriteFileAtomicFunc(path, 0o666, write); err != nil {
 		r.setError("export failed: " + cleanErr(err))
 		return
 	}

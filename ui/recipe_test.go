@@ -70,7 +70,7 @@ func TestRecipeAddBySearch(t *testing.T) {
 	if p.Editing() {
 		t.Errorf("enter did not leave the amount")
 	}
-	if got := b.entries[len(b.entries)-1]; got != (entry{"Ar", "1%"}) {
+	if got := b.entries[len(b.entries)-1]; got != (mixtures.FileComponent{Species: "Ar", Amount: "1%"}) {
 		t.Errorf("last entry = %+v, want Ar 1%%", got)
 	}
 	if x, ok := b.moleFraction("Ar"); !ok || x != 0.01 {

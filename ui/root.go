@@ -56,6 +56,9 @@ type root struct {
 	lastSaved   []byte
 	saving      bool
 	savePending bool
+	dirty       bool     // the saved state may differ from lastSaved
+	dirtyKey    stateKey // the root's own saved fields when last compared
+	snapshots   int      // snapshots taken, for tests of the autosave's cost
 
 	signals  <-chan os.Signal
 	now      func() time.Time
@@ -84,7 +87,8 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 	c := &Common{Styles: DefaultStyles(opt.mono, cfg.ASCII), Keys: DefaultKeyMap(), ASCII: cfg.ASCII, Catalogue: cat}
 	b := newBench(cat)
 	r := &root{c: c, b: b, store: opt.store, now: opt.now, cwd: opt.cwd, signals: opt.signals,
-		input: newField(c), viewer: paneID(-1), lastTyped: map[promptKind]string{}}
+		input: newField(c), viewer: paneID(-1), lastTyped: map[promptKind]string{},
+		dirty: true} // the first message writes the state, in the current format
 
 	var saved *savedState
 	if opt.store != nil {
@@ -214,6 +218,7 @@ func (r *root) broadcast(msg tea.Msg) tea.Cmd {
 func (r *root) afterChange() tea.Cmd {
 	var cmd tea.Cmd
 	if r.b.changed {
+		r.dirty = true
 		r.b.update()
 		cmd = r.syncPanes()
 		r.relayout()

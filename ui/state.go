@@ -5,6 +5,7 @@ import (
 	"encoding/json"
 	"errors"
 	"fmt"
+	"io"
 	"io/fs"
 	"os"
 	"path/filepath"
@@ -14,39 +15,30 @@ import (
 	"zmix/mixtures"
 )
 
-// stateFormat tags the autosaved workbench state.
-const stateFormat = "zmix-workbench/1"
+// stateFormat tags the autosaved workbench state. Version 1 wrote the
+// blend's fields one by one; it still loads (state_v1.go).
+const stateFormat = "zmix-workbench/2"
 
 // stateFileName is the autosave's name inside the state directory.
 const stateFileName = "state.json"
 
 // savedState is what the workbench keeps between runs: everything as the
-// user typed it, so that a restart shows the same screen.
+// user typed it, so that a restart shows the same screen. The recipe and
+// conditions are a blend file, as a blend file is written.
 type savedState struct {
-	Format           string        `json:"format"`
-	Name             string        `json:"name,omitempty"`
-	Note             string        `json:"note,omitempty"`
-	Recipe           []entry       `json:"recipe"`
-	Temperature      string        `json:"temperature"`
-	Pressure         string        `json:"pressure"`
-	StandardPressure string        `json:"standard_pressure"`
-	PressureView     string        `json:"pressure_view"` // "absolute" or "gauge"
-	Sweep            SweepSettings `json:"sweep"`
-	Pane             string        `json:"pane"`
+	Format       string             `json:"format"`
+	Blend        mixtures.BlendFile `json:"blend"`
+	PressureView string             `json:"pressure_view"` // "absolute" or "gauge"
+	Sweep        SweepSettings      `json:"sweep"`
+	Pane         string             `json:"pane"`
 	// BlendPath is the blend file last opened or saved explicitly, and
 	// Unsaved says the recipe changed since then.
 	BlendPath      string `json:"blend_path,omitempty"`
 	Unsaved        bool   `json:"unsaved_changes,omitempty"`
 	AnatomySpecies string `json:"anatomy_species,omitempty"`
-	// LastValid is the text that last resolved, for when what was typed
-	// last does not: the readout restarts from it.
-	LastValid *validText `json:"last_valid,omitempty"`
-}
-
-type validText struct {
-	Recipe      []entry `json:"recipe,omitempty"`
-	Temperature string  `json:"temperature,omitempty"`
-	Pressure    string  `json:"pressure,omitempty"`
+	// LastValid is the recipe and conditions that last resolved, for when
+	// what was typed last does not: the readout restarts from them.
+	LastValid *mixtures.BlendFile `json:"last_valid,omitempty"`
 }
 
 // DefaultStateDir returns $XDG_STATE_HOME/zmix, or ~/.local/state/zmix.
@@ -92,6 +84,44 @@ func (s *stateStore) write(seq uint64, data []byte) error {
 	return nil
 }
 
+// decodeState reads a saved state of either format. Anything after the
+// one JSON value makes the file corrupt: it was not written by us.
+func decodeState(data []byte) (*savedState, error) {
+	var head struct {
+		Format string `json:"format"`
+	}
+	if err := decodeOne(data, &head); err != nil {
+		return nil, err
+	}
+	switch head.Format {
+	case stateFormat:
+		var st savedState
+		if err := decodeOne(data, &st); err != nil {
+			return nil, err
+		}
+		return &st, nil
+	case stateFormatV1:
+		var v1 savedStateV1
+		if err := decodeOne(data, &v1); err != nil {
+			return nil, err
+		}
+		return v1.upgrade(), nil
+	}
+	return nil, fmt.Errorf("format %q, want %q", head.Format, stateFormat)
+}
+
+// decodeOne decodes exactly one JSON value from data.
+func decodeOne(data []byte, v any) error {
+	dec := json.NewDecoder(bytes.NewReader(data))
+	if err := dec.Decode(v); err != nil {
+		return err
+	}
+	if _, err := dec.Token(); err != io.EOF {
+		return errors.New("text after the end of the JSON value")
+	}
+	return nil
+}
+
 // errNoState says there is no saved state yet: a first start.
 var errNoState = errors.New("ui: no saved state")
 
@@ -104,13 +134,9 @@ func (s *stateStore) load(now time.Time) (*savedState, string, error) {
 		return nil, "", errNoState
 	}
 	if err == nil {
-		var st savedState
-		dec := json.NewDecoder(bytes.NewReader(data))
-		if err = dec.Decode(&st); err == nil && st.Format != stateFormat {
-			err = fmt.Errorf("format %q, want %q", st.Format, stateFormat)
-		}
-		if err == nil {
-			return &st, "", nil
+		var st *savedState
+		if st, err = decodeState(data); err == nil {
+			return st, "", nil
 		}
 	}
 	aside := s.path + ".corrupt-" + now.Format("20060102-150405")

@@ -4,11 +4,14 @@ import "zmix/mixtures"
 
 // sweepProp is a curve the sweep pane can plot: a quantity of the blend
 // and, where it has one, the matching quantity of each species. Names,
-// symbols, units, scales and getters all come from the quantity table.
+// symbols, units, scales and getters all come from the quantity table;
+// only which plots exist is written here.
 type sweepProp struct {
-	key string                    // the name in SweepSettings.Property
-	q   *mixtures.Quantity        // the blend's figure
-	sq  *mixtures.SpeciesQuantity // each species' figure; nil: the blend only
+	key     string                    // the name in SweepSettings.Property
+	blend   string                    // key of the blend quantity (mixtures.Quantities)
+	species string                    // key of the species quantity; "": a blend property only
+	q       *mixtures.Quantity        // the blend's row
+	sq      *mixtures.SpeciesQuantity // each species' row; nil for the blend only
 }
 
 // sweepPlots are the plots p cycles through: a key, the blend quantity and
@@ -26,7 +29,7 @@ var sweepProps = func() []sweepProp {
 		if !ok {
 			panic("ui: sweep plot " + sp.key + " names no quantity " + sp.blend)
 		}
-		p := sweepProp{key: sp.key, q: q}
+		p := sweepProp{key: sp.key, blend: sp.blend, species: sp.species, q: q}
 		if sp.species != "" {
 			if p.sq, ok = mixtures.SpeciesQuantityByKey(sp.species); !ok {
 				panic("ui: sweep plot " + sp.key + " names no species quantity " + sp.species)
@@ -36,6 +39,31 @@ var sweepProps = func() []sweepProp {
 	}
 	return out
 }()
+
+// sweepColumns are the columns a sweep of m keeps: the swept and held
+// conditions and every property the pane can plot, so that changing the
+// property or the species recomputes nothing.
+func sweepColumns(m *mixtures.Mixture) []mixtures.SweepColumn {
+	var cols []mixtures.SweepColumn
+	seen := map[string]bool{}
+	for _, key := range []string{"T", "P"} {
+		c, _ := mixtures.BlendColumn(key)
+		cols = append(cols, c)
+	}
+	for _, p := range sweepProps {
+		if !seen["b"+p.blend] {
+			seen["b"+p.blend] = true
+			c, _ := mixtures.BlendColumn(p.blend)
+			cols = append(cols, c)
+		}
+		if p.species != "" && !seen["s"+p.species] {
+			seen["s"+p.species] = true
+			sc, _ := mixtures.SpeciesColumns(p.species, m)
+			cols = append(cols, sc...)
+		}
+	}
+	return cols
+}
 
 // sweepPropIndex returns the index of the property named key, and false
 // for an unknown name.
@@ -48,11 +76,11 @@ func sweepPropIndex(key string) (int, bool) {
 	return 0, false
 }
 
-// blend is the blend's value in display units.
-func (p *sweepProp) blend(s *mixtures.State) float64 { return p.q.Get(s) * p.q.Scale }
+// scale is the blend value's display unit per SI unit; speciesScale the
+// species value's.
+func (p *sweepProp) scale() float64 { return p.q.Scale }
 
-// species is one species' value in display units.
-func (p *sweepProp) species(t *mixtures.SpeciesTerm) float64 { return p.sq.Get(t) * p.sq.Scale }
+func (p *sweepProp) speciesScale() float64 { return p.sq.Scale }
 
 // hasSpecies reports whether the property exists per species.
 func (p *sweepProp) hasSpecies() bool { return p.sq != nil }

@@ -11,6 +11,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 	"github.com/muesli/termenv"
 
+	"zmix/mixtures"
 	"zmix/model"
 )
 
@@ -165,3 +166,12 @@ type panicPane struct{ pane }
 
 func (panicPane) Update(tea.Msg) tea.Cmd { panic("test: a pane's Update fails") }
 func (panicPane) View() string           { panic("test: a pane's View fails") }
+
+// recipe makes recipe lines from species and amounts, in pairs.
+func recipe(speciesAmount ...string) []mixtures.FileComponent {
+	var r []mixtures.FileComponent
+	for i := 0; i+1 < len(speciesAmount); i += 2 {
+		r = append(r, mixtures.FileComponent{Species: speciesAmount[i], Amount: speciesAmount[i+1]})
+	}
+	return r
+}

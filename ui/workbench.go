@@ -11,12 +11,6 @@ import (
 	"zmix/model"
 )
 
-// entry is one line of the recipe, kept exactly as typed.
-type entry struct {
-	Species string `json:"species"`
-	Amount  string `json:"amount"`
-}
-
 // bench is the document the panes edit: the recipe and the conditions as
 // typed, and everything derived from them. The text is the truth; the
 // derived Inputs change only when the text resolves, so a typing slip never
@@ -24,11 +18,11 @@ type entry struct {
 type bench struct {
 	cat *model.Catalogue
 
-	entries            []entry
-	name, note         string // carried from a blend file
+	entries            []mixtures.FileComponent // the recipe, each line as typed
+	name, note         string                   // carried from a blend file
 	tempText, presText string
-	stdAtm             bool // standard pressure 1 atm instead of 1 bar
-	showGauge          bool // show the total pressure as gauge
+	std                mixtures.StdPressure // standard pressure P° of μ°
+	showGauge          bool                 // show the total pressure as gauge
 
 	// Derived by update.
 	rowErr   []string // per entry; "" when the entry reads
@@ -43,7 +37,7 @@ type bench struct {
 
 	// The text of the last valid recipe and conditions, saved with the
 	// state so that a restart with a typing slip still has a state.
-	validEntries         []entry
+	validEntries         []mixtures.FileComponent
 	validTemp, validPres string
 
 	content uint64 // grows with every edit of what a blend file holds
@@ -57,10 +51,7 @@ func newBench(cat *model.Catalogue) *bench { return &bench{cat: cat} }
 // How pressures are shown (absolute or gauge) is the user's setting, which
 // a file does not change; see viewFromFile.
 func (b *bench) loadFile(f *mixtures.BlendFile) {
-	b.entries = b.entries[:0]
-	for _, c := range f.Components {
-		b.entries = append(b.entries, entry{Species: c.Species, Amount: c.Amount})
-	}
+	b.entries = append(b.entries[:0], f.Components...)
 	b.name, b.note = f.Name, f.Note
 	b.loads++
 	if f.Temperature != "" {
@@ -69,27 +60,35 @@ func (b *bench) loadFile(f *mixtures.BlendFile) {
 	if f.Pressure != "" {
 		b.presText = f.Pressure
 	}
-	std, _ := mixtures.StdPressureFromText(f.StandardPressure)
-	b.stdAtm = std == model.StdPressureAtmPa
+	b.std, _ = mixtures.ParseStdPressure(f.StandardPressure)
 	b.touch()
 }
 
 // blendFile returns the recipe and conditions in blend-file form.
 func (b *bench) blendFile() *mixtures.BlendFile {
-	f := &mixtures.BlendFile{Format: mixtures.BlendFormat, Name: b.name, Note: b.note,
+	return &mixtures.BlendFile{Format: mixtures.BlendFormat, Name: b.name, Note: b.note,
+		Components:  append([]mixtures.FileComponent(nil), b.entries...),
 		Temperature: b.tempText, Pressure: b.presText, StandardPressure: b.stdText()}
-	for _, e := range b.entries {
-		f.Components = append(f.Components, mixtures.FileComponent{Species: e.Species, Amount: e.Amount})
-	}
-	return f
 }
 
-func (b *bench) stdText() string {
-	if b.stdAtm {
-		return "1 atm"
-	}
-	return "1 bar"
+// lastValidFile is the recipe and conditions that last resolved.
+func (b *bench) lastValidFile() *mixtures.BlendFile {
+	return &mixtures.BlendFile{Format: mixtures.BlendFormat,
+		Components:  append([]mixtures.FileComponent(nil), b.validEntries...),
+		Temperature: b.validTemp, Pressure: b.validPres, StandardPressure: b.stdText()}
 }
+
+// setText takes the recipe and conditions of f exactly as written, for a
+// restart; unlike loadFile it keeps empty conditions empty.
+func (b *bench) setText(f *mixtures.BlendFile) {
+	b.entries = append(b.entries[:0], f.Components...)
+	b.name, b.note = f.Name, f.Note
+	b.tempText, b.presText = f.Temperature, f.Pressure
+	b.std, _ = mixtures.ParseStdPressure(f.StandardPressure)
+	b.changed = true
+}
+
+func (b *bench) stdText() string { return b.std.String() }
 
 func (b *bench) touch() { b.content++; b.changed = true }
 
@@ -115,7 +114,7 @@ func (b *bench) addSpecies(formula string) (int, bool) {
 			return i, false
 		}
 	}
-	b.entries = append(b.entries, entry{Species: formula})
+	b.entries = append(b.entries, mixtures.FileComponent{Species: formula})
 	b.touch()
 	return len(b.entries) - 1, true
 }
@@ -228,7 +227,7 @@ func (b *bench) setPres(text string) {
 	}
 }
 
-func (b *bench) toggleStd() { b.stdAtm = !b.stdAtm; b.touch() }
+func (b *bench) toggleStd() { b.std = 1 - b.std; b.touch() }
 
 // toggleGauge changes only how pressures are shown, which a blend file
 // does not hold.
@@ -257,10 +256,7 @@ func cleanErr(err error) string {
 func blendErrText(err error) string {
 	var be *mixtures.BlendError
 	if errors.As(err, &be) {
-		if be.Detail != "" {
-			return be.Err.Error() + ": " + be.Detail
-		}
-		return be.Err.Error()
+		return be.Reason()
 	}
 	return cleanErr(err)
 }
@@ -285,10 +281,7 @@ func (b *bench) update() bool {
 		next.PresPa, next.Gauge = p.Pa, p.Gauge
 		b.validPres = b.presText
 	}
-	next.Opts = mixtures.Options{StdPresPa: model.StdPressureBarPa}
-	if b.stdAtm {
-		next.Opts.StdPresPa = model.StdPressureAtmPa
-	}
+	next.Opts = mixtures.Options{Std: b.std}
 
 	if mix := b.resolve(next.PresPa); mix != nil {
 		next.Mixture = mix
@@ -305,23 +298,21 @@ func (b *bench) update() bool {
 }
 
 // resolve checks every entry, then the recipe as a whole; it returns the
-// mixture, or nil with the errors recorded.
+// mixture, or nil with the errors recorded. The entries go to the engine
+// as items, and an error comes back on its row by the item's index.
 func (b *bench) resolve(presPa float64) *mixtures.Mixture {
 	b.rowErr = b.rowErr[:0]
 	b.blendErr = ""
 	bad := false
-	for _, e := range b.entries {
+	items := make([]mixtures.BlendItem, len(b.entries))
+	for i, e := range b.entries {
+		items[i] = mixtures.BlendItem{Species: e.Species, Amount: e.Amount}
 		msg := ""
 		switch {
 		case strings.TrimSpace(e.Amount) == "":
 			msg = "type an amount: 2%, 500 ppm, 0.3 kg/kg, 30 wt%, 0.2 bar or bal"
 		default:
-			if _, ok := b.cat.Lookup(e.Species); !ok {
-				msg = fmt.Sprintf("unknown species %q", e.Species)
-				if sug := b.cat.Suggest(e.Species, 3); len(sug) > 0 {
-					msg += "; did you mean " + strings.Join(sug, ", ") + "?"
-				}
-			} else if _, err := mixtures.ParseAmount(e.Amount); err != nil {
+			if err := mixtures.CheckItem(b.cat, items[i]); err != nil {
 				msg = blendErrText(err)
 			}
 		}
@@ -338,8 +329,7 @@ func (b *bench) resolve(presPa float64) *mixtures.Mixture {
 	if bad {
 		return nil
 	}
-	text, offsets := b.blendText()
-	blend, err := mixtures.ParseBlend(text)
+	blend, err := mixtures.NewBlend(items)
 	if err == nil {
 		if !(presPa > 0) && blend.HasPartialPressures() {
 			b.blendErr = "partial pressures need a valid total pressure"
@@ -351,31 +341,12 @@ func (b *bench) resolve(presPa float64) *mixtures.Mixture {
 		}
 	}
 	var be *mixtures.BlendError
-	if errors.As(err, &be) && be.Offset >= 0 {
-		for i := len(offsets) - 1; i >= 0; i-- {
-			if be.Offset >= offsets[i] {
-				b.rowErr[i] = blendErrText(err)
-				return nil
-			}
-		}
+	if errors.As(err, &be) && be.Index >= 0 && be.Index < len(b.rowErr) {
+		b.rowErr[be.Index] = blendErrText(err)
+		return nil
 	}
 	b.blendErr = blendErrText(err)
 	return nil
-}
-
-// blendText joins the entries into blend text and returns each entry's
-// byte offset in it, so that errors can be put back on their line.
-func (b *bench) blendText() (string, []int) {
-	var sb strings.Builder
-	offsets := make([]int, len(b.entries))
-	for i, e := range b.entries {
-		if i > 0 {
-			sb.WriteString(", ")
-		}
-		offsets[i] = sb.Len()
-		sb.WriteString(e.Species + " " + e.Amount)
-	}
-	return sb.String(), offsets
 }
 
 func sameInputs(a, b Inputs) bool {

@@ -10,7 +10,7 @@ import (
 	"zmix/model"
 )
 
-func testBench(t *testing.T, entries []entry, temp, pres string) *bench {
+func testBench(t *testing.T, entries []mixtures.FileComponent, temp, pres string) *bench {
 	t.Helper()
 	b := newBench(model.Builtin())
 	b.entries = entries
@@ -22,18 +22,18 @@ func testBench(t *testing.T, entries []entry, temp, pres string) *bench {
 func TestBenchErrorsInPlace(t *testing.T) {
 	cases := []struct {
 		name     string
-		entries  []entry
+		entries  []mixtures.FileComponent
 		wantRow  int    // entry that carries the error, -1 for the blend as a whole
 		wantText string // part of the error
 	}{
-		{"unknown species with suggestion", []entry{{"N2", "bal"}, {"Argon2", "1%"}}, 1, "unknown species"},
-		{"bad unit", []entry{{"N2", "bal"}, {"O2", "21 furlongs"}}, 1, "unknown unit"},
-		{"no amount yet", []entry{{"N2", "bal"}, {"O2", ""}}, 1, "type an amount"},
-		{"negative", []entry{{"N2", "bal"}, {"O2", "-3%"}}, 1, "negative"},
-		{"over 100 %", []entry{{"N2", "80%"}, {"O2", "30%"}}, -1, "more than 100 %"},
-		{"under 100 % and no balance", []entry{{"N2", "50%"}, {"O2", "30%"}}, -1, "no species is the balance"},
-		{"two balances", []entry{{"N2", "bal"}, {"Ar", "bal"}}, 1, "more than one balance"},
-		{"comma in an amount", []entry{{"N2", "bal"}, {"O2", "2%, Ar 1%"}}, 1, "one amount per line"},
+		{"unknown species with suggestion", recipe("N2", "bal", "Argon2", "1%"), 1, "unknown species"},
+		{"bad unit", recipe("N2", "bal", "O2", "21 furlongs"), 1, "unknown unit"},
+		{"no amount yet", recipe("N2", "bal", "O2", ""), 1, "type an amount"},
+		{"negative", recipe("N2", "bal", "O2", "-3%"), 1, "negative"},
+		{"over 100 %", recipe("N2", "80%", "O2", "30%"), -1, "more than 100 %"},
+		{"under 100 % and no balance", recipe("N2", "50%", "O2", "30%"), -1, "no species is the balance"},
+		{"two balances", recipe("N2", "bal", "Ar", "bal"), 1, "more than one balance"},
+		{"comma in an amount", recipe("N2", "bal", "O2", "2%, Ar 1%"), 1, "one amount per line"},
 		{"empty", nil, -1, "empty"},
 	}
 	for _, c := range cases {
@@ -54,7 +54,7 @@ func TestBenchErrorsInPlace(t *testing.T) {
 }
 
 func TestBenchUnknownSpeciesSuggests(t *testing.T) {
-	b := testBench(t, []entry{{"N2", "bal"}, {"SiH5", "1%"}}, "300 K", "1 bar")
+	b := testBench(t, recipe("N2", "bal", "SiH5", "1%"), "300 K", "1 bar")
 	if !strings.Contains(b.rowErr[1], "SiH4") {
 		t.Errorf("row error %q, want a suggestion of SiH4", b.rowErr[1])
 	}
@@ -63,7 +63,7 @@ func TestBenchUnknownSpeciesSuggests(t *testing.T) {
 // A typing slip must not replace the last valid state: the Inputs and
 // their generation stay until the text reads again.
 func TestBenchLastValidStays(t *testing.T) {
-	b := testBench(t, []entry{{"N2", "79%"}, {"O2", "21%"}}, "300 K", "1 bar")
+	b := testBench(t, recipe("N2", "79%", "O2", "21%"), "300 K", "1 bar")
 	if !b.in.Valid() || b.in.Gen != 1 {
 		t.Fatalf("first state: valid %v gen %d", b.in.Valid(), b.in.Gen)
 	}
@@ -99,7 +99,7 @@ func TestBenchLastValidStays(t *testing.T) {
 }
 
 func TestBenchNoChangeNoGeneration(t *testing.T) {
-	b := testBench(t, []entry{{"N2", "bal"}, {"O2", "21%"}}, "300 K", "1 bar")
+	b := testBench(t, recipe("N2", "bal", "O2", "21%"), "300 K", "1 bar")
 	gen := b.in.Gen
 	b.setAmount(1, "21 %") // reads the same
 	if b.update() || b.in.Gen != gen {
@@ -127,9 +127,9 @@ func TestBenchNormalise(t *testing.T) {
 	species := []string{"N2", "O2", "Ar"}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
-			var es []entry
+			var es []mixtures.FileComponent
 			for i, a := range c.amounts {
-				es = append(es, entry{species[i], a})
+				es = append(es, mixtures.FileComponent{Species: species[i], Amount: a})
 			}
 			b := testBench(t, es, "300 K", "1 bar")
 			err := b.normalise()
@@ -158,7 +158,7 @@ func TestBenchNormalise(t *testing.T) {
 
 // Moving the balance keeps the blend: the old balance gets its share.
 func TestBenchSetBalance(t *testing.T) {
-	b := testBench(t, []entry{{"N2", "bal"}, {"O2", "21%"}, {"Ar", "1%"}}, "300 K", "1 bar")
+	b := testBench(t, recipe("N2", "bal", "O2", "21%", "Ar", "1%"), "300 K", "1 bar")
 	before := b.in.Mixture
 	b.setBalance(1)
 	b.update()
@@ -182,7 +182,7 @@ func TestBenchSetBalance(t *testing.T) {
 
 // An entry may name its species instead of giving the formula.
 func TestBenchSpeciesByName(t *testing.T) {
-	b := testBench(t, []entry{{"nitrogen", "bal"}, {"argon", "1%"}}, "300 K", "1 bar")
+	b := testBench(t, recipe("nitrogen", "bal", "argon", "1%"), "300 K", "1 bar")
 	if x, ok := b.moleFraction("argon"); !ok || x != 0.01 {
 		t.Errorf("x(argon) = %g, %v", x, ok)
 	}

@@ -63,15 +63,65 @@ func CSVRow(row []string, s *mixtures.State, gauge bool) []string {
 
 func csvFloat(x float64) string { return strconv.FormatFloat(x, 'g', -1, 64) }
 
+// appendCSVRow appends the CSV line of s, the same cells as CSVRow, with
+// no string per cell: a number never needs CSV quoting.
+func appendCSVRow(b []byte, s *mixtures.State, gauge bool) []byte {
+	for i := range mixtures.Quantities {
+		q := &mixtures.Quantities[i]
+		if i > 0 {
+			b = append(b, ',')
+		}
+		b = strconv.AppendFloat(b, q.Get(s), 'g', -1, 64)
+		if q.Key == "P" {
+			b = append(b, ',')
+			b = strconv.AppendBool(b, gauge)
+		}
+	}
+	for i := range mixtures.Quantities {
+		if q := &mixtures.Quantities[i]; q.HasPerKg() {
+			b = append(b, ',')
+			b = strconv.AppendFloat(b, q.PerKg(s), 'g', -1, 64)
+		}
+	}
+	for j := range s.Species {
+		t := &s.Species[j]
+		for i := range mixtures.SpeciesQuantities {
+			b = append(b, ',')
+			b = strconv.AppendFloat(b, mixtures.SpeciesQuantities[i].Get(t), 'g', -1, 64)
+		}
+	}
+	return append(b, '\n')
+}
+
 // jsonWriter appends JSON by hand, in the table's order and with no
 // reflection, so that a sweep can stream a row at a time.
 type jsonWriter struct{ buf []byte }
 
 func (j *jsonWriter) key(indent, name string) {
 	j.buf = append(j.buf, indent...)
-	j.buf = appendJSONString(j.buf, name)
+	if q, ok := quotedNames[name]; ok {
+		j.buf = append(j.buf, q...)
+	} else {
+		j.buf = appendJSONString(j.buf, name)
+	}
 	j.buf = append(j.buf, ": "...)
 }
+
+// quotedNames holds the table's names already JSON-quoted: a sweep
+// writes each of them once per point.
+var quotedNames = func() map[string]string {
+	m := map[string]string{gaugeName: string(appendJSONString(nil, gaugeName)), "species": `"species"`, "name": `"name"`}
+	for _, q := range mixtures.Quantities {
+		m[q.Name] = string(appendJSONString(nil, q.Name))
+		if q.HasPerKg() {
+			m[q.PerKgName] = string(appendJSONString(nil, q.PerKgName))
+		}
+	}
+	for _, q := range mixtures.SpeciesQuantities {
+		m[q.Name] = string(appendJSONString(nil, q.Name))
+	}
+	return m
+}()
 
 // float appends x as encoding/json would write it.
 func (j *jsonWriter) float(x float64) {
@@ -110,25 +160,29 @@ func (j *jsonWriter) stateFields(s *mixtures.State, gauge bool, indent string) {
 	j.key(indent, "species")
 	j.buf = append(j.buf, "[\n"...)
 	inner := indent + "  "
+	inner2 := inner + "  "
 	for k := range s.Species {
 		t := &s.Species[k]
 		if k > 0 {
 			j.buf = append(j.buf, ",\n"...)
 		}
-		j.buf = append(j.buf, indent+"  {\n"...)
-		j.key(inner+"  ", "name")
+		j.buf = append(j.buf, inner...)
+		j.buf = append(j.buf, "{\n"...)
+		j.key(inner2, "name")
 		j.buf = appendJSONString(j.buf, t.Species.Formula)
 		for i := range mixtures.SpeciesQuantities {
 			q := &mixtures.SpeciesQuantities[i]
 			j.buf = append(j.buf, ",\n"...)
-			j.key(inner+"  ", q.Name)
+			j.key(inner2, q.Name)
 			j.float(q.Get(t))
 		}
 		j.buf = append(j.buf, '\n')
-		j.buf = append(j.buf, inner+"}"...)
+		j.buf = append(j.buf, inner...)
+		j.buf = append(j.buf, '}')
 	}
 	j.buf = append(j.buf, '\n')
-	j.buf = append(j.buf, indent+"]"...)
+	j.buf = append(j.buf, indent...)
+	j.buf = append(j.buf, ']')
 }
 
 // strings appends a member holding a list of strings.
@@ -177,6 +231,23 @@ func appendJSONFloat(b []byte, x float64) []byte {
 // escapes it (control characters as \u00XX, so a name holding an escape
 // sequence cannot reach a terminal that shows the file).
 func appendJSONString(b []byte, s string) []byte {
+	if plainJSON(s) {
+		b = append(b, '"')
+		b = append(b, s...)
+		return append(b, '"')
+	}
 	q, _ := json.Marshal(s) // a string always marshals
 	return append(b, q...)
+}
+
+// plainJSON reports whether s needs no escaping in a JSON string, as is
+// the case for formulas and the table's names.
+func plainJSON(s string) bool {
+	for i := 0; i < len(s); i++ {
+		c := s[i]
+		if c < 0x20 || c >= 0x7f || c == '"' || c == '\\' || c == '<' || c == '>' || c == '&' {
+			return false
+		}
+	}
+	return true
 }

@@ -288,3 +288,26 @@ func TestStateTextSanitisesLabel(t *testing.T) {
 		t.Errorf("the JSON holds an ESC byte")
 	}
 }
+
+// The sweep's CSV rows are written by a faster path than a state's; both
+// must give the same cells.
+func TestSweepCSVRowMatchesState(t *testing.T) {
+	r := demoReport(t)
+	got := string(appendCSVRow(nil, r.State, true))
+	var b bytes.Buffer
+	cw := csv.NewWriter(&b)
+	cw.Write(CSVRow(nil, r.State, true))
+	cw.Flush()
+	if got != b.String() {
+		t.Errorf("appendCSVRow = %q\nCSVRow gives %q", got, b.String())
+	}
+}
+
+func TestAppendJSONString(t *testing.T) {
+	for _, s := range []string{"N2", "cp_J_molK", "a\"b", "x<y", "EVIL\x1b[2J", "μ°", "back\\slash"} {
+		want, _ := json.Marshal(s)
+		if got := appendJSONString(nil, s); string(got) != string(want) {
+			t.Errorf("appendJSONString(%q) = %s, want %s", s, got, want)
+		}
+	}
+}

@@ -191,25 +191,25 @@ func writeSweepHeader(w io.Writer, r *SweepReport) {
 // WriteSweepCSV streams the sweep as CSV: one header row, then a row per
 // point as it is computed, with the same columns as a state's CSV.
 func WriteSweepCSV(w io.Writer, gauge bool, points Points) error {
-	bw := bufio.NewWriter(w)
-	cw := csv.NewWriter(bw)
-	row := make([]string, 0, 128)
+	bw := bufio.NewWriterSize(w, 64<<10)
+	var line []byte
 	err := points(func(i int, s *mixtures.State) error {
 		if err := CheckFinite(s); err != nil {
 			return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
 		}
 		if i == 0 {
-			if err := cw.Write(CSVHeader(row[:0], s)); err != nil {
+			// The header may need quoting (a user's species name).
+			cw := csv.NewWriter(bw)
+			if err := cw.Write(CSVHeader(nil, s)); err != nil {
 				return err
 			}
+			cw.Flush()
 		}
-		return cw.Write(CSVRow(row[:0], s, gauge))
-	})
-	cw.Flush()
-	if err != nil {
+		line = appendCSVRow(line[:0], s, gauge)
+		_, err := bw.Write(line)
 		return err
-	}
-	if err := cw.Error(); err != nil {
+	})
+	if err != nil {
 		return err
 	}
 	return bw.Flush()
@@ -218,7 +218,7 @@ func WriteSweepCSV(w io.Writer, gauge bool, points Points) error {
 // WriteSweepJSON streams the sweep as a JSON list of state objects, one
 // per point as it is computed.
 func WriteSweepJSON(w io.Writer, gauge bool, points Points) error {
-	bw := bufio.NewWriter(w)
+	bw := bufio.NewWriterSize(w, 64<<10)
 	var j jsonWriter
 	bw.WriteString("[")
 	err := points(func(i int, s *mixtures.State) error {

@@ -27,7 +27,7 @@ func Wrap(s string, width int) []string {
 		}
 		words := strings.Fields(para)
 		for _, word := range words {
-			ww := runewidth.StringWidth(word)
+			ww := Width(word)
 			if ww > width {
 				// Cut the word rune by rune, measuring each rune once.
 				if n > 0 {
@@ -61,4 +61,9 @@ func Wrap(s string, width int) []string {
 }
 
 // Width is the number of terminal cells plain text s takes.
-func Width(s string) int { return runewidth.StringWidth(s) }
+func Width(s string) int {
+	if isASCII(s) {
+		return len(s) // the common case, and a sweep's every cell
+	}
+	return runewidth.StringWidth(s)
+}
