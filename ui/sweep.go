@@ -17,12 +17,6 @@ import (
 // at a cursor. Sweeps run as chains of commands (sweep_run.go); the chart
 // is drawn in Update (plot.go), so View only joins finished lines.
 
-// Sweep variables by index: the pane remembers a range for each.
-const (
-	sweepVarT = 0
-	sweepVarP = 1
-)
-
 // Fields of the range editor.
 const (
 	sweepFieldFrom = iota
@@ -33,8 +27,6 @@ const (
 
 // sweepDefaultRanges are the ranges a variable starts with.
 var sweepDefaultRanges = [2][2]string{{"200 K", "1500 K"}, {"1 bar", "100 bar"}}
-
-var sweepVarNames = [2]string{"T", "P"}
 
 type sweepPane struct {
 	c    *Common
@@ -108,13 +100,13 @@ func (p *sweepPane) load(s SweepSettings) {
 	if s == (SweepSettings{}) {
 		s = def
 	}
-	if s.Var != "P" {
-		s.Var = "T"
+	if s.Var != mixtures.SweepPressure {
+		s.Var = mixtures.SweepTemperature
 	}
 	if _, ok := sweepPropIndex(s.Property); !ok {
 		s.Property = def.Property
 	}
-	vi := sweepVarIndex(s.Var)
+	vi := s.Var
 	// Start from a range known to be good, then take the saved text as
 	// if typed: a saved entry that no longer parses is shown with its
 	// error instead of being dropped.
@@ -137,21 +129,16 @@ type sweepDrafts struct {
 	steps  string
 }
 
-func sweepVarIndex(v string) int {
-	if v == "P" {
-		return sweepVarP
-	}
-	return sweepVarT
-}
-
-func (p *sweepPane) vi() int { return sweepVarIndex(p.set.Var) }
+// vi is the variable swept, which also indexes the ranges the pane
+// remembers, one per variable.
+func (p *sweepPane) vi() mixtures.SweepVar { return p.set.Var }
 
 // sweepParse reads a range and a number of points as typed. It returns
 // the sweep, an error per field, and an error for the range as a whole.
-func sweepParse(vi int, fromText, toText, stepsText string, logGrid bool) (sw mixtures.Sweep, errs [sweepFieldCount]string, rangeErr string) {
+func sweepParse(vi mixtures.SweepVar, fromText, toText, stepsText string, logGrid bool) (sw mixtures.Sweep, errs [sweepFieldCount]string, rangeErr string) {
 	sw.Log = logGrid
 	parse := func(s string) (float64, error) { return mixtures.ParseTemperature(s) }
-	if vi == sweepVarP {
+	if vi == mixtures.SweepPressure {
 		sw.Var, sw.Log = mixtures.SweepPressure, true
 		parse = func(s string) (float64, error) {
 			pr, err := mixtures.ParsePressure(s)
@@ -406,8 +393,8 @@ func (p *sweepPane) moveCursor(d int) {
 
 func (p *sweepPane) toggleVar() tea.Cmd {
 	p.saveDrafts()
-	vi := 1 - p.vi()
-	p.set.Var = sweepVarNames[vi]
+	vi := p.vi().Other()
+	p.set.Var = vi
 	p.set.From, p.set.To = p.applied[vi][0], p.applied[vi][1]
 	// The remembered range is valid; the drafts may be too.
 	p.sweep, _, _ = sweepParse(vi, p.set.From, p.set.To, strconv.Itoa(p.set.Steps), p.set.Log)
@@ -633,9 +620,8 @@ func (p *sweepPane) rebuildPlot() {
 	spec := plotSpec{grid: res.Grid, xLog: sw.Log || sw.Var == mixtures.SweepPressure,
 		yLabel: prop.axisLabel(ascii, of, overlay), series: series}
 	p.xUnit = "K"
-	name := "T"
+	name := sw.Var.Key()
 	if sw.Var == mixtures.SweepPressure {
-		name = "P"
 		p.xPres = p.pressureUnit()
 		p.xUnit = p.xPres.Name()
 		spec.xDisplay, spec.xData = p.xPres.FromPa, p.xPres.ToPa
@@ -669,9 +655,11 @@ func (p *sweepPane) nonFiniteNote() string {
 
 // xText writes a grid value in the x axis unit.
 func (p *sweepPane) xText(x float64) string {
-	name := "T"
+	name := mixtures.SweepTemperature.Key()
+	if p.result != nil {
+		name = p.result.Sweep.Var.Key()
+	}
 	if p.result != nil && p.result.Sweep.Var == mixtures.SweepPressure {
-		name = "P"
 		x = p.xPres.FromPa(x)
 	}
 	return name + " = " + sweepTrimZeros(report.Sig(x, 6)) + " " + p.xUnit
@@ -756,7 +744,7 @@ func (p *sweepPane) More() (above, below bool) { return false, false }
 func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }
 func (p *sweepPane) stateChanged() bool       { return p.Changed() }
 func (p *sweepPane) restoreState(st *savedState) {
-	if st.Sweep.Var != "" {
+	if st.Sweep != (SweepSettings{}) {
 		p.load(st.Sweep)
 	}
 }

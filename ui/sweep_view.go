@@ -106,7 +106,7 @@ func (p *sweepPane) settingsParts() []string {
 		grid = "log grid"
 	}
 	parts := []string{
-		label("sweep ") + st.Value.Render(p.set.Var) + label("  from ") + field(sweepFieldFrom) + label(" to ") + field(sweepFieldTo),
+		label("sweep ") + st.Value.Render(p.set.Var.Key()) + label("  from ") + field(sweepFieldFrom) + label(" to ") + field(sweepFieldTo),
 		field(sweepFieldSteps) + label(" points"),
 		label(grid),
 	}
