@@ -56,7 +56,7 @@ func (a *app) cmdSweep(g *globalOpts, args []string) error {
 	tempIsRange, presIsRange := strings.Contains(tempText, ".."), strings.Contains(presText, "..")
 	switch {
 	case tempIsRange && presIsRange:
-		return badInput("--temp %q and --pres %q are both ranges; sweep one and give the other as one value, e.g. --temp 300..1500K --pres 1atm", tempText, presText)
+		return badInput("--temp %s and --pres %s are both ranges; sweep one and give the other as one value, e.g. --temp 300..1500K --pres 1atm", model.Quote(tempText), model.Quote(presText))
 	case !tempIsRange && !presIsRange:
 		return badInput("nothing to sweep; give --temp A..B (e.g. 300..1500K) with a fixed --pres, or --pres A..B (e.g. 1..50bar) with a fixed --temp")
 	}
@@ -123,7 +123,7 @@ func (cfg *sweepConfig) pressureSweep(rangeText, tempText string) error {
 		return err
 	}
 	if p1.Gauge != p2.Gauge {
-		return badInput("--pres %q mixes gauge and absolute end points; give both as gauge (1..10barg) or both absolute (1..10bar)", rangeText)
+		return badInput("--pres %s mixes gauge and absolute end points; give both as gauge (1..10barg) or both absolute (1..10bar)", model.Quote(rangeText))
 	}
 	if cfg.src.blend.HasPartialPressures() {
 		return badInput("--blend gives partial pressures, which fix the total; a pressure sweep needs amounts as fractions (%%, ppm, mass %%, bal)")

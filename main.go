@@ -111,7 +111,7 @@ func (a *app) run(args []string) int {
 	}
 	c, ok := lookupCommand(rest[0])
 	if !ok {
-		return a.fail("zmix", badInput("unknown command %q; the commands are %s (zmix --help shows them all)", rest[0], commandNames()))
+		return a.fail("zmix", badInput("unknown command %s; the commands are %s (zmix --help shows them all)", model.Quote(rest[0]), commandNames()))
 	}
 	err = c.run(a, g, rest[1:])
 	if errors.Is(err, errHelp) {
