@@ -217,16 +217,14 @@ func readBlend(spec string) (*blendSource, error) {
 		if path == "" {
 			return nil, badInput("--blend @: the file name is missing; give %s", blendForms)
 		}
-		f, err := mixtures.LoadBlendFile(path)
+		// The blend's items carry their file and line, so that an error
+		// found when it is resolved still names them.
+		f, b, err := mixtures.ReadBlendFile(path)
 		if err != nil {
 			var pe *fs.PathError
 			if errors.As(err, &pe) {
 				return nil, ioFailure(fmt.Errorf("--blend @%s: cannot read it: %v", path, pe.Err))
 			}
-			return nil, badInput("--blend @%s: %v", path, err)
-		}
-		b, err := f.Parse()
-		if err != nil {
 			return nil, badInput("--blend @%s: %v", path, err)
 		}
 		return &blendSource{blend: b, file: f, path: path}, nil

@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"strings"
+	"unicode/utf8"
 
 	"zmix/model"
 )
@@ -26,57 +27,102 @@ type Amount struct {
 	Value float64
 }
 
-// Item is one "SPECIES AMOUNT" entry of a blend, with where it stood in
-// the text so that errors can point at it.
+// BlendItem is one species and its amount as a person wrote them: a
+// recipe row, a blend-file component, or one item of blend text.
+type BlendItem struct {
+	Species string // a formula or name: "SiH4", "nitrogen"
+	Amount  string // blend syntax: "2%", "500 ppm", "0.2 bar", "bal"
+	// Origin says where the item was written, for messages: a file and
+	// line such as "lab.json:7"; "" for none.
+	Origin string
+}
+
+// Item is one parsed entry of a blend.
 type Item struct {
 	Key    string // species as typed
 	Amount Amount
 	Text   string // the amount as typed
-	Offset int    // byte offset of the item in the blend text
+	Index  int    // the item's index among the blend's items
+	Origin string // as in BlendItem
+	// Offset and Length place the item in the blend's Text.
+	Offset int
 	Length int
 }
 
-// Blend is a parsed blend text. It holds no species data, so it can be
-// resolved against any catalogue.
+// Blend is a parsed blend. It holds no species data, so it can be
+// resolved against any catalogue. Text is the blend as text: as typed for
+// ParseBlend, the items joined with ", " for NewBlend.
 type Blend struct {
 	Text  string
 	Items []Item
 }
 
-// Errors of blends; each BlendError wraps one of these.
+// Limits on what one item can hold, so that a pasted or corrupt entry is
+// refused at once with a clear message rather than carried everywhere.
+const (
+	MaxSpeciesChars = 64
+	MaxAmountChars  = 64
+)
+
+// Errors of blends; each BlendError is of one of these kinds.
 var (
 	ErrEmptyBlend     = errors.New("empty blend")
 	ErrNegative       = errors.New("negative amount")
 	ErrOver100        = errors.New("amounts sum to more than 100 %")
 	ErrUnder100       = errors.New("amounts sum to less than 100 % and no species is the balance")
+	ErrBalanceEmpty   = errors.New("nothing is left for the balance species")
 	ErrUnknownSpecies = errors.New("unknown species")
 	ErrSyntax         = errors.New("cannot read item")
 	ErrTwoBalances    = errors.New("more than one balance species")
 	ErrNotFinite      = errors.New("amount is not a finite number")
+	ErrTooLong        = errors.New("entry too long")
 )
 
-// BlendError points at the offending token of a blend.
+// BlendError points at the offending item of a blend, by its index among
+// the items, its place in the blend text and, when the caller gave one,
+// its origin (a file and line).
 type BlendError struct {
 	Text   string // the whole blend text
-	Token  string // the offending token
+	Token  string // the offending item, or species, as typed
 	Offset int    // its byte offset in Text (−1 if the blend as a whole)
+	Index  int    // the offending item's index (−1 if the blend as a whole)
+	Origin string // where the item was written ("lab.json:7"), or ""
 	Err    error  // one of the Err… values above
 	Detail string
 }
 
-func (e *BlendError) Error() string {
+// Error is the message with the package prefix, for logs.
+func (e *BlendError) Error() string { return "mixtures: " + e.UserMessage() }
+
+// UserMessage is the one line a person reads: where, what, and what is
+// accepted.
+func (e *BlendError) UserMessage() string {
 	var b strings.Builder
-	b.WriteString("blend")
-	if e.Offset >= 0 {
-		fmt.Fprintf(&b, " item %q", e.Token)
-	} else {
-		fmt.Fprintf(&b, " %q", e.Text)
+	what := "item"
+	if errors.Is(e.Err, ErrUnknownSpecies) {
+		what = "species"
+	}
+	switch {
+	case e.Index < 0:
+		b.WriteString("blend " + model.Quote(e.Text))
+	case e.Origin != "":
+		b.WriteString(model.Printable(e.Origin) + ": " + what + " " + model.Quote(e.Token))
+	default:
+		b.WriteString("blend " + what + " " + model.Quote(e.Token))
 	}
 	fmt.Fprintf(&b, ": %v", e.Err)
 	if e.Detail != "" {
 		b.WriteString(": " + e.Detail)
 	}
 	return b.String()
+}
+
+// Detail without the place: what the workbench shows on the row itself.
+func (e *BlendError) Reason() string {
+	if e.Detail != "" {
+		return e.Err.Error() + ": " + e.Detail
+	}
+	return e.Err.Error()
 }
 
 func (e *BlendError) Unwrap() error { return e.Err }
@@ -87,9 +133,12 @@ const sumTolerance = 5e-4
 
 const amountForms = "a mole fraction (0.21), mol % (21%), ppm, ppb, mass fraction (0.3 kg/kg), mass % (30 wt%), a partial pressure (0.2 bar), or bal"
 
-// ParseBlend reads blend text such as "SiH4 2%, H2 500ppm, N2 bal".
+// ParseBlend reads blend text such as "SiH4 2%, H2 500ppm, N2 bal": items
+// separated by commas, semicolons or new lines, each a species and an
+// amount. It is a front end to NewBlend.
 func ParseBlend(text string) (*Blend, error) {
-	b := &Blend{Text: text}
+	var items []BlendItem
+	var offsets, lengths []int
 	start := 0
 	for i := 0; i <= len(text); i++ {
 		if i < len(text) && text[i] != ',' && text[i] != ';' && text[i] != '\n' {
@@ -103,36 +152,109 @@ func ParseBlend(text string) (*Blend, error) {
 			continue
 		}
 		off += strings.Index(raw, trimmed)
-		item, err := parseItem(trimmed)
-		if err != nil {
-			err.Text, err.Token, err.Offset = text, trimmed, off
-			return nil, err
+		fields := strings.Fields(trimmed)
+		if len(fields) < 2 {
+			return nil, &BlendError{Text: text, Token: trimmed, Offset: off, Index: len(items), Err: ErrSyntax,
+				Detail: "want SPECIES AMOUNT, where AMOUNT is " + amountForms}
 		}
-		item.Offset, item.Length = off, len(trimmed)
-		b.Items = append(b.Items, item)
+		items = append(items, BlendItem{Species: fields[0], Amount: strings.Join(fields[1:], " ")})
+		offsets, lengths = append(offsets, off), append(lengths, len(trimmed))
 	}
-	if len(b.Items) == 0 {
-		return nil, &BlendError{Text: text, Offset: -1, Err: ErrEmptyBlend, Detail: "want items like \"N2 79%, O2 21%\""}
-	}
-	balances := 0
-	for _, it := range b.Items {
-		if it.Amount.Basis == Balance {
-			balances++
-			if balances > 1 {
-				return nil, &BlendError{Text: text, Token: text[it.Offset : it.Offset+it.Length], Offset: it.Offset, Err: ErrTwoBalances, Detail: "mark one species only as bal"}
-			}
-		}
+	b, err := newBlend(text, items, offsets, lengths)
+	if err != nil {
+		return nil, err
 	}
 	return b, nil
 }
 
-func parseItem(s string) (Item, *BlendError) {
-	fields := strings.Fields(s)
-	if len(fields) < 2 {
-		return Item{}, &BlendError{Err: ErrSyntax, Detail: "want SPECIES AMOUNT, where AMOUNT is " + amountForms}
+// NewBlend builds a blend from items, such as the rows of a recipe or the
+// components of a blend file. An error is a *BlendError whose Index names
+// the item at fault (−1 for the blend as a whole), carrying the item's
+// Origin.
+func NewBlend(items []BlendItem) (*Blend, error) {
+	var sb strings.Builder
+	offsets, lengths := make([]int, len(items)), make([]int, len(items))
+	for i, it := range items {
+		if i > 0 {
+			sb.WriteString(", ")
+		}
+		offsets[i] = sb.Len()
+		sb.WriteString(it.Species + " " + it.Amount)
+		lengths[i] = sb.Len() - offsets[i]
 	}
-	key := fields[0]
-	amountText := strings.Join(fields[1:], " ")
+	b, err := newBlend(sb.String(), items, offsets, lengths)
+	if err != nil {
+		return nil, err
+	}
+	return b, nil
+}
+
+// newBlend parses items that sit at offsets in text.
+func newBlend(text string, items []BlendItem, offsets, lengths []int) (*Blend, *BlendError) {
+	b := &Blend{Text: text, Items: make([]Item, 0, len(items))}
+	for i, in := range items {
+		token := text[offsets[i] : offsets[i]+lengths[i]]
+		fail := func(err *BlendError) *BlendError {
+			err.Text, err.Index, err.Origin = text, i, in.Origin
+			if err.Token == "" {
+				err.Token, err.Offset = token, offsets[i]
+			}
+			return err
+		}
+		item, err := parseItem(in)
+		if err != nil {
+			return nil, fail(err)
+		}
+		item.Index, item.Origin, item.Offset, item.Length = i, in.Origin, offsets[i], lengths[i]
+		if item.Amount.Basis == Balance {
+			for _, prev := range b.Items {
+				if prev.Amount.Basis == Balance {
+					return nil, fail(&BlendError{Err: ErrTwoBalances, Detail: "mark one species only as bal"})
+				}
+			}
+		}
+		b.Items = append(b.Items, item)
+	}
+	if len(b.Items) == 0 {
+		return nil, &BlendError{Text: text, Offset: -1, Index: -1, Err: ErrEmptyBlend, Detail: "want items like \"N2 79%, O2 21%\""}
+	}
+	return b, nil
+}
+
+// CheckItem reports what is wrong with one item on its own: its length,
+// its species (looked up in cat when cat is not nil) and its amount. Its
+// error is the *BlendError that NewBlend or Resolve would give, so a
+// caller can mark every bad row of a recipe at once.
+func CheckItem(cat *model.Catalogue, in BlendItem) error {
+	b, err := NewBlend([]BlendItem{in})
+	if err != nil {
+		return err
+	}
+	if cat != nil {
+		if _, err := b.lookup(cat); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
+func parseItem(in BlendItem) (Item, *BlendError) {
+	key := strings.TrimSpace(in.Species)
+	switch n := utf8.RuneCountInString(in.Species); {
+	case n > MaxSpeciesChars:
+		return Item{}, &BlendError{Err: ErrTooLong,
+			Detail: fmt.Sprintf("a species of %d characters; want a formula or name of at most %d", n, MaxSpeciesChars)}
+	case key == "":
+		return Item{}, &BlendError{Err: ErrSyntax, Detail: "the species is missing; want a formula or name such as N2"}
+	}
+	if n := utf8.RuneCountInString(in.Amount); n > MaxAmountChars {
+		return Item{}, &BlendError{Err: ErrTooLong,
+			Detail: fmt.Sprintf("an amount of %d characters; want at most %d, such as 21%% or bal", n, MaxAmountChars)}
+	}
+	if strings.TrimSpace(in.Amount) == "" {
+		return Item{}, &BlendError{Err: ErrSyntax, Detail: "the amount is missing; want " + amountForms}
+	}
+	amountText := strings.TrimSpace(in.Amount)
 	a, err := parseAmount(amountText)
 	if err != nil {
 		return Item{}, err
@@ -235,6 +357,27 @@ func (b *Blend) SumPartialPa() (sumPa float64, all bool) {
 	return sumPa, all
 }
 
+// balanceMin is the smallest share a balance species may get: anything
+// below is the rounding of amounts that already make 100 %.
+const balanceMin = 1e-12
+
+// lookup finds each item's species in cat.
+func (b *Blend) lookup(cat *model.Catalogue) ([]*model.Species, error) {
+	out := make([]*model.Species, len(b.Items))
+	for i, it := range b.Items {
+		sp, ok := cat.Lookup(it.Key)
+		if !ok {
+			detail := "not in the catalogue"
+			if sug := cat.Suggest(it.Key, 3); len(sug) > 0 {
+				detail = "did you mean " + strings.Join(sug, ", ") + "?"
+			}
+			return nil, &BlendError{Text: b.Text, Token: it.Key, Offset: it.Offset, Index: it.Index, Origin: it.Origin, Err: ErrUnknownSpecies, Detail: detail}
+		}
+		out[i] = sp
+	}
+	return out, nil
+}
+
 // Resolve looks the species up in cat and turns the amounts into mole
 // fractions at total pressure presPa (used only by partial pressures).
 // Species listed more than once are merged; species of zero amount are
@@ -244,20 +387,16 @@ func (b *Blend) Resolve(cat *model.Catalogue, presPa float64) (*Mixture, error) 
 		sp   *model.Species
 		item Item
 	}
+	species, err := b.lookup(cat)
+	if err != nil {
+		return nil, err
+	}
 	entries := make([]entry, len(b.Items))
 	for i, it := range b.Items {
-		sp, ok := cat.Lookup(it.Key)
-		if !ok {
-			detail := "not in the catalogue"
-			if sug := cat.Suggest(it.Key, 3); len(sug) > 0 {
-				detail = "did you mean " + strings.Join(sug, ", ") + "?"
-			}
-			return nil, &BlendError{Text: b.Text, Token: it.Key, Offset: it.Offset, Err: ErrUnknownSpecies, Detail: detail}
-		}
-		entries[i] = entry{sp, it}
+		entries[i] = entry{species[i], it}
 	}
 	whole := func(err error, detail string) error {
-		return &BlendError{Text: b.Text, Offset: -1, Err: err, Detail: detail}
+		return &BlendError{Text: b.Text, Offset: -1, Index: -1, Err: err, Detail: detail}
 	}
 
 	// Mole-fraction items (X), mass-fraction items (W) and the balance:
@@ -298,7 +437,13 @@ func (b *Blend) Resolve(cat *model.Catalogue, presPa float64) (*Mixture, error) 
 		molarMass = (sumXM + (1-sumX)*mb) / denom
 		xBal := 1 - sumX - molarMass*sumWOverM
 		if xBal < -sumTolerance {
-			return nil, whole(ErrOver100, fmt.Sprintf("nothing is left for the balance %s", entries[bal].item.Key))
+			return nil, whole(ErrOver100, fmt.Sprintf("nothing is left for the balance %s", model.Printable(entries[bal].item.Key)))
+		}
+		// A balance that gets nothing would vanish from the blend
+		// without a word; the user meant it to be there.
+		if xBal <= balanceMin {
+			return nil, whole(ErrBalanceEmpty, fmt.Sprintf("the other amounts already make 100 %%, so %s would get nothing; lower them or remove %s",
+				model.Printable(entries[bal].item.Key), model.Printable(entries[bal].item.Key)))
 		}
 	case sumW == 0:
 		if math.Abs(sumX-1) > sumTolerance {
@@ -380,5 +525,6 @@ func NewMixture(comps []Component) (*Mixture, error) {
 	for i := range kept {
 		kept[i].MassFrac = kept[i].X * kept[i].Species.MolarMassKgPerMol / m.MolarMassKgPerMol
 	}
+	m.prepare()
 	return m, nil
 }

@@ -12,6 +12,22 @@ import (
 type Mixture struct {
 	Components        []Component
 	MolarMassKgPerMol float64
+
+	// Set by NewMixture, once, for every state: ln xᵢ of each component
+	// and the ideal mixing entropy −R Σ xᵢ ln xᵢ, which depend on the
+	// composition only.
+	lnX          []float64
+	sMixJPerMolK float64
+}
+
+// prepare computes what every state of the mixture shares.
+func (m *Mixture) prepare() {
+	m.lnX = make([]float64, len(m.Components))
+	m.sMixJPerMolK = 0
+	for i, c := range m.Components {
+		m.lnX[i] = math.Log(c.X)
+		m.sMixJPerMolK -= model.GasConstant * c.X * m.lnX[i]
+	}
 }
 
 // Options are the choices a state is computed with. The zero value means
@@ -110,13 +126,16 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 	} else {
 		s.Species = make([]SpeciesTerm, len(m.Components))
 	}
+	if len(m.lnX) != len(m.Components) {
+		m.prepare()
+	}
 	p0 := opts.stdPresPa()
 	r := model.GasConstant
 	rt := r * tempK
 	s.TempK, s.PresPa, s.StdPresPa = tempK, presPa, p0
 	s.MolarMassKgPerMol = m.MolarMassKgPerMol
 	lnPOverP0 := math.Log(presPa / p0)
-	var cp, cv, h, u, sEnt, g, a, smix float64
+	var cp, cv, h, u, sEnt, g, a float64
 	for i, c := range m.Components {
 		t := &s.Species[i]
 		t.Species, t.X, t.MassFrac = c.Species, c.X, c.MassFrac
@@ -124,11 +143,10 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 		t.PartialPresPa = pi
 		c.Species.Fill(&t.State, tempK, pi, opts.Treatment)
 		st := &t.State
-		lnX := math.Log(c.X)
 		t.MuJPerMol = st.GJPerMol
 		// μ° at P°: the species' G shifted from pᵢ to P°, with
-		// ln(pᵢ/P°) = ln xᵢ + ln(P/P°) so that one logarithm serves both.
-		t.Mu0JPerMol = st.GJPerMol - rt*(lnX+lnPOverP0)
+		// ln(pᵢ/P°) = ln xᵢ + ln(P/P°), ln xᵢ kept by the mixture.
+		t.Mu0JPerMol = st.GJPerMol - rt*(m.lnX[i]+lnPOverP0)
 		t.SJPerMolK, t.CpJPerMolK, t.HJPerMol = st.SJPerMolK, st.CpJPerMolK, st.HJPerMol
 		t.SShareJPerMolK = c.X * st.SJPerMolK
 		t.CpShareJPerMolK = c.X * st.CpJPerMolK
@@ -139,14 +157,13 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 		sEnt += t.SShareJPerMolK
 		g += c.X * st.GJPerMol
 		a += c.X * st.AJPerMol
-		smix -= r * c.X * lnX
 	}
 	s.CpJPerMolK, s.CvJPerMolK = cp, cv
 	s.Gamma = cp / cv
 	s.HJPerMol, s.UJPerMol, s.SJPerMolK, s.GJPerMol = h, u, sEnt, g
 	// A of an ideal mixture: Σ xᵢ Aᵢ(T, pᵢ) = G − PV/n = G − RT.
 	s.AJPerMol = a
-	s.SMixJPerMolK = smix
+	s.SMixJPerMolK = m.sMixJPerMolK
 	s.DensityKgPerM3 = presPa * m.MolarMassKgPerMol / rt
 	s.SoundSpeedMPerS = math.Sqrt(s.Gamma * rt / m.MolarMassKgPerMol)
 }

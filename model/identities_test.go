@@ -321,3 +321,75 @@ func TestBreakdownSums(t *testing.T) {
 		}
 	}
 }
+
+// TestRotorRecurrenceMatchesDirectSum checks the summed rotor, whose
+// Boltzmann factors come by recurrence, against the levels summed here
+// one exp at a time, E_J = kΘ J(J+1), for every linear species from
+// Θ/10 to 50 Θ (the range where Auto sums) and, with RotationSummed, far
+// above it. The direct sum is the definition, so the tolerance is the
+// rounding the recurrence may add.
+func TestRotorRecurrenceMatchesDirectSum(t *testing.T) {
+	const close = 1e-11
+	for _, sp := range Builtin().All() {
+		if sp.Rotor != Linear {
+			continue
+		}
+		theta := sp.RotThetaK()[0]
+		for _, tOverTheta := range []float64{0.1, 0.5, 1, 3, 10, 30, 49.9, 200, 2000} {
+			tempK := tOverTheta * theta
+			if tempK < MinTempK || tempK > MaxTempK {
+				continue
+			}
+			got, err := sp.StateWith(tempK, 1e5, Treatment{Rotation: RotationSummed})
+			if err != nil {
+				t.Fatal(err)
+			}
+			want := directRotorSum(sp, tempK)
+			for _, c := range []struct {
+				name      string
+				got, want float64
+			}{
+				{"ln q", got.Rot.LnQ, want.LnQ},
+				{"U/RT", got.Rot.U, want.U},
+				{"Cv/R", got.Rot.Cv, want.Cv},
+			} {
+				if math.Abs(c.got-c.want) > close*max(1, math.Abs(c.want)) {
+					t.Errorf("%s at %.4g K (%g Θ): rotor %s = %.15g, direct sum %.15g", sp.Formula, tempK, tOverTheta, c.name, c.got, c.want)
+				}
+			}
+		}
+	}
+}
+
+// directRotorSum sums the rigid-rotor levels with one exp a level, with
+// the spin weights of a homonuclear molecule or 1/σ, and takes the moments
+// of the energy for U and Cv. Levels up to 200 kT are summed.
+func directRotorSum(sp *Species, tempK float64) Terms {
+	theta := sp.RotThetaK()[0]
+	weight := func(j int) float64 { return 1 / float64(sp.Symmetry) }
+	if sp.Homonuclear() {
+		norm := sp.SpinWeights[0] + sp.SpinWeights[1]
+		weight = func(j int) float64 { return sp.SpinWeights[j%2] / norm }
+	}
+	// The lowest allowed level sets a shift, so that e^{−x} cannot
+	// underflow at low T; it is put back in ln q and U.
+	shift := math.Inf(1)
+	for j := 0; j < 2; j++ {
+		if weight(j) > 0 {
+			shift = min(shift, float64(j*(j+1))*theta/tempK)
+		}
+	}
+	var z, m1, m2 float64
+	for j := 0; ; j++ {
+		x := float64(j*(j+1)) * theta / tempK
+		if x-shift > 200 {
+			break
+		}
+		tm := weight(j) * float64(2*j+1) * math.Exp(-(x - shift))
+		z += tm
+		m1 += tm * x
+		m2 += tm * x * x
+	}
+	mean := m1 / z
+	return Terms{LnQ: math.Log(z) - shift, U: mean, Cv: m2/z - mean*mean}
+}

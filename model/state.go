@@ -115,15 +115,19 @@ func (sp *Species) Fill(s *State, tempK, presPa float64, tr Treatment) {
 func (sp *Species) fill(s *State, tempK, presPa float64, tr Treatment) {
 	s.TempK, s.PresPa = tempK, presPa
 	lnT := math.Log(tempK)
+	invT := 1 / tempK // one division, shared by every factor
 	s.Trans = sp.translation(lnT, presPa)
-	s.Rot = sp.rotation(tempK, lnT, tr.Rotation)
-	if tr.Vibration == VibrationHarmonic {
-		s.Vib = sp.vibration(tempK)
-	} else {
-		s.Vib = Terms{}
+	s.Rot = sp.rotation(tempK, invT, lnT, tr.Rotation)
+	s.Vib = Terms{}
+	if tr.Vibration == VibrationHarmonic && len(sp.vibModes) > 0 {
+		s.Vib = sp.vibration(invT)
 	}
-	s.Elec = sp.electronic(tempK, tr.Electronic)
-	tot := s.Total()
+	s.Elec = sp.electronic(invT, tr.Electronic)
+	tot := Terms{
+		LnQ: s.Trans.LnQ + s.Rot.LnQ + s.Vib.LnQ + s.Elec.LnQ,
+		U:   s.Trans.U + s.Rot.U + s.Vib.U + s.Elec.U,
+		Cv:  s.Trans.Cv + s.Rot.Cv + s.Vib.Cv + s.Elec.Cv,
+	}
 	r := GasConstant
 	rt := r * tempK
 	s.CvJPerMolK = r * tot.Cv

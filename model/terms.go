@@ -27,8 +27,8 @@ func (sp *Species) translation(lnT, presPa float64) Terms {
 // rotorSumLimit is the T/Θrot below which linear rotor levels are summed.
 const rotorSumLimit = 50
 
-// rotation returns the rigid-rotor terms.
-func (sp *Species) rotation(tempK, lnT float64, how RotationTreatment) Terms {
+// rotation returns the rigid-rotor terms; invT is 1/T.
+func (sp *Species) rotation(tempK, invT, lnT float64, how RotationTreatment) Terms {
 	switch sp.Rotor {
 	case Atom:
 		return Terms{}
@@ -41,28 +41,37 @@ func (sp *Species) rotation(tempK, lnT float64, how RotationTreatment) Terms {
 	case RotationClassical:
 		return Terms{LnQ: sp.lnRotClassical + lnT, U: 1, Cv: 1}
 	case RotationSummed:
-		return sp.linearRotorSum(tempK)
+		return sp.linearRotorSum(invT)
 	}
 	if tempK < rotorSumLimit*theta {
-		return sp.linearRotorSum(tempK)
+		return sp.linearRotorSum(invT)
 	}
-	return linearRotorSeries(sp.lnRotClassical, theta, tempK, lnT)
+	return linearRotorSeries(sp.lnRotClassical, theta*invT, lnT)
 }
 
 // linearRotorSeries is the Euler–Maclaurin expansion of the rigid-rotor
 // sum, q = T/(σΘ)·(1 + y/3 + y²/15 + 4y³/315) with y = Θ/T. Its error at
-// T ≥ 50 Θ is below 1e-8 in ln q.
-func linearRotorSeries(lnInvSigmaTheta, theta, tempK, lnT float64) Terms {
-	y := theta / tempK
-	f := 1 + y/3 + y*y/15 + 4*y*y*y/315
+// T ≥ 50 Θ is below 1e-8 in ln q. The polynomials are in Horner form with
+// the fractions as constants: one division instead of eleven.
+func linearRotorSeries(lnInvSigmaTheta, y, lnT float64) Terms {
+	const (
+		c1  = 1.0 / 3
+		c2  = 1.0 / 15
+		c3  = 4.0 / 315
+		c2d = 2 * c2 // y·d/dy of y² and y³ brings down 2 and 3
+		c3d = 3 * c3
+		c3e = 6 * c3 // y²·d²/dy² of y³ brings down 6
+	)
+	f := 1 + y*(c1+y*(c2+y*c3))
 	// y·df/dy and y²·d²f/dy², to carry the derivatives through T = Θ/y.
-	yf1 := y/3 + 2*y*y/15 + 12*y*y*y/315
-	y2f2 := 2*y*y/15 + 24*y*y*y/315
+	yf1 := y * (c1 + y*(c2d+y*c3d))
+	y2f2 := y * y * (c2d + y*c3e)
 	// With D = T∂/∂T = −y∂/∂y on ln q = ln T + ln f(y):
 	// U = D ln q and Cv = D ln q + D² ln q.
-	g1 := yf1 / f
+	invF := 1 / f
+	g1 := yf1 * invF
 	u := 1 - g1
-	d2 := g1 + y2f2/f - g1*g1
+	d2 := g1 + y2f2*invF - g1*g1
 	return Terms{LnQ: lnInvSigmaTheta + lnT + math.Log(f), U: u, Cv: u + d2}
 }
 
@@ -71,7 +80,12 @@ func linearRotorSeries(lnInvSigmaTheta, theta, tempK, lnT float64) Terms {
 // isomers) or 1/σ for a heteronuclear one. The energy zero stays at J = 0
 // even when J = 0 is forbidden (¹⁶O2), but the sum runs relative to the
 // lowest allowed level, so that it cannot underflow to zero at low T.
-func (sp *Species) linearRotorSum(tempK float64) Terms {
+//
+// The Boltzmann factors come by recurrence, with one exp for the whole
+// sum: from J to J+1 the factor is multiplied by e^{−2(J+1)Θ/T}, and that
+// step itself by c = e^{−2Θ/T}. Rounding grows by one ulp a product, about
+// 1e-13 at the last level that counts while T < 50 Θ.
+func (sp *Species) linearRotorSum(invT float64) Terms {
 	theta := sp.rotThetaK[0]
 	wEven, wOdd := 1.0, 1.0
 	norm := 1.0
@@ -85,29 +99,32 @@ func (sp *Species) linearRotorSum(tempK float64) Terms {
 	if wEven == 0 {
 		j0 = 1
 	}
-	ratio := theta / tempK
-	x0 := float64(j0*(j0+1)) * ratio // lowest allowed level, in units of kT
+	ratio := theta * invT
+	e0 := j0 * (j0 + 1)
+	x0 := float64(e0) * ratio // lowest allowed level, in units of kT
+	c := math.Exp(-2 * ratio)
+	step := c // e^{−2(J+1)Θ/T} at J = j0
+	if j0 == 1 {
+		step = c * c
+	}
+	boltz := 1.0 // e^{−(ε_J − ε_J0)/kT}
 	// Moments of the level energy ε_J − ε_J0, in units of kT.
 	var z, m1, m2 float64
 	for j := j0; ; j++ {
-		x := 0.0
-		if j > j0 {
-			x = float64(j*(j+1)-j0*(j0+1)) * ratio
-			if x > 60 {
-				break
-			}
+		x := float64(j*(j+1)-e0) * ratio
+		if x > 60 {
+			break
 		}
 		w := wEven
-		if j%2 == 1 {
+		if j&1 == 1 {
 			w = wOdd
 		}
-		if w == 0 {
-			continue
-		}
-		t := w * float64(2*j+1) * math.Exp(-x)
+		t := w * float64(2*j+1) * boltz
 		z += t
 		m1 += t * x
 		m2 += t * x * x
+		boltz *= step
+		step *= c
 	}
 	mean := m1 / z
 	return Terms{LnQ: math.Log(z/norm) - x0, U: mean + x0, Cv: m2/z - mean*mean}
@@ -116,9 +133,8 @@ func (sp *Species) linearRotorSum(tempK float64) Terms {
 // vibration returns the harmonic-oscillator terms, energy zero at v = 0.
 // ln q = −Σ g ln(1 − e^{−x}) is taken as the log of one product, so that a
 // mode costs a single exponential.
-func (sp *Species) vibration(tempK float64) Terms {
+func (sp *Species) vibration(invT float64) Terms {
 	var lnQ, u, cv float64
-	invT := 1 / tempK
 	prod := 1.0 // Π (1 − e^{−x})^g not yet logged
 	for _, m := range sp.vibModes {
 		x := m.thetaK * invT
@@ -138,7 +154,7 @@ func (sp *Species) vibration(tempK float64) Terms {
 		case 3:
 			prod *= om * om * om
 		default:
-			prod *= math.Pow(om, m.deg)
+			prod *= powInt(om, m.nDeg)
 		}
 		if prod < 1e-250 { // keep the product clear of underflow
 			lnQ -= math.Log(prod)
@@ -149,21 +165,37 @@ func (sp *Species) vibration(tempK float64) Terms {
 		u += m.deg * xe
 		cv += m.deg * xe * r // x² e^x/(e^x − 1)²
 	}
-	lnQ -= math.Log(prod)
+	if prod != 1 { // no modes, or all frozen: ln 1 costs a call for nothing
+		lnQ -= math.Log(prod)
+	}
 	return Terms{LnQ: lnQ, U: u, Cv: cv}
 }
 
+// powInt returns x^n for n ≥ 0 by squaring: a degeneracy needs no exp and
+// log, as math.Pow would spend.
+func powInt(x float64, n int) float64 {
+	p := 1.0
+	for ; n > 0; n >>= 1 {
+		if n&1 == 1 {
+			p *= x
+		}
+		x *= x
+	}
+	return p
+}
+
 // electronic returns the terms of the listed electronic levels.
-func (sp *Species) electronic(tempK float64, how ElectronicTreatment) Terms {
+func (sp *Species) electronic(invT float64, how ElectronicTreatment) Terms {
 	if len(sp.elecThetaK) == 0 {
 		return Terms{}
 	}
 	if how == ElectronicGroundOnly || len(sp.elecThetaK) == 1 {
 		return Terms{LnQ: sp.lnElecG0}
 	}
-	var z, m1, m2 float64
-	for i, theta := range sp.elecThetaK {
-		x := theta / tempK
+	// The ground level sits at 0: its Boltzmann factor is 1, with no exp.
+	z, m1, m2 := sp.elecDeg[0], 0.0, 0.0
+	for i := 1; i < len(sp.elecThetaK); i++ {
+		x := sp.elecThetaK[i] * invT
 		if x > 700 {
 			continue // unpopulated; skipping it also avoids 0·∞ at tiny T
 		}

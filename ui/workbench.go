@@ -255,10 +255,7 @@ func cleanErr(err error) string {
 func blendErrText(err error) string {
 	var be *mixtures.BlendError
 	if errors.As(err, &be) {
-		if be.Detail != "" {
-			return be.Err.Error() + ": " + be.Detail
-		}
-		return be.Err.Error()
+		return be.Reason()
 	}
 	return cleanErr(err)
 }
@@ -303,23 +300,21 @@ func (b *bench) update() bool {
 }
 
 // resolve checks every entry, then the recipe as a whole; it returns the
-// mixture, or nil with the errors recorded.
+// mixture, or nil with the errors recorded. The entries go to the engine
+// as items, and an error comes back on its row by the item's index.
 func (b *bench) resolve(presPa float64) *mixtures.Mixture {
 	b.rowErr = b.rowErr[:0]
 	b.blendErr = ""
 	bad := false
-	for _, e := range b.entries {
+	items := make([]mixtures.BlendItem, len(b.entries))
+	for i, e := range b.entries {
+		items[i] = mixtures.BlendItem{Species: e.Species, Amount: e.Amount}
 		msg := ""
 		switch {
 		case strings.TrimSpace(e.Amount) == "":
 			msg = "type an amount: 2%, 500 ppm, 0.3 kg/kg, 30 wt%, 0.2 bar or bal"
 		default:
-			if _, ok := b.cat.Lookup(e.Species); !ok {
-				msg = fmt.Sprintf("unknown species %q", e.Species)
-				if sug := b.cat.Suggest(e.Species, 3); len(sug) > 0 {
-					msg += "; did you mean " + strings.Join(sug, ", ") + "?"
-				}
-			} else if _, err := mixtures.ParseAmount(e.Amount); err != nil {
+			if err := mixtures.CheckItem(b.cat, items[i]); err != nil {
 				msg = blendErrText(err)
 			}
 		}
@@ -336,8 +331,7 @@ func (b *bench) resolve(presPa float64) *mixtures.Mixture {
 	if bad {
 		return nil
 	}
-	text, offsets := b.blendText()
-	blend, err := mixtures.ParseBlend(text)
+	blend, err := mixtures.NewBlend(items)
 	if err == nil {
 		if !(presPa > 0) && blend.HasPartialPressures() {
 			b.blendErr = "partial pressures need a valid total pressure"
@@ -349,31 +343,12 @@ func (b *bench) resolve(presPa float64) *mixtures.Mixture {
 		}
 	}
 	var be *mixtures.BlendError
-	if errors.As(err, &be) && be.Offset >= 0 {
-		for i := len(offsets) - 1; i >= 0; i-- {
-			if be.Offset >= offsets[i] {
-				b.rowErr[i] = blendErrText(err)
-				return nil
-			}
-		}
+	if errors.As(err, &be) && be.Index >= 0 && be.Index < len(b.rowErr) {
+		b.rowErr[be.Index] = blendErrText(err)
+		return nil
 	}
 	b.blendErr = blendErrText(err)
 	return nil
-}
-
-// blendText joins the entries into blend text and returns each entry's
-// byte offset in it, so that errors can be put back on their line.
-func (b *bench) blendText() (string, []int) {
-	var sb strings.Builder
-	offsets := make([]int, len(b.entries))
-	for i, e := range b.entries {
-		if i > 0 {
-			sb.WriteString(", ")
-		}
-		offsets[i] = sb.Len()
-		sb.WriteString(e.Species + " " + e.Amount)
-	}
-	return sb.String(), offsets
 }
 
 func sameInputs(a, b Inputs) bool {
