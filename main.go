@@ -155,18 +155,9 @@ func (a *app) fail(prefix string, err error) int {
 	}
 	// One line, and nothing in it that a terminal would act on: the
 	// message may quote a file's contents.
-	fmt.Fprintf(a.stderr, "%s: %s\n", prefix, model.Printable(untypedPrefixes.Replace(model.UserMessage(err))))
+	fmt.Fprintf(a.stderr, "%s: %s\n", prefix, model.Printable(model.UserMessage(err)))
 	return code
 }
-
-// untypedPrefixes is transitional: it goes once every engine error is
-// built with model.Errorf (work in flight in mixtures and model).
-var untypedPrefixes = strings.NewReplacer(
-	"mixtures: bad value: ", "",
-	"mixtures: bad sweep: ", "",
-	"mixtures: ", "",
-	"model: ", "",
-)
 
 // isTerminal reports whether w is a character device such as a terminal.
 func isTerminal(w io.Writer) bool {

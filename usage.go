@@ -2,8 +2,10 @@ package main
 
 import (
 	"io"
+	"strings"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // The help of each command, written out so that it can carry examples and
@@ -13,7 +15,7 @@ import (
 // cannot fall behind what the parser accepts.
 var unitsHelp = "Units:\n" +
 	"  temperature  " + mixtures.TemperatureUnits + ": 300K, 25C, 77 F, 540 R\n" +
-	"  pressure     " + mixtures.PressureUnits + "\n" +
+	"  pressure     " + strings.Join(report.Wrap(mixtures.PressureUnits, 64), "\n               ") + "\n" +
 	"               e.g. 1atm, 14.7 psia, 2 barg; a gauge pressure is read as\n" +
 	"               101325 Pa above the value and flagged as gauge in the output\n"
 
