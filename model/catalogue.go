@@ -215,6 +215,9 @@ func ParseCatalogue(file string, r io.Reader) ([]*Species, error) {
 		if cur.Rotor != Atom && !seen["rot_cm"] {
 			return &CatalogueError{file, curLine, "rot_cm", "missing for a " + cur.Rotor.String() + " rotor"}
 		}
+		if err := cur.Safety.check(); err != nil {
+			return &CatalogueError{file, curLine, "", err.Error()}
+		}
 		if err := cur.Prepare(); err != nil {
 			return &CatalogueError{file, curLine, "", strings.TrimPrefix(err.Error(), "model: ")}
 		}
@@ -258,7 +261,11 @@ func ParseCatalogue(file string, r io.Reader) ([]*Species, error) {
 		key = strings.TrimSpace(key)
 		value, source, _ := strings.Cut(value, "|")
 		value, source = strings.TrimSpace(value), strings.TrimSpace(source)
-		if _, known := catalogueFields[key]; !known {
+		want, known := catalogueFields[key]
+		if sw, ok := safetyFields[key]; ok {
+			want, known = sw, true
+		}
+		if !known {
 			return nil, &CatalogueError{file, lineNo, key, "unknown field (known: " + knownFieldList() + ")"}
 		}
 		if seen[key] {
@@ -266,7 +273,7 @@ func ParseCatalogue(file string, r io.Reader) ([]*Species, error) {
 		}
 		seen[key] = true
 		if err := setField(cur, key, value); err != nil {
-			return nil, &CatalogueError{file, lineNo, key, fmt.Sprintf("%q: %v; want %s", value, err, catalogueFields[key])}
+			return nil, &CatalogueError{file, lineNo, key, fmt.Sprintf("%q: %v; want %s", value, err, want)}
 		}
 		if source != "" {
 			cur.Sources[key] = source
@@ -285,15 +292,19 @@ func ParseCatalogue(file string, r io.Reader) ([]*Species, error) {
 }
 
 func knownFieldList() string {
-	keys := make([]string, 0, len(catalogueFields))
+	keys := make([]string, 0, len(catalogueFields)+len(safetyFields))
 	for k := range catalogueFields {
 		keys = append(keys, k)
 	}
+	keys = append(keys, SafetyFieldNames()...)
 	sort.Strings(keys)
 	return strings.Join(keys, ", ")
 }
 
 func setField(sp *Species, key, value string) error {
+	if _, ok := safetyFields[key]; ok {
+		return setSafetyField(&sp.Safety, key, value)
+	}
 	switch key {
 	case "name":
 		if value == "" {

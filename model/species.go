@@ -117,6 +117,7 @@ type Species struct {
 
 	BoilingK float64 // normal boiling (or sublimation) point; 0 if unknown
 	Hazards  Hazard
+	Safety   SafetyData // flammable limits, ISO 10156 coefficients, LC50
 
 	// Sources maps a field name of the catalogue file (for example "vib")
 	// to the publication its numbers come from.
