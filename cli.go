@@ -291,12 +291,12 @@ func totalPressure(src *blendSource, text string) (pressure, error) {
 	return pressure{}, badInput("--pres is missing; give the total pressure with a unit (%s), e.g. --pres 1atm or --pres 2barg", mixtures.PressureUnits)
 }
 
-func parseStd(text string) (float64, error) {
-	pa, err := mixtures.StdPressureFromText(text)
+func parseStd(text string) (mixtures.StdPressure, error) {
+	std, err := mixtures.ParseStdPressure(text)
 	if err != nil {
 		return 0, badInput("--std: %v", err)
 	}
-	return pa, nil
+	return std, nil
 }
 
 // stepsFlag is --steps: a whole number of points, end points included.
@@ -305,8 +305,8 @@ type stepsFlag struct{ n int }
 func (s *stepsFlag) String() string { return strconv.Itoa(s.n) }
 
 func (s *stepsFlag) Set(v string) error {
-	n, err := strconv.Atoi(strings.TrimSpace(v))
-	if err != nil || n < 2 || n > mixtures.MaxSweepSteps {
+	n, err := mixtures.ParseSteps(strings.TrimSpace(v))
+	if err != nil {
 		return fmt.Errorf("want a whole number of points from 2 to %d, end points included", mixtures.MaxSweepSteps)
 	}
 	s.n = n

@@ -23,7 +23,7 @@ type sweepConfig struct {
 	fixedPres  pressure    // used by a temperature sweep
 	rangeText  string
 	rangeGauge bool // a pressure range given in barg or psig
-	stdPa      float64
+	std        mixtures.StdPressure
 	format     outputFormat
 	ascii      bool
 }
@@ -66,7 +66,7 @@ func (a *app) cmdSweep(g *globalOpts, args []string) error {
 	}
 	given := flagsGiven(fs)
 	cfg := sweepConfig{src: src, format: format, ascii: g.ascii}
-	if cfg.stdPa, err = parseStd(src.pick(given, "std", stdText)); err != nil {
+	if cfg.std, err = parseStd(src.pick(given, "std", stdText)); err != nil {
 		return err
 	}
 	cfg.sweep = mixtures.Sweep{Steps: steps.n, Log: logGrid}
@@ -89,41 +89,22 @@ func (a *app) cmdSweep(g *globalOpts, args []string) error {
 }
 
 func (cfg *sweepConfig) temperatureSweep(rangeText, presText string) error {
-	from, to, err := mixtures.ParseRange(rangeText)
+	r, err := mixtures.ParseSweepRange(mixtures.SweepTemperature, rangeText)
 	if err != nil {
 		return badInput("--temp: %v", err)
-	}
-	t1, err := parseTemperature("--temp", from)
-	if err != nil {
-		return err
-	}
-	t2, err := parseTemperature("--temp", to)
-	if err != nil {
-		return err
 	}
 	if cfg.fixedPres, err = totalPressure(cfg.src, presText); err != nil {
 		return err
 	}
-	cfg.sweep.Var, cfg.sweep.From, cfg.sweep.To = mixtures.SweepTemperature, t1.kelvin, t2.kelvin
+	cfg.sweep = r.Sweep(cfg.sweep.Steps, cfg.sweep.Log)
 	cfg.rangeText = rangeText
 	return nil
 }
 
 func (cfg *sweepConfig) pressureSweep(rangeText, tempText string) error {
-	from, to, err := mixtures.ParseRange(rangeText)
+	r, err := mixtures.ParseSweepRange(mixtures.SweepPressure, rangeText)
 	if err != nil {
 		return badInput("--pres: %v", err)
-	}
-	p1, err := parsePressure("--pres", from)
-	if err != nil {
-		return err
-	}
-	p2, err := parsePressure("--pres", to)
-	if err != nil {
-		return err
-	}
-	if p1.Gauge != p2.Gauge {
-		return badInput("--pres %q mixes gauge and absolute end points; give both as gauge (1..10barg) or both absolute (1..10bar)", rangeText)
 	}
 	if cfg.src.blend.HasPartialPressures() {
 		return badInput("--blend gives partial pressures, which fix the total; a pressure sweep needs amounts as fractions (%%, ppm, mass %%, bal)")
@@ -134,8 +115,8 @@ func (cfg *sweepConfig) pressureSweep(rangeText, tempText string) error {
 	if cfg.fixedTemp, err = parseTemperature("--temp", tempText); err != nil {
 		return err
 	}
-	cfg.sweep.Var, cfg.sweep.From, cfg.sweep.To = mixtures.SweepPressure, p1.Pa, p2.Pa
-	cfg.rangeText, cfg.rangeGauge = rangeText, p1.Gauge
+	cfg.sweep = r.Sweep(cfg.sweep.Steps, cfg.sweep.Log)
+	cfg.rangeText, cfg.rangeGauge = rangeText, r.Gauge
 	return nil
 }
 
@@ -158,7 +139,7 @@ func (a *app) printSweep(cat *model.Catalogue, cfg sweepConfig) error {
 	if err != nil {
 		return badInput("--blend: %s", model.UserMessage(err))
 	}
-	opts := mixtures.Options{StdPresPa: cfg.stdPa}
+	opts := mixtures.Options{Std: cfg.std}
 	if err := mix.CheckSweep(cfg.sweep, cfg.fixedTemp.kelvin, cfg.fixedPres.Pa); err != nil {
 		return badInput("%s", model.UserMessage(err))
 	}
@@ -169,7 +150,7 @@ func (a *app) printSweep(cat *model.Catalogue, cfg sweepConfig) error {
 	rep := &report.SweepReport{
 		Label: cfg.src.label(), Mix: mix, Sweep: cfg.sweep, RangeText: cfg.rangeText, RangeGauge: cfg.rangeGauge,
 		FixedTempK: cfg.fixedTemp.kelvin, FixedPresText: cfg.fixedPres.text, FixedGauge: cfg.fixedPres.Gauge,
-		FixedPresPa: cfg.fixedPres.Pa, StdPresPa: cfg.stdPa, Cautions: mixtures.Cautions(mix, highPa),
+		FixedPresPa: cfg.fixedPres.Pa, StdPresPa: cfg.std.Pa(), Cautions: mixtures.Cautions(mix, highPa),
 	}
 	points := func(yield func(i int, s *mixtures.State) error) error {
 		return mix.Stream(context.Background(), cfg.sweep, cfg.fixedTemp.kelvin, cfg.fixedPres.Pa, opts,

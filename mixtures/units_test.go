@@ -229,7 +229,7 @@ func TestParseRange(t *testing.T) {
 	}
 }
 
-func TestStdPressureFromText(t *testing.T) {
+func TestParseStdPressure(t *testing.T) {
 	cases := []struct {
 		in     string
 		wantPa float64
@@ -237,13 +237,13 @@ func TestStdPressureFromText(t *testing.T) {
 		{"", 1e5}, {"1 bar", 1e5}, {"bar", 1e5}, {"1 BAR", 1e5}, {"1 atm", atmPa}, {" atm ", atmPa},
 	}
 	for _, c := range cases {
-		got, err := StdPressureFromText(c.in)
-		if err != nil || got != c.wantPa {
-			t.Errorf("StdPressureFromText(%q) = %g, %v; want %g (1 bar and 1 atm by definition)", c.in, got, err, c.wantPa)
+		got, err := ParseStdPressure(c.in)
+		if err != nil || got.Pa() != c.wantPa {
+			t.Errorf("ParseStdPressure(%q) = %g, %v; want %g (1 bar and 1 atm by definition)", c.in, got.Pa(), err, c.wantPa)
 		}
 	}
-	if _, err := StdPressureFromText("2 bar"); err == nil || !errors.Is(err, ErrValue) || !strings.Contains(err.Error(), `"2 bar"`) {
-		t.Errorf(`StdPressureFromText("2 bar"): error %v; want one naming the value`, err)
+	if _, err := ParseStdPressure("2 bar"); err == nil || !errors.Is(err, ErrValue) || !strings.Contains(err.Error(), `"2 bar"`) {
+		t.Errorf(`ParseStdPressure("2 bar"): error %v; want one naming the value`, err)
 	}
 }
 

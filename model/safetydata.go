@@ -81,46 +81,65 @@ func (e ExposureLimit) String() string {
 // safetyFields are the catalogue fields of SafetyData, with what each
 // accepts. They sit after a block's hazards line in species.cat.
 var safetyFields = map[string]string{
-	"lfl_pct":   "lower flammable limit in air, % by volume, above 0 and at most 100",
-	"ufl_pct":   "upper flammable limit in air, % by volume, above 0 and at most 100",
-	"autoign_K": "autoignition temperature in K, from 300 to 2000",
-	"tci_pct":   "ISO 10156 Tci, % by mole in nitrogen, above 0 and at most 100",
-	"ki":        "ISO 10156 nitrogen-equivalency coefficient, above 0 and at most 20",
-	"ci":        "ISO 10156 oxygen-equivalency coefficient, above 0 and at most 100",
-	"lc50_ppm":  "LC50, rat, ppm by volume, and its exposure time: 3760 1h or 1880 4h",
-	"oel_ppm":   "limit; kind; jurisdiction; year, e.g. 0.3 TWA; US ACGIH TLV; 2021",
+	"lfl_pct":   lflRange.String(),
+	"ufl_pct":   uflRange.String(),
+	"autoign_K": autoignRange.String(),
+	"tci_pct":   tciRange.String(),
+	"ki":        kiRange.String(),
+	"ci":        ciRange.String(),
+	"lc50_ppm":  "an LC50 in ppm and its exposure time, 1h or 4h: 3760 1h",
+	"oel_ppm":   "limit in ppm, kind; jurisdiction; year: 0.3 TWA; US ACGIH TLV; 2021",
 }
+
+// The ranges of the safety figures, each with the reason for its ends
+// (values from memory).
+var (
+	// Flammable limits are percentages of the mixture with air; acetylene
+	// and ethylene oxide reach 100 %, and no gas burns below about 0.1 %.
+	lflRange = numRange{"lower flammable limit", 0.01, 100, "% by volume", false}
+	uflRange = numRange{"upper flammable limit", 0.01, 100, "% by volume", false}
+	// Carbon disulfide ignites near 363 K, the lowest of common fuels;
+	// none needs more than about 1 300 K. Pyrophoric gases, which ignite at
+	// room temperature, carry that class instead of a number.
+	autoignRange = numRange{"autoignition temperature", 300, 2000, "K", false}
+	tciRange     = numRange{"Tci", 0.01, 100, "% by mole", false}
+	// ISO 10156's Ki run from about 0.5 (the heavy noble gases) to a few
+	// for large molecules such as SF6.
+	kiRange = numRange{"Ki", 0.01, 20, "", false}
+	// Ci: 1 for O2, 40 for F2 and ClF3, the largest tabulated.
+	ciRange = numRange{"Ci", 0.01, 100, "", false}
+	// ppm by volume cannot exceed a million.
+	ppmRange  = numRange{"concentration", 1e-6, 1e6, "ppm", false}
+	yearRange = numRange{"year", 1900, 2100, "", true}
+)
 
 // SafetyFieldNames lists the catalogue fields that hold safety figures.
 func SafetyFieldNames() []string {
 	return []string{"lfl_pct", "ufl_pct", "autoign_K", "tci_pct", "ki", "ci", "lc50_ppm", "oel_ppm"}
 }
 
+// knownField reports whether a species block may hold the field.
+func knownField(key string) bool {
+	_, a := catalogueFields[key]
+	_, b := safetyFields[key]
+	return a || b
+}
+
 func setSafetyField(sd *SafetyData, key, value string) error {
-	inRange := func(lo, hi float64, loOpen bool) (float64, error) {
-		x, err := parseNumber(value)
-		if err != nil {
-			return 0, err
-		}
-		if x > hi || x < lo || (loOpen && x == lo) {
-			return 0, fmt.Errorf("out of range")
-		}
-		return x, nil
-	}
 	var err error
 	switch key {
 	case "lfl_pct":
-		sd.LFLPct, err = inRange(0, 100, true)
+		sd.LFLPct, err = lflRange.parse(value)
 	case "ufl_pct":
-		sd.UFLPct, err = inRange(0, 100, true)
+		sd.UFLPct, err = uflRange.parse(value)
 	case "autoign_K":
-		sd.AutoIgnitionK, err = inRange(300, 2000, false)
+		sd.AutoIgnitionK, err = autoignRange.parse(value)
 	case "tci_pct":
-		sd.TciPct, err = inRange(0, 100, true)
+		sd.TciPct, err = tciRange.parse(value)
 	case "ki":
-		sd.Ki, err = inRange(0, 20, true)
+		sd.Ki, err = kiRange.parse(value)
 	case "ci":
-		sd.Ci, err = inRange(0, 100, true)
+		sd.Ci, err = ciRange.parse(value)
 	case "lc50_ppm":
 		sd.LC50, err = parseLC50(value)
 	case "oel_ppm":
@@ -134,11 +153,11 @@ func setSafetyField(sd *SafetyData, key, value string) error {
 func parseLC50(s string) (LC50, error) {
 	f := strings.Fields(s)
 	if len(f) != 2 {
-		return LC50{}, fmt.Errorf("need a concentration and an exposure time")
+		return LC50{}, Errorf("model", "%s: want %s", Quote(s), safetyFields["lc50_ppm"])
 	}
-	ppm, err := parseNumber(f[0])
-	if err != nil || ppm <= 0 || ppm > 1e6 {
-		return LC50{}, fmt.Errorf("%s is not a concentration from 0 to 1000000 ppm", Quote(f[0]))
+	ppm, err := ppmRange.parse(f[0])
+	if err != nil {
+		return LC50{}, err
 	}
 	switch strings.ToLower(f[1]) {
 	case "1h":
@@ -146,47 +165,50 @@ func parseLC50(s string) (LC50, error) {
 	case "4h":
 		return LC50{ppm, 4}, nil
 	}
-	return LC50{}, fmt.Errorf("exposure time %s is not 1h or 4h", Quote(f[1]))
+	return LC50{}, Errorf("model", "exposure time %s is not 1h or 4h", Quote(f[1]))
 }
 
 // parseExposure reads "0.3 TWA; US ACGIH TLV; 2021".
 func parseExposure(s string) (ExposureLimit, error) {
 	parts := strings.Split(s, ";")
 	if len(parts) != 3 {
-		return ExposureLimit{}, fmt.Errorf("need three parts separated by ;")
+		return ExposureLimit{}, Errorf("model", "%s: want three parts separated by \";\": %s", Quote(s), safetyFields["oel_ppm"])
 	}
 	head := strings.Fields(parts[0])
 	if len(head) != 2 {
-		return ExposureLimit{}, fmt.Errorf("the first part is a limit in ppm and its kind (TWA, STEL or ceiling)")
+		return ExposureLimit{}, Errorf("model", "%s: want a limit in ppm and its kind (TWA, STEL or ceiling)", Quote(parts[0]))
 	}
-	ppm, err := parseNumber(head[0])
-	if err != nil || ppm <= 0 || ppm > 1e6 {
-		return ExposureLimit{}, fmt.Errorf("%s is not a limit from 0 to 1000000 ppm", Quote(head[0]))
+	ppm, err := ppmRange.parse(head[0])
+	if err != nil {
+		return ExposureLimit{}, err
 	}
 	kind := head[1]
 	switch strings.ToLower(kind) {
 	case "twa", "stel", "ceiling":
 	default:
-		return ExposureLimit{}, fmt.Errorf("kind %s is not TWA, STEL or ceiling", Quote(kind))
+		return ExposureLimit{}, Errorf("model", "kind %s is not TWA, STEL or ceiling", Quote(kind))
 	}
 	where := strings.TrimSpace(parts[1])
-	if where == "" || len(where) > 60 {
-		return ExposureLimit{}, fmt.Errorf("the jurisdiction is empty or longer than 60 characters")
+	if where == "" {
+		return ExposureLimit{}, Errorf("model", "the jurisdiction is empty; name it, e.g. US ACGIH TLV")
 	}
-	year, err := strconv.Atoi(strings.TrimSpace(parts[2]))
-	if err != nil || year < 1900 || year > 2100 {
-		return ExposureLimit{}, fmt.Errorf("year %s is not from 1900 to 2100", Quote(strings.TrimSpace(parts[2])))
+	if err := checkText("jurisdiction", where, 60); err != nil {
+		return ExposureLimit{}, err
 	}
-	return ExposureLimit{PPM: ppm, Kind: kind, Jurisdiction: Printable(where), Year: year}, nil
+	year, err := yearRange.parse(strings.TrimSpace(parts[2]))
+	if err != nil {
+		return ExposureLimit{}, err
+	}
+	return ExposureLimit{PPM: ppm, Kind: kind, Jurisdiction: where, Year: int(year)}, nil
 }
 
 // check tests the figures against each other once a block is read.
 func (sd *SafetyData) check() error {
 	if (sd.LFLPct > 0) != (sd.UFLPct > 0) {
-		return fmt.Errorf("lfl_pct and ufl_pct come as a pair: give both or neither")
+		return Errorf("model", "lfl_pct and ufl_pct come as a pair: give both or neither")
 	}
 	if sd.LFLPct > 0 && sd.UFLPct <= sd.LFLPct {
-		return fmt.Errorf("ufl_pct %g is not above lfl_pct %g", sd.UFLPct, sd.LFLPct)
+		return Errorf("model", "ufl_pct %g is not above lfl_pct %g", sd.UFLPct, sd.LFLPct)
 	}
 	return nil
 }

@@ -2,6 +2,7 @@ package ui
 
 import (
 	"bytes"
+	"context"
 	"encoding/json"
 	"os"
 	"os/signal"
@@ -12,6 +13,7 @@ import (
 	"time"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 var blendAir = mixtures.BlendFile{
@@ -53,8 +55,8 @@ func TestAutosaveAndRestore(t *testing.T) {
 	}
 
 	r2 := testRoot(t, 100, 30, testRootOpts{stateDir: dir})
-	if r2.b.entries[1].Amount != "2%x" || r2.b.tempText != "350 K" || !r2.b.stdAtm || !r2.b.showGauge || r2.focus != paneAnatomy {
-		t.Errorf("restored: entries %v temp %q stdAtm %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.stdAtm, r2.b.showGauge, r2.focus.name())
+	if r2.b.entries[1].Amount != "2%x" || r2.b.tempText != "350 K" || r2.b.std != mixtures.StdAtm || !r2.b.showGauge || r2.focus != paneAnatomy {
+		t.Errorf("restored: entries %v temp %q std %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.std, r2.b.showGauge, r2.focus.name())
 	}
 	// The typo is still there, and so is the last valid blend behind it.
 	if r2.b.rowErr[1] == "" || r2.b.in.Mixture == nil || r2.b.in.TempK != 350 {
@@ -254,8 +256,13 @@ func TestExportSweep(t *testing.T) {
 	if err != nil {
 		t.Fatalf("%v (status %q)", err, r.status)
 	}
+	// What zmix sweep writes for the same sweep.
+	k := r.panes[paneSweep].(*sweepPane).resultKey
 	var want bytes.Buffer
-	mixtures.WriteSweepJSON(&want, res, false)
+	report.WriteSweepJSON(&want, false, func(yield func(i int, s *mixtures.State) error) error {
+		return k.mix.Stream(context.Background(), res.Sweep, k.fixedTempK, k.fixedPresPa, k.opts,
+			func(i int, _ float64, s *mixtures.State) error { return yield(i, s) })
+	})
 	if !bytes.Equal(got, want.Bytes()) {
 		t.Errorf("sweep export differs from the sweep command's output")
 	}

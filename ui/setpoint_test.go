@@ -91,12 +91,12 @@ func TestSetpointEscRestores(t *testing.T) {
 func TestSetpointToggles(t *testing.T) {
 	p, b := testSetpoint(t)
 	setpointKeys(p, b, "s")
-	if b.in.Opts.StdPresPa != model.StdPressureAtmPa || !strings.Contains(p.View(), "1 atm") {
-		t.Errorf("s: P° = %g", b.in.Opts.StdPresPa)
+	if b.in.Opts.Std.Pa() != model.StdPressureAtmPa || !strings.Contains(p.View(), "1 atm") {
+		t.Errorf("s: P° = %g", b.in.Opts.Std.Pa())
 	}
 	setpointKeys(p, b, "up", "up", "down", "down", "enter") // the P° line again
-	if b.in.Opts.StdPresPa != model.StdPressureBarPa {
-		t.Errorf("enter on P°: %g", b.in.Opts.StdPresPa)
+	if b.in.Opts.Std.Pa() != model.StdPressureBarPa {
+		t.Errorf("enter on P°: %g", b.in.Opts.Std.Pa())
 	}
 	gen := b.in.Gen
 	setpointKeys(p, b, "g")

@@ -16,12 +16,6 @@ import (
 // at a cursor. Sweeps run as chains of commands (sweep_run.go); the chart
 // is drawn in Update (plot.go), so View only joins finished lines.
 
-// Sweep variables by index: the pane remembers a range for each.
-const (
-	sweepVarT = 0
-	sweepVarP = 1
-)
-
 // Fields of the range editor.
 const (
 	sweepFieldFrom = iota
@@ -32,8 +26,6 @@ const (
 
 // sweepDefaultRanges are the ranges a variable starts with.
 var sweepDefaultRanges = [2][2]string{{"200 K", "1500 K"}, {"1 bar", "100 bar"}}
-
-var sweepVarNames = [2]string{"T", "P"}
 
 type sweepPane struct {
 	c    *Common
@@ -67,7 +59,7 @@ type sweepPane struct {
 	total   int
 	runErr  string
 
-	result    *mixtures.SweepResult
+	result    *mixtures.SweepTable
 	resultKey sweepKey
 
 	plot      *plotModel
@@ -105,13 +97,13 @@ func (p *sweepPane) load(s SweepSettings) {
 	if s == (SweepSettings{}) {
 		s = def
 	}
-	if s.Var != "P" {
-		s.Var = "T"
+	if s.Var != mixtures.SweepPressure {
+		s.Var = mixtures.SweepTemperature
 	}
 	if _, ok := sweepPropIndex(s.Property); !ok {
 		s.Property = def.Property
 	}
-	vi := sweepVarIndex(s.Var)
+	vi := s.Var
 	// Start from a range known to be good, then take the saved text as
 	// if typed: a saved entry that no longer parses is shown with its
 	// error instead of being dropped.
@@ -134,21 +126,16 @@ type sweepDrafts struct {
 	steps  string
 }
 
-func sweepVarIndex(v string) int {
-	if v == "P" {
-		return sweepVarP
-	}
-	return sweepVarT
-}
-
-func (p *sweepPane) vi() int { return sweepVarIndex(p.set.Var) }
+// vi is the variable swept, which also indexes the ranges the pane
+// remembers, one per variable.
+func (p *sweepPane) vi() mixtures.SweepVar { return p.set.Var }
 
 // sweepParse reads a range and a number of points as typed. It returns
 // the sweep, an error per field, and an error for the range as a whole.
-func sweepParse(vi int, fromText, toText, stepsText string, logGrid bool) (sw mixtures.Sweep, errs [sweepFieldCount]string, rangeErr string) {
+func sweepParse(vi mixtures.SweepVar, fromText, toText, stepsText string, logGrid bool) (sw mixtures.Sweep, errs [sweepFieldCount]string, rangeErr string) {
 	sw.Log = logGrid
 	parse := func(s string) (float64, error) { return mixtures.ParseTemperature(s) }
-	if vi == sweepVarP {
+	if vi == mixtures.SweepPressure {
 		sw.Var, sw.Log = mixtures.SweepPressure, true
 		parse = func(s string) (float64, error) {
 			pr, err := mixtures.ParsePressure(s)
@@ -180,24 +167,11 @@ func (e sweepStepsError) Error() string {
 	return "points " + strconv.Quote(e.text) + ": want a whole number from 2 to " + strconv.Itoa(mixtures.MaxSweepSteps)
 }
 
-// sweepParseSteps reads a number of points: digits, optionally grouped
-// with spaces, commas or underscores ("20 000"), or an exact "1e5".
+// sweepParseSteps reads a number of points in the one syntax the
+// commands' --steps takes too (mixtures.ParseSteps).
 func sweepParseSteps(s string) (int, error) {
-	clean := strings.Map(func(r rune) rune {
-		if r == ' ' || r == ',' || r == '_' {
-			return -1
-		}
-		return r
-	}, s)
-	n, err := strconv.Atoi(clean)
+	n, err := mixtures.ParseSteps(s)
 	if err != nil {
-		f, ferr := strconv.ParseFloat(clean, 64)
-		if ferr != nil || f != math.Trunc(f) || f > math.MaxInt32 || f < 0 {
-			return 0, sweepStepsError{s}
-		}
-		n = int(f)
-	}
-	if n < 2 || n > mixtures.MaxSweepSteps {
 		return 0, sweepStepsError{s}
 	}
 	return n, nil
@@ -330,7 +304,7 @@ func (p *sweepPane) progress(msg sweepProgressMsg) tea.Cmd {
 // placeCursor puts the cursor on a new result: where it was, in
 // proportion, or else (first result, other variable) at the grid point
 // nearest the current state.
-func (p *sweepPane) placeCursor(old *mixtures.SweepResult) {
+func (p *sweepPane) placeCursor(old *mixtures.SweepTable) {
 	n := len(p.result.Grid)
 	if old != nil && len(old.Grid) > 1 && old.Sweep.Var == p.result.Sweep.Var {
 		f := float64(p.cursor) / float64(len(old.Grid)-1)
@@ -416,8 +390,8 @@ func (p *sweepPane) moveCursor(d int) {
 
 func (p *sweepPane) toggleVar() tea.Cmd {
 	p.saveDrafts()
-	vi := 1 - p.vi()
-	p.set.Var = sweepVarNames[vi]
+	vi := p.vi().Other()
+	p.set.Var = vi
 	p.set.From, p.set.To = p.applied[vi][0], p.applied[vi][1]
 	// The remembered range is valid; the drafts may be too.
 	p.sweep, _, _ = sweepParse(vi, p.set.From, p.set.To, strconv.Itoa(p.set.Steps), p.set.Log)
@@ -584,17 +558,18 @@ func (p *sweepPane) rebuildPlot() {
 	ascii := p.c.ASCII
 	prop := sweepProps[p.propIndex()]
 	scale := prop.scale
-	blend := plotSeries{name: "blend", y: func(i int) float64 { return prop.blend(&res.Points[i]) * scale }}
+	blendValues := res.Blend(prop.blend)
+	blend := plotSeries{name: "blend", y: func(i int) float64 { return blendValues[i] * scale }}
 	comps := p.resultKey.mix.Components
 	speciesSeries := func(j int) plotSeries {
-		get := prop.species
-		return plotSeries{name: comps[j].Species.Formula, y: func(i int) float64 { return get(&res.Points[i].Species[j]) * scale }}
+		values := res.Species(prop.species, j)
+		return plotSeries{name: comps[j].Species.Formula, y: func(i int) float64 { return values[i] * scale }}
 	}
 	var series []plotSeries
 	var of string
 	overlay := false
 	switch {
-	case prop.species == nil:
+	case prop.species == "":
 		series = []plotSeries{blend}
 		if p.set.Overlay || p.set.Species != "" {
 			p.plotNote = prop.sym(ascii) + " is plotted for the blend only"
@@ -627,9 +602,8 @@ func (p *sweepPane) rebuildPlot() {
 	// The x axis: kelvin, or pressure in bar (Pa for ranges below 0.1 bar).
 	sw := res.Sweep
 	p.xScale, p.xUnit = 1, "K"
-	name := "T"
+	name := sw.Var.Key()
 	if sw.Var == mixtures.SweepPressure {
-		name = "P"
 		p.xUnit = "Pa"
 		if math.Max(sw.From, sw.To) >= 1e4 {
 			p.xScale, p.xUnit = 1e-5, "bar"
@@ -668,9 +642,9 @@ func (p *sweepPane) nonFiniteNote() string {
 
 // xText writes a grid value in the x axis unit.
 func (p *sweepPane) xText(x float64) string {
-	name := "T"
-	if p.result != nil && p.result.Sweep.Var == mixtures.SweepPressure {
-		name = "P"
+	name := mixtures.SweepTemperature.Key()
+	if p.result != nil {
+		name = p.result.Sweep.Var.Key()
 	}
 	return name + " = " + sweepTrimZeros(sig(x*p.xScale, 6)) + " " + p.xUnit
 }
@@ -700,7 +674,14 @@ func (p *sweepPane) Settings() SweepSettings { return p.set }
 func (p *sweepPane) Editing() bool { return p.editing }
 
 // Result returns the last finished sweep, or nil.
-func (p *sweepPane) Result() *mixtures.SweepResult { return p.result }
+func (p *sweepPane) Result() *mixtures.SweepTable { return p.result }
+
+// StreamResult computes the shown sweep again, point by point, with every
+// figure of every point, for an export; the pane keeps only what it
+// plots.
+func (p *sweepPane) StreamResult(yield func(i int, s *mixtures.State) error) error {
+	return p.resultKey.stream(yield)
+}
 
 // ShortHelp is the first few bindings, the most used.
 func (p *sweepPane) ShortHelp() []key.Binding {
@@ -724,7 +705,7 @@ func (p *sweepPane) More() (above, below bool) { return false, false }
 func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }
 func (p *sweepPane) stateChanged() bool       { return p.Changed() }
 func (p *sweepPane) restoreState(st *savedState) {
-	if st.Sweep.Var != "" {
+	if st.Sweep != (SweepSettings{}) {
 		p.load(st.Sweep)
 	}
 }

@@ -2,6 +2,7 @@ package ui
 
 import (
 	"bytes"
+	"context"
 	"math"
 	"reflect"
 	"strings"
@@ -115,10 +116,10 @@ func TestSweepKeysChangeSettings(t *testing.T) {
 		want      SweepSettings
 		recompute bool // a new sweep ran
 	}{
-		{"variable to P", []string{"v"}, with(func(s *SweepSettings) { s.Var, s.From, s.To = "P", "1 bar", "100 bar" }), true},
+		{"variable to P", []string{"v"}, with(func(s *SweepSettings) { s.Var, s.From, s.To = mixtures.SweepPressure, "1 bar", "100 bar" }), true},
 		{"variable back to T", []string{"v", "v"}, def, true},
 		{"log grid", []string{"g"}, with(func(s *SweepSettings) { s.Log = true }), true},
-		{"no linear grid for P", []string{"v", "g"}, with(func(s *SweepSettings) { s.Var, s.From, s.To = "P", "1 bar", "100 bar" }), true},
+		{"no linear grid for P", []string{"v", "g"}, with(func(s *SweepSettings) { s.Var, s.From, s.To = mixtures.SweepPressure, "1 bar", "100 bar" }), true},
 		{"next property", []string{"p"}, with(func(s *SweepSettings) { s.Property = "mu" }), false},
 		{"previous property", []string{"P"}, with(func(s *SweepSettings) { s.Property = "S" }), false},
 		{"property wraps", []string{"p", "p", "p", "p", "p"}, with(func(s *SweepSettings) { s.Property = "S" }), false},
@@ -151,7 +152,7 @@ func TestSweepKeysChangeSettings(t *testing.T) {
 }
 
 func TestSweepPressureOnlyLog(t *testing.T) {
-	p := sweepTestPane(t, false, SweepSettings{Var: "P", From: "1 bar", To: "50 bar", Steps: 30, Property: "S"}, 100, 30)
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepPressure, From: "1 bar", To: "50 bar", Steps: 30, Property: "S"}, 100, 30)
 	sweepPress(t, p, "g")
 	if !strings.Contains(p.View(), "pressure sweeps always use a log grid") {
 		t.Errorf("no notice that P sweeps are log:\n%s", p.View())
@@ -184,7 +185,7 @@ func TestSweepRangeEntry(t *testing.T) {
 		{name: "one point", start: def, pts: "1", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: `points "1": want a whole number from 2 to 200000`},
 		{name: "too many points", start: def, pts: "200001", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "from 2 to 200000"},
 		{name: "equal ends", start: def, from: "500 K", to: "500 K", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "two different end points"},
-		{name: "pressure, gauge", start: SweepSettings{Var: "P", From: "1 bar", To: "100 bar", Steps: 40, Property: "S"}, from: "0 barg", to: "10 barg", wantFrom: "0 barg", wantTo: "10 barg", wantSteps: 40, wantGridFirst: 101325, wantGridLastPa: 1101325},
+		{name: "pressure, gauge", start: SweepSettings{Var: mixtures.SweepPressure, From: "1 bar", To: "100 bar", Steps: 40, Property: "S"}, from: "0 barg", to: "10 barg", wantFrom: "0 barg", wantTo: "10 barg", wantSteps: 40, wantGridFirst: 101325, wantGridLastPa: 1101325},
 		{name: "pressure unit on a T sweep", start: def, to: "5 bar", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: `unknown unit "bar"`},
 	}
 	for _, tc := range tests {
@@ -288,7 +289,7 @@ func TestSweepEscUndoesEdit(t *testing.T) {
 func TestSweepRestoresBadSettings(t *testing.T) {
 	// A saved range that no longer parses is shown, with its error, over
 	// the default range in force.
-	p := newSweepPane(sweepTestCommon(false), SweepSettings{Var: "T", From: "3OO K", To: "900 K", Steps: 50, Property: "nonsense"})
+	p := newSweepPane(sweepTestCommon(false), SweepSettings{Var: mixtures.SweepTemperature, From: "3OO K", To: "900 K", Steps: 50, Property: "nonsense"})
 	p.SetSize(100, 30)
 	s := p.Settings()
 	if s.From != "200 K" || s.To != "1500 K" || s.Property != "Cp" {
@@ -326,7 +327,7 @@ func TestSweepSetInputsOnlyOnChange(t *testing.T) {
 		t.Fatal("a new held pressure starts no sweep")
 	}
 	sweepRun(t, p, cmd)
-	if p.Result() == first || p.Result().Points[0].PresPa != 2e5 {
+	if p.Result() == first || p.Result().Blend("P")[0] != 2e5 {
 		t.Errorf("the result was not recomputed at the new pressure")
 	}
 	if p.SetInputs(Inputs{Gen: 4}) != nil {
@@ -359,7 +360,7 @@ func TestSweepStaleResultsDropped(t *testing.T) {
 	}
 
 	// A stale chunk of a long sweep ends its chain.
-	long := SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 40000, Property: "Cp"}
+	long := SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 40000, Property: "Cp"}
 	p = newSweepPane(sweepTestCommon(false), long)
 	p.SetSize(100, 30)
 	msg := p.SetInputs(in)()
@@ -369,13 +370,13 @@ func TestSweepStaleResultsDropped(t *testing.T) {
 		t.Error("a stale chunk asks for the next chunk")
 	}
 	sweepRun(t, p, newCmd)
-	if got := p.Result().Points[len(p.Result().Points)-1].PresPa; got != 3e5 {
+	if got := p.Result().Blend("P")[p.Result().Len()-1]; got != 3e5 {
 		t.Errorf("result at P = %g Pa, want the newer 3e5", got)
 	}
 }
 
 func TestSweepLongSweepShowsProgress(t *testing.T) {
-	s := SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 100000, Property: "S"}
+	s := SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 100000, Property: "S"}
 	p := newSweepPane(sweepTestCommon(false), s)
 	p.SetSize(100, 30)
 	cmd := p.SetInputs(sweepTestInputs(t))
@@ -402,7 +403,7 @@ func TestSweepLongSweepShowsProgress(t *testing.T) {
 		t.Errorf("%d progress reports, want several", progress)
 	}
 	res := p.Result()
-	if res == nil || len(res.Points) != 100000 {
+	if res == nil || res.Len() != 100000 {
 		t.Fatalf("no full result")
 	}
 	if got := p.Settings().Property; got != "Cp" {
@@ -442,7 +443,7 @@ func (h *sweepHost) View() string { return h.p.View() }
 // the new one finishes.
 func TestSweepInProgram(t *testing.T) {
 	in := sweepTestInputs(t)
-	p := newSweepPane(sweepTestCommon(false), SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 60000, Property: "Cp"})
+	p := newSweepPane(sweepTestCommon(false), SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 60000, Property: "Cp"})
 	tm := teatest.NewTestModel(t, &sweepHost{p: p, in: in}, teatest.WithInitialTermSize(100, 30))
 	tm.Send(sweepKeyMsg("o"))
 	in.Gen, in.PresPa = 2, 5e5
@@ -456,7 +457,7 @@ func TestSweepInProgram(t *testing.T) {
 	}
 	tm.WaitFinished(t, teatest.WithFinalTimeout(5*time.Second))
 	res := p.Result()
-	if res == nil || len(res.Points) != 60000 || res.Points[0].PresPa != 5e5 {
+	if res == nil || res.Len() != 60000 || res.Blend("P")[0] != 5e5 {
 		t.Fatalf("final result is not the sweep of the newer inputs")
 	}
 	if s := p.Settings(); s.Property != "mu" || !s.Overlay {
@@ -479,11 +480,11 @@ func TestSweepChunksMatchRun(t *testing.T) {
 		} else {
 			key.fixedPresPa = 2e5
 		}
-		want, err := m.Run(sw, 400, 2e5, mixtures.Options{})
+		want, err := m.Tabulate(context.Background(), sw, 400, 2e5, mixtures.Options{}, sweepColumns(m))
 		if err != nil {
 			t.Fatal(err)
 		}
-		var got *mixtures.SweepResult
+		var got *mixtures.SweepTable
 		msg := sweepStartCmd(1, key)().(sweepProgressMsg)
 		for chunks := 1; ; chunks++ {
 			if msg.err != nil {
@@ -501,28 +502,12 @@ func TestSweepChunksMatchRun(t *testing.T) {
 		if !reflect.DeepEqual(got.Grid, want.Grid) {
 			t.Fatalf("%+v: chunked grid differs from Mixture.Run's", sw)
 		}
-		for i := range want.Points {
-			if !sweepSameState(&got.Points[i], &want.Points[i]) {
-				t.Fatalf("%+v: point %d differs from Mixture.Run's", sw, i)
+		for c := range want.Columns {
+			if !reflect.DeepEqual(got.Column(c), want.Column(c)) {
+				t.Fatalf("%+v: column %d differs from Mixture.Tabulate's", sw, c)
 			}
 		}
 	}
-}
-
-// sweepSameState reports whether two states are equal bit for bit, species
-// terms included (they share species pointers, which are not followed).
-func sweepSameState(a, b *mixtures.State) bool {
-	if len(a.Species) != len(b.Species) {
-		return false
-	}
-	for j := range a.Species {
-		if a.Species[j] != b.Species[j] {
-			return false
-		}
-	}
-	a2, b2 := *a, *b
-	a2.Species, b2.Species = nil, nil
-	return reflect.DeepEqual(a2, b2)
 }
 
 func TestSweepCursorReadsEngineValues(t *testing.T) {
@@ -534,17 +519,17 @@ func TestSweepCursorReadsEngineValues(t *testing.T) {
 		// want is the engine's value in display units at (T, P).
 		want func(s *mixtures.State) float64
 	}{
-		{"Cp of blend", SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp"}, []string{"home", "right", "right", "."},
+		{"Cp of blend", SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp"}, []string{"home", "right", "right", "."},
 			func(s *mixtures.State) float64 { return s.CpJPerMolK }},
-		{"S of NH3 at end", SweepSettings{Var: "T", From: "300 K", To: "1000 K", Steps: 71, Property: "S", Species: "NH3"}, []string{"end", ","},
+		{"S of NH3 at end", SweepSettings{Var: mixtures.SweepTemperature, From: "300 K", To: "1000 K", Steps: 71, Property: "S", Species: "NH3"}, []string{"end", ","},
 			func(s *mixtures.State) float64 { return sweepTestTerm(s, "NH3").SJPerMolK }},
-		{"mu of SiH4 over P", SweepSettings{Var: "P", From: "0.5 bar", To: "20 bar", Steps: 300, Property: "mu", Species: "SiH4"}, []string{"home", "right", "right", "right"},
+		{"mu of SiH4 over P", SweepSettings{Var: mixtures.SweepPressure, From: "0.5 bar", To: "20 bar", Steps: 300, Property: "mu", Species: "SiH4"}, []string{"home", "right", "right", "right"},
 			func(s *mixtures.State) float64 { return sweepTestTerm(s, "SiH4").MuJPerMol * 1e-3 }},
-		{"mu of blend is G", SweepSettings{Var: "T", From: "200 K", To: "900 K", Steps: 50, Property: "mu"}, []string{"left", "left"},
+		{"mu of blend is G", SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "900 K", Steps: 50, Property: "mu"}, []string{"left", "left"},
 			func(s *mixtures.State) float64 { return s.GJPerMol * 1e-3 }},
-		{"gamma, descending grid", SweepSettings{Var: "T", From: "1500 K", To: "250 K", Steps: 400, Log: true, Property: "gamma"}, []string{"home", "right"},
+		{"gamma, descending grid", SweepSettings{Var: mixtures.SweepTemperature, From: "1500 K", To: "250 K", Steps: 400, Log: true, Property: "gamma"}, []string{"home", "right"},
 			func(s *mixtures.State) float64 { return s.Gamma }},
-		{"H", SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 200, Property: "H"}, []string{"end", "left"},
+		{"H", SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 200, Property: "H"}, []string{"end", "left"},
 			func(s *mixtures.State) float64 { return s.HJPerMol * 1e-3 }},
 	}
 	for _, tc := range tests {
@@ -586,7 +571,7 @@ func TestSweepPressureAxisUnit(t *testing.T) {
 		{"1 atm", "2 atm", "P / bar", " bar "},
 	}
 	for _, tc := range tests {
-		p := sweepTestPane(t, false, SweepSettings{Var: "P", From: tc.from, To: tc.to, Steps: 100, Property: "S"}, 100, 30)
+		p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepPressure, From: tc.from, To: tc.to, Steps: 100, Property: "S"}, 100, 30)
 		if got := p.plot.spec.xLabel; got != tc.label {
 			t.Errorf("%s..%s: x label %q, want %q", tc.from, tc.to, got, tc.label)
 		}
@@ -611,7 +596,7 @@ func TestSweepRunErrorShown(t *testing.T) {
 }
 
 func TestSweepCursorMoves(t *testing.T) {
-	p := sweepTestPane(t, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp"}, 100, 30)
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp"}, 100, 30)
 	sweepPress(t, p, "home")
 	if p.cursor != 0 {
 		t.Fatalf("home: cursor %d, want 0", p.cursor)
@@ -636,7 +621,7 @@ func TestSweepCursorMoves(t *testing.T) {
 }
 
 func TestSweepOverlayLegend(t *testing.T) {
-	p := sweepTestPane(t, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 300, Property: "Cp", Overlay: true}, 120, 40)
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 300, Property: "Cp", Overlay: true}, 120, 40)
 	if len(p.series) != 5 {
 		t.Fatalf("%d curves, want the blend and 4 species", len(p.series))
 	}
@@ -656,9 +641,9 @@ func TestSweepOverlayLegend(t *testing.T) {
 // TestSweepASCIIOnly scans every screen of ASCII mode for bytes above 127.
 func TestSweepASCIIOnly(t *testing.T) {
 	for _, s := range []SweepSettings{
-		{Var: "T", From: "200 K", To: "1500 K", Steps: 500, Property: "Cp", Overlay: true},
-		{Var: "P", From: "1 bar", To: "100 bar", Steps: 200, Property: "mu", Species: "NH3"},
-		{Var: "T", From: "200 K", To: "1500 K", Steps: 50, Property: "gamma"},
+		{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 500, Property: "Cp", Overlay: true},
+		{Var: mixtures.SweepPressure, From: "1 bar", To: "100 bar", Steps: 200, Property: "mu", Species: "NH3"},
+		{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 50, Property: "gamma"},
 	} {
 		p := sweepTestPane(t, true, s, 80, 24)
 		screens := []string{p.View()}
@@ -680,17 +665,17 @@ func TestSweepASCIIOnly(t *testing.T) {
 }
 
 func TestSweepNoNaNOnScreen(t *testing.T) {
-	p := sweepTestPane(t, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 100, Property: "Cp"}, 100, 30)
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 100, Property: "Cp"}, 100, 30)
 	// Spoil a copy of the result, as a broken model would.
-	bad := *p.Result()
-	bad.Points = append([]mixtures.State(nil), bad.Points...)
+	bad := p.Result().Clone()
+	cp := bad.Blend("Cp")
 	for i := 40; i < 60; i++ {
-		bad.Points[i].CpJPerMolK = math.NaN()
+		cp[i] = math.NaN()
 	}
-	bad.Points[70].CpJPerMolK = math.Inf(1)
+	cp[70] = math.Inf(1)
 	p.gen++
 	p.running = true
-	p.Update(sweepProgressMsg{gen: p.gen, job: &sweepJob{key: p.resultKey, res: &bad}, done: 100, total: 100})
+	p.Update(sweepProgressMsg{gen: p.gen, job: &sweepJob{key: p.resultKey, res: bad}, done: 100, total: 100})
 	p.cursor = 50
 	p.refresh()
 	view := p.View()
@@ -707,7 +692,7 @@ func TestSweepNoNaNOnScreen(t *testing.T) {
 func TestSweepTinySizes(t *testing.T) {
 	sizes := [][2]int{{0, 0}, {1, 1}, {10, 3}, {3, 10}, {20, 5}, {30, 8}, {40, 9}, {80, 24}, {200, 60}}
 	for _, ascii := range []bool{false, true} {
-		p := sweepTestPane(t, ascii, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 200, Property: "S", Overlay: true}, 80, 24)
+		p := sweepTestPane(t, ascii, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 200, Property: "S", Overlay: true}, 80, 24)
 		for _, sz := range sizes {
 			p.SetSize(sz[0], sz[1])
 			sweepPress(t, p, "right", "e", "esc")
@@ -752,7 +737,7 @@ func TestSweepKeyHelpComplete(t *testing.T) {
 var sweepViewSink string
 
 func BenchmarkSweepPaneView(b *testing.B) {
-	p := sweepTestPane(b, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
+	p := sweepTestPane(b, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
 	b.ReportAllocs()
 	b.ResetTimer()
 	for i := 0; i < b.N; i++ {
@@ -763,7 +748,7 @@ func BenchmarkSweepPaneView(b *testing.B) {
 // BenchmarkSweepCursorKey is one cursor keystroke: Update, which redraws
 // the rows, then View.
 func BenchmarkSweepCursorKey(b *testing.B) {
-	p := sweepTestPane(b, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
+	p := sweepTestPane(b, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
 	left, right := sweepKeyMsg("left"), sweepKeyMsg("right")
 	b.ReportAllocs()
 	b.ResetTimer()
@@ -789,7 +774,7 @@ func TestSweepTrimZeros(t *testing.T) {
 // points arrives: the curves are scanned, reduced and drawn, and the pane
 // laid out at 120x40.
 func BenchmarkSweepResultArrives(b *testing.B) {
-	p := sweepTestPane(b, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
+	p := sweepTestPane(b, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
 	job := &sweepJob{key: p.resultKey, res: p.Result()}
 	b.ReportAllocs()
 	b.ResetTimer()

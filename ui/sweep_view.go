@@ -98,7 +98,7 @@ func (p *sweepPane) settingsLine() string {
 	if p.sweep.Log || p.sweep.Var == mixtures.SweepPressure {
 		grid = "log grid"
 	}
-	line := label("sweep ") + st.Value.Render(p.set.Var) +
+	line := label("sweep ") + st.Value.Render(p.set.Var.Key()) +
 		label("  from ") + field(sweepFieldFrom) + label(" to ") + field(sweepFieldTo) +
 		"  " + field(sweepFieldSteps) + label(" points") + "  " + label(grid)
 	if p.haveIn && p.in.Valid() {

@@ -20,8 +20,8 @@ type bench struct {
 	entries            []mixtures.FileComponent // the recipe, each line as typed
 	name, note         string                   // carried from a blend file
 	tempText, presText string
-	stdAtm             bool // standard pressure 1 atm instead of 1 bar
-	showGauge          bool // show the total pressure as gauge
+	std                mixtures.StdPressure // standard pressure P° of μ°
+	showGauge          bool                 // show the total pressure as gauge
 
 	// Derived by update.
 	rowErr   []string // per entry; "" when the entry reads
@@ -57,8 +57,7 @@ func (b *bench) loadFile(f *mixtures.BlendFile) {
 	if f.Pressure != "" {
 		b.presText = f.Pressure
 	}
-	std, _ := mixtures.StdPressureFromText(f.StandardPressure)
-	b.stdAtm = std == model.StdPressureAtmPa
+	b.std, _ = mixtures.ParseStdPressure(f.StandardPressure)
 	if p, err := mixtures.ParsePressure(b.presText); err == nil {
 		b.showGauge = p.Gauge
 	}
@@ -85,17 +84,11 @@ func (b *bench) setText(f *mixtures.BlendFile) {
 	b.entries = append(b.entries[:0], f.Components...)
 	b.name, b.note = f.Name, f.Note
 	b.tempText, b.presText = f.Temperature, f.Pressure
-	std, _ := mixtures.StdPressureFromText(f.StandardPressure)
-	b.stdAtm = std == model.StdPressureAtmPa
+	b.std, _ = mixtures.ParseStdPressure(f.StandardPressure)
 	b.changed = true
 }
 
-func (b *bench) stdText() string {
-	if b.stdAtm {
-		return "1 atm"
-	}
-	return "1 bar"
-}
+func (b *bench) stdText() string { return b.std.String() }
 
 func (b *bench) touch() { b.content++; b.changed = true }
 
@@ -234,7 +227,7 @@ func (b *bench) setPres(text string) {
 	}
 }
 
-func (b *bench) toggleStd() { b.stdAtm = !b.stdAtm; b.touch() }
+func (b *bench) toggleStd() { b.std = 1 - b.std; b.touch() }
 
 // toggleGauge changes only how pressures are shown, which a blend file
 // does not hold.
@@ -280,10 +273,7 @@ func (b *bench) update() bool {
 		next.PresPa, next.Gauge = p.Pa, p.Gauge
 		b.validPres = b.presText
 	}
-	next.Opts = mixtures.Options{StdPresPa: model.StdPressureBarPa}
-	if b.stdAtm {
-		next.Opts.StdPresPa = model.StdPressureAtmPa
-	}
+	next.Opts = mixtures.Options{Std: b.std}
 
 	if mix := b.resolve(next.PresPa); mix != nil {
 		next.Mixture = mix
