@@ -9,6 +9,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // The sweep pane moves T or P across a grid, plots one property of the
@@ -64,9 +65,11 @@ type sweepPane struct {
 
 	plot      *plotModel
 	series    []plotSeries
-	plotNote  string // what the plot leaves out, or why it is empty
-	xScale    float64
-	xUnit     string
+	plotNote  string                // what the plot leaves out, or why it is empty
+	plotted   string                // whose curves the plot draws, for the header
+	xUnit     string                // the x axis unit's name
+	xPres     mixtures.PressureUnit // the unit of a pressure sweep's axis
+	presShown string                // the held pressure as last shown
 	cursor    int
 	chartRows int
 	view      string
@@ -551,25 +554,29 @@ func (p *sweepPane) rebuildPlot() {
 	p.plotNote = ""
 	if p.result == nil {
 		p.series = nil
+		p.plotted = ""
 		p.plot.clear()
 		return
 	}
 	res := p.result
 	ascii := p.c.ASCII
-	prop := sweepProps[p.propIndex()]
-	scale := prop.scale
+	prop := &sweepProps[p.propIndex()]
+	scale, speciesScale := prop.scale(), 1.0
+	if prop.hasSpecies() {
+		speciesScale = prop.speciesScale()
+	}
 	blendValues := res.Blend(prop.blend)
 	blend := plotSeries{name: "blend", y: func(i int) float64 { return blendValues[i] * scale }}
 	comps := p.resultKey.mix.Components
 	speciesSeries := func(j int) plotSeries {
 		values := res.Species(prop.species, j)
-		return plotSeries{name: comps[j].Species.Formula, y: func(i int) float64 { return values[i] * scale }}
+		return plotSeries{name: comps[j].Species.Formula, y: func(i int) float64 { return values[i] * speciesScale }}
 	}
 	var series []plotSeries
 	var of string
 	overlay := false
 	switch {
-	case prop.species == "":
+	case !prop.hasSpecies():
 		series = []plotSeries{blend}
 		if p.set.Overlay || p.set.Species != "" {
 			p.plotNote = prop.sym(ascii) + " is plotted for the blend only"
@@ -598,24 +605,30 @@ func (p *sweepPane) rebuildPlot() {
 		series = []plotSeries{blend}
 	}
 	p.series = series
+	// The header names what is drawn, never a choice that could not be.
+	p.plotted = "blend"
+	switch {
+	case overlay:
+		p.plotted = "blend and species"
+	case of != "":
+		p.plotted = of
+	}
 
-	// The x axis: kelvin, or pressure in bar (Pa for ranges below 0.1 bar).
+	// The x axis: kelvin, or pressure in the unit the range was typed in,
+	// read as gauge where it was typed so or the workbench shows gauge.
 	sw := res.Sweep
-	p.xScale, p.xUnit = 1, "K"
+	spec := plotSpec{grid: res.Grid, xLog: sw.Log || sw.Var == mixtures.SweepPressure,
+		yLabel: prop.axisLabel(ascii, of, overlay), series: series}
+	p.xUnit = "K"
 	name := sw.Var.Key()
 	if sw.Var == mixtures.SweepPressure {
-		p.xUnit = "Pa"
-		if math.Max(sw.From, sw.To) >= 1e4 {
-			p.xScale, p.xUnit = 1e-5, "bar"
-		}
+		p.xPres = p.pressureUnit()
+		p.xUnit = p.xPres.Name()
+		spec.xDisplay, spec.xData = p.xPres.FromPa, p.xPres.ToPa
 	}
-	xLog := sw.Log || sw.Var == mixtures.SweepPressure
-	xLabel := name + " / " + p.xUnit
+	spec.xLabel = name + " in " + p.xUnit
 	p.plot.cursor = p.cursor
-	p.plot.setSpec(plotSpec{
-		grid: res.Grid, xScale: p.xScale, xLog: xLog, xLabel: xLabel,
-		yLabel: prop.axisLabel(ascii, of, overlay), series: series,
-	})
+	p.plot.setSpec(spec)
 	if p.plotNote == "" {
 		p.plotNote = p.nonFiniteNote()
 	}
@@ -646,7 +659,24 @@ func (p *sweepPane) xText(x float64) string {
 	if p.result != nil {
 		name = p.result.Sweep.Var.Key()
 	}
-	return name + " = " + sweepTrimZeros(sig(x*p.xScale, 6)) + " " + p.xUnit
+	if p.result != nil && p.result.Sweep.Var == mixtures.SweepPressure {
+		x = p.xPres.FromPa(x)
+	}
+	return name + " = " + sweepTrimZeros(report.Sig(x, 6)) + " " + p.xUnit
+}
+
+// pressureUnit is the unit pressures of the sweep show in: that of the
+// range as typed, read as gauge when typed so or when the workbench shows
+// pressures as gauge.
+func (p *sweepPane) pressureUnit() mixtures.PressureUnit {
+	u, ok := mixtures.PressureUnitOf(p.set.From)
+	if !ok {
+		u = mixtures.BarAbsolute
+	}
+	if p.b != nil && p.b.showGauge {
+		u = u.Reading(true)
+	}
+	return u
 }
 
 // sweepTrimZeros drops trailing zeros after a decimal point: grid points
@@ -695,6 +725,15 @@ func (p *sweepPane) Title() string { return "Sweep" }
 func (p *sweepPane) Sync() tea.Cmd {
 	if p.b == nil {
 		return nil
+	}
+	if shown := p.b.presShown(p.b.in.PresPa); shown != p.presShown {
+		// The workbench's pressure view changed: the header and a
+		// pressure axis follow.
+		p.presShown = shown
+		if p.result != nil && p.result.Sweep.Var == mixtures.SweepPressure {
+			p.rebuildPlot()
+		}
+		p.refresh()
 	}
 	return p.SetInputs(p.b.in)
 }

@@ -14,6 +14,7 @@ import (
 	"github.com/charmbracelet/x/exp/teatest"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -57,7 +58,7 @@ func sweepTestPane(t testing.TB, ascii bool, s SweepSettings, w, h int) *sweepPa
 	p.SetSize(w, h)
 	sweepRun(t, p, p.SetInputs(sweepTestInputs(t)))
 	if p.Result() == nil {
-		t.Fatalf("no result after the first sweep; status %q", p.statusLine())
+		t.Fatalf("no result after the first sweep; status %q", p.statusLines(200))
 	}
 	return p
 }
@@ -551,7 +552,7 @@ func TestSweepCursorReadsEngineValues(t *testing.T) {
 				t.Errorf("cursor value at point %d = %v, want %v (engine)", i, got, want)
 			}
 			view := p.View()
-			for _, s := range []string{sig(want, 5), p.xText(res.Grid[i])} {
+			for _, s := range []string{report.Sig(want, 5), p.xText(res.Grid[i])} {
 				if !strings.Contains(view, s) {
 					t.Errorf("readout lacks %q:\n%s", s, view)
 				}
@@ -566,9 +567,11 @@ func TestSweepPressureAxisUnit(t *testing.T) {
 		label    string
 		readout  string // the unit in the cursor line
 	}{
-		{"0.5 bar", "20 bar", "P / bar", " bar "},
-		{"10 Pa", "5000 Pa", "P / Pa", " Pa "},
-		{"1 atm", "2 atm", "P / bar", " bar "},
+		// The unit typed, its reading named (issue 7, item 9).
+		{"0.5 bar", "20 bar", "P in bar abs", " bar abs "},
+		{"10 Pa", "5000 Pa", "P in Pa abs", " Pa abs "},
+		{"1 atm", "2 atm", "P in atm", " atm "},
+		{"5 psig", "150 psig", "P in psig", " psig "},
 	}
 	for _, tc := range tests {
 		p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepPressure, From: tc.from, To: tc.to, Steps: 100, Property: "S"}, 100, 30)
@@ -783,5 +786,24 @@ func BenchmarkSweepResultArrives(b *testing.B) {
 		p.running = true
 		p.Update(sweepProgressMsg{gen: p.gen, job: job, done: 1000, total: 1000})
 		sweepViewSink = p.View()
+	}
+}
+
+// The legend says where a curve hidden under the blend is, and the header
+// names only what is plotted (issue 7, item 10).
+func TestSweepHiddenCurveAndHeader(t *testing.T) {
+	// The sweep pane of the 120×40 screen.
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepPressure, From: "1 bar", To: "100 bar", Steps: 200, Property: "Cp", Overlay: true}, 72, 17)
+	if v := p.View(); !strings.Contains(v, "N2 29.113 (under ") {
+		t.Errorf("N2 lies under another curve, and the legend does not say so:\n%s", v)
+	}
+	for _, s := range []SweepSettings{
+		{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 100, Property: "gamma", Species: "SiH4"}, // γ: the blend only
+		{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 100, Property: "Cp", Species: "Xe"},      // not in the blend
+	} {
+		p := sweepTestPane(t, false, s, 118, 20)
+		if v := p.View(); strings.Contains(v, "of "+s.Species) || !strings.Contains(v, "of blend") {
+			t.Errorf("%s of %s: the header names a curve that is not drawn:\n%s", s.Property, s.Species, v)
+		}
 	}
 }
