@@ -49,8 +49,8 @@ type recipePane struct {
 	// nothing; beforeEntries is the recipe when an amount was opened.
 	nearest       bool
 	beforeEntries []mixtures.FileComponent
-	msg    string // the pane's last remark, e.g. why normalise refused
-	loads  uint64 // the bench's loads when last synced
+	msg           string // the pane's last remark, e.g. why normalise refused
+	loads         uint64 // the bench's loads when last synced
 
 	scroll scroller
 }

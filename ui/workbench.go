@@ -21,7 +21,7 @@ type bench struct {
 	entries            []mixtures.FileComponent // the recipe, each line as typed
 	undo               []mixtures.FileComponent // the recipe before its last change
 	canUndo            bool
-	name, note         string                   // carried from a blend file
+	name, note         string // carried from a blend file
 	tempText, presText string
 	std                mixtures.StdPressure // standard pressure P° of μ°
 	showGauge          bool                 // show the total pressure as gauge
