@@ -305,8 +305,8 @@ type stepsFlag struct{ n int }
 func (s *stepsFlag) String() string { return strconv.Itoa(s.n) }
 
 func (s *stepsFlag) Set(v string) error {
-	n, err := strconv.Atoi(strings.TrimSpace(v))
-	if err != nil || n < 2 || n > mixtures.MaxSweepSteps {
+	n, err := mixtures.ParseSteps(strings.TrimSpace(v))
+	if err != nil {
 		return fmt.Errorf("want a whole number of points from 2 to %d, end points included", mixtures.MaxSweepSteps)
 	}
 	s.n = n

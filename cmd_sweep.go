@@ -89,41 +89,22 @@ func (a *app) cmdSweep(g *globalOpts, args []string) error {
 }
 
 func (cfg *sweepConfig) temperatureSweep(rangeText, presText string) error {
-	from, to, err := mixtures.ParseRange(rangeText)
+	r, err := mixtures.ParseSweepRange(mixtures.SweepTemperature, rangeText)
 	if err != nil {
 		return badInput("--temp: %v", err)
-	}
-	t1, err := parseTemperature("--temp", from)
-	if err != nil {
-		return err
-	}
-	t2, err := parseTemperature("--temp", to)
-	if err != nil {
-		return err
 	}
 	if cfg.fixedPres, err = totalPressure(cfg.src, presText); err != nil {
 		return err
 	}
-	cfg.sweep.Var, cfg.sweep.From, cfg.sweep.To = mixtures.SweepTemperature, t1.kelvin, t2.kelvin
+	cfg.sweep = r.Sweep(cfg.sweep.Steps, cfg.sweep.Log)
 	cfg.rangeText = rangeText
 	return nil
 }
 
 func (cfg *sweepConfig) pressureSweep(rangeText, tempText string) error {
-	from, to, err := mixtures.ParseRange(rangeText)
+	r, err := mixtures.ParseSweepRange(mixtures.SweepPressure, rangeText)
 	if err != nil {
 		return badInput("--pres: %v", err)
-	}
-	p1, err := parsePressure("--pres", from)
-	if err != nil {
-		return err
-	}
-	p2, err := parsePressure("--pres", to)
-	if err != nil {
-		return err
-	}
-	if p1.Gauge != p2.Gauge {
-		return badInput("--pres %q mixes gauge and absolute end points; give both as gauge (1..10barg) or both absolute (1..10bar)", rangeText)
 	}
 	if cfg.src.blend.HasPartialPressures() {
 		return badInput("--blend gives partial pressures, which fix the total; a pressure sweep needs amounts as fractions (%%, ppm, mass %%, bal)")
@@ -134,8 +115,8 @@ func (cfg *sweepConfig) pressureSweep(rangeText, tempText string) error {
 	if cfg.fixedTemp, err = parseTemperature("--temp", tempText); err != nil {
 		return err
 	}
-	cfg.sweep.Var, cfg.sweep.From, cfg.sweep.To = mixtures.SweepPressure, p1.Pa, p2.Pa
-	cfg.rangeText, cfg.rangeGauge = rangeText, p1.Gauge
+	cfg.sweep = r.Sweep(cfg.sweep.Steps, cfg.sweep.Log)
+	cfg.rangeText, cfg.rangeGauge = rangeText, r.Gauge
 	return nil
 }
 

@@ -283,10 +283,10 @@ func parseAmount(s string) (Amount, *BlendError) {
 	x, typedUnit, err := splitNumber(trimmed)
 	unit := strings.ToLower(typedUnit)
 	if err != nil {
-		return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %q: %v; want %s", s, err, amountForms)}
+		return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %s: %v; want %s", model.Quote(s), err, amountForms)}
 	}
 	if x < 0 {
-		return Amount{}, &BlendError{Err: ErrNegative, Detail: fmt.Sprintf("%q; amounts must be 0 or more", s)}
+		return Amount{}, &BlendError{Err: ErrNegative, Detail: fmt.Sprintf("%s; amounts must be 0 or more", model.Quote(s))}
 	}
 	var a Amount
 	switch unit {
@@ -304,7 +304,7 @@ func parseAmount(s string) (Amount, *BlendError) {
 		a = Amount{MassFraction, x / 100}
 	default:
 		if why := ambiguousPressureUnit(typedUnit); why != "" {
-			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %q: %s", s, why)}
+			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %s: %s", model.Quote(s), why)}
 		}
 		size, gauge, ok := pressureUnit(typedUnit)
 		if !ok || gauge {
@@ -312,15 +312,15 @@ func parseAmount(s string) (Amount, *BlendError) {
 			if gauge {
 				why = "a partial pressure must be absolute, not gauge"
 			}
-			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %q: %s %q; want %s", s, why, typedUnit, amountForms)}
+			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %s: %s %s; want %s", model.Quote(s), why, model.Quote(typedUnit), amountForms)}
 		}
 		a = Amount{PartialPres, x * size}
 		if math.IsInf(a.Value, 0) {
-			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %q is too large to compute with; want %s", s, amountForms)}
+			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %s is too large to compute with; want %s", model.Quote(s), amountForms)}
 		}
 	}
 	if a.Basis != PartialPres && a.Value > 1+1e-12 {
-		return Amount{}, &BlendError{Err: ErrOver100, Detail: fmt.Sprintf("%q alone is more than 100 %%", s)}
+		return Amount{}, &BlendError{Err: ErrOver100, Detail: fmt.Sprintf("%s alone is more than 100 %%", model.Quote(s))}
 	}
 	return a, nil
 }
@@ -495,10 +495,10 @@ func NewMixture(comps []Component) (*Mixture, error) {
 	total := 0.0
 	for _, c := range comps {
 		if math.IsNaN(c.X) || math.IsInf(c.X, 0) {
-			return nil, fmt.Errorf("mixtures: %s: %w (x = %g)", c.Species.Formula, ErrNotFinite, c.X)
+			return nil, model.KindErrorf("mixtures", ErrNotFinite, "%s: %v (x = %g)", model.Printable(c.Species.Formula), ErrNotFinite, c.X)
 		}
 		if c.X < 0 {
-			return nil, fmt.Errorf("mixtures: %s: %w (x = %g)", c.Species.Formula, ErrNegative, c.X)
+			return nil, model.KindErrorf("mixtures", ErrNegative, "%s: %v (x = %g)", model.Printable(c.Species.Formula), ErrNegative, c.X)
 		}
 		if c.X == 0 {
 			continue
@@ -512,10 +512,10 @@ func NewMixture(comps []Component) (*Mixture, error) {
 		kept = append(kept, Component{Species: c.Species, X: c.X})
 	}
 	if math.IsInf(total, 0) {
-		return nil, fmt.Errorf("mixtures: %w: the amounts add up to more than a float can hold", ErrNotFinite)
+		return nil, model.KindErrorf("mixtures", ErrNotFinite, "the amounts add up to more than a float can hold")
 	}
 	if len(kept) == 0 {
-		return nil, fmt.Errorf("mixtures: %w: every amount is zero", ErrEmptyBlend)
+		return nil, model.KindErrorf("mixtures", ErrEmptyBlend, "%v: every amount is zero", ErrEmptyBlend)
 	}
 	m := &Mixture{Components: kept}
 	for i := range kept {

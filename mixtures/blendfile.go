@@ -245,7 +245,7 @@ func StdPressureFromText(s string) (float64, error) {
 	case "1 atm", "atm", "1atm":
 		return 101325, nil
 	}
-	return 0, fmt.Errorf("%w: standard pressure %q; want 1 bar or 1 atm", ErrValue, s)
+	return 0, model.KindErrorf("mixtures", ErrValue, "standard pressure %s; want 1 bar or 1 atm", model.Quote(s))
 }
 
 // lineAt returns the 1-based line of byte offset off in data.
@@ -382,14 +382,14 @@ func keyOffsets(data []byte, field string) (key int, elems []int) {
 func (f *BlendFile) Save(path string) error {
 	f.Format = BlendFormat
 	if _, _, err := f.check(); err != nil {
-		return fmt.Errorf("mixtures: blend file %s not saved: %w", path, err)
+		return model.Errorf("mixtures", "blend file %s not saved: %w", model.Printable(path), err)
 	}
 	var buf bytes.Buffer
 	enc := json.NewEncoder(&buf)
 	enc.SetIndent("", "  ")
 	enc.SetEscapeHTML(false) // the file is for people: keep <, > and & as typed
 	if err := enc.Encode(f); err != nil {
-		return fmt.Errorf("mixtures: %w", err)
+		return model.Errorf("mixtures", "%w", err)
 	}
 	return WriteFileAtomic(path, buf.Bytes(), 0o666)
 }

@@ -1,7 +1,6 @@
 package mixtures
 
 import (
-	"fmt"
 	"math"
 
 	"zmix/model"
@@ -101,7 +100,7 @@ func (m *Mixture) CheckConditions(tempK, presPa float64) error {
 	}
 	for _, c := range m.Components {
 		if pi := c.X * presPa; pi < minPartialPa {
-			return fmt.Errorf("%w: the partial pressure of %s, x·P = %g Pa, is too small to compute with (got P = %g Pa)", model.ErrPressure, c.Species.Formula, pi, presPa)
+			return model.KindErrorf("mixtures", model.ErrPressure, "the partial pressure of %s, x·P = %g Pa, is too small to compute with (got P = %g Pa); want a higher pressure", model.Printable(c.Species.Formula), pi, presPa)
 		}
 	}
 	return nil

@@ -1,18 +1,19 @@
 package mixtures
 
 import (
+	"zmix/model"
+
 	"errors"
-	"fmt"
 	"strconv"
 	"strings"
 )
 
 // Errors of NormaliseAmounts.
 var (
-	ErrNormaliseBalance = errors.New("mixtures: normalise: a balance species already closes the blend to 100 %")
-	ErrNormaliseMixed   = errors.New("mixtures: normalise: the amounts mix mole and mass bases")
-	ErrNormalisePartial = errors.New("mixtures: normalise: partial pressures are absolute amounts and cannot be scaled")
-	ErrNormaliseEmpty   = errors.New("mixtures: normalise: every amount is zero")
+	ErrNormaliseBalance = errors.New("normalise: a balance species already closes the blend to 100 %")
+	ErrNormaliseMixed   = errors.New("normalise: the amounts mix mole and mass bases")
+	ErrNormalisePartial = errors.New("normalise: partial pressures are absolute amounts and cannot be scaled")
+	ErrNormaliseEmpty   = errors.New("normalise: every amount is zero")
 )
 
 // NormaliseAmounts scales amounts written in blend syntax so that they sum
@@ -62,7 +63,7 @@ func NormaliseAmounts(amounts []string) ([]string, error) {
 func scaleAmountText(text string, k float64) (string, error) {
 	x, unit, err := splitNumberRaw(strings.TrimSpace(text))
 	if err != nil {
-		return "", fmt.Errorf("%w: amount %q: %v", ErrValue, text, err)
+		return "", model.KindErrorf("mixtures", ErrValue, "amount %s: %v", model.Quote(text), err)
 	}
 	return strconv.FormatFloat(x*k, 'g', 6, 64) + unit, nil
 }

@@ -1,6 +1,8 @@
 package mixtures
 
 import (
+	"zmix/model"
+
 	"errors"
 	"fmt"
 	"math"
@@ -18,15 +20,17 @@ type Pressure struct {
 // AtmospherePa is the ambient pressure assumed for gauge readings.
 const AtmospherePa = 101325
 
-// TemperatureUnits and PressureUnits list the accepted unit words, for
-// error messages and help.
+// TemperatureUnits lists the accepted temperature units, for messages
+// and help.
 const (
 	TemperatureUnits = "K, C (°C), F (°F), R (Rankine)"
-	PressureUnits    = "Pa, kPa, MPa, bar, mbar, atm, Torr, psi (psia); gauge: barg, psig"
 )
 
+// PressureUnits lists the pressure units accepted, for messages and help.
+var PressureUnits = pressureUnitsText()
+
 // ErrValue is wrapped by every value-parsing error.
-var ErrValue = errors.New("mixtures: bad value")
+var ErrValue = errors.New("bad value")
 
 // splitNumber splits "25 °C" or "1.5bar" into the number and the unit text.
 func splitNumber(s string) (float64, string, error) {
@@ -48,11 +52,11 @@ func splitNumberRaw(s string) (float64, string, error) {
 		break
 	}
 	if end == 0 {
-		return 0, "", fmt.Errorf("no number")
+		return 0, "", errors.New("no number")
 	}
 	x, err := strconv.ParseFloat(s[:end], 64)
 	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
-		return 0, "", fmt.Errorf("%q is not a number", s[:end])
+		return 0, "", errors.New(model.Quote(s[:end]) + " is not a number")
 	}
 	return x, s[end:], nil
 }
@@ -63,7 +67,7 @@ func splitNumberRaw(s string) (float64, string, error) {
 func ParseTemperature(s string) (float64, error) {
 	x, unit, err := splitNumber(s)
 	if err != nil {
-		return 0, fmt.Errorf("%w: temperature %q: %v; want a number and a unit: %s", ErrValue, s, err, TemperatureUnits)
+		return 0, model.KindErrorf("mixtures", ErrValue, "temperature %s: %v; want a number and a unit: %s", model.Quote(s), err, TemperatureUnits)
 	}
 	var k float64
 	switch strings.TrimPrefix(strings.ToLower(unit), "°") {
@@ -76,34 +80,62 @@ func ParseTemperature(s string) (float64, error) {
 	case "r", "degr":
 		k = x * 5 / 9
 	case "":
-		return 0, fmt.Errorf("%w: temperature %q has no unit; want one of %s (e.g. %g K)", ErrValue, s, TemperatureUnits, x)
+		return 0, model.KindErrorf("mixtures", ErrValue, "temperature %s has no unit; want one of %s (e.g. %g K)", model.Quote(s), TemperatureUnits, x)
 	default:
-		return 0, fmt.Errorf("%w: temperature %q: unknown unit %q; want %s", ErrValue, s, unit, TemperatureUnits)
+		return 0, model.KindErrorf("mixtures", ErrValue, "temperature %s: unknown unit %s; want %s", model.Quote(s), model.Quote(unit), TemperatureUnits)
 	}
 	if !(k > 0) {
-		return 0, fmt.Errorf("%w: temperature %q is at or below absolute zero; want a value above 0 K", ErrValue, s)
+		return 0, model.KindErrorf("mixtures", ErrValue, "temperature %s is at or below absolute zero; want a value above 0 K", model.Quote(s))
 	}
 	return k, nil
 }
 
-// pressureUnitPa holds the absolute pressure units and their size in Pa.
-var pressureUnitPa = map[string]float64{
-	"pa":   1,
-	"kpa":  1e3,
-	"mpa":  1e6,
-	"bar":  1e5,
-	"bara": 1e5,
-	"mbar": 100,
-	"atm":  101325,
-	"torr": 101325.0 / 760,
-	"psi":  6894.757293168361, // 1 lbf/in² (0.45359237 kg · 9.80665 m/s² / 0.0254² m²)
-	"psia": 6894.757293168361,
+// poundPerSqInchPa is 1 lbf/in² (0.45359237 kg · 9.80665 m/s² / 0.0254² m²).
+const poundPerSqInchPa = 6894.757293168361
+
+// pressureUnitTable lists each pressure unit once: its size in Pa and
+// whether the trade writes it with a g (gauge) or a (absolute) suffix.
+// Every other list of pressure units is made from it.
+var pressureUnitTable = []struct {
+	name      string
+	sizePa    float64
+	suffixes  bool // accepts NAMEg (gauge) and NAMEa (absolute)
+	helpGauge bool // named among the gauge forms in PressureUnits
+}{
+	{"Pa", 1, false, false},
+	{"kPa", 1e3, true, true},
+	{"MPa", 1e6, true, true},
+	{"bar", 1e5, true, true},
+	{"mbar", 100, true, true},
+	{"atm", 101325, false, false},
+	{"Torr", 101325.0 / 760, false, false},
+	{"psi", poundPerSqInchPa, true, true},
 }
 
-var gaugeUnitPa = map[string]float64{
-	"barg": 1e5,
-	"psig": 6894.757293168361,
-	"kpag": 1e3,
+// PressureUnitNames returns every pressure unit word accepted, absolute
+// forms first, then gauge, for help text.
+func PressureUnitNames() []string {
+	var abs, gauge []string
+	for _, u := range pressureUnitTable {
+		abs = append(abs, u.name)
+		if u.suffixes {
+			abs = append(abs, u.name+"a")
+			gauge = append(gauge, u.name+"g")
+		}
+	}
+	return append(abs, gauge...)
+}
+
+// pressureUnitsText is PressureUnits, made from the table.
+func pressureUnitsText() string {
+	var abs, gauge []string
+	for _, u := range pressureUnitTable {
+		abs = append(abs, u.name)
+		if u.suffixes {
+			gauge = append(gauge, u.name+"g")
+		}
+	}
+	return strings.Join(abs, ", ") + " (an a suffix, as in psia or bara, says absolute); gauge: " + strings.Join(gauge, ", ")
 }
 
 // pressureUnit returns the size in Pa of a unit word and whether it is
@@ -113,12 +145,19 @@ func pressureUnit(unit string) (sizePa float64, gauge, ok bool) {
 	if ambiguousPressureUnit(unit) != "" {
 		return 0, false, false
 	}
-	u := strings.ToLower(unit)
-	if v, ok := pressureUnitPa[u]; ok {
-		return v, false, true
-	}
-	if v, ok := gaugeUnitPa[u]; ok {
-		return v, true, true
+	for _, u := range pressureUnitTable {
+		if strings.EqualFold(unit, u.name) {
+			return u.sizePa, false, true
+		}
+		if !u.suffixes || len(unit) != len(u.name)+1 || !strings.EqualFold(unit[:len(u.name)], u.name) {
+			continue
+		}
+		switch unit[len(u.name)] {
+		case 'g', 'G':
+			return u.sizePa, true, true
+		case 'a', 'A':
+			return u.sizePa, false, true
+		}
 	}
 	return 0, false, false
 }
@@ -127,8 +166,12 @@ func pressureUnit(unit string) (sizePa float64, gauge, ok bool) {
 // returns "". Folding case would read millipascal as megapascal, 10⁹ times
 // off, so a lower-case m before Pa is an error rather than a guess.
 func ambiguousPressureUnit(unit string) string {
-	if strings.EqualFold(unit, "mpa") && unit[0] == 'm' {
-		return fmt.Sprintf("%q would be millipascal, which is not accepted; write MPa for megapascal", unit)
+	base := unit
+	if len(base) == 4 && strings.ContainsRune("gGaA", rune(base[3])) {
+		base = base[:3] // mPag, mPaa
+	}
+	if strings.EqualFold(base, "mpa") && base[0] == 'm' {
+		return fmt.Sprintf("%s would be millipascal, which is not accepted; write MPa for megapascal", model.Quote(unit))
 	}
 	return ""
 }
@@ -139,52 +182,29 @@ func ambiguousPressureUnit(unit string) string {
 func ParsePressure(s string) (Pressure, error) {
 	x, unit, err := splitNumber(s)
 	if err != nil {
-		return Pressure{}, fmt.Errorf("%w: pressure %q: %v; want a number and a unit: %s", ErrValue, s, err, PressureUnits)
+		return Pressure{}, model.KindErrorf("mixtures", ErrValue, "pressure %s: %v; want a number and a unit: %s", model.Quote(s), err, PressureUnits)
 	}
 	if unit == "" {
-		return Pressure{}, fmt.Errorf("%w: pressure %q has no unit; want one of %s (e.g. %g bar)", ErrValue, s, PressureUnits, x)
+		return Pressure{}, model.KindErrorf("mixtures", ErrValue, "pressure %s has no unit; want one of %s (e.g. %g bar)", model.Quote(s), PressureUnits, x)
 	}
 	if why := ambiguousPressureUnit(unit); why != "" {
-		return Pressure{}, fmt.Errorf("%w: pressure %q: %s; want %s", ErrValue, s, why, PressureUnits)
+		return Pressure{}, model.KindErrorf("mixtures", ErrValue, "pressure %s: %s; want %s", model.Quote(s), why, PressureUnits)
 	}
 	size, gauge, ok := pressureUnit(unit)
 	if !ok {
-		return Pressure{}, fmt.Errorf("%w: pressure %q: unknown unit %q; want %s", ErrValue, s, unit, PressureUnits)
+		return Pressure{}, model.KindErrorf("mixtures", ErrValue, "pressure %s: unknown unit %s; want %s", model.Quote(s), model.Quote(unit), PressureUnits)
 	}
 	p := Pressure{Pa: x * size, Gauge: gauge}
 	if gauge {
 		p.Pa += AtmospherePa
 	}
 	if math.IsInf(p.Pa, 0) {
-		return Pressure{}, fmt.Errorf("%w: pressure %q is too large to compute with; want a finite value above 0 Pa absolute", ErrValue, s)
+		return Pressure{}, model.KindErrorf("mixtures", ErrValue, "pressure %s is too large to compute with; want a finite value above 0 Pa absolute", model.Quote(s))
 	}
 	if !(p.Pa > 0) {
-		return Pressure{}, fmt.Errorf("%w: pressure %q is at or below zero absolute; want a value above 0 Pa absolute", ErrValue, s)
+		return Pressure{}, model.KindErrorf("mixtures", ErrValue, "pressure %s is at or below zero absolute; want a value above 0 Pa absolute", model.Quote(s))
 	}
 	return p, nil
-}
-
-// ParseRange reads "A..B" where A and B are values of one kind; a unit
-// written only after B applies to A too ("300..1500 K").
-func ParseRange(s string) (from, to string, err error) {
-	a, b, ok := strings.Cut(s, "..")
-	a, b = strings.TrimSpace(a), strings.TrimSpace(b)
-	if !ok || a == "" || b == "" {
-		return "", "", fmt.Errorf("%w: range %q: want FROM..TO, e.g. 300..1500 K or 1 bar..50 bar", ErrValue, s)
-	}
-	// A unit written on one end only applies to both ("300..1500 K",
-	// "300 K..1500").
-	_, ua, errA := splitNumber(a)
-	_, ub, errB := splitNumber(b)
-	if errA == nil && errB == nil {
-		switch {
-		case ua == "" && ub != "":
-			a += " " + ub
-		case ub == "" && ua != "":
-			b += " " + ua
-		}
-	}
-	return a, b, nil
 }
 
 // celsiusZeroK is 0 °C in kelvin, by definition of the Celsius scale.

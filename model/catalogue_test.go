@@ -164,7 +164,7 @@ var catalogueErrorCases = []struct {
 	{"duplicate field", "[N2]\nname = nitrogen\nboil_K = 77\nboil_K = 78\n", 4, "boil_K", "given twice"},
 	{"duplicate species", "[Ar]\nname = a\nrotor = atom\ndHf0_kJ = 0\n\n[Ar]\nname = b\nrotor = atom\ndHf0_kJ = 0\n", 6, "", "given twice (first at line 1)"},
 	{"spin weights need σ = 2", "[N2]\nname = n\nrotor = linear\nrot_cm = 2\nspin = 6 3\ndHf0_kJ = 0\n", 1, "", "symmetry number 2"},
-	{"excited ground level", "[O]\nname = o\nrotor = atom\nelec_cm = 5x2\ndHf0_kJ = 0\n", 1, "", "ground level must be at 0"},
+	{"excited ground level", "[O]\nname = o\nrotor = atom\nelec_cm = 5x2\ndHf0_kJ = 0\n", 4, "elec_cm", `"5x2": the first level is the ground level; want it at 0 cm⁻¹`},
 	{"three constants for a linear rotor", "[CO]\nname = c\nrotor = linear\nrot_cm = 1 2 3\ndHf0_kJ = 0\n", 1, "", "takes 1 rotational constants, got 3"},
 	{"field outside a block", "name = orphan\n", 1, "", "field outside a species block"},
 	{"not key = value", "[Ar]\nname argon\n", 2, "", "is not key = value"},

@@ -1,23 +1,20 @@
 package model
 
-import (
-	"fmt"
-	"strconv"
-)
+import "strconv"
 
 // ParseFormula splits a molecular formula such as "SiH4" or "C2H6" into
 // element counts. Elements are an upper-case letter and an optional
 // lower-case one, each followed by an optional count.
 func ParseFormula(formula string) (map[string]int, error) {
 	if formula == "" {
-		return nil, fmt.Errorf("model: empty formula")
+		return nil, Errorf("model", "empty formula")
 	}
 	counts := make(map[string]int)
 	i := 0
 	for i < len(formula) {
 		c := formula[i]
 		if c < 'A' || c > 'Z' {
-			return nil, fmt.Errorf("model: formula %q: unexpected %q at position %d (want an element symbol such as N or Cl)", formula, c, i+1)
+			return nil, Errorf("model", "formula %s: unexpected %q at position %d (want an element symbol such as N or Cl)", Quote(formula), c, i+1)
 		}
 		j := i + 1
 		if j < len(formula) && formula[j] >= 'a' && formula[j] <= 'z' {
@@ -25,7 +22,7 @@ func ParseFormula(formula string) (map[string]int, error) {
 		}
 		sym := formula[i:j]
 		if _, ok := atomicWeights[sym]; !ok {
-			return nil, fmt.Errorf("model: formula %q: unknown element %q", formula, sym)
+			return nil, Errorf("model", "formula %s: unknown element %q", Quote(formula), sym)
 		}
 		k := j
 		for k < len(formula) && formula[k] >= '0' && formula[k] <= '9' {
@@ -35,7 +32,7 @@ func ParseFormula(formula string) (map[string]int, error) {
 		if k > j {
 			v, err := strconv.Atoi(formula[j:k])
 			if err != nil || v < 1 || v > 1000 {
-				return nil, fmt.Errorf("model: formula %q: bad count %q for %s", formula, formula[j:k], sym)
+				return nil, Errorf("model", "formula %s: bad count %s for %s (want 1 to 1000)", Quote(formula), Quote(formula[j:k]), sym)
 			}
 			n = v
 		}

@@ -1,9 +1,6 @@
 package model
 
-import (
-	"fmt"
-	"math"
-)
+import "math"
 
 // Prepare checks a species' data and derives its molar mass and
 // characteristic temperatures. A species must be prepared before use;
@@ -22,13 +19,13 @@ func (sp *Species) Prepare() error {
 	}
 	wantRot := map[RotorKind]int{Atom: 0, Linear: 1, Nonlinear: 3}[sp.Rotor]
 	if len(sp.RotConstPerCm) != wantRot {
-		return fmt.Errorf("model: %s: a %s rotor takes %d rotational constants, got %d", sp.Formula, sp.Rotor, wantRot, len(sp.RotConstPerCm))
+		return Errorf("model", "%s: a %s rotor takes %d rotational constants, got %d", sp.Formula, sp.Rotor, wantRot, len(sp.RotConstPerCm))
 	}
 	sp.rotThetaK = sp.rotThetaK[:0]
 	prod := 1.0
 	for _, b := range sp.RotConstPerCm {
-		if !(b > 0) {
-			return fmt.Errorf("model: %s: rotational constant %g cm⁻¹ must be above 0", sp.Formula, b)
+		if !rotRange.contains(b) {
+			return Errorf("model", "%s: rotational constant %g cm⁻¹; want %s", sp.Formula, b, rotRange)
 		}
 		th := WavenumberToKelvin(b)
 		sp.rotThetaK = append(sp.rotThetaK, th)
@@ -41,22 +38,33 @@ func (sp *Species) Prepare() error {
 		sp.lnRotClassical = 0.5*math.Log(math.Pi) - math.Log(float64(sp.Symmetry)) - 0.5*math.Log(prod)
 	}
 	if sp.Homonuclear() && sp.Rotor != Linear {
-		return fmt.Errorf("model: %s: spin weights apply to linear molecules only", sp.Formula)
+		return Errorf("model", "%s: spin weights apply to linear molecules only", sp.Formula)
 	}
 	// The summed rotor divides by the spin weights and the series by σ;
 	// they agree only for σ = 2, the one value a rotation that exchanges
 	// identical nuclei can have in a linear molecule.
 	if sp.Homonuclear() && sp.Symmetry != 2 {
-		return fmt.Errorf("model: %s: spin weights need symmetry number 2, got %d", sp.Formula, sp.Symmetry)
+		return Errorf("model", "%s: spin weights need symmetry number 2, got %d", sp.Formula, sp.Symmetry)
 	}
 	if sp.SpinWeights[0] < 0 || sp.SpinWeights[1] < 0 {
-		return fmt.Errorf("model: %s: spin weights must not be negative", sp.Formula)
+		return Errorf("model", "%s: spin weights must not be negative", sp.Formula)
+	}
+	for _, w := range sp.SpinWeights {
+		if !spinRange.contains(w) {
+			return Errorf("model", "%s: spin weight %g; want %s", sp.Formula, w, spinRange)
+		}
+	}
+	if !sigmaRange.contains(float64(sp.Symmetry)) {
+		return Errorf("model", "%s: symmetry number %d; want %s", sp.Formula, sp.Symmetry, sigmaRange)
 	}
 
 	sp.vibThetaK, sp.vibDeg, sp.vibModes = sp.vibThetaK[:0], sp.vibDeg[:0], sp.vibModes[:0]
+	if len(sp.Vib) > maxVibModes {
+		return Errorf("model", "%s: %d vibrational modes; want at most %d", sp.Formula, len(sp.Vib), maxVibModes)
+	}
 	for _, v := range sp.Vib {
-		if !(v.WavenumberPerCm > 0) || v.Degeneracy < 1 {
-			return fmt.Errorf("model: %s: vibration %g cm⁻¹ ×%d: want a wavenumber above 0 and a degeneracy of at least 1", sp.Formula, v.WavenumberPerCm, v.Degeneracy)
+		if !vibRange.contains(v.WavenumberPerCm) || !vibDegRange.contains(float64(v.Degeneracy)) {
+			return Errorf("model", "%s: vibration %g cm⁻¹ ×%d: want %s and %s", sp.Formula, v.WavenumberPerCm, v.Degeneracy, vibRange, vibDegRange)
 		}
 		sp.vibThetaK = append(sp.vibThetaK, WavenumberToKelvin(v.WavenumberPerCm))
 		sp.vibDeg = append(sp.vibDeg, float64(v.Degeneracy))
@@ -66,17 +74,23 @@ func (sp *Species) Prepare() error {
 	if len(sp.Elec) == 0 {
 		sp.Elec = []ElecLevel{{0, 1}}
 	}
+	if len(sp.Elec) > maxElecLevels {
+		return Errorf("model", "%s: %d electronic levels; want at most %d", sp.Formula, len(sp.Elec), maxElecLevels)
+	}
 	sp.elecThetaK, sp.elecDeg = sp.elecThetaK[:0], sp.elecDeg[:0]
 	for i, e := range sp.Elec {
-		if e.Degeneracy < 1 || e.EnergyPerCm < 0 || (i == 0 && e.EnergyPerCm != 0) {
-			return fmt.Errorf("model: %s: electronic level %g cm⁻¹ ×%d: the ground level must be at 0 cm⁻¹ and every degeneracy at least 1", sp.Formula, e.EnergyPerCm, e.Degeneracy)
+		if !elecDegRange.contains(float64(e.Degeneracy)) || !elecRange.contains(e.EnergyPerCm) || (i == 0 && e.EnergyPerCm != 0) {
+			return Errorf("model", "%s: electronic level %g cm⁻¹ ×%d: the ground level must be at 0 cm⁻¹; want %s and %s", sp.Formula, e.EnergyPerCm, e.Degeneracy, elecRange, elecDegRange)
 		}
 		sp.elecThetaK = append(sp.elecThetaK, WavenumberToKelvin(e.EnergyPerCm))
 		sp.elecDeg = append(sp.elecDeg, float64(e.Degeneracy))
 	}
 	sp.lnElecG0 = math.Log(sp.elecDeg[0])
-	if sp.BoilingK < 0 {
-		return fmt.Errorf("model: %s: boiling point %g K must not be negative", sp.Formula, sp.BoilingK)
+	if sp.BoilingK != 0 && !boilRange.contains(sp.BoilingK) {
+		return Errorf("model", "%s: boiling point %g K; want 0 (unknown) or %s", sp.Formula, sp.BoilingK, boilRange)
+	}
+	if !dHf0Range.contains(sp.EnergyZeroJPerMol / 1000) {
+		return Errorf("model", "%s: ΔfH°(0 K) %g kJ/mol; want %s", sp.Formula, sp.EnergyZeroJPerMol/1000, dHf0Range)
 	}
 	return nil
 }

@@ -1,8 +1,8 @@
 package model
 
 import (
-	"fmt"
 	"math"
+	"strconv"
 )
 
 // RotationTreatment chooses how linear rotors are handled.
@@ -61,10 +61,12 @@ type State struct {
 // Total returns the sum of the four factors' terms.
 func (s *State) Total() Terms { return s.Trans.add(s.Rot).add(s.Vib).add(s.Elec) }
 
-// Errors from State.
+// Errors from State: kinds that errors.Is matches. The errors returned
+// carry the value that was refused; their UserMessage reads without the
+// "model: " prefix.
 var (
-	ErrTemperature = fmt.Errorf("model: temperature must be a finite number above 0 K")
-	ErrPressure    = fmt.Errorf("model: pressure must be a finite number above 0 Pa")
+	ErrTemperature = Errorf("model", "temperature must be a finite number above 0 K")
+	ErrPressure    = Errorf("model", "pressure must be a finite number above 0 Pa")
 )
 
 // The temperatures the model accepts. No gas is classical at either end
@@ -80,13 +82,14 @@ const (
 // Any finite pressure above 0 Pa is accepted.
 func CheckConditions(tempK, presPa float64) error {
 	if !(tempK > 0) || math.IsInf(tempK, 0) {
-		return fmt.Errorf("%w (got %g K)", ErrTemperature, tempK)
+		return KindErrorf("model", ErrTemperature, "temperature must be a finite number above 0 K (got %g K)", tempK)
 	}
 	if tempK < MinTempK || tempK > MaxTempK {
-		return fmt.Errorf("%w, from %g K to %g K (got %g K)", ErrTemperature, MinTempK, MaxTempK, tempK)
+		return KindErrorf("model", ErrTemperature, "temperature must be from %s K to %s K (got %g K)",
+			strconv.FormatFloat(MinTempK, 'f', -1, 64), strconv.FormatFloat(MaxTempK, 'f', -1, 64), tempK)
 	}
 	if !(presPa > 0) || math.IsInf(presPa, 0) {
-		return fmt.Errorf("%w (got %g Pa)", ErrPressure, presPa)
+		return KindErrorf("model", ErrPressure, "pressure must be a finite number above 0 Pa (got %g Pa)", presPa)
 	}
 	return nil
 }

@@ -2,6 +2,7 @@ package ui
 
 import (
 	"bytes"
+	"context"
 	"encoding/json"
 	"os"
 	"os/signal"
@@ -12,6 +13,7 @@ import (
 	"time"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 var blendAir = mixtures.BlendFile{
@@ -254,8 +256,13 @@ func TestExportSweep(t *testing.T) {
 	if err != nil {
 		t.Fatalf("%v (status %q)", err, r.status)
 	}
+	// What zmix sweep writes for the same sweep.
+	k := r.panes[paneSweep].(*sweepPane).resultKey
 	var want bytes.Buffer
-	mixtures.WriteSweepJSON(&want, res, false)
+	report.WriteSweepJSON(&want, false, func(yield func(i int, s *mixtures.State) error) error {
+		return k.mix.Stream(context.Background(), res.Sweep, k.fixedTempK, k.fixedPresPa, k.opts,
+			func(i int, _ float64, s *mixtures.State) error { return yield(i, s) })
+	})
 	if !bytes.Equal(got, want.Bytes()) {
 		t.Errorf("sweep export differs from the sweep command's output")
 	}

@@ -49,7 +49,10 @@ type (
 	// under the input panes when no result pane is on screen.
 	headlinePane interface{ headline(w int) string }
 	// sweepSource has a sweep to export instead of the readout.
-	sweepSource interface{ Result() *mixtures.SweepResult }
+	sweepSource interface {
+		Result() *mixtures.SweepTable
+		StreamResult(yield func(i int, s *mixtures.State) error) error
+	}
 	// heightPane asks for a height of its own in a column of the full
 	// layout, out of avail rows; the last pane of a column takes the rest.
 	heightPane interface{ wantHeight(avail int) int }

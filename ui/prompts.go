@@ -1,8 +1,8 @@
 package ui
 
 import (
-	"bytes"
 	"fmt"
+	"io"
 	"os"
 	"path/filepath"
 	"strings"
@@ -12,6 +12,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // The prompts on the bottom line: save, open and export paths, and the
@@ -239,22 +240,25 @@ func (r *root) openBlend(path string) {
 // export writes the readout, or the sweep when asked from the sweep pane,
 // with the columns of the state and sweep commands.
 func (r *root) export(path string) {
-	var buf bytes.Buffer
 	asJSON := strings.EqualFold(filepath.Ext(path), ".json")
 	gauge := r.b.in.Gauge
 	what := "readout"
-	var err error
+	var write func(w io.Writer) error
 	if r.exportSrc != nil {
 		res := r.exportSrc.Result()
 		if res == nil {
 			r.setError("no finished sweep to export yet")
 			return
 		}
-		what = fmt.Sprintf("sweep (%d points)", len(res.Points))
-		if asJSON {
-			err = mixtures.WriteSweepJSON(&buf, res, gauge)
-		} else {
-			err = mixtures.WriteCSV(&buf, res.Points, gauge)
+		what = fmt.Sprintf("sweep (%d points)", res.Len())
+		// The pane keeps only what it plots: the export computes the
+		// sweep again and writes each point as it comes.
+		src := r.exportSrc
+		write = func(w io.Writer) error {
+			if asJSON {
+				return report.WriteSweepJSON(w, gauge, src.StreamResult)
+			}
+			return report.WriteSweepCSV(w, gauge, src.StreamResult)
 		}
 	} else {
 		if r.b.stateErr != "" {
@@ -262,16 +266,14 @@ func (r *root) export(path string) {
 			return
 		}
 		st := r.b.state
-		if asJSON {
-			err = mixtures.WriteJSON(&buf, &st, gauge)
-		} else {
-			err = mixtures.WriteCSV(&buf, []mixtures.State{st}, gauge)
+		write = func(w io.Writer) error {
+			if asJSON {
+				return mixtures.WriteJSON(w, &st, gauge)
+			}
+			return mixtures.WriteCSV(w, []mixtures.State{st}, gauge)
 		}
 	}
-	if err == nil {
-		err = mixtures.WriteFileAtomic(path, buf.Bytes(), 0o644)
-	}
-	if err != nil {
+	if err := mixtures.WriteFileAtomicFunc(path, 0o666, write); err != nil {
 		r.setError("export failed: " + cleanErr(err))
 		return
 	}

@@ -149,8 +149,17 @@ func (p *propertiesPane) render() []string {
 	}
 	in := p.b.in
 	head := short(in.TempK, 6) + " K, " + p.b.presShown(in.PresPa) + ", P° " + p.b.stdText()
-	add(s.Title.Render(t(head)))
-	if !p.b.valid() {
+	// The mark of an entry in error goes on the heading line when it fits,
+	// so that the figures under it do not move: a typing slip then
+	// redraws one line here, not the whole readout.
+	const stale = "  last valid state: an entry is in error"
+	switch {
+	case p.b.valid():
+		add(s.Title.Render(t(head)))
+	case lipgloss.Width(t(head+stale)) <= p.w:
+		add(s.Title.Render(t(head)) + s.Warning.Render(t(stale)))
+	default:
+		add(s.Title.Render(t(head)))
 		for _, l := range wrap(t("last valid state: an entry has an error (see Recipe / Setpoint)"), p.w) {
 			add(s.Warning.Render(l))
 		}

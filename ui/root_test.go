@@ -219,7 +219,14 @@ func TestRootLayouts(t *testing.T) {
 	}
 }
 
-func paneTitleText(r *root, id paneID) string { return " " + r.paneTitle(id) + " " }
+// paneTitleText is a pane's title as its frame shows it: bracketed when
+// the pane has focus.
+func paneTitleText(r *root, id paneID) string {
+	if id == r.focus {
+		return "[" + r.paneTitle(id) + "]"
+	}
+	return " " + r.paneTitle(id) + " "
+}
 
 // The caution strip shows while a caution applies and goes with it.
 func TestRootSafetyStrip(t *testing.T) {

@@ -4,49 +4,44 @@ import "github.com/charmbracelet/lipgloss"
 
 // Styles holds every lipgloss style of the workbench, in one place.
 type Styles struct {
-	Title       lipgloss.Style
-	Pane        lipgloss.Style // an unfocused pane's frame
-	FocusedPane lipgloss.Style // the focused pane's frame
-	Label       lipgloss.Style
-	Value       lipgloss.Style
-	Unit        lipgloss.Style
-	Muted       lipgloss.Style
-	Error       lipgloss.Style
-	Warning     lipgloss.Style
-	Caution     lipgloss.Style
-	Help        lipgloss.Style
-	StatusBar   lipgloss.Style
-	Selected    lipgloss.Style
-	PlotAxis    lipgloss.Style
-	PlotCursor  lipgloss.Style
+	Title      lipgloss.Style
+	Pane       lipgloss.Style // the panes' frames
+	Label      lipgloss.Style
+	Value      lipgloss.Style
+	Unit       lipgloss.Style
+	Muted      lipgloss.Style
+	Error      lipgloss.Style
+	Warning    lipgloss.Style
+	Caution    lipgloss.Style
+	Help       lipgloss.Style
+	StatusBar  lipgloss.Style
+	Selected   lipgloss.Style
+	PlotAxis   lipgloss.Style
+	PlotCursor lipgloss.Style
 	// Series styles tell overlaid curves apart; plots must also tell them
 	// apart without colour (markers or line patterns).
 	Series [4]lipgloss.Style
 
-	// Frame glyphs. The focused pane has its own border shape, so that
-	// focus shows without colour too.
-	Border        lipgloss.Border
-	FocusedBorder lipgloss.Border
-	TabActive     lipgloss.Style
-	Tab           lipgloss.Style
-	HelpKey       lipgloss.Style
-	Prompt        lipgloss.Style
-	Edit          lipgloss.Style // a field being typed in
-	Cursor        lipgloss.Style
+	// Frame glyphs, the same for every pane; the focused pane's title is
+	// bracketed, so that focus shows without colour too.
+	Border    lipgloss.Border
+	TabActive lipgloss.Style
+	Tab       lipgloss.Style
+	HelpKey   lipgloss.Style
+	Prompt    lipgloss.Style
+	Edit      lipgloss.Style // a field being typed in
+	Cursor    lipgloss.Style
 }
 
-// asciiBorder and asciiFocusedBorder draw frames with ASCII only.
-var (
-	asciiBorder        = lipgloss.Border{Top: "-", Bottom: "-", Left: "|", Right: "|", TopLeft: "+", TopRight: "+", BottomLeft: "+", BottomRight: "+"}
-	asciiFocusedBorder = lipgloss.Border{Top: "=", Bottom: "=", Left: "#", Right: "#", TopLeft: "#", TopRight: "#", BottomLeft: "#", BottomRight: "#"}
-)
+// asciiBorder draws frames with ASCII only.
+var asciiBorder = lipgloss.Border{Top: "-", Bottom: "-", Left: "|", Right: "|", TopLeft: "+", TopRight: "+", BottomLeft: "+", BottomRight: "+"}
 
 // DefaultStyles builds the styles; mono drops all colour (NO_COLOR,
 // monochrome terminals) and ascii uses ASCII-only borders.
 func DefaultStyles(mono, ascii bool) *Styles {
-	border, focused := lipgloss.RoundedBorder(), lipgloss.ThickBorder()
+	border := lipgloss.RoundedBorder()
 	if ascii {
-		border, focused = asciiBorder, asciiFocusedBorder
+		border = asciiBorder
 	}
 	color := func(c string) lipgloss.TerminalColor {
 		if mono {
@@ -54,9 +49,8 @@ func DefaultStyles(mono, ascii bool) *Styles {
 		}
 		return lipgloss.Color(c)
 	}
-	s := &Styles{Border: border, FocusedBorder: focused}
-	s.Pane = lipgloss.NewStyle().Border(border).BorderForeground(color("240")).Foreground(color("240"))
-	s.FocusedPane = lipgloss.NewStyle().Border(focused).BorderForeground(color("37")).Foreground(color("37"))
+	s := &Styles{Border: border}
+	s.Pane = lipgloss.NewStyle().Foreground(color("240"))
 	s.Title = lipgloss.NewStyle().Bold(true).Foreground(color("37"))
 	s.Label = lipgloss.NewStyle().Foreground(color("250"))
 	s.Value = lipgloss.NewStyle().Bold(true)

@@ -67,7 +67,7 @@ type sweepPane struct {
 	total   int
 	runErr  string
 
-	result    *mixtures.SweepResult
+	result    *mixtures.SweepTable
 	resultKey sweepKey
 
 	plot      *plotModel
@@ -180,24 +180,11 @@ func (e sweepStepsError) Error() string {
 	return "points " + strconv.Quote(e.text) + ": want a whole number from 2 to " + strconv.Itoa(mixtures.MaxSweepSteps)
 }
 
-// sweepParseSteps reads a number of points: digits, optionally grouped
-// with spaces, commas or underscores ("20 000"), or an exact "1e5".
+// sweepParseSteps reads a number of points in the one syntax the
+// commands' --steps takes too (mixtures.ParseSteps).
 func sweepParseSteps(s string) (int, error) {
-	clean := strings.Map(func(r rune) rune {
-		if r == ' ' || r == ',' || r == '_' {
-			return -1
-		}
-		return r
-	}, s)
-	n, err := strconv.Atoi(clean)
+	n, err := mixtures.ParseSteps(s)
 	if err != nil {
-		f, ferr := strconv.ParseFloat(clean, 64)
-		if ferr != nil || f != math.Trunc(f) || f > math.MaxInt32 || f < 0 {
-			return 0, sweepStepsError{s}
-		}
-		n = int(f)
-	}
-	if n < 2 || n > mixtures.MaxSweepSteps {
 		return 0, sweepStepsError{s}
 	}
 	return n, nil
@@ -330,7 +317,7 @@ func (p *sweepPane) progress(msg sweepProgressMsg) tea.Cmd {
 // placeCursor puts the cursor on a new result: where it was, in
 // proportion, or else (first result, other variable) at the grid point
 // nearest the current state.
-func (p *sweepPane) placeCursor(old *mixtures.SweepResult) {
+func (p *sweepPane) placeCursor(old *mixtures.SweepTable) {
 	n := len(p.result.Grid)
 	if old != nil && len(old.Grid) > 1 && old.Sweep.Var == p.result.Sweep.Var {
 		f := float64(p.cursor) / float64(len(old.Grid)-1)
@@ -584,17 +571,18 @@ func (p *sweepPane) rebuildPlot() {
 	ascii := p.c.ASCII
 	prop := sweepProps[p.propIndex()]
 	scale := prop.scale
-	blend := plotSeries{name: "blend", y: func(i int) float64 { return prop.blend(&res.Points[i]) * scale }}
+	blendValues := res.Blend(prop.blend)
+	blend := plotSeries{name: "blend", y: func(i int) float64 { return blendValues[i] * scale }}
 	comps := p.resultKey.mix.Components
 	speciesSeries := func(j int) plotSeries {
-		get := prop.species
-		return plotSeries{name: comps[j].Species.Formula, y: func(i int) float64 { return get(&res.Points[i].Species[j]) * scale }}
+		values := res.Species(prop.species, j)
+		return plotSeries{name: comps[j].Species.Formula, y: func(i int) float64 { return values[i] * scale }}
 	}
 	var series []plotSeries
 	var of string
 	overlay := false
 	switch {
-	case prop.species == nil:
+	case prop.species == "":
 		series = []plotSeries{blend}
 		if p.set.Overlay || p.set.Species != "" {
 			p.plotNote = prop.sym(ascii) + " is plotted for the blend only"
@@ -700,7 +688,14 @@ func (p *sweepPane) Settings() SweepSettings { return p.set }
 func (p *sweepPane) Editing() bool { return p.editing }
 
 // Result returns the last finished sweep, or nil.
-func (p *sweepPane) Result() *mixtures.SweepResult { return p.result }
+func (p *sweepPane) Result() *mixtures.SweepTable { return p.result }
+
+// StreamResult computes the shown sweep again, point by point, with every
+// figure of every point, for an export; the pane keeps only what it
+// plots.
+func (p *sweepPane) StreamResult(yield func(i int, s *mixtures.State) error) error {
+	return p.resultKey.stream(yield)
+}
 
 // ShortHelp is the first few bindings, the most used.
 func (p *sweepPane) ShortHelp() []key.Binding {

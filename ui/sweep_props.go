@@ -2,16 +2,17 @@ package ui
 
 import "zmix/mixtures"
 
-// sweepProp is a property the sweep pane can plot: how to read it from a
-// mixture state (and from one species' share, where that exists) and how
-// to label it. Values are shown in display units: SI times scale.
+// sweepProp is a property the sweep pane can plot: which rows of the
+// engine's quantity table hold it, for the blend and for each species
+// where that exists, and how to label it. Values are shown in display
+// units: SI times scale.
 type sweepProp struct {
 	key              string // the name in SweepSettings.Property
 	symbol, symASCII string
 	unit, unitASCII  string
 	scale            float64
-	blend            func(*mixtures.State) float64
-	species          func(*mixtures.SpeciesTerm) float64 // nil: a blend property only
+	blend            string // key of the blend quantity (mixtures.Quantities)
+	species          string // key of the species quantity; "": a blend property only
 	// blendSym names the blend's value in the axis label when it is not
 	// the symbol itself (μ of the blend is Σxμ, which is G).
 	blendSym, blendSymASCII string
@@ -28,33 +29,58 @@ const (
 var sweepProps = []sweepProp{
 	{
 		key: "S", symbol: "S", symASCII: "S", unit: sweepEntropyUnit, unitASCII: sweepEntropyUnitASCII, scale: 1,
-		blend:   func(s *mixtures.State) float64 { return s.SJPerMolK },
-		species: func(t *mixtures.SpeciesTerm) float64 { return t.SJPerMolK },
+		blend:   "S",
+		species: "S",
 	},
 	{
 		key: "Cp", symbol: "Cp", symASCII: "Cp", unit: sweepEntropyUnit, unitASCII: sweepEntropyUnitASCII, scale: 1,
-		blend:   func(s *mixtures.State) float64 { return s.CpJPerMolK },
-		species: func(t *mixtures.SpeciesTerm) float64 { return t.CpJPerMolK },
+		blend:   "Cp",
+		species: "Cp",
 	},
 	{
 		key: "mu", symbol: "μ", symASCII: "mu", unit: sweepEnergyUnit, unitASCII: sweepEnergyUnitASCII, scale: 1e-3,
-		blend:    func(s *mixtures.State) float64 { return s.GJPerMol },
-		species:  func(t *mixtures.SpeciesTerm) float64 { return t.MuJPerMol },
+		blend:    "G",
+		species:  "mu",
 		blendSym: "Σxμ = G", blendSymASCII: "sum(x*mu) = G",
 	},
 	{
 		key: "H", symbol: "H", symASCII: "H", unit: sweepEnergyUnit, unitASCII: sweepEnergyUnitASCII, scale: 1e-3,
-		blend:   func(s *mixtures.State) float64 { return s.HJPerMol },
-		species: func(t *mixtures.SpeciesTerm) float64 { return t.HJPerMol },
+		blend:   "H",
+		species: "H",
 	},
 	{
 		key: "G", symbol: "G", symASCII: "G", unit: sweepEnergyUnit, unitASCII: sweepEnergyUnitASCII, scale: 1e-3,
-		blend: func(s *mixtures.State) float64 { return s.GJPerMol },
+		blend: "G",
 	},
 	{
 		key: "gamma", symbol: "γ", symASCII: "gamma", scale: 1,
-		blend: func(s *mixtures.State) float64 { return s.Gamma },
+		blend: "gamma",
 	},
+}
+
+// sweepColumns are the columns a sweep of m keeps: the swept and held
+// conditions and every property the pane can plot, so that changing the
+// property or the species recomputes nothing.
+func sweepColumns(m *mixtures.Mixture) []mixtures.SweepColumn {
+	var cols []mixtures.SweepColumn
+	seen := map[string]bool{}
+	for _, key := range []string{"T", "P"} {
+		c, _ := mixtures.BlendColumn(key)
+		cols = append(cols, c)
+	}
+	for _, p := range sweepProps {
+		if !seen["b"+p.blend] {
+			seen["b"+p.blend] = true
+			c, _ := mixtures.BlendColumn(p.blend)
+			cols = append(cols, c)
+		}
+		if p.species != "" && !seen["s"+p.species] {
+			seen["s"+p.species] = true
+			sc, _ := mixtures.SpeciesColumns(p.species, m)
+			cols = append(cols, sc...)
+		}
+	}
+	return cols
 }
 
 // sweepPropIndex returns the index of the property named key, and false

@@ -39,7 +39,7 @@ type sweepKey struct {
 // chunk writes to it; Update reads it once that command has returned.
 type sweepJob struct {
 	key   sweepKey
-	res   *mixtures.SweepResult
+	res   *mixtures.SweepTable
 	chunk int
 	state mixtures.State // reused from point to point
 }
@@ -63,10 +63,9 @@ func sweepStartCmd(gen uint64, key sweepKey) tea.Cmd {
 		if err := key.mix.CheckSweep(key.sweep, key.fixedTempK, key.fixedPresPa); err != nil {
 			return sweepProgressMsg{gen: gen, err: err}
 		}
-		grid := key.sweep.Grid()
 		job := &sweepJob{
 			key:   key,
-			res:   &mixtures.SweepResult{Sweep: key.sweep, Grid: grid, Points: make([]mixtures.State, len(grid))},
+			res:   mixtures.NewSweepTable(key.sweep, sweepColumns(key.mix)),
 			chunk: min(sweepChunkPoints, max(64, sweepChunkWork/len(key.mix.Components))),
 		}
 		return job.compute(gen, 0)
@@ -79,24 +78,21 @@ func sweepNextCmd(gen uint64, job *sweepJob, from int) tea.Cmd {
 }
 
 // compute fills points [from, from+chunk) with the engine's StreamSpan,
-// so the result equals the engine's point for point. Each chunk keeps
-// its species terms in one backing array.
+// keeping only the table's columns, so the result equals the engine's
+// Tabulate point for point.
 func (j *sweepJob) compute(gen uint64, from int) sweepProgressMsg {
-	n := len(j.res.Grid)
+	n := j.res.Len()
 	to := min(from+j.chunk, n)
-	k := len(j.key.mix.Components)
-	terms := make([]mixtures.SpeciesTerm, (to-from)*k)
-	err := j.key.mix.StreamSpan(context.Background(), j.key.sweep, from, to, j.key.fixedTempK, j.key.fixedPresPa, j.key.opts, &j.state,
-		func(i int, x float64, s *mixtures.State) error {
-			pt := &j.res.Points[i]
-			*pt = *s
-			off := (i - from) * k
-			pt.Species = terms[off : off+k : off+k]
-			copy(pt.Species, s.Species)
-			return nil
-		})
+	err := j.key.mix.StreamSpan(context.Background(), j.key.sweep, from, to, j.key.fixedTempK, j.key.fixedPresPa, j.key.opts, &j.state, j.res.Record)
 	if err != nil {
 		return sweepProgressMsg{gen: gen, err: err}
 	}
 	return sweepProgressMsg{gen: gen, job: j, done: to, total: n}
+}
+
+// stream computes the sweep of the key again, point by point, for an
+// export that writes every figure of every point without keeping them.
+func (k *sweepKey) stream(yield func(i int, s *mixtures.State) error) error {
+	return k.mix.Stream(context.Background(), k.sweep, k.fixedTempK, k.fixedPresPa, k.opts,
+		func(i int, _ float64, s *mixtures.State) error { return yield(i, s) })
 }

@@ -2,6 +2,7 @@ package ui
 
 import (
 	"bytes"
+	"context"
 	"math"
 	"reflect"
 	"strings"
@@ -326,7 +327,7 @@ func TestSweepSetInputsOnlyOnChange(t *testing.T) {
 		t.Fatal("a new held pressure starts no sweep")
 	}
 	sweepRun(t, p, cmd)
-	if p.Result() == first || p.Result().Points[0].PresPa != 2e5 {
+	if p.Result() == first || p.Result().Blend("P")[0] != 2e5 {
 		t.Errorf("the result was not recomputed at the new pressure")
 	}
 	if p.SetInputs(Inputs{Gen: 4}) != nil {
@@ -369,7 +370,7 @@ func TestSweepStaleResultsDropped(t *testing.T) {
 		t.Error("a stale chunk asks for the next chunk")
 	}
 	sweepRun(t, p, newCmd)
-	if got := p.Result().Points[len(p.Result().Points)-1].PresPa; got != 3e5 {
+	if got := p.Result().Blend("P")[p.Result().Len()-1]; got != 3e5 {
 		t.Errorf("result at P = %g Pa, want the newer 3e5", got)
 	}
 }
@@ -402,7 +403,7 @@ func TestSweepLongSweepShowsProgress(t *testing.T) {
 		t.Errorf("%d progress reports, want several", progress)
 	}
 	res := p.Result()
-	if res == nil || len(res.Points) != 100000 {
+	if res == nil || res.Len() != 100000 {
 		t.Fatalf("no full result")
 	}
 	if got := p.Settings().Property; got != "Cp" {
@@ -456,7 +457,7 @@ func TestSweepInProgram(t *testing.T) {
 	}
 	tm.WaitFinished(t, teatest.WithFinalTimeout(5*time.Second))
 	res := p.Result()
-	if res == nil || len(res.Points) != 60000 || res.Points[0].PresPa != 5e5 {
+	if res == nil || res.Len() != 60000 || res.Blend("P")[0] != 5e5 {
 		t.Fatalf("final result is not the sweep of the newer inputs")
 	}
 	if s := p.Settings(); s.Property != "mu" || !s.Overlay {
@@ -479,11 +480,11 @@ func TestSweepChunksMatchRun(t *testing.T) {
 		} else {
 			key.fixedPresPa = 2e5
 		}
-		want, err := m.Run(sw, 400, 2e5, mixtures.Options{})
+		want, err := m.Tabulate(context.Background(), sw, 400, 2e5, mixtures.Options{}, sweepColumns(m))
 		if err != nil {
 			t.Fatal(err)
 		}
-		var got *mixtures.SweepResult
+		var got *mixtures.SweepTable
 		msg := sweepStartCmd(1, key)().(sweepProgressMsg)
 		for chunks := 1; ; chunks++ {
 			if msg.err != nil {
@@ -501,28 +502,12 @@ func TestSweepChunksMatchRun(t *testing.T) {
 		if !reflect.DeepEqual(got.Grid, want.Grid) {
 			t.Fatalf("%+v: chunked grid differs from Mixture.Run's", sw)
 		}
-		for i := range want.Points {
-			if !sweepSameState(&got.Points[i], &want.Points[i]) {
-				t.Fatalf("%+v: point %d differs from Mixture.Run's", sw, i)
+		for c := range want.Columns {
+			if !reflect.DeepEqual(got.Column(c), want.Column(c)) {
+				t.Fatalf("%+v: column %d differs from Mixture.Tabulate's", sw, c)
 			}
 		}
 	}
-}
-
-// sweepSameState reports whether two states are equal bit for bit, species
-// terms included (they share species pointers, which are not followed).
-func sweepSameState(a, b *mixtures.State) bool {
-	if len(a.Species) != len(b.Species) {
-		return false
-	}
-	for j := range a.Species {
-		if a.Species[j] != b.Species[j] {
-			return false
-		}
-	}
-	a2, b2 := *a, *b
-	a2.Species, b2.Species = nil, nil
-	return reflect.DeepEqual(a2, b2)
 }
 
 func TestSweepCursorReadsEngineValues(t *testing.T) {
@@ -682,15 +667,15 @@ func TestSweepASCIIOnly(t *testing.T) {
 func TestSweepNoNaNOnScreen(t *testing.T) {
 	p := sweepTestPane(t, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 100, Property: "Cp"}, 100, 30)
 	// Spoil a copy of the result, as a broken model would.
-	bad := *p.Result()
-	bad.Points = append([]mixtures.State(nil), bad.Points...)
+	bad := p.Result().Clone()
+	cp := bad.Blend("Cp")
 	for i := 40; i < 60; i++ {
-		bad.Points[i].CpJPerMolK = math.NaN()
+		cp[i] = math.NaN()
 	}
-	bad.Points[70].CpJPerMolK = math.Inf(1)
+	cp[70] = math.Inf(1)
 	p.gen++
 	p.running = true
-	p.Update(sweepProgressMsg{gen: p.gen, job: &sweepJob{key: p.resultKey, res: &bad}, done: 100, total: 100})
+	p.Update(sweepProgressMsg{gen: p.gen, job: &sweepJob{key: p.resultKey, res: bad}, done: 100, total: 100})
 	p.cursor = 50
 	p.refresh()
 	view := p.View()

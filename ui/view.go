@@ -28,7 +28,7 @@ func (r *root) View() string {
 	}
 	sb.WriteByte('\n')
 	sb.WriteString(r.bottomLine())
-	return sb.String()
+	return compactSGR(sb.String())
 }
 
 func (r *root) tooSmallView() string {

@@ -1,0 +1,129 @@
+package mixtures
+
+import (
+	"math"
+	"strconv"
+	"strings"
+
+	"zmix/model"
+)
+
+// The one syntax of a sweep range, for the commands (--temp, --pres) and
+// the workbench's sweep fields alike:
+//
+//	FROM..TO UNIT         300..900 K, 5..150 psig
+//	FROM UNIT..TO UNIT    300 K..900 K, 0 C..500 K
+//	FROM UNIT..TO         a unit on one end applies to both
+//
+// The number of points is given apart from the range: --steps N in the
+// commands, the points field in the workbench (ParseSteps reads both).
+
+// rangeForms is what a range error says is accepted.
+const rangeForms = "want FROM..TO with a unit, such as 300..900 K, 300 K..900 K or 5..150 psig; the number of points is given on its own (--steps N, or the points field)"
+
+// ParseRange splits "A..B" into its two ends, each with its unit: a unit
+// written on one end only applies to the other too ("300..1500 K" gives
+// "300 K" and "1500 K").
+func ParseRange(s string) (from, to string, err error) {
+	if n := strings.Count(s, ".."); n > 1 {
+		return "", "", model.KindErrorf("mixtures", ErrValue, "range %s has %d parts; %s", model.Quote(s), n+1, rangeForms)
+	}
+	a, b, ok := strings.Cut(s, "..")
+	a, b = strings.TrimSpace(a), strings.TrimSpace(b)
+	if !ok || a == "" || b == "" {
+		return "", "", model.KindErrorf("mixtures", ErrValue, "range %s: %s", model.Quote(s), rangeForms)
+	}
+	_, ua, errA := splitNumber(a)
+	_, ub, errB := splitNumber(b)
+	if errA == nil && errB == nil {
+		switch {
+		case ua == "" && ub != "":
+			a += " " + ub
+		case ub == "" && ua != "":
+			b += " " + ua
+		}
+	}
+	return a, b, nil
+}
+
+// Range is a parsed sweep range: the variable, its end points in K or Pa
+// absolute, and each end as it reads with its unit ("300 K").
+type Range struct {
+	Var              SweepVar
+	From, To         float64
+	FromText, ToText string
+	Gauge            bool // pressure ends typed as gauge (barg, psig)
+}
+
+// ParseSweepRange reads a range of the variable v in the one range
+// syntax. Errors quote what was typed and say what is accepted.
+func ParseSweepRange(v SweepVar, s string) (Range, error) {
+	from, to, err := ParseRange(s)
+	if err != nil {
+		return Range{}, err
+	}
+	return ParseSweepEnds(v, from, to)
+}
+
+// ParseSweepEnds reads the two ends of a range typed apart (the
+// workbench's from and to fields). A pressure range is all gauge or all
+// absolute.
+func ParseSweepEnds(v SweepVar, fromText, toText string) (Range, error) {
+	r := Range{Var: v, FromText: strings.TrimSpace(fromText), ToText: strings.TrimSpace(toText)}
+	if v == SweepTemperature {
+		var err error
+		if r.From, err = ParseTemperature(fromText); err != nil {
+			return Range{}, err
+		}
+		if r.To, err = ParseTemperature(toText); err != nil {
+			return Range{}, err
+		}
+		return r, nil
+	}
+	p1, err := ParsePressure(fromText)
+	if err != nil {
+		return Range{}, err
+	}
+	p2, err := ParsePressure(toText)
+	if err != nil {
+		return Range{}, err
+	}
+	if p1.Gauge != p2.Gauge {
+		return Range{}, model.KindErrorf("mixtures", ErrValue, "range %s..%s mixes gauge and absolute end points; give both as gauge (1..10 barg) or both absolute (1..10 bar)",
+			model.Quote(r.FromText), model.Quote(r.ToText))
+	}
+	r.From, r.To, r.Gauge = p1.Pa, p2.Pa, p1.Gauge
+	return r, nil
+}
+
+// Sweep returns the sweep over the range with steps points; logGrid asks
+// for a log grid of a temperature range (pressure is always log).
+func (r Range) Sweep(steps int, logGrid bool) Sweep {
+	return Sweep{Var: r.Var, From: r.From, To: r.To, Steps: steps, Log: logGrid || r.Var == SweepPressure}
+}
+
+// ParseSteps reads a number of points, end points included: a whole
+// number from 2 to MaxSweepSteps, its digits optionally grouped by
+// spaces, commas or underscores ("20 000"), or written exactly as a
+// power of ten ("1e5").
+func ParseSteps(s string) (int, error) {
+	clean := strings.Map(func(r rune) rune {
+		if r == ' ' || r == ',' || r == '_' || r == '\u202f' || r == '\u00a0' {
+			return -1
+		}
+		return r
+	}, s)
+	n, err := strconv.Atoi(clean)
+	if err != nil {
+		f, ferr := strconv.ParseFloat(clean, 64)
+		if ferr != nil || f != math.Trunc(f) || f > MaxSweepSteps || f < 0 {
+			n = -1
+		} else {
+			n = int(f)
+		}
+	}
+	if n < 2 || n > MaxSweepSteps {
+		return 0, model.KindErrorf("mixtures", ErrSweep, "points %s: want a whole number from 2 to %d", model.Quote(s), MaxSweepSteps)
+	}
+	return n, nil
+}

@@ -1,0 +1,101 @@
+package mixtures
+
+import (
+	"errors"
+	"strings"
+	"testing"
+)
+
+// Every pressure unit with a gauge form takes it, and the absolute forms
+// too (issue 7, item 19). Sizes by definition of each unit (SI brochure;
+// 1 bar = 1e5 Pa; 1 psi from NIST SP 811, from memory).
+func TestPressureUnitForms(t *testing.T) {
+	cases := []struct {
+		in    string
+		pa    float64
+		gauge bool
+	}{
+		{"1 MPag", 1e6 + atmPa, true},
+		{"1 kPag", 1e3 + atmPa, true},
+		{"1 barg", 1e5 + atmPa, true},
+		{"100 mbarg", 1e4 + atmPa, true},
+		{"1 psig", psiPa + atmPa, true},
+		{"1 bara", 1e5, false},
+		{"1 kPaa", 1e3, false},
+		{"1 MPaa", 1e6, false},
+		{"1 psia", psiPa, false},
+		{"1 PSIG", psiPa + atmPa, true},
+	}
+	for _, c := range cases {
+		p, err := ParsePressure(c.in)
+		if err != nil || !relClose(p.Pa, c.pa, 1e-6, 0) || p.Gauge != c.gauge {
+			t.Errorf("ParsePressure(%q) = %+v, %v; want %g Pa, gauge %v", c.in, p, err, c.pa, c.gauge)
+		}
+	}
+	for _, bad := range []string{"1 mPag", "1 mPaa", "1 atmg", "1 Torrg", "1 Pag"} {
+		if _, err := ParsePressure(bad); err == nil {
+			t.Errorf("ParsePressure(%q): no error", bad)
+		}
+	}
+	names := strings.Join(PressureUnitNames(), " ")
+	for _, want := range []string{"MPag", "kPag", "barg", "psig", "bara", "kPaa", "psia", "Torr"} {
+		if !strings.Contains(names, want) || !strings.Contains(PressureUnits, strings.TrimSuffix(want, "a")) {
+			t.Errorf("unit lists lack %s: %q / %q", want, names, PressureUnits)
+		}
+	}
+}
+
+func TestParseSweepRange(t *testing.T) {
+	cases := []struct {
+		v        SweepVar
+		in       string
+		from, to float64
+		gauge    bool
+		fromText string
+	}{
+		{SweepTemperature, "300..900 K", 300, 900, false, "300 K"},
+		{SweepTemperature, "300 K..900 K", 300, 900, false, "300 K"},
+		{SweepTemperature, "0 C..500 K", 273.15, 500, false, "0 C"},
+		{SweepPressure, "5..150 psig", 5*psiPa + atmPa, 150*psiPa + atmPa, true, "5 psig"},
+		{SweepPressure, "1..50 bar", 1e5, 50e5, false, "1 bar"},
+	}
+	for _, c := range cases {
+		r, err := ParseSweepRange(c.v, c.in)
+		if err != nil || !relClose(r.From, c.from, 1e-6, 0) || !relClose(r.To, c.to, 1e-6, 0) || r.Gauge != c.gauge || r.FromText != c.fromText {
+			t.Errorf("ParseSweepRange(%v, %q) = %+v, %v", c.v, c.in, r, err)
+		}
+		if sw := r.Sweep(11, false); sw.Check() != nil || sw.Var != c.v || sw.IsLog() != (c.v == SweepPressure) {
+			t.Errorf("%q: sweep %+v", c.in, sw)
+		}
+	}
+	bad := []struct {
+		v        SweepVar
+		in, want string
+	}{
+		// Issue 7, item 19: a step written into the range.
+		{SweepTemperature, "300..600..900K", `"300..600..900K" has 3 parts`},
+		{SweepTemperature, "300..600..900K", "--steps N"},
+		{SweepTemperature, "300..", "FROM..TO"},
+		{SweepTemperature, "0..400K", "absolute zero"},
+		{SweepPressure, "1 bar..5 barg", "mixes gauge and absolute"},
+	}
+	for _, c := range bad {
+		_, err := ParseSweepRange(c.v, c.in)
+		if err == nil || !strings.Contains(err.Error(), c.want) || !errors.Is(err, ErrValue) {
+			t.Errorf("ParseSweepRange(%q): error %v, want one of kind ErrValue holding %q", c.in, err, c.want)
+		}
+	}
+}
+
+func TestParseSteps(t *testing.T) {
+	for in, want := range map[string]int{"2": 2, "11": 11, "20 000": 20000, "200_000": 200000, "1,000": 1000, "1e5": 100000} {
+		if got, err := ParseSteps(in); err != nil || got != want {
+			t.Errorf("ParseSteps(%q) = %d, %v; want %d", in, got, err, want)
+		}
+	}
+	for _, in := range []string{"", "1", "0", "-5", "200001", "2.5", "ten", "1e400", "NaN"} {
+		if _, err := ParseSteps(in); !errors.Is(err, ErrSweep) || !strings.Contains(err.Error(), "from 2 to 200000") {
+			t.Errorf("ParseSteps(%q): error %v, want ErrSweep naming the accepted range", in, err)
+		}
+	}
+}
