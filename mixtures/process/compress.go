@@ -69,13 +69,13 @@ var (
 	figStages = &Figure{Key: "stages", Label: "stages", Symbol: "N", SymbolASCII: "N", Scale: 1,
 		Name: "stage_count", Digits: mixtures.Digits{Sig: 3}, Integer: true}
 	figIntercoolT = &Figure{Key: "tic", Label: "intercooling to", Symbol: "Tic", SymbolASCII: "Tic", Unit: "K", UnitASCII: "K", Scale: 1,
-		Name: "intercool_temperature_K", Digits: mixtures.Digits{Sig: 6}}
+		Name: "intercool_temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figRateIn = &Figure{Key: "n", Label: "molar flow", Symbol: "ṅ", SymbolASCII: "n", Unit: "mol/s", UnitASCII: "mol/s", Scale: 1,
-		Name: "rate_mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{"kmol/h", "kmol/h", 3.6}}}
+		Name: "rate_mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "kmol/h", UnitASCII: "kmol/h", Scale: 3.6}}}
 	figT2 = &Figure{Key: "t2", Label: "outlet temperature", Symbol: "T₂", SymbolASCII: "T2", Unit: "K", UnitASCII: "K", Scale: 1,
-		Name: "outlet_temperature_K", Digits: mixtures.Digits{Sig: 6}}
+		Name: "outlet_temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figT2s = &Figure{Key: "t2s", Label: "isentropic outlet temperature", Symbol: "T₂s", SymbolASCII: "T2s", Unit: "K", UnitASCII: "K", Scale: 1,
-		Name: "isentropic_outlet_temperature_K", Digits: mixtures.Digits{Sig: 6}}
+		Name: "isentropic_outlet_temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figWork = &Figure{Key: "w", Label: "specific work (on the gas)", Symbol: "w", SymbolASCII: "w", Unit: unitKJPerMol, UnitASCII: unitKJPerMol, Scale: 1e-3,
 		Name: "work_J_mol", Digits: mixtures.Digits{Sig: 6}}
 	figWorkKg = &Figure{Key: "wkg", Label: "specific work per kg", Symbol: "w", SymbolASCII: "w", Unit: unitKJPerKg, UnitASCII: unitKJPerKg, Scale: 1e-3,
@@ -220,11 +220,14 @@ func (c Compression) Solve() (*CompressionResult, error) {
 	return r, nil
 }
 
-// stateWork holds the states a compression reuses, so that a stage
-// allocates nothing after the first.
+// stateWork holds the state a compression reuses, so that a stage
+// allocates nothing after the first, and the last state a balance
+// evaluated.
 type stateWork struct {
 	st mixtures.State
 	h2 float64
+	// The last state evaluated by a balance: T, H, S and Cp.
+	tLast, hLast, sLast, cpLast float64
 }
 
 // enthalpy is H(T, P) of g.
@@ -235,27 +238,42 @@ func (w *stateWork) enthalpy(g Gas, tempK, presPa float64) (float64, error) {
 	return w.st.HJPerMol, nil
 }
 
+// eval computes g at (T, P) and keeps it as the last state.
+func (w *stateWork) eval(g Gas, tempK, presPa float64) error {
+	if err := g.State(&w.st, tempK, presPa); err != nil {
+		return err
+	}
+	w.tLast, w.hLast, w.sLast, w.cpLast = tempK, w.st.HJPerMol, w.st.SJPerMolK, w.st.CpJPerMolK
+	return nil
+}
+
+// at carries the last state's H and S to a T a Newton step away, at
+// constant P: dH = Cp dT, dS = Cp/T dT. The step is below solveRelTol·T,
+// so the error, of order dT², is far below any digit shown, and no state
+// is computed again.
+func (w *stateWork) at(tempK float64) (h, s float64) {
+	dt := tempK - w.tLast
+	return w.hLast + w.cpLast*dt, w.sLast + w.cpLast/w.tLast*dt
+}
+
 // stage solves one adiabatic stage from (t1, p1) to p2 at efficiency eta.
 func (w *stateWork) stage(g Gas, t1, p1, p2, eta float64) (Stage, error) {
-	if err := g.State(&w.st, t1, p1); err != nil {
+	if err := w.eval(g, t1, p1); err != nil {
 		return Stage{}, err
 	}
-	h1, s1, cp1 := w.st.HJPerMol, w.st.SJPerMolK, w.st.CpJPerMolK
+	h1, s1, cp1 := w.hLast, w.sLast, w.cpLast
 	// S(T₂s, P₂) = S(T₁, P₁), from the constant-Cp guess.
 	guess := t1 * math.Pow(p2/p1, model.GasConstant/cp1)
 	t2s, err := solveT(func(tempK float64) (float64, float64, error) {
-		if err := g.State(&w.st, tempK, p2); err != nil {
+		if err := w.eval(g, tempK, p2); err != nil {
 			return 0, 0, err
 		}
-		return w.st.SJPerMolK - s1, w.st.CpJPerMolK / tempK, nil
+		return w.sLast - s1, w.cpLast / tempK, nil
 	}, guess)
 	if err != nil {
 		return Stage{}, err
 	}
-	if err := g.State(&w.st, t2s, p2); err != nil {
-		return Stage{}, err
-	}
-	h2s := w.st.HJPerMol
+	h2s, s2 := w.at(t2s)
 	var h2 float64
 	if p2 > p1 {
 		h2 = h1 + (h2s-h1)/eta
@@ -265,27 +283,25 @@ func (w *stateWork) stage(g Gas, t1, p1, p2, eta float64) (Stage, error) {
 	t2 := t2s
 	if eta != 1 {
 		t2, err = solveT(func(tempK float64) (float64, float64, error) {
-			if err := g.State(&w.st, tempK, p2); err != nil {
+			if err := w.eval(g, tempK, p2); err != nil {
 				return 0, 0, err
 			}
-			return w.st.HJPerMol - h2, w.st.CpJPerMolK, nil
-		}, t2s+(h2-h2s)/w.st.CpJPerMolK)
+			return w.hLast - h2, w.cpLast, nil
+		}, t2s+(h2-h2s)/w.cpLast)
 		if err != nil {
 			return Stage{}, err
 		}
-		if err := g.State(&w.st, t2, p2); err != nil {
-			return Stage{}, err
-		}
+		_, s2 = w.at(t2)
 	}
-	w.h2 = w.st.HJPerMol
+	w.h2 = h2
 	lnPR := math.Log(p2 / p1)
 	k := math.Log(t2s/t1) / lnPR // (γ̄−1)/γ̄
 	np := math.Log(t2/t1) / lnPR // (n−1)/n
 	return Stage{
 		InletTempK: t1, InletPresPa: p1, OutletPresPa: p2,
 		IsentropicOutletTempK: t2s, OutletTempK: t2,
-		WorkJPerMol:         w.st.HJPerMol - h1,
-		EntropyRiseJPerMolK: w.st.SJPerMolK - s1,
+		WorkJPerMol:         h2 - h1,
+		EntropyRiseJPerMolK: s2 - s1,
 		MeanGamma:           1 / (1 - k),
 		PolytropicN:         1 / (1 - np),
 	}, nil

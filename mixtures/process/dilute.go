@@ -37,7 +37,7 @@ type DilutionResult struct {
 // levelFigure shows a mole fraction in ppm, with % beside.
 func levelFigure(key, label, name string) *Figure {
 	return &Figure{Key: key, Label: label, Symbol: "x", SymbolASCII: "x", Unit: "ppm", UnitASCII: "ppm", Scale: 1e6,
-		Name: name, Digits: mixtures.Digits{Sig: 5}, Also: []AltUnit{{"%", "%", 100}}}
+		Name: name, Digits: mixtures.Digits{Sig: 5}, Also: []AltUnit{{Unit: "%", UnitASCII: "%", Scale: 100}}}
 }
 
 var (
@@ -52,11 +52,11 @@ var (
 	figFactor = &Figure{Key: "f", Label: "dilution factor (total/parent)", Symbol: "f", SymbolASCII: "f", Scale: 1,
 		Name: "dilution_factor", Digits: mixtures.Digits{Sig: 6}}
 	figParentRate = &Figure{Key: "np", Label: "parent flow", Symbol: "ṅp", SymbolASCII: "np", Unit: "mol/s", UnitASCII: "mol/s", Scale: 1,
-		Name: "parent_rate_mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{"SLPM at 0 °C", "SLPM at 0 C", slpmPerMolS}}}
+		Name: "parent_rate_mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "SLPM at 0 °C", UnitASCII: "SLPM at 0 C", Scale: slpmPerMolS}}}
 	figDiluentRate = &Figure{Key: "nd", Label: "diluent flow", Symbol: "ṅd", SymbolASCII: "nd", Unit: "mol/s", UnitASCII: "mol/s", Scale: 1,
-		Name: "diluent_rate_mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{"SLPM at 0 °C", "SLPM at 0 C", slpmPerMolS}}}
+		Name: "diluent_rate_mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "SLPM at 0 °C", UnitASCII: "SLPM at 0 C", Scale: slpmPerMolS}}}
 	figTotalRate = &Figure{Key: "n", Label: "total flow", Symbol: "ṅ", SymbolASCII: "n", Unit: "mol/s", UnitASCII: "mol/s", Scale: 1,
-		Name: "rate_mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{"SLPM at 0 °C", "SLPM at 0 C", slpmPerMolS}}}
+		Name: "rate_mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "SLPM at 0 °C", UnitASCII: "SLPM at 0 C", Scale: slpmPerMolS}}}
 	figX = &Figure{Key: "x", Label: "x", Symbol: "x", SymbolASCII: "x", Unit: "mol/mol", UnitASCII: "mol/mol", Scale: 1,
 		Name: "x", Digits: mixtures.Digits{Sig: 6}}
 )

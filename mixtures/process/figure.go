@@ -27,8 +27,12 @@ type Figure struct {
 // AltUnit is one more display unit of a figure.
 type AltUnit struct {
 	Unit, UnitASCII string
-	Scale           float64 // display value = SI value × Scale
+	Scale           float64 // display value = SI value × Scale + Offset
+	Offset          float64
 }
+
+// celsius shows a temperature in °C beside kelvin.
+var celsius = []AltUnit{{Unit: "°C", UnitASCII: "C", Scale: 1, Offset: -273.15}}
 
 // Value is a figure's SI value in one result.
 type Value struct {
@@ -125,7 +129,7 @@ const (
 // Figures shared by several calculations.
 var (
 	figInletT = &Figure{Key: "t1", Label: "inlet temperature", Symbol: "T₁", SymbolASCII: "T1", Unit: "K", UnitASCII: "K", Scale: 1,
-		Name: "inlet_temperature_K", Digits: mixtures.Digits{Sig: 6}}
+		Name: "inlet_temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figInletP = &Figure{Key: "p1", Label: "inlet pressure", Symbol: "P₁", SymbolASCII: "P1", Unit: "bar", UnitASCII: "bar", Scale: 1e-5,
 		Name: "inlet_pressure_Pa", Digits: mixtures.Digits{Sig: 6}}
 	figPres = &Figure{Key: "p", Label: "pressure", Symbol: "P", SymbolASCII: "P", Unit: "bar", UnitASCII: "bar", Scale: 1e-5,

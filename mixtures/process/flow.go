@@ -83,14 +83,14 @@ func StructureFactor(sp *model.Species) float64 {
 
 var (
 	figRateMol = &Figure{Key: "n", Label: "molar flow", Symbol: "ṅ", SymbolASCII: "n", Unit: "mol/s", UnitASCII: "mol/s", Scale: 1,
-		Name: "mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{"kmol/h", "kmol/h", 3.6}}}
+		Name: "mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "kmol/h", UnitASCII: "kmol/h", Scale: 3.6}}}
 	figRateMass = &Figure{Key: "m", Label: "mass flow", Symbol: "ṁ", SymbolASCII: "m", Unit: "kg/s", UnitASCII: "kg/s", Scale: 1,
-		Name: "kg_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{"kg/h", "kg/h", 3600}, {"lb/h", "lb/h", 3600 / pound}}}
+		Name: "kg_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "kg/h", UnitASCII: "kg/h", Scale: 3600}, {Unit: "lb/h", UnitASCII: "lb/h", Scale: 3600 / pound}}}
 	figRefVol = &Figure{Key: "vref", Label: "standard volume flow", Symbol: "V̇ref", SymbolASCII: "Vref", Unit: "m³/h", UnitASCII: "m3/h", Scale: 3600,
 		Name: "ref_m3_s", Digits: mixtures.Digits{Sig: 6},
-		Also: []AltUnit{{"L/min", "L/min", 6e4}, {"cm³/min", "cm3/min", 6e7}, {"ft³/h", "ft3/h", 3600 / cubicFoot}, {"ft³/min", "ft3/min", 60 / cubicFoot}}}
+		Also: []AltUnit{{Unit: "L/min", UnitASCII: "L/min", Scale: 6e4}, {Unit: "cm³/min", UnitASCII: "cm3/min", Scale: 6e7}, {Unit: "ft³/h", UnitASCII: "ft3/h", Scale: 3600 / cubicFoot}, {Unit: "ft³/min", UnitASCII: "ft3/min", Scale: 60 / cubicFoot}}}
 	figRefT = &Figure{Key: "tref", Label: "reference temperature", Symbol: "Tref", SymbolASCII: "Tref", Unit: "K", UnitASCII: "K", Scale: 1,
-		Name: "ref_temperature_K", Digits: mixtures.Digits{Sig: 6}}
+		Name: "ref_temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figRefP = &Figure{Key: "pref", Label: "reference pressure", Symbol: "Pref", SymbolASCII: "Pref", Unit: "kPa", UnitASCII: "kPa", Scale: 1e-3,
 		Name: "ref_pressure_Pa", Digits: mixtures.Digits{Sig: 6}}
 	figRefRho = &Figure{Key: "rhoref", Label: "density at the reference", Symbol: "ρref", SymbolASCII: "rho_ref", Unit: "kg/m³", UnitASCII: "kg/m3", Scale: 1,
@@ -98,9 +98,9 @@ var (
 	figRelDensity = &Figure{Key: "d", Label: "relative density to dry air", Symbol: "d", SymbolASCII: "d", Scale: 1,
 		Name: "relative_density", Digits: mixtures.Digits{Sig: 5}}
 	figActualVol = &Figure{Key: "vact", Label: "actual volume flow", Symbol: "V̇", SymbolASCII: "V", Unit: "m³/h", UnitASCII: "m3/h", Scale: 3600,
-		Name: "actual_m3_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{"L/min", "L/min", 6e4}, {"ACFM", "ACFM", 60 / cubicFoot}}}
+		Name: "actual_m3_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "L/min", UnitASCII: "L/min", Scale: 6e4}, {Unit: "ACFM", UnitASCII: "ACFM", Scale: 60 / cubicFoot}}}
 	figLineT = &Figure{Key: "tline", Label: "line temperature", Symbol: "T", SymbolASCII: "T", Unit: "K", UnitASCII: "K", Scale: 1,
-		Name: "temperature_K", Digits: mixtures.Digits{Sig: 6}}
+		Name: "temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figLineP = &Figure{Key: "pline", Label: "line pressure", Symbol: "P", SymbolASCII: "P", Unit: "bar", UnitASCII: "bar", Scale: 1e-5,
 		Name: "pressure_Pa", Digits: mixtures.Digits{Sig: 6}}
 	figGCF = &Figure{Key: "gcf", Label: "gas correction factor (N2 = 1)", Symbol: "GCF", SymbolASCII: "GCF", Scale: 1,

@@ -29,7 +29,7 @@ type HeatingResult struct {
 
 var (
 	figT2Heat = &Figure{Key: "t2", Label: "outlet temperature", Symbol: "T₂", SymbolASCII: "T2", Unit: "K", UnitASCII: "K", Scale: 1,
-		Name: "outlet_temperature_K", Digits: mixtures.Digits{Sig: 6}}
+		Name: "outlet_temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figDuty = &Figure{Key: "q", Label: "duty ΔH (into the gas)", Symbol: "q", SymbolASCII: "q", Unit: unitKJPerMol, UnitASCII: unitKJPerMol, Scale: 1e-3,
 		Name: "duty_J_mol", Digits: mixtures.Digits{Sig: 6}}
 	figDutyKg = &Figure{Key: "qkg", Label: "duty per kg", Symbol: "q", SymbolASCII: "q", Unit: unitKJPerKg, UnitASCII: unitKJPerKg, Scale: 1e-3,

@@ -43,9 +43,9 @@ const MaxStreams = 32
 
 var (
 	figMixT = &Figure{Key: "t", Label: "outlet temperature", Symbol: "T", SymbolASCII: "T", Unit: "K", UnitASCII: "K", Scale: 1,
-		Name: "outlet_temperature_K", Digits: mixtures.Digits{Sig: 6}}
+		Name: "outlet_temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figMixRate = &Figure{Key: "n", Label: "outlet molar flow", Symbol: "ṅ", SymbolASCII: "n", Unit: "mol/s", UnitASCII: "mol/s", Scale: 1,
-		Name: "rate_mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{"kmol/h", "kmol/h", 3.6}}}
+		Name: "rate_mol_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "kmol/h", UnitASCII: "kmol/h", Scale: 3.6}}}
 	figMixMass = &Figure{Key: "m", Label: "outlet mass flow", Symbol: "ṁ", SymbolASCII: "m", Unit: "kg/h", UnitASCII: "kg/h", Scale: 3600,
 		Name: "rate_kg_s", Digits: mixtures.Digits{Sig: 6}}
 	figSgen = &Figure{Key: "sgen", Label: "entropy generated", Symbol: "Ṡgen", SymbolASCII: "Sgen", Unit: unitWPerK, UnitASCII: unitWPerK, Scale: 1,
@@ -53,7 +53,7 @@ var (
 	figSgenMix = &Figure{Key: "sgenmix", Label: "  of which by mixing", Symbol: "Ṡmix", SymbolASCII: "Smix", Unit: unitWPerK, UnitASCII: unitWPerK, Scale: 1,
 		Name: "entropy_generation_mixing_W_K", Digits: mixtures.Digits{Sig: 5}}
 	figStreamT = &Figure{Key: "ti", Label: "temperature", Symbol: "T", SymbolASCII: "T", Unit: "K", UnitASCII: "K", Scale: 1,
-		Name: "temperature_K", Digits: mixtures.Digits{Sig: 6}}
+		Name: "temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figStreamRate = &Figure{Key: "ni", Label: "molar flow", Symbol: "ṅ", SymbolASCII: "n", Unit: "mol/s", UnitASCII: "mol/s", Scale: 1,
 		Name: "rate_mol_s", Digits: mixtures.Digits{Sig: 6}}
 	figStreamH = &Figure{Key: "hi", Label: "enthalpy flow", Symbol: "ṅH", SymbolASCII: "nH", Unit: unitKW, UnitASCII: unitKW, Scale: 1e-3,

@@ -69,21 +69,21 @@ var (
 	figPHigh = &Figure{Key: "phigh", Label: "high pressure", Symbol: "Phigh", SymbolASCII: "Phigh", Unit: "bar", UnitASCII: "bar", Scale: 1e-5,
 		Name: "high_pressure_Pa", Digits: mixtures.Digits{Sig: 6}}
 	figVolume = &Figure{Key: "v", Label: "volume", Symbol: "V", SymbolASCII: "V", Unit: "m³", UnitASCII: "m3", Scale: 1,
-		Name: "volume_m3", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{"L", "L", 1e3}}}
+		Name: "volume_m3", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "L", UnitASCII: "L", Scale: 1e3}}}
 	figVesselT = &Figure{Key: "t", Label: "gas temperature", Symbol: "T", SymbolASCII: "T", Unit: "K", UnitASCII: "K", Scale: 1,
-		Name: "temperature_K", Digits: mixtures.Digits{Sig: 6}}
+		Name: "temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figActualFlow = &Figure{Key: "q", Label: "purge flow at vessel conditions", Symbol: "Q", SymbolASCII: "Q", Unit: "m³/h", UnitASCII: "m3/h", Scale: 3600,
-		Name: "actual_m3_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{"L/min", "L/min", 6e4}}}
+		Name: "actual_m3_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "L/min", UnitASCII: "L/min", Scale: 6e4}}}
 	figCycles = &Figure{Key: "cycles", Label: "cycles (rounded up)", Symbol: "k", SymbolASCII: "k", Scale: 1,
 		Name: "cycles", Digits: mixtures.Digits{Sig: 6}, Integer: true}
 	figCyclesExact = &Figure{Key: "kexact", Label: "cycles, unrounded", Symbol: "k", SymbolASCII: "k", Scale: 1,
 		Name: "cycles_exact", Digits: mixtures.Digits{Sig: 4}}
 	figTime = &Figure{Key: "time", Label: "time", Symbol: "t", SymbolASCII: "t", Unit: "min", UnitASCII: "min", Scale: 1.0 / 60,
-		Name: "time_s", Digits: mixtures.Digits{Sig: 5}, Also: []AltUnit{{"h", "h", 1.0 / 3600}}}
+		Name: "time_s", Digits: mixtures.Digits{Sig: 5}, Also: []AltUnit{{Unit: "h", UnitASCII: "h", Scale: 1.0 / 3600}}}
 	figExchanges = &Figure{Key: "exch", Label: "volume exchanges", Symbol: "N", SymbolASCII: "N", Scale: 1,
 		Name: "volume_exchanges", Digits: mixtures.Digits{Sig: 5}}
 	figGasUsed = &Figure{Key: "gas", Label: "purge gas used", Symbol: "n", SymbolASCII: "n", Unit: "mol", UnitASCII: "mol", Scale: 1,
-		Name: "purge_gas_mol", Digits: mixtures.Digits{Sig: 5}, Also: []AltUnit{{"Nm³", "Nm3", 1 / normalMolPerM3}}}
+		Name: "purge_gas_mol", Digits: mixtures.Digits{Sig: 5}, Also: []AltUnit{{Unit: "Nm³", UnitASCII: "Nm3", Scale: 1 / normalMolPerM3}}}
 )
 
 // normalMolPerM3 is an ideal gas's amount per m³ at 0 °C and 101.325 kPa.

@@ -17,8 +17,14 @@ import (
 type balance func(tempK float64) (value, slope float64, err error)
 
 const (
-	solveRelTol = 1e-12 // on T: far below every displayed digit
-	solveMaxIt  = 200
+	// solveRelTol ends the iteration when a Newton step is below it,
+	// relative to T. Newton converges quadratically, so the step after
+	// a 1e-7 step would be near 1e-14: the T returned is good to about
+	// that, far below every displayed digit.
+	solveRelTol = 1e-7
+	// bracketRelTol ends a bisection, which gains only a bit a step.
+	bracketRelTol = 1e-13
+	solveMaxIt    = 200
 )
 
 // errOutOfRange is a balance whose root lies outside the model's range.
@@ -52,7 +58,7 @@ func solveT(f balance, guessK float64) (float64, error) {
 			// Bisect in ln T: the bracket may span decades.
 			next = math.Sqrt(lo * hi)
 		}
-		if hi-lo <= solveRelTol*t {
+		if hi-lo <= bracketRelTol*t {
 			if !below || !above {
 				return 0, errOutOfRange
 			}
