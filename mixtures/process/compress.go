@@ -82,7 +82,7 @@ var (
 		Name: "work_J_kg", Digits: mixtures.Digits{Sig: 6}}
 	figPower = &Figure{Key: "power", Label: "power (on the gas)", Symbol: "Ẇ", SymbolASCII: "W", Unit: unitKW, UnitASCII: unitKW, Scale: 1e-3,
 		Name: "power_W", Digits: mixtures.Digits{Sig: 6}}
-	figIntercoolQ = &Figure{Key: "qic", Label: "intercooling heat removed", Symbol: "q", SymbolASCII: "q", Unit: unitKJPerMol, UnitASCII: unitKJPerMol, Scale: 1e-3,
+	figIntercoolQ = &Figure{Key: "qic", Label: "intercooling heat removed", Symbol: "Qic", SymbolASCII: "Qic", Unit: unitKJPerMol, UnitASCII: unitKJPerMol, Scale: 1e-3,
 		Name: "intercool_J_mol", Digits: mixtures.Digits{Sig: 6}}
 	figDS = &Figure{Key: "sgen", Label: "entropy generated", Symbol: "Δs", SymbolASCII: "ds", Unit: unitJPerMolK, UnitASCII: unitJPerMolKA, Scale: 1,
 		Name: "entropy_generation_J_molK", Digits: mixtures.Digits{Sig: 5}}
@@ -210,9 +210,12 @@ func (c Compression) Solve() (*CompressionResult, error) {
 			rows[i] = append(rows[i], Value{figPower, s.WorkJPerMol * c.RateMolPerSec})
 		}
 	}
-	r.tables = []Table{{Name: "stages", Title: "Stages", Rows: rows}}
+	r.tables = []Table{{Name: "stages", Title: "Stages", Rows: rows, Brief: []string{"stage", "p2", "t2s", "t2", "w", "npoly", "qic", "power"}}}
 	if n > 1 {
 		r.note("the isentropic outlet temperature is the last stage's")
+	}
+	if expansion {
+		r.note("the work is negative: the gas does work on the expander")
 	}
 	// The hottest point is a stage outlet; an expander's coldest is its outlet.
 	r.caution(temperatureCautions(c.Mixture, r.MaxTempK, "outlet")...)

@@ -52,6 +52,9 @@ type Table struct {
 	RowName   string
 	RowLabels []string
 	Rows      [][]Value
+	// Brief lists the keys of the columns a text readout shows when it
+	// has no room for all; empty means all. JSON always has every column.
+	Brief []string
 }
 
 // Result is what every calculation's Solve returns. The writers in
@@ -137,3 +140,44 @@ var (
 	figMolarMass = &Figure{Key: "M", Label: "molar mass", Symbol: "M", SymbolASCII: "M", Unit: "g/mol", UnitASCII: "g/mol", Scale: 1e3,
 		Name: "molar_mass_kg_mol", Digits: mixtures.Digits{Sig: 6}}
 )
+
+// titles name each kind of result in headings.
+var titles = map[string]string{
+	"flow": "Flow", "compress": "Compression", "expand": "Expansion", "heat": "Heating and cooling",
+	"mix": "Mixing", "dilute": "Dilution", "purge": "Purging",
+}
+
+// Title is the heading of a result of the kind.
+func Title(kind string) string {
+	if t, ok := titles[kind]; ok {
+		return t
+	}
+	return kind
+}
+
+// FirstNonFinite names the first figure of r that is NaN or infinite, and
+// returns "" when all are finite.
+func FirstNonFinite(r Result) string {
+	for _, list := range [][]Value{r.Inputs(), r.Outputs()} {
+		for _, v := range list {
+			if v.SI-v.SI != 0 {
+				return v.Label
+			}
+		}
+	}
+	for _, tb := range r.Tables() {
+		for _, row := range tb.Rows {
+			for _, v := range row {
+				if v.SI-v.SI != 0 {
+					return tb.Title + " " + v.Label
+				}
+			}
+		}
+	}
+	if st := r.Outlet(); st != nil {
+		if what := mixtures.FirstNonFinite(st); what != "" {
+			return "outlet " + what
+		}
+	}
+	return ""
+}

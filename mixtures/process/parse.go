@@ -1,6 +1,7 @@
 package process
 
 import (
+	"math"
 	"strconv"
 	"strings"
 
@@ -99,3 +100,42 @@ func fractionOf(mix *mixtures.Mixture, sp *model.Species) float64 {
 
 // trimFloat writes x with up to 6 significant figures, for messages.
 func trimFloat(x float64) string { return strconv.FormatFloat(x, 'g', 6, 64) }
+
+// VolumeUnits lists the units ParseVolume accepts.
+const VolumeUnits = "m3, L, ft3"
+
+var volumeUnits = map[string]float64{"m3": 1, "l": 1e-3, "litre": 1e-3, "liter": 1e-3, "ft3": cubicFoot, "cf": cubicFoot}
+
+// ParseVolume reads a volume with its unit ("2.5 m3", "50 L", "12 ft3")
+// and returns m³; it must be finite and above zero.
+func ParseVolume(s string) (float64, error) {
+	if err := tooLong("a volume", s); err != nil {
+		return 0, err
+	}
+	x, unit, ok := splitValue(strings.TrimSpace(s))
+	if !ok {
+		return 0, model.Errorf("process", "volume %s: want a number and a unit (%s), e.g. 2.5 m3", model.Quote(s), VolumeUnits)
+	}
+	size, ok := volumeUnits[strings.ToLower(strings.NewReplacer("³", "3", "^3", "3", " ", "").Replace(unit))]
+	if !ok {
+		return 0, model.Errorf("process", "volume %s: unknown unit %s; want %s", model.Quote(s), model.Quote(unit), VolumeUnits)
+	}
+	v := x * size
+	if !(v > 0) || math.IsInf(v, 0) {
+		return 0, model.Errorf("process", "volume %s: want a finite volume above zero", model.Quote(s))
+	}
+	return v, nil
+}
+
+// ParseEfficiency reads an efficiency as a fraction or a percentage
+// ("0.8", "80%"), in (0, 1].
+func ParseEfficiency(s string) (float64, error) {
+	if err := tooLong("an efficiency", s); err != nil {
+		return 0, err
+	}
+	a, err := mixtures.ParseAmount(s)
+	if err != nil || a.Basis != mixtures.MoleFraction || !(a.Value > 0 && a.Value <= 1) {
+		return 0, model.Errorf("process", "efficiency %s: want a fraction above 0 and at most 1, or a percentage, e.g. 0.8 or 80%%", model.Quote(s))
+	}
+	return a.Value, nil
+}
