@@ -291,12 +291,12 @@ func totalPressure(src *blendSource, text string) (pressure, error) {
 	return pressure{}, badInput("--pres is missing; give the total pressure with a unit (%s), e.g. --pres 1atm or --pres 2barg", mixtures.PressureUnits)
 }
 
-func parseStd(text string) (float64, error) {
-	pa, err := mixtures.StdPressureFromText(text)
+func parseStd(text string) (mixtures.StdPressure, error) {
+	std, err := mixtures.ParseStdPressure(text)
 	if err != nil {
 		return 0, badInput("--std: %v", err)
 	}
-	return pa, nil
+	return std, nil
 }
 
 // stepsFlag is --steps: a whole number of points, end points included.

@@ -15,7 +15,7 @@ type stateConfig struct {
 	src      *blendSource
 	temp     temperature
 	pres     pressure
-	stdPa    float64
+	std      mixtures.StdPressure
 	format   outputFormat
 	allNotes bool
 	ascii    bool
@@ -75,7 +75,7 @@ func stateConditions(src *blendSource, tempText, presText, stdText string) (stat
 	if cfg.pres, err = totalPressure(src, presText); err != nil {
 		return cfg, err
 	}
-	if cfg.stdPa, err = parseStd(stdText); err != nil {
+	if cfg.std, err = parseStd(stdText); err != nil {
 		return cfg, err
 	}
 	return cfg, nil
@@ -86,7 +86,7 @@ func computeState(cat *model.Catalogue, cfg stateConfig) (*report.StateReport, e
 	if err != nil {
 		return nil, badInput("--blend: %v", model.UserMessage(err))
 	}
-	st, err := mix.State(cfg.temp.kelvin, cfg.pres.Pa, mixtures.Options{StdPresPa: cfg.stdPa})
+	st, err := mix.State(cfg.temp.kelvin, cfg.pres.Pa, mixtures.Options{Std: cfg.std})
 	if err != nil {
 		return nil, badInput("%s", model.UserMessage(err))
 	}
