@@ -15,27 +15,33 @@ func (t Terms) S() float64 { return t.LnQ + t.U }
 
 func (t Terms) add(o Terms) Terms { return Terms{t.LnQ + o.LnQ, t.U + o.U, t.Cv + o.Cv} }
 
-// translation returns the translational terms at (T, P), given ln T,
-// with the 1/N! of indistinguishable molecules folded in (Sackur-Tetrode).
-func (sp *Species) translation(lnT, presPa float64) Terms {
+// translation returns the translational terms at (T, P), given ln T and
+// ln P, with the 1/N! of indistinguishable molecules folded in
+// (Sackur-Tetrode).
+func (sp *Species) translation(lnT, lnP float64) Terms {
 	lnNQ := sp.lnNQ0 + 1.5*lnT
 	// V/N = kT/P, taken in logs so that no product over- or underflows.
-	lnVPerN := lnBoltzmann + lnT - math.Log(presPa)
+	lnVPerN := lnBoltzmann + lnT - lnP
 	return Terms{LnQ: lnNQ + lnVPerN + 1, U: 1.5, Cv: 1.5}
 }
 
 // rotorSumLimit is the T/Θrot below which linear rotor levels are summed.
 const rotorSumLimit = 50
 
-// rotation returns the rigid-rotor terms; invT is 1/T.
-func (sp *Species) rotation(tempK, invT, lnT float64, how RotationTreatment) Terms {
-	switch sp.Rotor {
-	case Atom:
-		return Terms{}
-	case Nonlinear:
+// rigidBodyRotor returns the terms of an atom (none) or of a nonlinear
+// molecule (the classical limit). It is small enough to be inlined, so
+// that fill calls nothing for them.
+func (sp *Species) rigidBodyRotor(lnT float64) Terms {
+	var t Terms
+	if sp.Rotor == Nonlinear {
 		// ln q = const + (3/2) ln T: U = 3/2 and Cv = ∂(T·U)/∂T = 3/2.
-		return Terms{LnQ: sp.lnRotClassical + 1.5*lnT, U: 1.5, Cv: 1.5}
+		t = Terms{LnQ: sp.lnRotClassical + 1.5*lnT, U: 1.5, Cv: 1.5}
 	}
+	return t
+}
+
+// linearRotor returns the terms of a linear rigid rotor; invT is 1/T.
+func (sp *Species) linearRotor(tempK, invT, lnT float64, how RotationTreatment) Terms {
 	theta := sp.rotThetaK[0]
 	switch how {
 	case RotationClassical:
@@ -139,12 +145,15 @@ func (sp *Species) vibration(invT float64) Terms {
 	for _, m := range sp.vibModes {
 		x := m.thetaK * invT
 		if x > 700 {
-			continue // exp(−x) underflows: the mode is frozen
+			continue // e^{−x} underflows: the mode is frozen
 		}
-		em := math.Exp(-x) // e^{−x}
-		om := 1 - em       // 1 − e^{−x}: exact enough while e^{−x} < 1/2
-		if em > 0.5 {
-			om = -math.Expm1(-x)
+		var em, om float64 // e^{−x} and 1 − e^{−x}, for one call
+		if x < expm1Below {
+			om = -math.Expm1(-x) // 1 − e^{−x} would lose digits
+			em = 1 - om
+		} else {
+			em = math.Exp(-x)
+			om = 1 - em
 		}
 		switch m.nDeg {
 		case 1:
@@ -165,11 +174,16 @@ func (sp *Species) vibration(invT float64) Terms {
 		u += m.deg * xe
 		cv += m.deg * xe * r // x² e^x/(e^x − 1)²
 	}
-	if prod != 1 { // no modes, or all frozen: ln 1 costs a call for nothing
+	if prod != 1 { // no mode excited: ln 1 costs a call for nothing
 		lnQ -= math.Log(prod)
 	}
 	return Terms{LnQ: lnQ, U: u, Cv: cv}
 }
+
+// expm1Below is the x under which 1 − e^{−x} is taken from expm1: there
+// e^{−x} > 0.78, and 1 − e^{−x} would lose more than two bits. Either way
+// a mode costs one call.
+const expm1Below = 0.25
 
 // powInt returns x^n for n ≥ 0 by squaring: a degeneracy needs no exp and
 // log, as math.Pow would spend.
@@ -184,14 +198,18 @@ func powInt(x float64, n int) float64 {
 	return p
 }
 
-// electronic returns the terms of the listed electronic levels.
+// electronic returns the terms of the listed electronic levels. It is
+// small enough to be inlined, so that a single level costs no call.
 func (sp *Species) electronic(invT float64, how ElectronicTreatment) Terms {
-	if len(sp.elecThetaK) == 0 {
-		return Terms{}
-	}
+	// Prepare lists at least the ground level.
 	if how == ElectronicGroundOnly || len(sp.elecThetaK) == 1 {
 		return Terms{LnQ: sp.lnElecG0}
 	}
+	return sp.electronicLevels(invT)
+}
+
+// electronicLevels sums the electronic levels.
+func (sp *Species) electronicLevels(invT float64) Terms {
 	// The ground level sits at 0: its Boltzmann factor is 1, with no exp.
 	z, m1, m2 := sp.elecDeg[0], 0.0, 0.0
 	for i := 1; i < len(sp.elecThetaK); i++ {
