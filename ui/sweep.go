@@ -156,8 +156,11 @@ func sweepParse(vi mixtures.SweepVar, fromText, toText, stepsText string, logGri
 		errs[sweepFieldSteps] = err.Error()
 	}
 	if errs == [sweepFieldCount]string{} {
-		if err := sw.Check(); err != nil {
+		// The range as a whole, by the parser the commands use too.
+		if r, err := mixtures.ParseSweepEnds(vi, fromText, toText); err != nil {
 			rangeErr = cleanErr(err)
+		} else if sw = r.Sweep(sw.Steps, logGrid); sw.Check() != nil {
+			rangeErr = cleanErr(sw.Check())
 		}
 	}
 	return sw, errs, rangeErr
@@ -186,13 +189,19 @@ func sweepParseSteps(s string) (int, error) {
 func (p *sweepPane) tryApply() bool {
 	vi := p.vi()
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
+	var rangeTyped error
 	if strings.Contains(from, "..") { // a whole range typed at once
-		if a, b, err := mixtures.ParseRange(from); err == nil {
+		a, b, err := mixtures.ParseRange(from)
+		if err == nil {
 			from, to = a, b
 			p.drafts[vi] = [2]string{a, b}
 		}
+		rangeTyped = err
 	}
 	sw, errs, rangeErr := sweepParse(vi, from, to, p.stepsDraft, p.set.Log)
+	if rangeTyped != nil {
+		errs[sweepFieldFrom] = "from: " + cleanErr(rangeTyped)
+	}
 	p.errs, p.rangeErr = errs, rangeErr
 	if errs != [sweepFieldCount]string{} || rangeErr != "" {
 		return false
@@ -501,12 +510,18 @@ func (p *sweepPane) validate() {
 	p.saveDrafts()
 	vi := p.vi()
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
+	var rangeTyped error
 	if strings.Contains(from, "..") {
-		if a, b, err := mixtures.ParseRange(from); err == nil {
+		a, b, err := mixtures.ParseRange(from)
+		if err == nil {
 			from, to = a, b
 		}
+		rangeTyped = err
 	}
 	_, p.errs, p.rangeErr = sweepParse(vi, from, to, p.stepsDraft, p.set.Log)
+	if rangeTyped != nil {
+		p.errs[sweepFieldFrom] = "from: " + cleanErr(rangeTyped)
+	}
 }
 
 // editKey handles a key while the fields are open. As in every field of
