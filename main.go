@@ -111,7 +111,7 @@ func (a *app) run(args []string) int {
 	}
 	c, ok := lookupCommand(rest[0])
 	if !ok {
-		return a.fail("zmix", badInput("unknown command %q; the commands are %s (zmix --help shows them all)", rest[0], commandNames()))
+		return a.fail("zmix", badInput("unknown command %s; the commands are %s (zmix --help shows them all)", model.Quote(rest[0]), commandNames()))
 	}
 	err = c.run(a, g, rest[1:])
 	if errors.Is(err, errHelp) {
@@ -155,18 +155,9 @@ func (a *app) fail(prefix string, err error) int {
 	}
 	// One line, and nothing in it that a terminal would act on: the
 	// message may quote a file's contents.
-	fmt.Fprintf(a.stderr, "%s: %s\n", prefix, model.Printable(untypedPrefixes.Replace(model.UserMessage(err))))
+	fmt.Fprintf(a.stderr, "%s: %s\n", prefix, model.Printable(model.UserMessage(err)))
 	return code
 }
-
-// untypedPrefixes is transitional: it goes once every engine error is
-// built with model.Errorf (work in flight in mixtures and model).
-var untypedPrefixes = strings.NewReplacer(
-	"mixtures: bad value: ", "",
-	"mixtures: bad sweep: ", "",
-	"mixtures: ", "",
-	"model: ", "",
-)
 
 // isTerminal reports whether w is a character device such as a terminal.
 func isTerminal(w io.Writer) bool {
