@@ -51,6 +51,7 @@ type sweepPane struct {
 
 	in     Inputs
 	haveIn bool
+	hidden bool // off screen: sweeps wait until it is shown
 
 	// The sweep being computed, if any.
 	gen     uint64
@@ -253,7 +254,7 @@ func (p *sweepPane) wanted() (sweepKey, bool) {
 // already. Starting one makes every older message stale.
 func (p *sweepPane) recompute() tea.Cmd {
 	k, ok := p.wanted()
-	if !ok {
+	if !ok || p.hidden {
 		return nil
 	}
 	if p.running && k == p.runKey {
@@ -754,6 +755,21 @@ func (p *sweepPane) Sync() tea.Cmd {
 }
 
 func (p *sweepPane) More() (above, below bool) { return false, false }
+
+// setShown starts the wanted sweep when the pane comes on screen; while
+// it is hidden, a change of inputs or settings computes nothing, so that
+// a long sweep in the saved settings costs nothing until it is looked at.
+func (p *sweepPane) setShown(shown bool) tea.Cmd {
+	p.hidden = !shown
+	if !shown {
+		return nil
+	}
+	cmd := p.recompute()
+	if cmd != nil {
+		p.refresh()
+	}
+	return cmd
+}
 
 // The settings are kept with the workbench state.
 func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }
