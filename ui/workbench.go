@@ -241,15 +241,9 @@ func (b *bench) viewFromFile(f *mixtures.BlendFile) {
 
 func (b *bench) toggleGauge() { b.showGauge = !b.showGauge; b.changed = true }
 
-// cleanErr drops the package prefixes from an engine error, which the user
-// does not need in a one-line message.
-func cleanErr(err error) string {
-	s := err.Error()
-	for _, p := range []string{"mixtures: ", "model: ", "bad value: "} {
-		s = strings.TrimPrefix(s, p)
-	}
-	return s
-}
+// cleanErr is an error's one line for the user, with no package prefix
+// and nothing in it that a terminal would act on.
+func cleanErr(err error) string { return model.Printable(model.UserMessage(err)) }
 
 // blendErrText writes a blend error without the blend text, which the
 // pane already shows line by line.
