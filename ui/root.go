@@ -141,6 +141,11 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 		r.panes = append(r.panes, s.newPane(c, b))
 	}
 	r.sizes = make([]box, len(r.panes))
+	for _, p := range r.panes {
+		if lp, ok := p.(lazyPane); ok {
+			lp.setShown(false) // until the first layout says otherwise
+		}
+	}
 	if saved != nil {
 		for _, p := range r.panes {
 			if sp, ok := p.(statePane); ok {
@@ -230,7 +235,20 @@ func (r *root) afterChange() tea.Cmd {
 	if r.wantStatusRows() != r.statusRows {
 		r.relayout()
 	}
-	return tea.Batch(cmd, r.autosave())
+	return tea.Batch(cmd, r.showPanes(), r.autosave())
+}
+
+// showPanes tells each lazy pane whether it is on screen (or about to be
+// exported from), so that a sweep runs only when someone looks at it.
+func (r *root) showPanes() tea.Cmd {
+	var cmds []tea.Cmd
+	for id, p := range r.panes {
+		if lp, ok := p.(lazyPane); ok {
+			shown := id < len(r.lay.visible) && r.lay.visible[id] && r.lay.kind != layoutTooSmall
+			cmds = append(cmds, lp.setShown(shown || paneID(id) == r.focus))
+		}
+	}
+	return tea.Batch(cmds...)
 }
 
 // syncPanes tells every pane that the document changed.

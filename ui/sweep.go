@@ -51,6 +51,7 @@ type sweepPane struct {
 
 	in     Inputs
 	haveIn bool
+	hidden bool // off screen: sweeps wait until it is shown
 
 	// The sweep being computed, if any.
 	gen     uint64
@@ -156,8 +157,11 @@ func sweepParse(vi mixtures.SweepVar, fromText, toText, stepsText string, logGri
 		errs[sweepFieldSteps] = err.Error()
 	}
 	if errs == [sweepFieldCount]string{} {
-		if err := sw.Check(); err != nil {
+		// The range as a whole, by the parser the commands use too.
+		if r, err := mixtures.ParseSweepEnds(vi, fromText, toText); err != nil {
 			rangeErr = cleanErr(err)
+		} else if sw = r.Sweep(sw.Steps, logGrid); sw.Check() != nil {
+			rangeErr = cleanErr(sw.Check())
 		}
 	}
 	return sw, errs, rangeErr
@@ -186,13 +190,19 @@ func sweepParseSteps(s string) (int, error) {
 func (p *sweepPane) tryApply() bool {
 	vi := p.vi()
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
+	var rangeTyped error
 	if strings.Contains(from, "..") { // a whole range typed at once
-		if a, b, err := mixtures.ParseRange(from); err == nil {
+		a, b, err := mixtures.ParseRange(from)
+		if err == nil {
 			from, to = a, b
 			p.drafts[vi] = [2]string{a, b}
 		}
+		rangeTyped = err
 	}
 	sw, errs, rangeErr := sweepParse(vi, from, to, p.stepsDraft, p.set.Log)
+	if rangeTyped != nil {
+		errs[sweepFieldFrom] = "from: " + cleanErr(rangeTyped)
+	}
 	p.errs, p.rangeErr = errs, rangeErr
 	if errs != [sweepFieldCount]string{} || rangeErr != "" {
 		return false
@@ -244,7 +254,7 @@ func (p *sweepPane) wanted() (sweepKey, bool) {
 // already. Starting one makes every older message stale.
 func (p *sweepPane) recompute() tea.Cmd {
 	k, ok := p.wanted()
-	if !ok {
+	if !ok || p.hidden {
 		return nil
 	}
 	if p.running && k == p.runKey {
@@ -501,12 +511,18 @@ func (p *sweepPane) validate() {
 	p.saveDrafts()
 	vi := p.vi()
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
+	var rangeTyped error
 	if strings.Contains(from, "..") {
-		if a, b, err := mixtures.ParseRange(from); err == nil {
+		a, b, err := mixtures.ParseRange(from)
+		if err == nil {
 			from, to = a, b
 		}
+		rangeTyped = err
 	}
 	_, p.errs, p.rangeErr = sweepParse(vi, from, to, p.stepsDraft, p.set.Log)
+	if rangeTyped != nil {
+		p.errs[sweepFieldFrom] = "from: " + cleanErr(rangeTyped)
+	}
 }
 
 // editKey handles a key while the fields are open. As in every field of
@@ -739,6 +755,21 @@ func (p *sweepPane) Sync() tea.Cmd {
 }
 
 func (p *sweepPane) More() (above, below bool) { return false, false }
+
+// setShown starts the wanted sweep when the pane comes on screen; while
+// it is hidden, a change of inputs or settings computes nothing, so that
+// a long sweep in the saved settings costs nothing until it is looked at.
+func (p *sweepPane) setShown(shown bool) tea.Cmd {
+	p.hidden = !shown
+	if !shown {
+		return nil
+	}
+	cmd := p.recompute()
+	if cmd != nil {
+		p.refresh()
+	}
+	return cmd
+}
 
 // The settings are kept with the workbench state.
 func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }

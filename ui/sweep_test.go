@@ -188,6 +188,10 @@ func TestSweepRangeEntry(t *testing.T) {
 		{name: "equal ends", start: def, from: "500 K", to: "500 K", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "two different end points"},
 		{name: "pressure, gauge", start: SweepSettings{Var: mixtures.SweepPressure, From: "1 bar", To: "100 bar", Steps: 40, Property: "S"}, from: "0 barg", to: "10 barg", wantFrom: "0 barg", wantTo: "10 barg", wantSteps: 40, wantGridFirst: 101325, wantGridLastPa: 1101325},
 		{name: "pressure unit on a T sweep", start: def, to: "5 bar", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: `unknown unit "bar"`},
+		// One range syntax with the commands: the points are their own
+		// field, and a step typed into the range says so.
+		{name: "step typed into the range", start: def, from: "300..600..900 K", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "has 3 parts"},
+		{name: "unit on the first end", start: def, from: "300 K..900", wantFrom: "300 K", wantTo: "900 K", wantSteps: 200, wantGridFirst: 300},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
