@@ -4,6 +4,7 @@ import (
 	"errors"
 	"os"
 	"path/filepath"
+	"strings"
 	"time"
 
 	"github.com/charmbracelet/bubbles/key"
@@ -11,6 +12,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -63,6 +65,8 @@ type root struct {
 	signals  <-chan os.Signal
 	now      func() time.Time
 	cwd      string
+	dataDir  string // where saves and exports are proposed at first
+	lastDir  string // the folder of the file last saved, opened or exported
 	quitting bool
 }
 
@@ -72,6 +76,7 @@ type rootOptions struct {
 	store   *stateStore
 	now     func() time.Time
 	cwd     string
+	dataDir string
 	signals <-chan os.Signal
 	mono    bool
 }
@@ -86,7 +91,7 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 	}
 	c := &Common{Styles: DefaultStyles(opt.mono, cfg.ASCII), Keys: DefaultKeyMap(), ASCII: cfg.ASCII, Catalogue: cat}
 	b := newBench(cat)
-	r := &root{c: c, b: b, store: opt.store, now: opt.now, cwd: opt.cwd, signals: opt.signals,
+	r := &root{c: c, b: b, store: opt.store, now: opt.now, cwd: opt.cwd, dataDir: opt.dataDir, signals: opt.signals,
 		input: newField(c), viewer: paneID(-1), lastTyped: map[promptKind]string{},
 		dirty: true} // the first message writes the state, in the current format
 
@@ -293,13 +298,47 @@ func (r *root) setFocus(id paneID) {
 	r.relayout()
 }
 
-// wantStatusRows is 2 when the message does not fit on one row.
-func (r *root) wantStatusRows() int {
-	if r.status != "" && r.prompt == promptNone && lipgloss.Width(r.c.Text(r.status))+2 > r.width {
-		return 2
+// maxBottomRows bounds the rows a long message or question may take.
+const maxBottomRows = 3
+
+// wantStatusRows is the rows the bottom line needs: more than one when a
+// message or question does not fit on one row and is wrapped.
+func (r *root) wantStatusRows() int { return max(1, len(r.bottomWrapped())) }
+
+// bottomWrapped is the status message, or a question to answer, wrapped
+// between words into at most maxBottomRows rows, when it does not fit on
+// one row (a message beside the key reminder); nil when it does. Past the
+// last row the text is shortened with an ellipsis, never cut mid-word.
+func (r *root) bottomWrapped() []string {
+	var text string
+	switch r.prompt {
+	case promptNone:
+		if r.status == "" {
+			return nil
+		}
+		text = r.c.Text(r.status)
+		if 1+lipgloss.Width(text)+lipgloss.Width(r.keysReminder()) <= r.width {
+			return nil
+		}
+	case promptQuit, promptReplace, promptOverwrite:
+		text = r.c.Text(r.question())
+		if 1+lipgloss.Width(text) <= r.width {
+			return nil
+		}
+	default:
+		return nil
 	}
-	return 1
+	w := max(r.width-1, 1)
+	lines := report.Wrap(text, w)
+	if len(lines) > maxBottomRows {
+		rest := strings.Join(lines[maxBottomRows-1:], " ")
+		lines = append(lines[:maxBottomRows-1], r.c.shorten(rest, w))
+	}
+	return lines
 }
+
+// keysReminder is the right end of the status line.
+func (r *root) keysReminder() string { return r.c.Text(" ? keys · tab pane · q quit ") }
 
 func (r *root) setStatus(s string) { r.status, r.statusErr = s, false }
 func (r *root) setError(s string)  { r.status, r.statusErr = s, true }

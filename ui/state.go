@@ -13,6 +13,7 @@ import (
 	"time"
 
 	"zmix/mixtures"
+	"zmix/model"
 )
 
 // stateFormat tags the autosaved workbench state. Version 1 wrote the
@@ -51,6 +52,19 @@ func DefaultStateDir() (string, error) {
 		return "", fmt.Errorf("ui: no state directory: %w (set XDG_STATE_HOME)", err)
 	}
 	return filepath.Join(home, ".local", "state", "zmix"), nil
+}
+
+// DefaultDataDir returns $XDG_DATA_HOME/zmix, or ~/.local/share/zmix:
+// where the workbench proposes to save blends and exports at first.
+func DefaultDataDir() (string, error) {
+	if x := os.Getenv("XDG_DATA_HOME"); filepath.IsAbs(x) {
+		return filepath.Join(x, "zmix"), nil
+	}
+	home, err := os.UserHomeDir()
+	if err != nil {
+		return "", model.Errorf("ui", "no data directory: %w (set XDG_DATA_HOME)", err)
+	}
+	return filepath.Join(home, ".local", "share", "zmix"), nil
 }
 
 // stateStore writes the autosave. Writes may come from several commands

@@ -314,14 +314,13 @@ func (p *sweepPane) progress(msg sweepProgressMsg) tea.Cmd {
 	return nil
 }
 
-// placeCursor puts the cursor on a new result: where it was, in
-// proportion, or else (first result, other variable) at the grid point
-// nearest the current state.
+// placeCursor puts the cursor on a new result: where it was when only the
+// blend or conditions changed (the grid is the same), or else (first
+// result, a new range or variable) at the grid point nearest the current
+// state, the setpoint.
 func (p *sweepPane) placeCursor(old *mixtures.SweepTable) {
 	n := len(p.result.Grid)
-	if old != nil && len(old.Grid) > 1 && old.Sweep.Var == p.result.Sweep.Var {
-		f := float64(p.cursor) / float64(len(old.Grid)-1)
-		p.cursor = min(max(int(math.Round(f*float64(n-1))), 0), n-1)
+	if old != nil && old.Sweep == p.result.Sweep && p.cursor < n {
 		return
 	}
 	here := p.in.TempK

@@ -811,3 +811,28 @@ func TestSweepHiddenCurveAndHeader(t *testing.T) {
 		}
 	}
 }
+
+// A new range puts the cursor back on the setpoint (the grid point nearest
+// the state in force), not where it was in proportion.
+func TestSweepCursorBackToSetpoint(t *testing.T) {
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 200, Property: "Cp"}, 100, 30)
+	sweepPress(t, p, "end")
+	sweepPress(t, p, "e")
+	sweepType(t, p, "250 K")
+	sweepPress(t, p, "tab")
+	sweepType(t, p, "1000 K")
+	sweepPress(t, p, "enter")
+	res := p.Result()
+	if res == nil || res.Sweep.From != 250 {
+		t.Fatalf("the new range did not run")
+	}
+	best := 0
+	for i, x := range res.Grid {
+		if math.Abs(x-295.15) < math.Abs(res.Grid[best]-295.15) {
+			best = i
+		}
+	}
+	if p.cursor != best {
+		t.Errorf("cursor at %g K, want the setpoint's grid point %g K", res.Grid[p.cursor], res.Grid[best])
+	}
+}

@@ -47,7 +47,8 @@ func Run(cfg Config) error {
 	defer signal.Stop(sigs)
 
 	store := newStateStore(dir)
-	r, err := newRoot(cfg, rootOptions{store: store, now: time.Now, cwd: cwd, signals: sigs, mono: mono})
+	dataDir, _ := DefaultDataDir() // without one, proposals start where zmix was started
+	r, err := newRoot(cfg, rootOptions{store: store, now: time.Now, cwd: cwd, dataDir: dataDir, signals: sigs, mono: mono})
 	if err != nil {
 		return err
 	}

@@ -19,7 +19,9 @@ type bench struct {
 	cat *model.Catalogue
 
 	entries            []mixtures.FileComponent // the recipe, each line as typed
-	name, note         string                   // carried from a blend file
+	undo               []mixtures.FileComponent // the recipe before its last change
+	canUndo            bool
+	name, note         string // carried from a blend file
 	tempText, presText string
 	std                mixtures.StdPressure // standard pressure P° of μ°
 	showGauge          bool                 // show the total pressure as gauge
@@ -117,6 +119,46 @@ func (b *bench) addSpecies(formula string) (int, bool) {
 	b.entries = append(b.entries, mixtures.FileComponent{Species: formula})
 	b.touch()
 	return len(b.entries) - 1, true
+}
+
+// rememberRecipe keeps a recipe (the current one when before is nil) for
+// one undo of the change about to be made.
+func (b *bench) rememberRecipe(before []mixtures.FileComponent) {
+	if before == nil {
+		before = b.entries
+	}
+	b.undo = append(b.undo[:0], before...)
+	b.canUndo = true
+}
+
+// undoRecipe puts back the remembered recipe and remembers the current
+// one in its place, so that undoing again redoes. It reports whether
+// there was anything to undo.
+func (b *bench) undoRecipe() bool {
+	if !b.canUndo {
+		return false
+	}
+	cur := append([]mixtures.FileComponent{}, b.entries...)
+	b.entries = append(b.entries[:0], b.undo...)
+	b.undo = cur
+	b.touch()
+	return true
+}
+
+// setName and setNote change the blend's name and note, which its file
+// keeps; control characters are left out.
+func (b *bench) setName(s string) {
+	if s = model.Printable(s); s != b.name {
+		b.name = s
+		b.touch()
+	}
+}
+
+func (b *bench) setNote(s string) {
+	if s = model.Printable(s); s != b.note {
+		b.note = s
+		b.touch()
+	}
 }
 
 func (b *bench) remove(i int) {
