@@ -13,6 +13,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 // The prompts on the bottom line: save, open and export paths, and the
@@ -29,6 +30,9 @@ const (
 	promptQuit                 // unsaved changes to the blend file: quit?
 	promptReplace              // unsaved changes: open another file anyway?
 )
+
+// maxPathRunes bounds a typed path; longer ones are no path a system takes.
+const maxPathRunes = 1024
 
 // absPath resolves a typed path: ~ is the home directory, and a relative
 // path is taken from where zmix was started.
@@ -290,13 +294,13 @@ func (r *root) promptLine() string {
 	k := r.c.Keys
 	switch r.prompt {
 	case promptQuit:
-		return s.Prompt.Render(t(fmt.Sprintf(" %s: changes not saved. Quit? %s quit · %s save and quit · %s stay",
-			filepath.Base(r.blendPath), k.Yes.Help().Key, k.SaveQuit.Help().Key, k.No.Help().Key)))
+		return s.Prompt.Render(t(model.Printable(fmt.Sprintf(" %s: changes not saved. Quit? %s quit · %s save and quit · %s stay",
+			filepath.Base(r.blendPath), k.Yes.Help().Key, k.SaveQuit.Help().Key, k.No.Help().Key))))
 	case promptReplace:
-		return s.Prompt.Render(t(fmt.Sprintf(" %s: changes not saved. Open another file? %s yes · %s no",
-			filepath.Base(r.blendPath), k.Yes.Help().Key, k.No.Help().Key)))
+		return s.Prompt.Render(t(model.Printable(fmt.Sprintf(" %s: changes not saved. Open another file? %s yes · %s no",
+			filepath.Base(r.blendPath), k.Yes.Help().Key, k.No.Help().Key))))
 	case promptOverwrite:
-		return s.Prompt.Render(t(fmt.Sprintf(" %s exists. Replace it? %s yes · %s no", r.shortPath(r.pending), k.Yes.Help().Key, k.No.Help().Key)))
+		return s.Prompt.Render(t(model.Printable(fmt.Sprintf(" %s exists. Replace it? %s yes · %s no", r.shortPath(r.pending), k.Yes.Help().Key, k.No.Help().Key))))
 	}
 	label := map[promptKind]string{
 		promptSave:   " Save blend to: ",

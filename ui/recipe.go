@@ -6,6 +6,7 @@ import (
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
 
+	"zmix/mixtures"
 	"zmix/model"
 )
 
@@ -38,7 +39,7 @@ type recipePane struct {
 }
 
 func newRecipePane(c *Common, b *bench) *recipePane {
-	p := &recipePane{c: c, b: b, amount: newField(c), search: newField(c), loads: b.loads}
+	p := &recipePane{c: c, b: b, amount: newFieldLimit(c, mixtures.MaxAmountChars), search: newFieldLimit(c, mixtures.MaxSpeciesChars), loads: b.loads}
 	return p
 }
 

@@ -9,6 +9,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"zmix/mixtures"
+	"zmix/model"
 )
 
 // The sweep pane moves T or P across a grid, plots one property of the
@@ -719,8 +720,9 @@ func (p *sweepPane) More() (above, below bool) { return false, false }
 func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }
 func (p *sweepPane) stateChanged() bool       { return p.Changed() }
 func (p *sweepPane) restoreState(st *savedState) {
-	if st.Sweep.Var != "" {
-		p.load(st.Sweep)
+	if s := st.Sweep; s.Var != "" {
+		s.From, s.To, s.Species = model.Printable(s.From), model.Printable(s.To), model.Printable(s.Species)
+		p.load(s)
 	}
 }
 

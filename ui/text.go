@@ -9,6 +9,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // asciiReplacer spells out the non-ASCII glyphs that the engine's notes and
@@ -160,51 +161,10 @@ func truncate(s string, w int) string {
 	return truncStyle.MaxWidth(w).Render(s)
 }
 
-// wrap breaks plain text into lines of at most w cells at spaces.
-func wrap(s string, w int) []string {
-	if w < 8 {
-		w = 8
-	}
-	var out []string
-	for _, para := range strings.Split(s, "\n") {
-		words := strings.Fields(para)
-		var line strings.Builder
-		n := 0
-		for _, word := range words {
-			ww := lipgloss.Width(word)
-			for ww > w { // a word longer than the line is cut
-				if n > 0 {
-					out = append(out, line.String())
-					line.Reset()
-					n = 0
-				}
-				r := []rune(word)
-				cut := min(len(r), w)
-				out = append(out, string(r[:cut]))
-				word = string(r[cut:])
-				ww = lipgloss.Width(word)
-			}
-			if ww == 0 {
-				continue
-			}
-			if n > 0 && n+1+ww > w {
-				out = append(out, line.String())
-				line.Reset()
-				n = 0
-			}
-			if n > 0 {
-				line.WriteByte(' ')
-				n++
-			}
-			line.WriteString(word)
-			n += ww
-		}
-		if n > 0 || len(words) == 0 {
-			out = append(out, line.String())
-		}
-	}
-	return out
-}
+// wrap breaks plain text into lines of at most w cells at spaces; it is
+// the one word wrapper of the commands and the workbench, linear in the
+// length of s and safe for any w (a width not yet known is taken as 8).
+func wrap(s string, w int) []string { return report.Wrap(s, w) }
 
 // shorten fits plain text into w cells, as it may be drawn (Text): whole
 // when it fits, else cut at the last space that leaves room for an

@@ -6,6 +6,8 @@ import (
 	"strings"
 
 	"github.com/charmbracelet/lipgloss"
+
+	"zmix/model"
 )
 
 // View draws the whole screen. It only puts together what Update and
@@ -192,7 +194,7 @@ func (r *root) fileState() string {
 	if r.blendPath == "" {
 		return r.c.Text("no file, autosaved")
 	}
-	name := filepath.Base(r.blendPath)
+	name := model.Printable(filepath.Base(r.blendPath))
 	if r.unsaved {
 		return name + " (changed)"
 	}
