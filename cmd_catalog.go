@@ -35,7 +35,7 @@ func (a *app) cmdCatalog(g *globalOpts, args []string) error {
 	if err != nil {
 		return err
 	}
-	stdPa, err := parseStd(stdText)
+	std, err := parseStd(stdText)
 	if err != nil {
 		return err
 	}
@@ -74,11 +74,11 @@ func (a *app) cmdCatalog(g *globalOpts, args []string) error {
 		builtin := report.BuiltinSpecies()[sp]
 		switch format {
 		case formatJSON:
-			err = report.WriteSpeciesJSON(&out, sp, builtin, stdPa, temps)
+			err = report.WriteSpeciesJSON(&out, sp, builtin, std.Pa(), temps)
 		case formatCSV:
-			err = report.WriteSpeciesCSV(&out, sp, stdPa, temps)
+			err = report.WriteSpeciesCSV(&out, sp, std.Pa(), temps)
 		default:
-			err = report.WriteSpecies(page(&out, g.ascii), sp, builtin, stdPa, temps)
+			err = report.WriteSpecies(page(&out, g.ascii), sp, builtin, std.Pa(), temps)
 		}
 		if err != nil {
 			return badInput("%s", model.UserMessage(err))

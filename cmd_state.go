@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"errors"
 	"fmt"
 	"strings"
 
@@ -15,7 +16,7 @@ type stateConfig struct {
 	src      *blendSource
 	temp     temperature
 	pres     pressure
-	stdPa    float64
+	std      mixtures.StdPressure
 	format   outputFormat
 	allNotes bool
 	ascii    bool
@@ -75,7 +76,7 @@ func stateConditions(src *blendSource, tempText, presText, stdText string) (stat
 	if cfg.pres, err = totalPressure(src, presText); err != nil {
 		return cfg, err
 	}
-	if cfg.stdPa, err = parseStd(stdText); err != nil {
+	if cfg.std, err = parseStd(stdText); err != nil {
 		return cfg, err
 	}
 	return cfg, nil
@@ -86,9 +87,9 @@ func computeState(cat *model.Catalogue, cfg stateConfig) (*report.StateReport, e
 	if err != nil {
 		return nil, badInput("--blend: %v", model.UserMessage(err))
 	}
-	st, err := mix.State(cfg.temp.kelvin, cfg.pres.Pa, mixtures.Options{StdPresPa: cfg.stdPa})
+	st, err := mix.State(cfg.temp.kelvin, cfg.pres.Pa, mixtures.Options{Std: cfg.std})
 	if err != nil {
-		return nil, badInput("%s", model.UserMessage(err))
+		return nil, conditionError(err, cfg.temp.text, cfg.pres.text)
 	}
 	if err := report.CheckFinite(&st); err != nil {
 		return nil, badInput("%s", model.UserMessage(err))
@@ -131,4 +132,16 @@ func (a *app) cautionsToStderr(cautions []mixtures.Caution) {
 	for _, line := range report.CautionLines(cautions) {
 		fmt.Fprintln(a.stderr, "zmix: caution: "+line)
 	}
+}
+
+// conditionError names the flag and the text typed for a state the model
+// cannot compute, instead of the converted value alone.
+func conditionError(err error, tempText, presText string) error {
+	switch {
+	case errors.Is(err, model.ErrTemperature):
+		return badInput("--temp %s: %s", model.Quote(strings.TrimSpace(tempText)), model.UserMessage(err))
+	case errors.Is(err, model.ErrPressure) && strings.TrimSpace(presText) != "":
+		return badInput("--pres %s: %s", model.Quote(strings.TrimSpace(presText)), model.UserMessage(err))
+	}
+	return badInput("%s", model.UserMessage(err))
 }

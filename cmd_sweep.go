@@ -23,7 +23,7 @@ type sweepConfig struct {
 	fixedPres  pressure    // used by a temperature sweep
 	rangeText  string
 	rangeGauge bool // a pressure range given in barg or psig
-	stdPa      float64
+	std        mixtures.StdPressure
 	format     outputFormat
 	ascii      bool
 }
@@ -56,7 +56,7 @@ func (a *app) cmdSweep(g *globalOpts, args []string) error {
 	tempIsRange, presIsRange := strings.Contains(tempText, ".."), strings.Contains(presText, "..")
 	switch {
 	case tempIsRange && presIsRange:
-		return badInput("--temp %q and --pres %q are both ranges; sweep one and give the other as one value, e.g. --temp 300..1500K --pres 1atm", tempText, presText)
+		return badInput("--temp %s and --pres %s are both ranges; sweep one and give the other as one value, e.g. --temp 300..1500K --pres 1atm", model.Quote(tempText), model.Quote(presText))
 	case !tempIsRange && !presIsRange:
 		return badInput("nothing to sweep; give --temp A..B (e.g. 300..1500K) with a fixed --pres, or --pres A..B (e.g. 1..50bar) with a fixed --temp")
 	}
@@ -66,7 +66,7 @@ func (a *app) cmdSweep(g *globalOpts, args []string) error {
 	}
 	given := flagsGiven(fs)
 	cfg := sweepConfig{src: src, format: format, ascii: g.ascii}
-	if cfg.stdPa, err = parseStd(src.pick(given, "std", stdText)); err != nil {
+	if cfg.std, err = parseStd(src.pick(given, "std", stdText)); err != nil {
 		return err
 	}
 	cfg.sweep = mixtures.Sweep{Steps: steps.n, Log: logGrid}
@@ -139,7 +139,7 @@ func (a *app) printSweep(cat *model.Catalogue, cfg sweepConfig) error {
 	if err != nil {
 		return badInput("--blend: %s", model.UserMessage(err))
 	}
-	opts := mixtures.Options{StdPresPa: cfg.stdPa}
+	opts := mixtures.Options{Std: cfg.std}
 	if err := mix.CheckSweep(cfg.sweep, cfg.fixedTemp.kelvin, cfg.fixedPres.Pa); err != nil {
 		return badInput("%s", model.UserMessage(err))
 	}
@@ -150,7 +150,7 @@ func (a *app) printSweep(cat *model.Catalogue, cfg sweepConfig) error {
 	rep := &report.SweepReport{
 		Label: cfg.src.label(), Mix: mix, Sweep: cfg.sweep, RangeText: cfg.rangeText, RangeGauge: cfg.rangeGauge,
 		FixedTempK: cfg.fixedTemp.kelvin, FixedPresText: cfg.fixedPres.text, FixedGauge: cfg.fixedPres.Gauge,
-		FixedPresPa: cfg.fixedPres.Pa, StdPresPa: cfg.stdPa, Cautions: mixtures.Cautions(mix, highPa),
+		FixedPresPa: cfg.fixedPres.Pa, StdPresPa: cfg.std.Pa(), Cautions: mixtures.Cautions(mix, highPa),
 	}
 	points := func(yield func(i int, s *mixtures.State) error) error {
 		return mix.Stream(context.Background(), cfg.sweep, cfg.fixedTemp.kelvin, cfg.fixedPres.Pa, opts,

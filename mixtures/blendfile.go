@@ -231,21 +231,10 @@ func (f *BlendFile) check() (field string, comp int, err error) {
 			return "pressure", -1, err
 		}
 	}
-	if _, err := StdPressureFromText(f.StandardPressure); err != nil {
+	if _, err := ParseStdPressure(f.StandardPressure); err != nil {
 		return "standard_pressure", -1, err
 	}
 	return "", -1, nil
-}
-
-// StdPressureFromText reads "1 bar" or "1 atm" (empty means 1 bar).
-func StdPressureFromText(s string) (float64, error) {
-	switch strings.ToLower(strings.TrimSpace(s)) {
-	case "", "1 bar", "bar", "1bar":
-		return 1e5, nil
-	case "1 atm", "atm", "1atm":
-		return 101325, nil
-	}
-	return 0, model.KindErrorf("mixtures", ErrValue, "standard pressure %s; want 1 bar or 1 atm", model.Quote(s))
 }
 
 // lineAt returns the 1-based line of byte offset off in data.

@@ -33,14 +33,7 @@ func (m *Mixture) prepare() {
 // the defaults: the default model treatment and P° = 1 bar.
 type Options struct {
 	Treatment model.Treatment
-	StdPresPa float64 // standard pressure P°; 0 means 1 bar
-}
-
-func (o Options) stdPresPa() float64 {
-	if o.StdPresPa > 0 {
-		return o.StdPresPa
-	}
-	return model.StdPressureBarPa
+	Std       StdPressure // standard pressure P° of μ°
 }
 
 // SpeciesTerm is one species' share of a mixture state.
@@ -128,7 +121,7 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 	if len(m.lnX) != len(m.Components) {
 		m.prepare()
 	}
-	p0 := opts.stdPresPa()
+	p0 := opts.Std.Pa()
 	r := model.GasConstant
 	rt := r * tempK
 	s.TempK, s.PresPa, s.StdPresPa = tempK, presPa, p0

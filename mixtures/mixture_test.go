@@ -334,7 +334,7 @@ func TestSpeciesTermsAndStdPressure(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	atm, err := m.State(500, 2e5, Options{StdPresPa: model.StdPressureAtmPa})
+	atm, err := m.State(500, 2e5, Options{Std: StdAtm})
 	if err != nil {
 		t.Fatal(err)
 	}

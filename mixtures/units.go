@@ -32,6 +32,12 @@ var PressureUnits = pressureUnitsText()
 // ErrValue is wrapped by every value-parsing error.
 var ErrValue = errors.New("bad value")
 
+// SplitNumber splits a value with a unit, "25 °C" or "1.5bar", into the
+// finite number that leads it and the unit text after it, trimmed. Every
+// parser of values with units (temperatures, pressures, amounts, rates)
+// reads its number this way.
+func SplitNumber(s string) (float64, string, error) { return splitNumber(s) }
+
 // splitNumber splits "25 °C" or "1.5bar" into the number and the unit text.
 func splitNumber(s string) (float64, string, error) {
 	x, rest, err := splitNumberRaw(strings.TrimSpace(s))
@@ -207,6 +213,66 @@ func ParsePressure(s string) (Pressure, error) {
 	return p, nil
 }
 
+// StdPressure is the standard pressure P° that μ° and the standard
+// tables refer to: 1 bar (the zero value, IUPAC's standard since 1982) or
+// 1 atm (older tables). It is the one representation of that choice in
+// the engine, the commands and the workbench.
+type StdPressure int
+
+const (
+	StdBar StdPressure = iota
+	StdAtm
+)
+
+// Pa is the standard pressure in pascals.
+func (p StdPressure) Pa() float64 {
+	if p == StdAtm {
+		return model.StdPressureAtmPa
+	}
+	return model.StdPressureBarPa
+}
+
+// String is how settings and blend files write it: "1 bar" or "1 atm".
+func (p StdPressure) String() string {
+	if p == StdAtm {
+		return "1 atm"
+	}
+	return "1 bar"
+}
+
+// Label names it with its value: "1 bar (100000 Pa)".
+func (p StdPressure) Label() string {
+	if p == StdAtm {
+		return "1 atm (101325 Pa)"
+	}
+	return "1 bar (100000 Pa)"
+}
+
+// MarshalText writes String.
+func (p StdPressure) MarshalText() ([]byte, error) { return []byte(p.String()), nil }
+
+// UnmarshalText reads what ParseStdPressure reads.
+func (p *StdPressure) UnmarshalText(b []byte) error {
+	got, err := ParseStdPressure(string(b))
+	if err != nil {
+		return err
+	}
+	*p = got
+	return nil
+}
+
+// ParseStdPressure reads "1 bar" or "1 atm" (any case and spacing); empty
+// text, as in a blend file that does not say, means 1 bar.
+func ParseStdPressure(s string) (StdPressure, error) {
+	switch strings.Join(strings.Fields(strings.ToLower(s)), "") {
+	case "", "1bar", "bar":
+		return StdBar, nil
+	case "1atm", "atm":
+		return StdAtm, nil
+	}
+	return StdBar, model.KindErrorf("mixtures", ErrValue, "standard pressure %s; want 1 bar or 1 atm", model.Quote(s))
+}
+
 // celsiusZeroK is 0 °C in kelvin, by definition of the Celsius scale.
 const celsiusZeroK = 273.15
 
@@ -216,4 +282,86 @@ func KelvinToCelsius(tempK float64) float64 { return tempK - celsiusZeroK }
 // FormatTemperature writes a temperature in kelvin with sensible digits.
 func FormatTemperature(tempK float64) string {
 	return strconv.FormatFloat(tempK, 'g', 6, 64) + " K"
+}
+
+// PressureUnit is a unit pressures are shown in: a size in Pa and a
+// reading, absolute or gauge (above AtmospherePa). The workbench shows
+// every total pressure in the unit the user typed and the reading chosen.
+type PressureUnit struct {
+	key    string // the unit's family in pressureUnitNames
+	SizePa float64
+	Gauge  bool
+}
+
+// pressureUnitNames are each unit family's names for an absolute and a
+// gauge reading; "abs" marks units that would otherwise be read either way.
+var pressureUnitNames = map[string][2]string{
+	"pa": {"Pa abs", "Pa gauge"}, "kpa": {"kPa abs", "kPag"}, "mpa": {"MPa abs", "MPa gauge"},
+	"bar": {"bar abs", "barg"}, "mbar": {"mbar abs", "mbar gauge"}, "atm": {"atm", "atm gauge"},
+	"torr": {"Torr", "Torr gauge"}, "psi": {"psia", "psig"},
+}
+
+// pressureUnitFamily maps each accepted unit word to its family.
+var pressureUnitFamily = map[string]string{
+	"pa": "pa", "kpa": "kpa", "kpag": "kpa", "mpa": "mpa", "bar": "bar", "bara": "bar", "barg": "bar",
+	"mbar": "mbar", "atm": "atm", "torr": "torr", "psi": "psi", "psia": "psi", "psig": "psi",
+}
+
+// BarAbsolute is the unit of pressures nobody typed: bar, absolute.
+var BarAbsolute = PressureUnit{key: "bar", SizePa: 1e5}
+
+// PressureUnitOf returns the unit of a typed pressure ("30 psig" gives
+// psig), and false when the text names no unit zmix reads.
+func PressureUnitOf(text string) (PressureUnit, bool) {
+	_, unit, err := splitNumber(text)
+	if err != nil {
+		return PressureUnit{}, false
+	}
+	size, gauge, ok := pressureUnit(unit)
+	if !ok {
+		return PressureUnit{}, false
+	}
+	return PressureUnit{key: pressureUnitFamily[strings.ToLower(unit)], SizePa: size, Gauge: gauge}, true
+}
+
+// Reading returns the same unit read as gauge or as absolute.
+func (u PressureUnit) Reading(gauge bool) PressureUnit {
+	u.Gauge = gauge
+	return u
+}
+
+// Name is the unit's name for its reading: "bar abs", "barg", "psig".
+func (u PressureUnit) Name() string {
+	names, ok := pressureUnitNames[u.key]
+	if !ok {
+		names = pressureUnitNames["bar"]
+	}
+	if u.Gauge {
+		return names[1]
+	}
+	return names[0]
+}
+
+// FromPa converts an absolute pressure in Pa to this unit and reading.
+func (u PressureUnit) FromPa(pa float64) float64 {
+	if u.Gauge {
+		pa -= AtmospherePa
+	}
+	return pa / u.size()
+}
+
+// ToPa converts a value in this unit and reading to absolute Pa.
+func (u PressureUnit) ToPa(v float64) float64 {
+	pa := v * u.size()
+	if u.Gauge {
+		pa += AtmospherePa
+	}
+	return pa
+}
+
+func (u PressureUnit) size() float64 {
+	if u.SizePa > 0 {
+		return u.SizePa
+	}
+	return 1e5
 }

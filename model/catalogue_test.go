@@ -43,6 +43,7 @@ func TestBuiltinCatalogue(t *testing.T) {
 var numericFields = map[string]bool{
 	"rot_cm": true, "sigma": true, "spin": true, "vib_cm": true,
 	"elec_cm": true, "dHf0_kJ": true, "boil_K": true,
+	"Tc_K": true, "Pc_bar": true, "omega": true,
 }
 
 // quotedJANAF matches a citation of a JANAF table read for this project:

@@ -53,6 +53,10 @@ func (e *CatalogueError) UserMessage() string { return e.Error() }
 // catalogueFields lists the keys a species block may hold.
 var catalogueFields = map[string]string{
 	"name":    "free text",
+	"Tc_K":    "critical temperature in K",
+	"Pc_bar":  "critical pressure in bar",
+	"omega":   "acentric factor",
+	"quantum": "yes or no: yes when Tc_K and Pc_bar are a quantum gas's classical limits",
 	"rotor":   "atom, linear or nonlinear",
 	"rot_cm":  "rotational constants in cm⁻¹: B, or A B C",
 	"sigma":   "symmetry number, a whole number ≥ 1",
@@ -99,6 +103,13 @@ var (
 	// He boils at 4.2 K; nothing is a gas at room temperature whose
 	// boiling point is near 6 000 K.
 	boilRange = numRange{"boiling point", 1, 6000, "K", false}
+	// He's critical point, 5.2 K, is the lowest; refractory metals' lie
+	// some thousands of K up. Pc: He 2.3 bar, and a few thousand bar
+	// bounds the metals' estimates.
+	critTRange = numRange{"critical temperature", 1, 10000, "K", false}
+	critPRange = numRange{"critical pressure", 0.1, 5000, "bar", false}
+	// ω: He −0.39, the most negative; long or polar molecules reach 1.5.
+	omegaRange = numRange{"acentric factor", -1, 2, "", false}
 )
 
 // Limits on how many levels a species lists: each costs an exp in every
@@ -252,7 +263,7 @@ func (p *catParser) line(raw string) error {
 	key = strings.TrimSpace(key)
 	value, source, _ := strings.Cut(value, "|")
 	value, source = strings.TrimSpace(value), strings.TrimSpace(source)
-	if _, known := catalogueFields[key]; !known {
+	if !knownField(key) {
 		return p.errf(p.lineNo, key, "unknown field (known: %s)", knownFieldList())
 	}
 	if at, seen := p.fieldAt[key]; seen {
@@ -286,8 +297,17 @@ func (p *catParser) finish() error {
 			return p.errf(p.curLine, need, "missing (every species needs name, rotor and dHf0_kJ)")
 		}
 	}
+	if n := p.count("Tc_K", "Pc_bar", "omega"); n != 0 && n != 3 {
+		return p.errf(p.curLine, "", "Tc_K, Pc_bar and omega come together: give all three, or none")
+	}
+	if _, ok := p.fieldAt["Tc_K"]; sp.QuantumGas && !ok {
+		return p.errf(p.fieldAt["quantum"], "quantum", "needs Tc_K, Pc_bar and omega")
+	}
 	if _, ok := p.fieldAt["rot_cm"]; sp.Rotor != Atom && !ok {
 		return p.errf(p.curLine, "rot_cm", "missing for a %s rotor", sp.Rotor)
+	}
+	if err := sp.Safety.check(); err != nil {
+		return p.errf(p.curLine, "", "%s", UserMessage(err))
 	}
 	if err := sp.Prepare(); err != nil {
 		return p.errf(p.curLine, "", "%s", UserMessage(err))
@@ -302,6 +322,17 @@ func (p *catParser) finish() error {
 	}
 	p.out = append(p.out, sp)
 	return nil
+}
+
+// count returns how many of the fields the current block gave.
+func (p *catParser) count(fields ...string) int {
+	n := 0
+	for _, f := range fields {
+		if _, ok := p.fieldAt[f]; ok {
+			n++
+		}
+	}
+	return n
 }
 
 // shapeError is a fault of a block as a whole, blamed on one field.
@@ -376,15 +407,19 @@ func checkText(what, s string, maxRunes int) error {
 }
 
 func knownFieldList() string {
-	keys := make([]string, 0, len(catalogueFields))
+	keys := make([]string, 0, len(catalogueFields)+len(safetyFields))
 	for k := range catalogueFields {
 		keys = append(keys, k)
 	}
+	keys = append(keys, SafetyFieldNames()...)
 	sort.Strings(keys)
 	return strings.Join(keys, ", ")
 }
 
 func setField(sp *Species, key, value string) error {
+	if _, ok := safetyFields[key]; ok {
+		return setSafetyField(&sp.Safety, key, value)
+	}
 	switch key {
 	case "name":
 		if value == "" {
@@ -454,6 +489,33 @@ func setField(sp *Species, key, value string) error {
 			return err
 		}
 		sp.EnergyZeroJPerMol = x * 1000
+	case "Tc_K":
+		x, err := critTRange.parse(value)
+		if err != nil {
+			return err
+		}
+		sp.CriticalK = x
+	case "Pc_bar":
+		x, err := critPRange.parse(value)
+		if err != nil {
+			return err
+		}
+		sp.CriticalPa = x * 1e5
+	case "omega":
+		x, err := omegaRange.parse(value)
+		if err != nil {
+			return err
+		}
+		sp.Acentric = x
+	case "quantum":
+		switch value {
+		case "yes":
+			sp.QuantumGas = true
+		case "no":
+			sp.QuantumGas = false
+		default:
+			return Errorf("model", "%s; want %s", Quote(value), catalogueFields[key])
+		}
 	case "boil_K":
 		x, err := boilRange.parse(value)
 		if err != nil {

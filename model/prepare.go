@@ -86,6 +86,13 @@ func (sp *Species) Prepare() error {
 		sp.elecDeg = append(sp.elecDeg, float64(e.Degeneracy))
 	}
 	sp.lnElecG0 = math.Log(sp.elecDeg[0])
+	// Species built in code, not read from a file, meet the same ranges
+	// as the file's fields; Tc = 0 means none.
+	if sp.CriticalK != 0 || sp.CriticalPa != 0 {
+		if !critTRange.contains(sp.CriticalK) || !critPRange.contains(sp.CriticalPa/1e5) || !omegaRange.contains(sp.Acentric) {
+			return Errorf("model", "%s: critical constants Tc %g K, Pc %g bar, ω %g; want %s, %s and %s", sp.Formula, sp.CriticalK, sp.CriticalPa/1e5, sp.Acentric, critTRange, critPRange, omegaRange)
+		}
+	}
 	if sp.BoilingK != 0 && !boilRange.contains(sp.BoilingK) {
 		return Errorf("model", "%s: boiling point %g K; want 0 (unknown) or %s", sp.Formula, sp.BoilingK, boilRange)
 	}

@@ -116,7 +116,18 @@ type Species struct {
 	EnergyZeroJPerMol float64
 
 	BoilingK float64 // normal boiling (or sublimation) point; 0 if unknown
-	Hazards  Hazard
+
+	// Critical constants for the corresponding-states correlations of
+	// mixtures/realgas; CriticalK is 0 when the species has none (radicals,
+	// or a user species that gives none). For a quantum gas (He, Ne, H2,
+	// D2) CriticalK and CriticalPa are the classical limits Tc⁰ and Pc⁰ of
+	// effective constants that depend on temperature (see HasCritical).
+	CriticalK  float64
+	CriticalPa float64
+	Acentric   float64 // acentric factor ω
+	QuantumGas bool
+	Hazards    Hazard
+	Safety     SafetyData // flammable limits, ISO 10156 coefficients, LC50
 
 	// Sources maps a field name of the catalogue file (for example "vib")
 	// to the publication its numbers come from.
@@ -154,6 +165,9 @@ func (sp *Species) VibThetaK() []float64 { return sp.vibThetaK }
 
 // ElecThetaK returns the electronic level energies as temperatures in K.
 func (sp *Species) ElecThetaK() []float64 { return sp.elecThetaK }
+
+// HasCritical reports whether the species carries critical constants.
+func (sp *Species) HasCritical() bool { return sp.CriticalK > 0 }
 
 // Homonuclear reports whether even and odd J carry separate spin weights.
 func (sp *Species) Homonuclear() bool { return sp.SpinWeights[0]+sp.SpinWeights[1] > 0 }

@@ -1,8 +1,12 @@
 package ui
 
 import (
+	"os"
+	"path/filepath"
 	"strings"
 	"testing"
+
+	"zmix/mixtures"
 )
 
 // screenTour is a walk through every pane, overlay and prompt of the
@@ -122,5 +126,71 @@ func TestHeadlineMarkedStale(t *testing.T) {
 	}
 	if f := strings.Fields(h); len(f) > 0 && strings.Contains("MρCpγc", f[len(f)-1]) {
 		t.Errorf("key figures = %q: a figure's value is cut off", h)
+	}
+}
+
+// Pressures show in the unit typed and the reading chosen everywhere: tab
+// bar, Setpoint, Properties, the sweep's header, axis and cursor; the
+// choice survives opening a file (issue 7, item 9).
+func TestPressureViewEverywhere(t *testing.T) {
+	dir := t.TempDir()
+	r := testRoot(t, 120, 40, testRootOpts{stateDir: dir})
+	press(t, r, "2", "g")
+	check := func(when string, want ...string) {
+		t.Helper()
+		screen := r.View()
+		if strings.Contains(screen, "bar abs") {
+			t.Errorf("%s: an absolute pressure on a gauge screen:\n%s", when, screen)
+		}
+		for _, w := range want {
+			if !strings.Contains(screen, w) {
+				t.Errorf("%s: screen lacks %q:\n%s", when, w, screen)
+			}
+		}
+	}
+	check("gauge view", "295.15 K · 0.38675 barg", "295.15 K, 0.38675 barg", "0.38675 barg,", "entered as")
+	press(t, r, "4")
+	check("T sweep", "at P = 0.38675 barg")
+	press(t, r, "v")
+	check("P sweep", "P in barg", " barg (point")
+
+	// A range typed in psig is shown in psig.
+	walk(t, r, []string{"e", "ctrl+u", "type:5..150 psig", "enter"})
+	check("psig range", "P in psig", " psig (point")
+
+	f := mixtures.DemoFile()
+	f.Pressure = "2 bar"
+	path := filepath.Join(dir, "other.json")
+	if err := f.Save(path); err != nil {
+		t.Fatal(err)
+	}
+	walk(t, r, []string{"ctrl+o", "ctrl+u", "type:" + path, "enter"})
+	if !r.b.showGauge {
+		t.Fatalf("opening a file reset the pressure view to absolute (status %q)", r.status)
+	}
+	check("after ctrl+o", "0.98675 barg") // 2 bar absolute
+}
+
+// Save and export propose the user's data directory at first, then the
+// folder last used; the data directory is made when first written to.
+func TestSaveProposesDataDirThenLastFolder(t *testing.T) {
+	data := filepath.Join(t.TempDir(), "share", "zmix")
+	r := testRoot(t, 100, 30, testRootOpts{dataDir: data})
+	press(t, r, "ctrl+s")
+	if got, want := r.input.value(), filepath.Join(data, "blend.json"); got != want {
+		t.Fatalf("save proposes %q, want %q", got, want)
+	}
+	press(t, r, "enter")
+	if _, err := os.Stat(filepath.Join(data, "blend.json")); err != nil {
+		t.Fatalf("saving as proposed: %v (status %q)", err, r.status)
+	}
+	press(t, r, "ctrl+e")
+	if got, want := r.input.value(), filepath.Join(data, "readout.csv"); got != want {
+		t.Errorf("export proposes %q, want %q", got, want)
+	}
+	other := t.TempDir()
+	walk(t, r, []string{"ctrl+u", "type:" + filepath.Join(other, "x.json"), "enter", "ctrl+e"})
+	if got, want := r.input.value(), filepath.Join(other, "readout.csv"); got != want {
+		t.Errorf("after an export elsewhere, export proposes %q, want %q (the last folder)", got, want)
 	}
 }

@@ -14,6 +14,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 var blendAir = mixtures.BlendFile{
@@ -55,8 +56,8 @@ func TestAutosaveAndRestore(t *testing.T) {
 	}
 
 	r2 := testRoot(t, 100, 30, testRootOpts{stateDir: dir})
-	if r2.b.entries[1].Amount != "2%x" || r2.b.tempText != "350 K" || !r2.b.stdAtm || !r2.b.showGauge || r2.focus != paneAnatomy {
-		t.Errorf("restored: entries %v temp %q stdAtm %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.stdAtm, r2.b.showGauge, r2.focus.name())
+	if r2.b.entries[1].Amount != "2%x" || r2.b.tempText != "350 K" || r2.b.std != mixtures.StdAtm || !r2.b.showGauge || r2.focus != paneAnatomy {
+		t.Errorf("restored: entries %v temp %q std %v gauge %v focus %s", r2.b.entries, r2.b.tempText, r2.b.std, r2.b.showGauge, r2.focus.name())
 	}
 	// The typo is still there, and so is the last valid blend behind it.
 	if r2.b.rowErr[1] == "" || r2.b.in.Mixture == nil || r2.b.in.TempK != 350 {
@@ -218,10 +219,29 @@ func TestSaveRefusesInvalidRecipe(t *testing.T) {
 func TestExportReadout(t *testing.T) {
 	dir := t.TempDir()
 	r := testRoot(t, 80, 24, testRootOpts{stateDir: dir})
-	st := r.b.state
+	// What zmix state prints for the demo blend at its conditions.
+	st := engineState(t, "SiH4 4%, NH3 18%, H2 500ppm, N2 bal", 295.15, 1.4e5)
+	mix, err := mixtures.ParseBlend("SiH4 4%, NH3 18%, H2 500ppm, N2 bal")
+	if err != nil {
+		t.Fatal(err)
+	}
+	m, err := mix.Resolve(model.Builtin(), 1.4e5)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rep := &report.StateReport{State: &st, PresText: "1.4 bar", Cautions: mixtures.Cautions(m, 1.4e5), Notes: mixtures.Notes(&st, false)}
 	var wantCSV, wantJSON bytes.Buffer
-	mixtures.WriteCSV(&wantCSV, []mixtures.State{st}, false)
-	mixtures.WriteJSON(&wantJSON, &st, false)
+	if err := report.WriteStateCSV(&wantCSV, rep); err != nil {
+		t.Fatal(err)
+	}
+	if err := report.WriteStateJSON(&wantJSON, rep); err != nil {
+		t.Fatal(err)
+	}
+	for _, key := range []string{`"cautions": [`, `"notes": [`, "Pyrophoric (SiH4)", "caution: NH3: "} {
+		if !strings.Contains(wantJSON.String(), key) {
+			t.Fatalf("the state command's JSON lacks %q; the test no longer checks the safety text", key)
+		}
+	}
 	for name, want := range map[string][]byte{"out.csv": wantCSV.Bytes(), "out.json": wantJSON.Bytes()} {
 		press(t, r, "ctrl+e", "ctrl+u")
 		typeIn(t, r, name)
@@ -245,11 +265,13 @@ func TestExportReadout(t *testing.T) {
 func TestExportSweep(t *testing.T) {
 	dir := t.TempDir()
 	r := testRoot(t, 80, 24, testRootOpts{stateDir: dir})
+	// At 80x24 the sweep runs once its pane is shown.
+	press(t, r, "4")
 	res := r.panes[paneSweep].(*sweepPane).Result()
 	if res == nil {
-		t.Fatal("no sweep after start-up")
+		t.Fatal("no sweep once the sweep pane is shown")
 	}
-	press(t, r, "4", "ctrl+e", "ctrl+u")
+	press(t, r, "ctrl+e", "ctrl+u")
 	typeIn(t, r, "sweep.json")
 	press(t, r, "enter")
 	got, err := os.ReadFile(filepath.Join(dir, "sweep.json"))

@@ -15,6 +15,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // A word of a megabyte wraps, at any width the workbench may ask for
@@ -23,7 +24,7 @@ import (
 func TestWrapHugeWord(t *testing.T) {
 	word := strings.Repeat("x", 1<<20) + "é"
 	for _, w := range []int{-4, 0, 1, 8, 80} {
-		lines := wrap("a "+word+" b", w)
+		lines := report.Wrap("a "+word+" b", w)
 		width := max(w, 8)
 		var sb strings.Builder
 		for i, l := range lines {
@@ -47,7 +48,7 @@ func BenchmarkWrapHugeWord(b *testing.B) {
 		word := strings.Repeat("y", n)
 		b.Run(fmt.Sprintf("%dKB", n>>10), func(b *testing.B) {
 			for range b.N {
-				wrapLines = wrap(word, -4)
+				wrapLines = report.Wrap(word, -4)
 			}
 		})
 	}
@@ -104,7 +105,7 @@ func hostileStates(t *testing.T) map[string][]byte {
 		"1 MB amount":        good(func(st *savedState) { st.Blend.Components[0].Amount = mb }),
 		"1 MB name":          good(func(st *savedState) { st.Blend.Name = mb }),
 		"1 MB sweep": good(func(st *savedState) {
-			st.Sweep = SweepSettings{Var: "T", From: mb, To: "1500 K", Steps: 200, Property: "Cp"}
+			st.Sweep = SweepSettings{Var: mixtures.SweepTemperature, From: mb, To: "1500 K", Steps: 200, Property: "Cp"}
 		}),
 		"5000 unknowns":  good(func(st *savedState) { st.Blend.Components = many }),
 		"3 MB":           append([]byte(`{"format":"zmix-workbench/2","blend":{"note":"`), append([]byte(strings.Repeat("n", 3<<20)), `"}}`...)...),

@@ -53,6 +53,10 @@ type (
 		Result() *mixtures.SweepTable
 		StreamResult(yield func(i int, s *mixtures.State) error) error
 	}
+	// lazyPane does costly work (a sweep) only while it is on screen:
+	// the root tells it, after every message, whether it is shown, and
+	// runs the command it returns.
+	lazyPane interface{ setShown(shown bool) tea.Cmd }
 	// heightPane asks for a height of its own in a column of the full
 	// layout, out of avail rows; the last pane of a column takes the rest.
 	heightPane interface{ wantHeight(avail int) int }

@@ -91,12 +91,12 @@ func TestSetpointEscRestores(t *testing.T) {
 func TestSetpointToggles(t *testing.T) {
 	p, b := testSetpoint(t)
 	setpointKeys(p, b, "s")
-	if b.in.Opts.StdPresPa != model.StdPressureAtmPa || !strings.Contains(p.View(), "1 atm") {
-		t.Errorf("s: P° = %g", b.in.Opts.StdPresPa)
+	if b.in.Opts.Std.Pa() != model.StdPressureAtmPa || !strings.Contains(p.View(), "1 atm") {
+		t.Errorf("s: P° = %g", b.in.Opts.Std.Pa())
 	}
 	setpointKeys(p, b, "up", "up", "down", "down", "enter") // the P° line again
-	if b.in.Opts.StdPresPa != model.StdPressureBarPa {
-		t.Errorf("enter on P°: %g", b.in.Opts.StdPresPa)
+	if b.in.Opts.Std.Pa() != model.StdPressureBarPa {
+		t.Errorf("enter on P°: %g", b.in.Opts.Std.Pa())
 	}
 	gen := b.in.Gen
 	setpointKeys(p, b, "g")
@@ -106,7 +106,12 @@ func TestSetpointToggles(t *testing.T) {
 	if b.in.Gen != gen {
 		t.Errorf("the pressure view changed the inputs")
 	}
-	if got := b.presShown(1.4e5); got != "0.38675 bar gauge" {
+	// Gauge in the unit typed, bar, under its gauge name; the pressure
+	// line reads the same way as every other pressure (issue 7, item 9).
+	if got := b.presShown(1.4e5); got != "0.38675 barg" {
 		t.Errorf("presShown = %q", got)
+	}
+	if v := p.View(); !strings.Contains(v, "0.38675 barg, entered as absolute") || strings.Contains(v, "bar abs") {
+		t.Errorf("the pressure line does not follow the gauge view:\n%s", v)
 	}
 }

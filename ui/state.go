@@ -56,6 +56,19 @@ func DefaultStateDir() (string, error) {
 	return filepath.Join(home, ".local", "state", "zmix"), nil
 }
 
+// DefaultDataDir returns $XDG_DATA_HOME/zmix, or ~/.local/share/zmix:
+// where the workbench proposes to save blends and exports at first.
+func DefaultDataDir() (string, error) {
+	if x := os.Getenv("XDG_DATA_HOME"); filepath.IsAbs(x) {
+		return filepath.Join(x, "zmix"), nil
+	}
+	home, err := os.UserHomeDir()
+	if err != nil {
+		return "", model.Errorf("ui", "no data directory: %w (set XDG_DATA_HOME)", err)
+	}
+	return filepath.Join(home, ".local", "share", "zmix"), nil
+}
+
 // stateStore writes the autosave. Writes may come from several commands
 // at once; the mutex serialises them and the sequence number makes sure an
 // older snapshot never replaces a newer one.

@@ -5,6 +5,7 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+	"zmix/mixtures"
 
 	tea "github.com/charmbracelet/bubbletea"
 )
@@ -67,13 +68,13 @@ func TestStateFormatV1Loads(t *testing.T) {
 	}
 	b := r.b
 	if b.name != "bench line 2" || len(b.entries) != 2 || b.entries[1].Amount != "2%x" || b.tempText != "350 K" ||
-		!b.stdAtm || !b.showGauge || r.focus != paneSetpoint {
-		t.Errorf("v1 restored as name %q entries %v T %q atm %v gauge %v focus %s", b.name, b.entries, b.tempText, b.stdAtm, b.showGauge, r.focus.name())
+		b.std != mixtures.StdAtm || !b.showGauge || r.focus != paneSetpoint {
+		t.Errorf("v1 restored as name %q entries %v T %q atm %v gauge %v focus %s", b.name, b.entries, b.tempText, b.std, b.showGauge, r.focus.name())
 	}
 	if x, _ := b.moleFraction("NH3"); x != 0.02 {
 		t.Errorf("last valid x(NH3) = %g, want 0.02", x)
 	}
-	if s := r.panes[paneSweep].(*sweepPane).Settings(); s.Var != "P" || s.Steps != 50 || s.Property != "S" {
+	if s := r.panes[paneSweep].(*sweepPane).Settings(); s.Var != mixtures.SweepPressure || s.Steps != 50 || s.Property != "S" {
 		t.Errorf("sweep settings %+v", s)
 	}
 	st := readState(t, dir)

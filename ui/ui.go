@@ -53,7 +53,8 @@ func Run(cfg Config) error {
 		return err
 	}
 	defer store.release()
-	r, err := newRoot(cfg, rootOptions{store: store, now: time.Now, cwd: cwd, signals: sigs, mono: mono, notice: notice})
+	dataDir, _ := DefaultDataDir() // without one, proposals start where zmix was started
+	r, err := newRoot(cfg, rootOptions{store: store, now: time.Now, cwd: cwd, dataDir: dataDir, signals: sigs, mono: mono, notice: notice})
 	if err != nil {
 		return err
 	}

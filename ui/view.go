@@ -7,6 +7,7 @@ import (
 
 	"github.com/charmbracelet/lipgloss"
 
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -36,7 +37,7 @@ func (r *root) View() string {
 func (r *root) tooSmallView() string {
 	msg := fmt.Sprintf("zmix needs a terminal of at least %d×%d; this one is %d×%d. Enlarge the window or use a smaller font. q quits.",
 		minWidth, minHeight, r.width, r.height)
-	lines := wrap(r.c.Text(msg), r.width)
+	lines := report.Wrap(r.c.Text(msg), r.width)
 	if len(lines) > r.height {
 		lines = lines[:r.height]
 	}
@@ -61,7 +62,7 @@ func (r *root) tabBar() string {
 	}
 	left := sb.String()
 	if in := r.b.in; in.Valid() {
-		right := r.c.Text(short(in.TempK, 6) + " K · " + r.b.presShown(in.PresPa))
+		right := r.c.Text(report.Short(in.TempK, 6) + " K · " + r.b.presShown(in.PresPa))
 		if gap := r.width - lipgloss.Width(left) - lipgloss.Width(right) - 1; gap >= 2 {
 			return left + strings.Repeat(" ", gap) + s.Muted.Render(right) + " "
 		}
@@ -143,27 +144,31 @@ func (r *root) headlineLine() string {
 func (r *root) bottomLine() string {
 	s := r.c.Styles
 	t := r.c.Text
+	bar := s.StatusBar
+	if r.prompt == promptNone && r.status != "" && r.statusErr {
+		bar = s.Error
+	}
+	if r.prompt != promptNone {
+		bar = s.Prompt
+	}
+	if wrapped := r.bottomWrapped(); len(wrapped) > 0 {
+		out := make([]string, r.statusRows)
+		for i := range out {
+			l := ""
+			if i < len(wrapped) {
+				l = wrapped[i]
+			}
+			out[i] = bar.Render(fitLine(" "+l, r.width))
+		}
+		return strings.Join(out, "\n")
+	}
 	if r.prompt != promptNone {
 		return fitLine(r.promptLine(), r.width)
 	}
-	right := t(" ? keys · tab pane · q quit ")
-	bar := s.StatusBar
+	right := r.keysReminder()
 	var left string
 	switch {
 	case r.status != "":
-		if r.statusErr {
-			bar = s.Error
-		}
-		if r.statusRows > 1 {
-			lines := wrap(t(r.status), r.width-1)
-			if len(lines) > 2 {
-				lines = lines[:2]
-			}
-			for len(lines) < 2 {
-				lines = append(lines, "")
-			}
-			return bar.Render(fitLine(" "+lines[0], r.width)) + "\n" + bar.Render(fitLine(" "+lines[1], r.width))
-		}
 		left = t(" " + r.status)
 	default:
 		left = " " + r.fileState()

@@ -7,6 +7,7 @@ import (
 	"strings"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -18,10 +19,12 @@ type bench struct {
 	cat *model.Catalogue
 
 	entries            []mixtures.FileComponent // the recipe, each line as typed
-	name, note         string                   // carried from a blend file
+	undo               []mixtures.FileComponent // the recipe before its last change
+	canUndo            bool
+	name, note         string // carried from a blend file
 	tempText, presText string
-	stdAtm             bool // standard pressure 1 atm instead of 1 bar
-	showGauge          bool // show the total pressure as gauge
+	std                mixtures.StdPressure // standard pressure P° of μ°
+	showGauge          bool                 // show the total pressure as gauge
 
 	// Derived by update.
 	rowErr   []string // per entry; "" when the entry reads
@@ -62,6 +65,8 @@ func printableFile(f *mixtures.BlendFile) *mixtures.BlendFile {
 }
 
 // loadFile replaces the recipe and conditions with those of a blend file.
+// How pressures are shown (absolute or gauge) is the user's setting, which
+// a file does not change; see viewFromFile.
 func (b *bench) loadFile(f *mixtures.BlendFile) {
 	f = printableFile(f)
 	b.entries = append(b.entries[:0], f.Components...)
@@ -73,11 +78,7 @@ func (b *bench) loadFile(f *mixtures.BlendFile) {
 	if f.Pressure != "" {
 		b.presText = f.Pressure
 	}
-	std, _ := mixtures.StdPressureFromText(f.StandardPressure)
-	b.stdAtm = std == model.StdPressureAtmPa
-	if p, err := mixtures.ParsePressure(b.presText); err == nil {
-		b.showGauge = p.Gauge
-	}
+	b.std, _ = mixtures.ParseStdPressure(f.StandardPressure)
 	b.touch()
 }
 
@@ -102,17 +103,11 @@ func (b *bench) setText(f *mixtures.BlendFile) {
 	b.entries = append(b.entries[:0], f.Components...)
 	b.name, b.note = f.Name, f.Note
 	b.tempText, b.presText = f.Temperature, f.Pressure
-	std, _ := mixtures.StdPressureFromText(f.StandardPressure)
-	b.stdAtm = std == model.StdPressureAtmPa
+	b.std, _ = mixtures.ParseStdPressure(f.StandardPressure)
 	b.changed = true
 }
 
-func (b *bench) stdText() string {
-	if b.stdAtm {
-		return "1 atm"
-	}
-	return "1 bar"
-}
+func (b *bench) stdText() string { return b.std.String() }
 
 func (b *bench) touch() { b.content++; b.changed = true }
 
@@ -143,6 +138,46 @@ func (b *bench) addSpecies(formula string) (int, bool) {
 	return len(b.entries) - 1, true
 }
 
+// rememberRecipe keeps a recipe (the current one when before is nil) for
+// one undo of the change about to be made.
+func (b *bench) rememberRecipe(before []mixtures.FileComponent) {
+	if before == nil {
+		before = b.entries
+	}
+	b.undo = append(b.undo[:0], before...)
+	b.canUndo = true
+}
+
+// undoRecipe puts back the remembered recipe and remembers the current
+// one in its place, so that undoing again redoes. It reports whether
+// there was anything to undo.
+func (b *bench) undoRecipe() bool {
+	if !b.canUndo {
+		return false
+	}
+	cur := append([]mixtures.FileComponent{}, b.entries...)
+	b.entries = append(b.entries[:0], b.undo...)
+	b.undo = cur
+	b.touch()
+	return true
+}
+
+// setName and setNote change the blend's name and note, which its file
+// keeps; control characters are left out.
+func (b *bench) setName(s string) {
+	if s = model.Printable(s); s != b.name {
+		b.name = s
+		b.touch()
+	}
+}
+
+func (b *bench) setNote(s string) {
+	if s = model.Printable(s); s != b.note {
+		b.note = s
+		b.touch()
+	}
+}
+
 func (b *bench) remove(i int) {
 	if i >= 0 && i < len(b.entries) {
 		b.entries = append(b.entries[:i], b.entries[i+1:]...)
@@ -165,7 +200,7 @@ func (b *bench) setBalance(i int) {
 	}
 	share := func(j int) string {
 		if x, ok := b.moleFraction(b.entries[j].Species); ok {
-			return short(100*x, 6) + "%"
+			return report.Short(100*x, 6) + "%"
 		}
 		return ""
 	}
@@ -251,21 +286,23 @@ func (b *bench) setPres(text string) {
 	}
 }
 
-func (b *bench) toggleStd() { b.stdAtm = !b.stdAtm; b.touch() }
+func (b *bench) toggleStd() { b.std = 1 - b.std; b.touch() }
 
 // toggleGauge changes only how pressures are shown, which a blend file
 // does not hold.
+// viewFromFile shows pressures the way a file's pressure was written, for
+// a workbench that starts on the file with no setting of its own.
+func (b *bench) viewFromFile(f *mixtures.BlendFile) {
+	if p, err := mixtures.ParsePressure(f.Pressure); err == nil {
+		b.showGauge = p.Gauge
+	}
+}
+
 func (b *bench) toggleGauge() { b.showGauge = !b.showGauge; b.changed = true }
 
-// cleanErr drops the package prefixes from an engine error, which the user
-// does not need in a one-line message.
-func cleanErr(err error) string {
-	s := err.Error()
-	for _, p := range []string{"mixtures: ", "model: ", "bad value: "} {
-		s = strings.TrimPrefix(s, p)
-	}
-	return s
-}
+// cleanErr is an error's one line for the user, with no package prefix
+// and nothing in it that a terminal would act on.
+func cleanErr(err error) string { return model.Printable(model.UserMessage(err)) }
 
 // blendErrText writes a blend error without the blend text, which the
 // pane already shows line by line.
@@ -297,10 +334,7 @@ func (b *bench) update() bool {
 		next.PresPa, next.Gauge = p.Pa, p.Gauge
 		b.validPres = b.presText
 	}
-	next.Opts = mixtures.Options{StdPresPa: model.StdPressureBarPa}
-	if b.stdAtm {
-		next.Opts.StdPresPa = model.StdPressureAtmPa
-	}
+	next.Opts = mixtures.Options{Std: b.std}
 
 	if mix := b.resolve(next.PresPa); mix != nil {
 		next.Mixture = mix
@@ -406,7 +440,7 @@ func (b *bench) derive() {
 	}
 	if name := nonFinite(&st); name != "" {
 		b.stateErr = fmt.Sprintf("the model gives no finite %s at %s and %s; try another temperature or pressure",
-			name, mixtures.FormatTemperature(b.in.TempK), presText(b.in.PresPa))
+			name, mixtures.FormatTemperature(b.in.TempK), b.presShown(b.in.PresPa))
 		return
 	}
 	b.state = st
@@ -446,8 +480,30 @@ func nonFinite(s *mixtures.State) string {
 
 // presShown writes the total pressure as absolute or gauge, as chosen.
 func (b *bench) presShown(presPa float64) string {
-	if b.showGauge {
-		return presText(presPa-mixtures.AtmospherePa) + " gauge"
+	return report.PressureIn(presPa, b.presUnit())
+}
+
+// presUnit is the unit pressures show in: the one of the pressure last
+// typed that read, as absolute or gauge as the user chose.
+func (b *bench) presUnit() mixtures.PressureUnit {
+	u, ok := mixtures.PressureUnitOf(b.validPres)
+	if !ok {
+		u = mixtures.BarAbsolute
 	}
-	return presText(presPa) + " abs"
+	return u.Reading(b.showGauge)
+}
+
+// stateReport is the current state as the state command reports it: the
+// figures, the hazard cautions and the validity notes at caution level
+// (those the command prints without --all-notes).
+func (b *bench) stateReport() *report.StateReport {
+	st := b.state
+	return &report.StateReport{
+		Label:    b.name,
+		State:    &st,
+		PresText: b.validPres,
+		Gauge:    b.in.Gauge,
+		Cautions: b.cautions,
+		Notes:    cautionNotes(b.notes),
+	}
 }

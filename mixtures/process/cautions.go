@@ -1,0 +1,57 @@
+package process
+
+import (
+	"fmt"
+
+	"zmix/mixtures"
+	"zmix/model"
+)
+
+// Thresholds of the temperature cautions (common practice).
+const (
+	// HotGasK: surfaces above about 60 °C burn on contact.
+	HotGasK = 333.15
+	// ColdGasK: below 0 °C moisture freezes and frost forms on lines.
+	ColdGasK = 273.15
+)
+
+// temperatureCautions are the reminders for a gas of mix that a process
+// brings to tempK: hot gas, a flammable above it with no autoignition
+// temperature to compare against, cold gas, and a species below its
+// normal boiling point.
+func temperatureCautions(mix *mixtures.Mixture, tempK float64, where string) []mixtures.Caution {
+	var out []mixtures.Caution
+	if tempK > HotGasK {
+		out = append(out, mixtures.Caution{Title: "Hot gas", Text: fmt.Sprintf(
+			"the %s reaches %.4g °C, above the 60 °C at which surfaces burn on contact; insulate or guard hot parts and check the rating of seals, lubricants and downstream equipment.",
+			where, mixtures.KelvinToCelsius(tempK))})
+		var fuels []string
+		for _, c := range mix.Components {
+			if c.Species.Hazards&(model.Flammable|model.Pyrophoric) != 0 {
+				fuels = append(fuels, c.Species.Formula)
+			}
+		}
+		if len(fuels) > 0 {
+			out = append(out, mixtures.Caution{Title: "Hot flammable gas", Species: fuels, Text: fmt.Sprintf(
+				"the catalogue holds no autoignition temperature for these; compare the %s temperature, %.4g °C, with the autoignition temperature on the safety data sheet, and keep air out.",
+				where, mixtures.KelvinToCelsius(tempK))})
+		}
+	}
+	if tempK < ColdGasK {
+		out = append(out, mixtures.Caution{Title: "Cold gas", Text: fmt.Sprintf(
+			"the %s falls to %.4g °C: moisture freezes, lines frost, and some materials turn brittle; check their rating for the low temperature.",
+			where, mixtures.KelvinToCelsius(tempK))})
+	}
+	var condense []string
+	for _, c := range mix.Components {
+		if c.Species.BoilingK > 0 && tempK < c.Species.BoilingK {
+			condense = append(condense, c.Species.Formula)
+		}
+	}
+	if len(condense) > 0 {
+		out = append(out, mixtures.Caution{Title: "Condensation", Species: condense, Text: fmt.Sprintf(
+			"the %s, %.4g K, is below the normal boiling point of these species: they may condense, and the ideal-gas figures do not hold there.",
+			where, tempK)})
+	}
+	return out
+}
