@@ -330,11 +330,49 @@ func (r *root) bottomWrapped() []string {
 	}
 	w := max(r.width-1, 1)
 	lines := report.Wrap(text, w)
+	for len(lines) > maxBottomRows || longestWord(text) > w {
+		// A long path is what usually overflows, or would be broken across
+		// rows: shorten it in the middle, keeping its start and its file
+		// name, before anything else.
+		shorter := shortenLongestWord(text)
+		if shorter == text {
+			break
+		}
+		text = shorter
+		lines = report.Wrap(text, w)
+	}
 	if len(lines) > maxBottomRows {
 		rest := strings.Join(lines[maxBottomRows-1:], " ")
 		lines = append(lines[:maxBottomRows-1], r.c.shorten(rest, w))
 	}
 	return lines
+}
+
+// shortenLongestWord shortens the longest word of s over 40 cells (a path)
+// to its first 12 and last 24 runes around an ellipsis, and returns s
+// unchanged when no word is that long.
+func shortenLongestWord(s string) string {
+	words := strings.Fields(s)
+	best := -1
+	for i, w := range words {
+		if n := len([]rune(w)); n > 40 && (best < 0 || n > len([]rune(words[best]))) {
+			best = i
+		}
+	}
+	if best < 0 {
+		return s
+	}
+	rs := []rune(words[best])
+	return strings.Replace(s, words[best], string(rs[:12])+"…"+string(rs[len(rs)-24:]), 1)
+}
+
+// longestWord is the width of the longest word of s.
+func longestWord(s string) int {
+	n := 0
+	for _, w := range strings.Fields(s) {
+		n = max(n, lipgloss.Width(w))
+	}
+	return n
 }
 
 // keysReminder is the right end of the status line.
