@@ -13,6 +13,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 // The prompts on the bottom line: save, open and export paths, and the
@@ -29,6 +30,9 @@ const (
 	promptQuit                 // unsaved changes to the blend file: quit?
 	promptReplace              // unsaved changes: open another file anyway?
 )
+
+// maxPathRunes bounds a typed path; longer ones are no path a system takes.
+const maxPathRunes = 1024
 
 // absPath resolves a typed path: ~ is the home directory, and a relative
 // path is taken from where zmix was started.
@@ -351,7 +355,7 @@ func (r *root) promptLine() string {
 	t := r.c.Text
 	switch r.prompt {
 	case promptQuit, promptReplace, promptOverwrite:
-		return s.Prompt.Render(" " + t(r.question()))
+		return s.Prompt.Render(" " + t(model.Printable(r.question())))
 	}
 	label := map[promptKind]string{
 		promptSave:   " Save blend to: ",

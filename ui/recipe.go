@@ -56,7 +56,7 @@ type recipePane struct {
 }
 
 func newRecipePane(c *Common, b *bench) *recipePane {
-	p := &recipePane{c: c, b: b, amount: newField(c), search: newField(c), loads: b.loads}
+	p := &recipePane{c: c, b: b, amount: newFieldLimit(c, mixtures.MaxAmountChars), search: newFieldLimit(c, mixtures.MaxSpeciesChars), loads: b.loads}
 	return p
 }
 

@@ -79,6 +79,7 @@ type rootOptions struct {
 	dataDir string
 	signals <-chan os.Signal
 	mono    bool
+	notice  string // for the status line: which state file this workbench uses
 }
 
 func newRoot(cfg Config, opt rootOptions) (*root, error) {
@@ -92,7 +93,7 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 	c := &Common{Styles: DefaultStyles(opt.mono, cfg.ASCII), Keys: DefaultKeyMap(), ASCII: cfg.ASCII, Catalogue: cat}
 	b := newBench(cat)
 	r := &root{c: c, b: b, store: opt.store, now: opt.now, cwd: opt.cwd, dataDir: opt.dataDir, signals: opt.signals,
-		input: newField(c), viewer: paneID(-1), lastTyped: map[promptKind]string{},
+		input: newFieldLimit(c, maxPathRunes), viewer: paneID(-1), lastTyped: map[promptKind]string{},
 		dirty: true} // the first message writes the state, in the current format
 
 	var saved *savedState
@@ -138,6 +139,12 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 		if r.status == "" {
 			r.setStatus("demo blend (invented scenario); " + c.Keys.OpenBlend.Help().Key + " opens a file")
 		}
+	}
+	if opt.notice != "" {
+		if r.status != "" {
+			opt.notice += "; " + r.status
+		}
+		r.status = model.Printable(opt.notice) // keeps statusErr
 	}
 	b.update()
 	r.contentSeen = b.content
@@ -190,6 +197,8 @@ func (r *root) Update(msg tea.Msg) tea.Cmd {
 		return tea.Quit
 	case saveDoneMsg:
 		cmds = append(cmds, r.saveDone(msg))
+	case noticeMsg:
+		r.setError(msg.text)
 	case tea.KeyMsg:
 		if msg.Type == tea.KeyRunes && !msg.Paste && len(msg.Runes) > 1 {
 			// Keys typed fast, or sent in one packet over a slow SSH
@@ -321,7 +330,7 @@ func (r *root) bottomWrapped() []string {
 			return nil
 		}
 	case promptQuit, promptReplace, promptOverwrite:
-		text = r.c.Text(r.question())
+		text = r.c.Text(model.Printable(r.question()))
 		if 1+lipgloss.Width(text) <= r.width {
 			return nil
 		}
@@ -378,8 +387,11 @@ func longestWord(s string) int {
 // keysReminder is the right end of the status line.
 func (r *root) keysReminder() string { return r.c.Text(" ? keys · tab pane · q quit ") }
 
-func (r *root) setStatus(s string) { r.status, r.statusErr = s, false }
-func (r *root) setError(s string)  { r.status, r.statusErr = s, true }
+// setStatus and setError put a message on the status line. Messages name
+// paths and values from files and the user: they are made printable here,
+// once for all of them.
+func (r *root) setStatus(s string) { r.status, r.statusErr = model.Printable(s), false }
+func (r *root) setError(s string)  { r.status, r.statusErr = model.Printable(s), true }
 
 // focused is the pane that has the keys.
 func (r *root) focused() pane { return r.panes[r.focus] }

@@ -10,6 +10,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 // The sweep pane moves T or P across a grid, plots one property of the
@@ -774,8 +775,9 @@ func (p *sweepPane) setShown(shown bool) tea.Cmd {
 func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }
 func (p *sweepPane) stateChanged() bool       { return p.Changed() }
 func (p *sweepPane) restoreState(st *savedState) {
-	if st.Sweep != (SweepSettings{}) {
-		p.load(st.Sweep)
+	if s := st.Sweep; s != (SweepSettings{}) {
+		s.From, s.To, s.Species = model.Printable(s.From), model.Printable(s.To), model.Printable(s.Species)
+		p.load(s)
 	}
 }
 
