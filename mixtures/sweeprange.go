@@ -62,7 +62,13 @@ func ParseSweepRange(v SweepVar, s string) (Range, error) {
 	if err != nil {
 		return Range{}, err
 	}
-	return ParseSweepEnds(v, from, to)
+	r, err := ParseSweepEnds(v, from, to)
+	if err != nil {
+		// Name the range as typed: the end alone may read as a unit
+		// the user never wrote ("300..900" has no unit at all).
+		return Range{}, model.KindErrorf("mixtures", ErrValue, "range %s: %w", model.Quote(s), err)
+	}
+	return r, nil
 }
 
 // ParseSweepEnds reads the two ends of a range typed apart (the

@@ -99,3 +99,20 @@ func TestParseSteps(t *testing.T) {
 		}
 	}
 }
+
+func TestSplitNumber(t *testing.T) {
+	for in, want := range map[string]struct {
+		x    float64
+		unit string
+	}{"25 °C": {25, "°C"}, "1.5bar": {1.5, "bar"}, " -2e3 Pa ": {-2e3, "Pa"}, "120 Nm3/h": {120, "Nm3/h"}, "7": {7, ""}} {
+		x, unit, err := SplitNumber(in)
+		if err != nil || x != want.x || unit != want.unit {
+			t.Errorf("SplitNumber(%q) = %g, %q, %v; want %g, %q", in, x, unit, err, want.x, want.unit)
+		}
+	}
+	for _, in := range []string{"", "bar", "NaN K", "1e999 Pa", "-"} {
+		if _, _, err := SplitNumber(in); err == nil {
+			t.Errorf("SplitNumber(%q): no error", in)
+		}
+	}
+}

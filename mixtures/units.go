@@ -32,6 +32,12 @@ var PressureUnits = pressureUnitsText()
 // ErrValue is wrapped by every value-parsing error.
 var ErrValue = errors.New("bad value")
 
+// SplitNumber splits a value with a unit, "25 °C" or "1.5bar", into the
+// finite number that leads it and the unit text after it, trimmed. Every
+// parser of values with units (temperatures, pressures, amounts, rates)
+// reads its number this way.
+func SplitNumber(s string) (float64, string, error) { return splitNumber(s) }
+
 // splitNumber splits "25 °C" or "1.5bar" into the number and the unit text.
 func splitNumber(s string) (float64, string, error) {
 	x, rest, err := splitNumberRaw(strings.TrimSpace(s))

@@ -119,7 +119,6 @@ func TestCompactSGR(t *testing.T) {
 		{grey + "a\nb" + reset, grey + "a" + reset + "\n" + grey + "b" + reset},
 		{bold + grey + "a" + reset + bold + "b" + reset, bold + grey + "a" + reset + bold + "b" + reset},
 		{bold + "a" + grey + "b" + reset, bold + "a" + grey + "b" + reset},
-		{"\x1b[?25l" + bold + "x" + reset, "\x1b[?25l" + bold + "x" + reset},
 		{"tail" + bold, "tail"},
 	}
 	for _, c := range cases {
@@ -130,5 +129,21 @@ func TestCompactSGR(t *testing.T) {
 		if ansi.Strip(got) != ansi.Strip(c.in) {
 			t.Errorf("compactSGR(%q) changed the text: %q", c.in, ansi.Strip(got))
 		}
+	}
+}
+
+// Control bytes that are not colour codes never reach the terminal.
+func TestCompactSGRNeutralisesControls(t *testing.T) {
+	for _, in := range []string{"a\x1b[2Jb", "\x1b[1;1HX", "bell\a", "cr\rx", "\x1b]0;title\a", "del\x7f"} {
+		got := compactSGR(in)
+		for i := 0; i < len(got); i++ {
+			if c := got[i]; c < 0x20 && c != '\n' || c == 0x7f {
+				t.Errorf("compactSGR(%q) = %q: control byte %#x left", in, got, c)
+				break
+			}
+		}
+	}
+	if got := compactSGR("\x1b[1mok\x1b[0m"); got != "\x1b[1mok\x1b[0m" {
+		t.Errorf("a colour code was neutralised: %q", got)
 	}
 }

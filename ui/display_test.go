@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"os"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -168,4 +169,28 @@ func TestPressureViewEverywhere(t *testing.T) {
 		t.Fatalf("opening a file reset the pressure view to absolute (status %q)", r.status)
 	}
 	check("after ctrl+o", "0.98675 barg") // 2 bar absolute
+}
+
+// Save and export propose the user's data directory at first, then the
+// folder last used; the data directory is made when first written to.
+func TestSaveProposesDataDirThenLastFolder(t *testing.T) {
+	data := filepath.Join(t.TempDir(), "share", "zmix")
+	r := testRoot(t, 100, 30, testRootOpts{dataDir: data})
+	press(t, r, "ctrl+s")
+	if got, want := r.input.value(), filepath.Join(data, "blend.json"); got != want {
+		t.Fatalf("save proposes %q, want %q", got, want)
+	}
+	press(t, r, "enter")
+	if _, err := os.Stat(filepath.Join(data, "blend.json")); err != nil {
+		t.Fatalf("saving as proposed: %v (status %q)", err, r.status)
+	}
+	press(t, r, "ctrl+e")
+	if got, want := r.input.value(), filepath.Join(data, "readout.csv"); got != want {
+		t.Errorf("export proposes %q, want %q", got, want)
+	}
+	other := t.TempDir()
+	walk(t, r, []string{"ctrl+u", "type:" + filepath.Join(other, "x.json"), "enter", "ctrl+e"})
+	if got, want := r.input.value(), filepath.Join(other, "readout.csv"); got != want {
+		t.Errorf("after an export elsewhere, export proposes %q, want %q (the last folder)", got, want)
+	}
 }

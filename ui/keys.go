@@ -57,6 +57,9 @@ type RecipeKeys struct {
 	SearchDown key.Binding
 	// While an amount is typed in.
 	Done key.Binding
+	// Undo takes back the last change of the recipe (again: redo); Name
+	// and Note edit the blend's name and note.
+	Undo, Name, Note key.Binding
 }
 
 // SetpointKeys are the conditions pane's bindings.
@@ -130,6 +133,9 @@ func DefaultKeyMap() *KeyMap {
 			SearchUp:   key.NewBinding(key.WithKeys("up", "ctrl+p"), key.WithHelp("↑", "up: previous match")),
 			SearchDown: key.NewBinding(key.WithKeys("down", "ctrl+n"), key.WithHelp("↓", "down: next match")),
 			Done:       key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "keep: the amount as typed (esc undoes)")),
+			Undo:       key.NewBinding(key.WithKeys("u"), key.WithHelp("u", "undo: the last recipe change, a removal too (u again redoes)")),
+			Name:       key.NewBinding(key.WithKeys("r"), key.WithHelp("r", "rename: type the blend's name")),
+			Note:       key.NewBinding(key.WithKeys("c"), key.WithHelp("c", "comment: type the blend's note")),
 		},
 		Setpoint: SetpointKeys{
 			Up:          key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("↑/k", "up: previous line")),

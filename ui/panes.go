@@ -57,6 +57,10 @@ type (
 	// processSource has a process result to export instead of the
 	// readout; nil when it has none.
 	processSource interface{ processReport() *report.ProcessReport }
+	// lazyPane does costly work (a sweep) only while it is on screen:
+	// the root tells it, after every message, whether it is shown, and
+	// runs the command it returns.
+	lazyPane interface{ setShown(shown bool) tea.Cmd }
 	// heightPane asks for a height of its own in a column of the full
 	// layout, out of avail rows; the last pane of a column takes the rest.
 	heightPane interface{ wantHeight(avail int) int }

@@ -10,6 +10,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 // The sweep pane moves T or P across a grid, plots one property of the
@@ -51,6 +52,7 @@ type sweepPane struct {
 
 	in     Inputs
 	haveIn bool
+	hidden bool // off screen: sweeps wait until it is shown
 
 	// The sweep being computed, if any.
 	gen     uint64
@@ -156,8 +158,11 @@ func sweepParse(vi mixtures.SweepVar, fromText, toText, stepsText string, logGri
 		errs[sweepFieldSteps] = err.Error()
 	}
 	if errs == [sweepFieldCount]string{} {
-		if err := sw.Check(); err != nil {
+		// The range as a whole, by the parser the commands use too.
+		if r, err := mixtures.ParseSweepEnds(vi, fromText, toText); err != nil {
 			rangeErr = cleanErr(err)
+		} else if sw = r.Sweep(sw.Steps, logGrid); sw.Check() != nil {
+			rangeErr = cleanErr(sw.Check())
 		}
 	}
 	return sw, errs, rangeErr
@@ -186,13 +191,19 @@ func sweepParseSteps(s string) (int, error) {
 func (p *sweepPane) tryApply() bool {
 	vi := p.vi()
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
+	var rangeTyped error
 	if strings.Contains(from, "..") { // a whole range typed at once
-		if a, b, err := mixtures.ParseRange(from); err == nil {
+		a, b, err := mixtures.ParseRange(from)
+		if err == nil {
 			from, to = a, b
 			p.drafts[vi] = [2]string{a, b}
 		}
+		rangeTyped = err
 	}
 	sw, errs, rangeErr := sweepParse(vi, from, to, p.stepsDraft, p.set.Log)
+	if rangeTyped != nil {
+		errs[sweepFieldFrom] = "from: " + cleanErr(rangeTyped)
+	}
 	p.errs, p.rangeErr = errs, rangeErr
 	if errs != [sweepFieldCount]string{} || rangeErr != "" {
 		return false
@@ -244,7 +255,7 @@ func (p *sweepPane) wanted() (sweepKey, bool) {
 // already. Starting one makes every older message stale.
 func (p *sweepPane) recompute() tea.Cmd {
 	k, ok := p.wanted()
-	if !ok {
+	if !ok || p.hidden {
 		return nil
 	}
 	if p.running && k == p.runKey {
@@ -304,14 +315,13 @@ func (p *sweepPane) progress(msg sweepProgressMsg) tea.Cmd {
 	return nil
 }
 
-// placeCursor puts the cursor on a new result: where it was, in
-// proportion, or else (first result, other variable) at the grid point
-// nearest the current state.
+// placeCursor puts the cursor on a new result: where it was when only the
+// blend or conditions changed (the grid is the same), or else (first
+// result, a new range or variable) at the grid point nearest the current
+// state, the setpoint.
 func (p *sweepPane) placeCursor(old *mixtures.SweepTable) {
 	n := len(p.result.Grid)
-	if old != nil && len(old.Grid) > 1 && old.Sweep.Var == p.result.Sweep.Var {
-		f := float64(p.cursor) / float64(len(old.Grid)-1)
-		p.cursor = min(max(int(math.Round(f*float64(n-1))), 0), n-1)
+	if old != nil && old.Sweep == p.result.Sweep && p.cursor < n {
 		return
 	}
 	here := p.in.TempK
@@ -501,12 +511,18 @@ func (p *sweepPane) validate() {
 	p.saveDrafts()
 	vi := p.vi()
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
+	var rangeTyped error
 	if strings.Contains(from, "..") {
-		if a, b, err := mixtures.ParseRange(from); err == nil {
+		a, b, err := mixtures.ParseRange(from)
+		if err == nil {
 			from, to = a, b
 		}
+		rangeTyped = err
 	}
 	_, p.errs, p.rangeErr = sweepParse(vi, from, to, p.stepsDraft, p.set.Log)
+	if rangeTyped != nil {
+		p.errs[sweepFieldFrom] = "from: " + cleanErr(rangeTyped)
+	}
 }
 
 // editKey handles a key while the fields are open. As in every field of
@@ -740,12 +756,28 @@ func (p *sweepPane) Sync() tea.Cmd {
 
 func (p *sweepPane) More() (above, below bool) { return false, false }
 
+// setShown starts the wanted sweep when the pane comes on screen; while
+// it is hidden, a change of inputs or settings computes nothing, so that
+// a long sweep in the saved settings costs nothing until it is looked at.
+func (p *sweepPane) setShown(shown bool) tea.Cmd {
+	p.hidden = !shown
+	if !shown {
+		return nil
+	}
+	cmd := p.recompute()
+	if cmd != nil {
+		p.refresh()
+	}
+	return cmd
+}
+
 // The settings are kept with the workbench state.
 func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }
 func (p *sweepPane) stateChanged() bool       { return p.Changed() }
 func (p *sweepPane) restoreState(st *savedState) {
-	if st.Sweep != (SweepSettings{}) {
-		p.load(st.Sweep)
+	if s := st.Sweep; s != (SweepSettings{}) {
+		s.From, s.To, s.Species = model.Printable(s.From), model.Printable(s.To), model.Printable(s.Species)
+		p.load(s)
 	}
 }
 

@@ -58,3 +58,33 @@ func BenchmarkSweepPaneMemory200k(b *testing.B) {
 		runtime.KeepAlive(p)
 	}
 }
+
+// A sweep runs only while its pane is on screen: a long sweep in the
+// saved settings costs nothing at start until the pane is shown, and a
+// pane that is shown runs it at once.
+func TestSweepWaitsUntilShown(t *testing.T) {
+	r := testRoot(t, 80, 24, testRootOpts{})
+	sp := r.panes[paneSweep].(*sweepPane)
+	if r.lay.visible[paneSweep] {
+		t.Fatal("the sweep pane is on screen at 80x24 with the recipe focused; the test needs it hidden")
+	}
+	if sp.Result() != nil || sp.running {
+		t.Fatal("a hidden sweep pane computed a sweep")
+	}
+	// Inputs change while it is hidden: still nothing.
+	press(t, r, "2", "down", "enter", "ctrl+u")
+	typeIn(t, r, "2 bar")
+	press(t, r, "enter")
+	if sp.Result() != nil || sp.running {
+		t.Fatal("a hidden sweep pane computed a sweep after an edit")
+	}
+	press(t, r, "4")
+	if sp.Result() == nil || sp.resultKey.fixedPresPa != 2e5 {
+		t.Fatalf("shown sweep pane: result %v at %g Pa; want the sweep at the current 2 bar", sp.Result() != nil, sp.resultKey.fixedPresPa)
+	}
+	// At 120x40 every pane is on screen, and the sweep runs at start.
+	r2 := testRoot(t, 120, 40, testRootOpts{})
+	if r2.panes[paneSweep].(*sweepPane).Result() == nil {
+		t.Error("no sweep at start with the sweep pane on screen")
+	}
+}
