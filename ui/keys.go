@@ -33,6 +33,7 @@ type KeyMap struct {
 	Setpoint SetpointKeys
 	Scroll   ScrollKeys
 	Anatomy  AnatomyKeys
+	Process  ProcessKeys
 }
 
 // FieldKeys edit a line of text.
@@ -79,6 +80,14 @@ type ScrollKeys struct {
 // AnatomyKeys are the breakdown pane's bindings.
 type AnatomyKeys struct {
 	PrevSpecies, NextSpecies key.Binding
+}
+
+// ProcessKeys are the process pane's bindings.
+type ProcessKeys struct {
+	PrevKind, NextKind key.Binding
+	Up, Down           key.Binding
+	Edit               key.Binding
+	Plot               key.Binding
 }
 
 // DefaultKeyMap returns the workbench's bindings.
@@ -144,6 +153,14 @@ func DefaultKeyMap() *KeyMap {
 			PageDown: key.NewBinding(key.WithKeys("pgdown", " "), key.WithHelp("pgdn", "page: down")),
 			Top:      key.NewBinding(key.WithKeys("home", "g"), key.WithHelp("home", "top: first line")),
 			Bottom:   key.NewBinding(key.WithKeys("end", "G"), key.WithHelp("end", "bottom: last line")),
+		},
+		Process: ProcessKeys{
+			PrevKind: key.NewBinding(key.WithKeys("left", "["), key.WithHelp("←/[", "process: previous one")),
+			NextKind: key.NewBinding(key.WithKeys("right", "]"), key.WithHelp("→/]", "process: next one (flow, compress, heat, mix, dilute, purge)")),
+			Up:       key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("↑/k", "up: previous field")),
+			Down:     key.NewBinding(key.WithKeys("down", "j"), key.WithHelp("↓/j", "down: next field")),
+			Edit:     key.NewBinding(key.WithKeys("enter", "e"), key.WithHelp("enter/e", "edit: type the field, or switch its choice")),
+			Plot:     key.NewBinding(key.WithKeys("p"), key.WithHelp("p", "plot: the path, T against P or H against T")),
 		},
 		Anatomy: AnatomyKeys{
 			PrevSpecies: key.NewBinding(key.WithKeys("left", "["), key.WithHelp("←/[", "species: previous one")),

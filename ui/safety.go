@@ -75,7 +75,13 @@ func validityMarker(c *Common, notes []mixtures.StateNote) string {
 	if len(notes) > 1 {
 		head = "MODEL CAUTIONS"
 	}
-	return head + " (" + strings.Join(who, ", ") + ") [" + c.Keys.Safety.Help().Key + " details]: " + notes[0].Text
+	// A note reads "figure: consequence"; the marker gives the consequence
+	// ("a cooler spot or a compression may condense it"), the overlay all.
+	text := notes[0].Text
+	if i := strings.LastIndex(text, ": "); i >= 0 {
+		text = text[i+2:]
+	}
+	return head + " (" + strings.Join(who, ", ") + ") [" + c.Keys.Safety.Help().Key + " details]: " + text
 }
 
 // safetyDetail is the full text of every caution, for the overlay: the

@@ -56,6 +56,8 @@ type CompressionResult struct {
 	MaxTempK                           float64
 	Expansion                          bool
 	MolarMassKgPerMol, Efficiency      float64
+
+	gas Gas // for the path
 }
 
 // MaxStages bounds the stages, so a typo cannot ask for a million.
@@ -135,7 +137,7 @@ func (c Compression) Solve() (*CompressionResult, error) {
 	g := m.Gas(c.Mixture)
 	ratio := math.Pow(p2/p1, 1/float64(n))
 
-	r := &CompressionResult{Expansion: expansion, MolarMassKgPerMol: c.Mixture.MolarMassKgPerMol, Efficiency: eta}
+	r := &CompressionResult{Expansion: expansion, MolarMassKgPerMol: c.Mixture.MolarMassKgPerMol, Efficiency: eta, gas: g}
 	var w stateWork
 	tIn, pIn := c.InletTempK, p1
 	for i := range n {
