@@ -52,11 +52,30 @@ func walk(t *testing.T, r *root, keys []string) {
 	}
 }
 
+// paneTour is a step per registered pane, by its number key, so that a
+// pane added later is walked too.
+func paneTour() []struct {
+	name string
+	keys []string
+} {
+	var out []struct {
+		name string
+		keys []string
+	}
+	for i := range paneSpecs {
+		out = append(out, struct {
+			name string
+			keys []string
+		}{"pane_" + paneSpecs[i].key, []string{string(rune('1' + i))}})
+	}
+	return out
+}
+
 // ASCII mode sends no byte above 127 on any screen: panes, overlays,
 // prompts and the status bar (issue 7, item 7).
 func TestASCIIModeEveryScreen(t *testing.T) {
 	for _, size := range [][2]int{{80, 24}, {100, 30}, {120, 40}, {200, 50}} {
-		for _, step := range screenTour {
+		for _, step := range append(paneTour(), screenTour...) {
 			r := testRoot(t, size[0], size[1], testRootOpts{ascii: true})
 			missing := map[rune]bool{}
 			r.c.missingGlyph = func(ru rune) { missing[ru] = true }

@@ -490,7 +490,7 @@ func TestSweepChunksMatchRun(t *testing.T) {
 			t.Fatal(err)
 		}
 		var got *mixtures.SweepTable
-		msg := sweepStartCmd(1, key)().(sweepProgressMsg)
+		msg := sweepStartCmd(1, key, nil)().(sweepProgressMsg)
 		for chunks := 1; ; chunks++ {
 			if msg.err != nil {
 				t.Fatal(msg.err)
