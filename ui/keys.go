@@ -183,14 +183,14 @@ func (k *KeyMap) globalHelp() []key.Binding {
 
 func defaultSweepKeys() SweepKeys {
 	return SweepKeys{
-		Variable:        key.NewBinding(key.WithKeys("v"), key.WithHelp("v", "sweep T or P")),
-		EditRange:       key.NewBinding(key.WithKeys("e", "enter"), key.WithHelp("e/enter", "type the range and points")),
+		Variable:        key.NewBinding(key.WithKeys("v"), key.WithHelp("v", "variable: sweep T or P")),
+		EditRange:       key.NewBinding(key.WithKeys("e", "enter"), key.WithHelp("e/enter", "range: type the range and points")),
 		ToggleLog:       key.NewBinding(key.WithKeys("g"), key.WithHelp("g", "linear or log grid (T)")),
-		Property:        key.NewBinding(key.WithKeys("p"), key.WithHelp("p", "next property")),
+		Property:        key.NewBinding(key.WithKeys("p"), key.WithHelp("p", "property: the next one")),
 		PrevProperty:    key.NewBinding(key.WithKeys("P"), key.WithHelp("P", "previous property")),
 		NextSpecies:     key.NewBinding(key.WithKeys("s"), key.WithHelp("s", "next species (or blend)")),
 		PrevSpecies:     key.NewBinding(key.WithKeys("S"), key.WithHelp("S", "previous species")),
-		Overlay:         key.NewBinding(key.WithKeys("o"), key.WithHelp("o", "overlay every species")),
+		Overlay:         key.NewBinding(key.WithKeys("o"), key.WithHelp("o", "overlay: every species with the blend")),
 		CursorLeft:      key.NewBinding(key.WithKeys("left", "h"), key.WithHelp("←/h", "cursor left one column")),
 		CursorRight:     key.NewBinding(key.WithKeys("right", "l"), key.WithHelp("→/l", "cursor right one column")),
 		CursorStepLeft:  key.NewBinding(key.WithKeys(",", "shift+left"), key.WithHelp(",", "cursor back one grid point")),
