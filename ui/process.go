@@ -57,7 +57,7 @@ var processKinds = []processKind{
 	}},
 	{key: "dilute", name: "dilute", fields: []processField{
 		{key: "with", label: "diluent", def: "N2 1", hint: "a pure gas or a second blend, or @FILE"},
-		{key: "target", label: "target", def: "", hint: "\"SPECIES LEVEL\", e.g. SiH4 50ppm; with a ratio, the species only"},
+		{key: "target", label: "target", def: "SiH4 100ppm", hint: "\"SPECIES LEVEL\", e.g. SiH4 50ppm; with a ratio, the species only"},
 		{key: "ratio", label: "or ratio", def: "", hint: "moles of diluent per mole of recipe; empty: use the target level"},
 		{key: "rate", label: "recipe flow", def: "", hint: "for the diluent and total flows; empty: none"},
 	}},

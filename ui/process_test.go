@@ -37,8 +37,8 @@ func (p *processPane) whole() string {
 	return p.View()
 }
 
-// Every process gives a result on the demo blend with its defaults, but
-// dilution, which needs a target; the figures are the engine's.
+// Every process gives a result on the demo blend with its defaults; the
+// figures are the engine's.
 func TestProcessPaneEveryKind(t *testing.T) {
 	p, b := testProcess(t, false, 90, 30)
 	for i, k := range processKinds {
@@ -46,11 +46,7 @@ func TestProcessPaneEveryKind(t *testing.T) {
 			t.Fatalf("kind %d is %s, want %s", i, p.current().key, k.key)
 		}
 		v := p.whole()
-		if k.key == "dilute" {
-			if p.result != nil || !strings.Contains(v, "target: give") {
-				t.Errorf("dilute with no target: want the error naming the field:\n%s", v)
-			}
-		} else if p.result == nil {
+		if p.result == nil {
 			t.Errorf("%s: no result: %s", k.key, p.err)
 		}
 		if p.result != nil {
@@ -91,6 +87,12 @@ func TestProcessPaneFieldErrors(t *testing.T) {
 	if p.Editing() || p.value("eff") != "0.8" || p.result == nil {
 		t.Errorf("esc: editing %v, eff %q, result %v; want the old value back and a result", p.Editing(), p.value("eff"), p.result != nil)
 	}
+	// A dilution with no target names the field.
+	p.keys(t, "right", "right", "right", "down", "enter", "ctrl+u", "enter")
+	if p.result != nil || !strings.Contains(p.err, "target: give") {
+		t.Errorf("dilute with no target: err %q, want the error naming the field", p.err)
+	}
+	p.keys(t, "left", "left", "left")
 	// The purge method is a choice: enter switches it.
 	p.keys(t, "right", "right", "right", "right", "down", "down", "enter")
 	if p.value("method") != "vacuum" {
