@@ -90,14 +90,18 @@ func safetyDetail(c *Common, cautions []mixtures.Caution, notes []mixtures.State
 	s := c.Styles
 	var out []string
 	notes = cautionNotes(notes)
-	for _, n := range notes {
-		for i, l := range report.Wrap(c.Text(report.NoteText(n)), w-2) {
+	// Each text is a bullet, wrapped under itself.
+	bullet := func(text string) {
+		for i, l := range report.Wrap(c.Text(text), w-2) {
 			if i == 0 {
 				out = append(out, s.Caution.Render("* "+l))
 			} else {
 				out = append(out, "  "+l)
 			}
 		}
+	}
+	for _, n := range notes {
+		bullet(report.NoteText(n))
 	}
 	if len(notes) > 0 {
 		out = append(out, "")
@@ -106,13 +110,7 @@ func safetyDetail(c *Common, cautions []mixtures.Caution, notes []mixtures.State
 		return append(out, s.Muted.Render(c.Text("No hazard class applies to this blend at this pressure. Gases still call for the care of the data sheets.")))
 	}
 	for _, ca := range cautions {
-		for i, l := range report.Wrap(c.Text(mixtures.FormatCaution(ca)), w-2) {
-			if i == 0 {
-				out = append(out, s.Caution.Render("* "+l))
-			} else {
-				out = append(out, "  "+l)
-			}
-		}
+		bullet(mixtures.FormatCaution(ca))
 	}
 	out = append(out, "")
 	for _, l := range report.Wrap(c.Text(mixtures.DeferLine), w) {
