@@ -639,7 +639,10 @@ func (p *processPane) plotLines(add func(string)) {
 		return
 	}
 	s := p.c.Styles
-	if _, ok := p.result.(process.Plotter); !ok || p.result == nil {
+	if p.result == nil {
+		return // the error above says why there is nothing to plot
+	}
+	if _, ok := p.result.(process.Plotter); !ok {
 		add(s.Muted.Render(p.c.Text("no path to plot for this process (compress and heat have one)")))
 		return
 	}
