@@ -8,6 +8,7 @@ import (
 	"testing"
 
 	"zmix/mixtures"
+	"zmix/model"
 )
 
 // screenTour is a walk through every pane, overlay and prompt of the
@@ -282,5 +283,17 @@ func TestNothingCutMidWord(t *testing.T) {
 				t.Errorf("%s: screen lacks %q whole:\n%s", c.name, w, screen)
 			}
 		}
+	}
+}
+
+// A blend with no hazard class can still have a model caution: the strip
+// then holds its marker and the line deferring to site practice, whole.
+func TestModelCautionWithoutHazards(t *testing.T) {
+	c := testPaneCommon(false)
+	notes := []mixtures.StateNote{{Species: "Ar", Note: model.Note{Severity: model.Caution, Text: "T/x = 1: a test note"}}}
+	lines := safetyLines(c, nil, notes, 40)
+	got := strings.Join(lines, "\n")
+	if !strings.Contains(got, "MODEL CAUTION (Ar)") || !strings.Contains(got, "professional practice.") {
+		t.Errorf("strip without hazards:\n%s", got)
 	}
 }

@@ -29,7 +29,10 @@ func safetyLines(c *Common, cautions []mixtures.Caution, notes []mixtures.StateN
 		out = append(out, s.Caution.Render(c.shorten(validityMarker(c, notes), w)))
 	}
 	if len(cautions) == 0 {
-		return append(out, s.Warning.Render(c.shorten(mixtures.DeferLine, w)))
+		for _, l := range report.Wrap(c.Text(mixtures.DeferLine), w) {
+			out = append(out, s.Warning.Render(l))
+		}
+		return out
 	}
 	parts := make([]string, len(cautions))
 	for i, ca := range cautions {

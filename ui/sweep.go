@@ -685,6 +685,16 @@ func (p *sweepPane) nonFiniteNote() string {
 	return ""
 }
 
+// seriesDigits are the digits the quantity table gives curve k's value:
+// the blend's row for the blend, the species row for a species.
+func (p *sweepPane) seriesDigits(k int) mixtures.Digits {
+	prop := &sweepProps[p.propIndex()]
+	if k < len(p.series) && p.series[k].name != "blend" && prop.hasSpecies() {
+		return prop.sq.Digits
+	}
+	return prop.q.Digits
+}
+
 // xText writes a grid value in the x axis unit.
 func (p *sweepPane) xText(x float64) string {
 	name := mixtures.SweepTemperature.Key()
