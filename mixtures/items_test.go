@@ -136,6 +136,8 @@ func TestBlendFileLimits(t *testing.T) {
 		name, text, mentions string
 	}{
 		{"1 MB species", `{"format":"zmix-blend/1","components":[{"species":"` + huge + `","amount":"bal"}]}`, "KB"},
+		{"900 KB species, under the file cap", `{"format":"zmix-blend/1","components":[{"species":"` + huge[:900<<10] + `","amount":"bal"}]}`, "at most 64"},
+		{"900 KB note", `{"format":"zmix-blend/1","note":"` + huge[:900<<10] + `","components":[{"species":"N2","amount":"bal"}]}`, "note of"},
 		{"long species", `{"format":"zmix-blend/1","components":[{"species":"` + strings.Repeat("N", 65) + `","amount":"bal"}]}`, "at most 64"},
 		{"long amount", `{"format":"zmix-blend/1","components":[{"species":"N2","amount":"` + strings.Repeat("1", 65) + `"}]}`, "at most 64"},
 		{"long name", `{"format":"zmix-blend/1","name":"` + strings.Repeat("n", MaxNameChars+1) + `","components":[{"species":"N2","amount":"bal"}]}`, "name of"},

@@ -39,6 +39,8 @@ type savedState struct {
 	BlendPath      string `json:"blend_path,omitempty"`
 	Unsaved        bool   `json:"unsaved_changes,omitempty"`
 	AnatomySpecies string `json:"anatomy_species,omitempty"`
+	// Process holds the Process pane's choice and fields, as typed.
+	Process map[string]string `json:"process,omitempty"`
 	// LastValid is the recipe and conditions that last resolved, for when
 	// what was typed last does not: the readout restarts from them.
 	LastValid *mixtures.BlendFile `json:"last_valid,omitempty"`

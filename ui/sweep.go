@@ -2,6 +2,7 @@ package ui
 
 import (
 	"math"
+	"runtime/debug"
 	"strconv"
 	"strings"
 
@@ -270,7 +271,15 @@ func (p *sweepPane) recompute() tea.Cmd {
 	}
 	p.gen++
 	p.running, p.runKey, p.done, p.total = true, k, 0, k.sweep.Steps
-	return sweepStartCmd(p.gen, k)
+	var reuse *mixtures.SweepTable
+	if p.result != nil && p.result.Len()*len(p.result.Columns) >= sweepReleaseValues {
+		// The new sweep takes the old one's storage: nothing may read
+		// it from here on, the plot's curves included.
+		reuse = p.result
+		p.result, p.series = nil, nil
+		p.plot.clear()
+	}
+	return sweepStartCmd(p.gen, k, reuse)
 }
 
 // Update handles a key (when the pane has focus) or any other message.
@@ -312,6 +321,13 @@ func (p *sweepPane) progress(msg sweepProgressMsg) tea.Cmd {
 	p.result, p.resultKey = msg.job.res, msg.job.key
 	p.placeCursor(old)
 	p.rebuildPlot()
+	if p.result.Len()*len(p.result.Columns) >= sweepReleaseValues {
+		// A long sweep leaves megabytes of drawing and the last table
+		// behind, and Go would collect them only once the heap doubled
+		// (some 150 MB for 200 000 points). Once per long sweep, give
+		// them back now: the table holds no pointers, so this is quick.
+		debug.FreeOSMemory()
+	}
 	return nil
 }
 
@@ -667,6 +683,16 @@ func (p *sweepPane) nonFiniteNote() string {
 		}
 	}
 	return ""
+}
+
+// seriesDigits are the digits the quantity table gives curve k's value:
+// the blend's row for the blend, the species row for a species.
+func (p *sweepPane) seriesDigits(k int) mixtures.Digits {
+	prop := &sweepProps[p.propIndex()]
+	if k < len(p.series) && p.series[k].name != "blend" && prop.hasSpecies() {
+		return prop.sq.Digits
+	}
+	return prop.q.Digits
 }
 
 // xText writes a grid value in the x axis unit.
