@@ -135,10 +135,8 @@ func Lookup(r Result, key string) (Value, bool) {
 
 // Units shared by the figure tables.
 const (
-	unitJPerMol   = "J/mol"
 	unitKJPerMol  = "kJ/mol"
 	unitKJPerKg   = "kJ/kg"
-	unitW         = "W"
 	unitKW        = "kW"
 	unitWPerK     = "W/K"
 	unitJPerMolK  = "J/(mol·K)"
