@@ -33,6 +33,7 @@ type KeyMap struct {
 	Setpoint SetpointKeys
 	Scroll   ScrollKeys
 	Anatomy  AnatomyKeys
+	Process  ProcessKeys
 }
 
 // FieldKeys edit a line of text.
@@ -79,6 +80,14 @@ type ScrollKeys struct {
 // AnatomyKeys are the breakdown pane's bindings.
 type AnatomyKeys struct {
 	PrevSpecies, NextSpecies key.Binding
+}
+
+// ProcessKeys are the process pane's bindings.
+type ProcessKeys struct {
+	PrevKind, NextKind key.Binding
+	Up, Down           key.Binding
+	Edit               key.Binding
+	Plot               key.Binding
 }
 
 // DefaultKeyMap returns the workbench's bindings.
@@ -145,6 +154,14 @@ func DefaultKeyMap() *KeyMap {
 			Top:      key.NewBinding(key.WithKeys("home", "g"), key.WithHelp("home", "top: first line")),
 			Bottom:   key.NewBinding(key.WithKeys("end", "G"), key.WithHelp("end", "bottom: last line")),
 		},
+		Process: ProcessKeys{
+			PrevKind: key.NewBinding(key.WithKeys("left", "["), key.WithHelp("←/[", "process: previous one")),
+			NextKind: key.NewBinding(key.WithKeys("right", "]"), key.WithHelp("→/]", "process: next one (flow, compress, heat, mix, dilute, purge)")),
+			Up:       key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("↑/k", "up: previous field")),
+			Down:     key.NewBinding(key.WithKeys("down", "j"), key.WithHelp("↓/j", "down: next field")),
+			Edit:     key.NewBinding(key.WithKeys("enter", "e"), key.WithHelp("enter/e", "edit: type the field, or switch its choice")),
+			Plot:     key.NewBinding(key.WithKeys("p"), key.WithHelp("p", "plot: the path, T against P or H against T")),
+		},
 		Anatomy: AnatomyKeys{
 			PrevSpecies: key.NewBinding(key.WithKeys("left", "["), key.WithHelp("←/[", "species: previous one")),
 			NextSpecies: key.NewBinding(key.WithKeys("right", "]"), key.WithHelp("→/]", "species: next one")),
@@ -166,14 +183,14 @@ func (k *KeyMap) globalHelp() []key.Binding {
 
 func defaultSweepKeys() SweepKeys {
 	return SweepKeys{
-		Variable:        key.NewBinding(key.WithKeys("v"), key.WithHelp("v", "sweep T or P")),
-		EditRange:       key.NewBinding(key.WithKeys("e", "enter"), key.WithHelp("e/enter", "type the range and points")),
+		Variable:        key.NewBinding(key.WithKeys("v"), key.WithHelp("v", "variable: sweep T or P")),
+		EditRange:       key.NewBinding(key.WithKeys("e", "enter"), key.WithHelp("e/enter", "range: type the range and points")),
 		ToggleLog:       key.NewBinding(key.WithKeys("g"), key.WithHelp("g", "linear or log grid (T)")),
-		Property:        key.NewBinding(key.WithKeys("p"), key.WithHelp("p", "next property")),
+		Property:        key.NewBinding(key.WithKeys("p"), key.WithHelp("p", "property: the next one")),
 		PrevProperty:    key.NewBinding(key.WithKeys("P"), key.WithHelp("P", "previous property")),
 		NextSpecies:     key.NewBinding(key.WithKeys("s"), key.WithHelp("s", "next species (or blend)")),
 		PrevSpecies:     key.NewBinding(key.WithKeys("S"), key.WithHelp("S", "previous species")),
-		Overlay:         key.NewBinding(key.WithKeys("o"), key.WithHelp("o", "overlay every species")),
+		Overlay:         key.NewBinding(key.WithKeys("o"), key.WithHelp("o", "overlay: every species with the blend")),
 		CursorLeft:      key.NewBinding(key.WithKeys("left", "h"), key.WithHelp("←/h", "cursor left one column")),
 		CursorRight:     key.NewBinding(key.WithKeys("right", "l"), key.WithHelp("→/l", "cursor right one column")),
 		CursorStepLeft:  key.NewBinding(key.WithKeys(",", "shift+left"), key.WithHelp(",", "cursor back one grid point")),

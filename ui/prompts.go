@@ -13,6 +13,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 // The prompts on the bottom line: save, open and export paths, and the
@@ -29,6 +30,9 @@ const (
 	promptQuit                 // unsaved changes to the blend file: quit?
 	promptReplace              // unsaved changes: open another file anyway?
 )
+
+// maxPathRunes bounds a typed path; longer ones are no path a system takes.
+const maxPathRunes = 1024
 
 // absPath resolves a typed path: ~ is the home directory, and a relative
 // path is taken from where zmix was started.
@@ -114,9 +118,13 @@ func (r *root) openPrompt(kind promptKind) {
 		}
 	case promptExport:
 		r.exportSrc, _ = r.focused().(sweepSource)
+		r.exportProc, _ = r.focused().(processSource)
 		name := "readout.csv"
-		if r.exportSrc != nil {
+		switch {
+		case r.exportSrc != nil:
 			name = "sweep.csv"
+		case r.exportProc != nil:
+			name = "process.json"
 		}
 		value = r.showPath(filepath.Join(r.proposalDir(), name))
 	}
@@ -286,7 +294,24 @@ func (r *root) export(path string) {
 	gauge := r.b.in.Gauge
 	what := "readout"
 	var write func(w io.Writer) error
-	if r.exportSrc != nil {
+	if r.exportProc != nil {
+		// The process commands' writers: JSON, or their text readout.
+		rep := r.exportProc.processReport()
+		if rep == nil {
+			r.setError("no process result to export: see the Process pane's message")
+			return
+		}
+		what = rep.Result.Kind() + " result"
+		write = func(w io.Writer) error {
+			if asJSON {
+				return report.WriteProcessJSON(w, rep)
+			}
+			if r.c.ASCII {
+				w = &report.ASCIIWriter{W: w}
+			}
+			return report.WriteProcessText(w, rep)
+		}
+	} else if r.exportSrc != nil {
 		res := r.exportSrc.Result()
 		if res == nil {
 			r.setError("no finished sweep to export yet")
@@ -324,7 +349,7 @@ func (r *root) export(path string) {
 	}
 	r.lastDir = filepath.Dir(path)
 	msg := "exported the " + what + " to " + r.showPath(path)
-	if !r.b.valid() && r.exportSrc == nil {
+	if !r.b.valid() && r.exportSrc == nil && r.exportProc == nil {
 		msg += " (the last valid state: an entry has an error)"
 	}
 	r.setStatus(msg)
@@ -351,7 +376,7 @@ func (r *root) promptLine() string {
 	t := r.c.Text
 	switch r.prompt {
 	case promptQuit, promptReplace, promptOverwrite:
-		return s.Prompt.Render(" " + t(r.question()))
+		return s.Prompt.Render(" " + t(model.Printable(r.question())))
 	}
 	label := map[promptKind]string{
 		promptSave:   " Save blend to: ",
@@ -360,6 +385,9 @@ func (r *root) promptLine() string {
 	}[r.prompt]
 	if r.prompt == promptExport && r.exportSrc != nil {
 		label = " Export sweep to (.csv/.json): "
+	}
+	if r.prompt == promptExport && r.exportProc != nil {
+		label = " Export process result to (.json, or .txt for text): "
 	}
 	hint := t("  enter ok · esc cancel")
 	return s.Prompt.Render(label) + r.input.view(max(r.width-lipgloss.Width(label)-lipgloss.Width(hint)-2, 8)) + s.Muted.Render(hint)

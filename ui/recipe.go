@@ -56,7 +56,7 @@ type recipePane struct {
 }
 
 func newRecipePane(c *Common, b *bench) *recipePane {
-	p := &recipePane{c: c, b: b, amount: newField(c), search: newField(c), loads: b.loads}
+	p := &recipePane{c: c, b: b, amount: newFieldLimit(c, mixtures.MaxAmountChars), search: newFieldLimit(c, mixtures.MaxSpeciesChars), loads: b.loads}
 	return p
 }
 
@@ -118,7 +118,7 @@ func (p *recipePane) Update(m tea.Msg) tea.Cmd {
 			p.stopEdit()
 		case key.Matches(msg, k.Done) && strings.TrimSpace(p.amount.value()) == "":
 			// An empty amount is not a recipe line: ask for one.
-			p.msg = "type an amount for " + p.b.entries[p.sel].Species + " (2%, 500 ppm, 0.3 kg/kg, 0.2 bar or bal); esc " + p.escWord()
+			p.msg = "enter keeps an amount: type one for " + p.b.entries[p.sel].Species + "; esc " + p.escWord()
 		case key.Matches(msg, k.Done):
 			if p.b.entries[p.sel].Amount != p.before && !p.added {
 				p.b.rememberRecipe(p.beforeEntries)

@@ -230,7 +230,7 @@ func TestRecipeNewRowAmount(t *testing.T) {
 	recipeKeys(p, b, "a")
 	recipeType(p, b, "ar")
 	recipeKeys(p, b, "enter", "enter")
-	if p.mode != recipeEditing || !strings.Contains(p.View(), "type an amount for Ar") {
+	if p.mode != recipeEditing || !strings.Contains(p.View(), "type one for Ar") {
 		t.Fatalf("enter on an empty amount: mode %d; view:\n%s", p.mode, p.View())
 	}
 	recipeType(p, b, "1%")

@@ -2,6 +2,7 @@ package ui
 
 import (
 	"math"
+	"runtime/debug"
 	"strconv"
 	"strings"
 
@@ -10,6 +11,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 // The sweep pane moves T or P across a grid, plots one property of the
@@ -130,6 +132,20 @@ type sweepDrafts struct {
 	steps  string
 }
 
+// sweepSplit splits a whole range typed into the from field with the
+// commands' range parser; ends that do not read are split all the same,
+// so that each shows its error on its own field.
+func sweepSplit(vi mixtures.SweepVar, s string) (from, to string, err error) {
+	r, err := mixtures.ParseSweepRange(vi, s)
+	if err == nil {
+		return r.FromText, r.ToText, nil
+	}
+	if a, b, perr := mixtures.ParseRange(s); perr == nil {
+		return a, b, nil
+	}
+	return "", "", err
+}
+
 // vi is the variable swept, which also indexes the ranges the pane
 // remembers, one per variable.
 func (p *sweepPane) vi() mixtures.SweepVar { return p.set.Var }
@@ -192,7 +208,7 @@ func (p *sweepPane) tryApply() bool {
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
 	var rangeTyped error
 	if strings.Contains(from, "..") { // a whole range typed at once
-		a, b, err := mixtures.ParseRange(from)
+		a, b, err := sweepSplit(vi, from)
 		if err == nil {
 			from, to = a, b
 			p.drafts[vi] = [2]string{a, b}
@@ -269,7 +285,15 @@ func (p *sweepPane) recompute() tea.Cmd {
 	}
 	p.gen++
 	p.running, p.runKey, p.done, p.total = true, k, 0, k.sweep.Steps
-	return sweepStartCmd(p.gen, k)
+	var reuse *mixtures.SweepTable
+	if p.result != nil && p.result.Len()*len(p.result.Columns) >= sweepReleaseValues {
+		// The new sweep takes the old one's storage: nothing may read
+		// it from here on, the plot's curves included.
+		reuse = p.result
+		p.result, p.series = nil, nil
+		p.plot.clear()
+	}
+	return sweepStartCmd(p.gen, k, reuse)
 }
 
 // Update handles a key (when the pane has focus) or any other message.
@@ -311,6 +335,13 @@ func (p *sweepPane) progress(msg sweepProgressMsg) tea.Cmd {
 	p.result, p.resultKey = msg.job.res, msg.job.key
 	p.placeCursor(old)
 	p.rebuildPlot()
+	if p.result.Len()*len(p.result.Columns) >= sweepReleaseValues {
+		// A long sweep leaves megabytes of drawing and the last table
+		// behind, and Go would collect them only once the heap doubled
+		// (some 150 MB for 200 000 points). Once per long sweep, give
+		// them back now: the table holds no pointers, so this is quick.
+		debug.FreeOSMemory()
+	}
 	return nil
 }
 
@@ -512,7 +543,7 @@ func (p *sweepPane) validate() {
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
 	var rangeTyped error
 	if strings.Contains(from, "..") {
-		a, b, err := mixtures.ParseRange(from)
+		a, b, err := sweepSplit(vi, from)
 		if err == nil {
 			from, to = a, b
 		}
@@ -668,6 +699,16 @@ func (p *sweepPane) nonFiniteNote() string {
 	return ""
 }
 
+// seriesDigits are the digits the quantity table gives curve k's value:
+// the blend's row for the blend, the species row for a species.
+func (p *sweepPane) seriesDigits(k int) mixtures.Digits {
+	prop := &sweepProps[p.propIndex()]
+	if k < len(p.series) && p.series[k].name != "blend" && prop.hasSpecies() {
+		return prop.sq.Digits
+	}
+	return prop.q.Digits
+}
+
 // xText writes a grid value in the x axis unit.
 func (p *sweepPane) xText(x float64) string {
 	name := mixtures.SweepTemperature.Key()
@@ -774,8 +815,9 @@ func (p *sweepPane) setShown(shown bool) tea.Cmd {
 func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }
 func (p *sweepPane) stateChanged() bool       { return p.Changed() }
 func (p *sweepPane) restoreState(st *savedState) {
-	if st.Sweep != (SweepSettings{}) {
-		p.load(st.Sweep)
+	if s := st.Sweep; s != (SweepSettings{}) {
+		s.From, s.To, s.Species = model.Printable(s.From), model.Printable(s.To), model.Printable(s.Species)
+		p.load(s)
 	}
 }
 

@@ -155,6 +155,7 @@ var (
 	paneProperties = mustPane("properties")
 	paneSweep      = mustPane("sweep")
 	paneAnatomy    = mustPane("anatomy")
+	paneProcess    = mustPane("process")
 )
 
 func mustPane(key string) paneID {

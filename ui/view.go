@@ -8,6 +8,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 // View draws the whole screen. It only puts together what Update and
@@ -198,7 +199,7 @@ func (r *root) fileState() string {
 	if r.blendPath == "" {
 		return r.c.Text("no file, autosaved")
 	}
-	name := filepath.Base(r.blendPath)
+	name := model.Printable(filepath.Base(r.blendPath))
 	if r.unsaved {
 		return name + " (changed)"
 	}

@@ -49,10 +49,26 @@ type bench struct {
 
 func newBench(cat *model.Catalogue) *bench { return &bench{cat: cat} }
 
+// printableFile is f with every text made printable (model.Printable):
+// a blend file or a saved state may hold escapes that would otherwise
+// reach the terminal, and what the document holds is what panes draw.
+func printableFile(f *mixtures.BlendFile) *mixtures.BlendFile {
+	c := *f
+	c.Name, c.Note = model.Printable(f.Name), model.Printable(f.Note)
+	c.Temperature, c.Pressure = model.Printable(f.Temperature), model.Printable(f.Pressure)
+	c.StandardPressure = model.Printable(f.StandardPressure)
+	c.Components = make([]mixtures.FileComponent, len(f.Components))
+	for i, fc := range f.Components {
+		c.Components[i] = mixtures.FileComponent{Species: model.Printable(fc.Species), Amount: model.Printable(fc.Amount)}
+	}
+	return &c
+}
+
 // loadFile replaces the recipe and conditions with those of a blend file.
 // How pressures are shown (absolute or gauge) is the user's setting, which
 // a file does not change; see viewFromFile.
 func (b *bench) loadFile(f *mixtures.BlendFile) {
+	f = printableFile(f)
 	b.entries = append(b.entries[:0], f.Components...)
 	b.name, b.note = f.Name, f.Note
 	b.loads++
@@ -83,6 +99,7 @@ func (b *bench) lastValidFile() *mixtures.BlendFile {
 // setText takes the recipe and conditions of f exactly as written, for a
 // restart; unlike loadFile it keeps empty conditions empty.
 func (b *bench) setText(f *mixtures.BlendFile) {
+	f = printableFile(f)
 	b.entries = append(b.entries[:0], f.Components...)
 	b.name, b.note = f.Name, f.Note
 	b.tempText, b.presText = f.Temperature, f.Pressure

@@ -56,6 +56,8 @@ type CompressionResult struct {
 	MaxTempK                           float64
 	Expansion                          bool
 	MolarMassKgPerMol, Efficiency      float64
+
+	gas Gas // for the path
 }
 
 // MaxStages bounds the stages, so a typo cannot ask for a million.
@@ -135,7 +137,7 @@ func (c Compression) Solve() (*CompressionResult, error) {
 	g := m.Gas(c.Mixture)
 	ratio := math.Pow(p2/p1, 1/float64(n))
 
-	r := &CompressionResult{Expansion: expansion, MolarMassKgPerMol: c.Mixture.MolarMassKgPerMol, Efficiency: eta}
+	r := &CompressionResult{Expansion: expansion, MolarMassKgPerMol: c.Mixture.MolarMassKgPerMol, Efficiency: eta, gas: g}
 	var w stateWork
 	tIn, pIn := c.InletTempK, p1
 	for i := range n {
@@ -274,7 +276,7 @@ func (w *stateWork) stage(g Gas, t1, p1, p2, eta float64) (Stage, error) {
 		return w.sLast - s1, w.cpLast / tempK, nil
 	}, guess)
 	if err != nil {
-		return Stage{}, err
+		return Stage{}, model.Errorf("process", "the isentropic outlet from %g K, %g Pa to %g Pa: %v", t1, p1, p2, err)
 	}
 	h2s, s2 := w.at(t2s)
 	var h2 float64
@@ -292,7 +294,7 @@ func (w *stateWork) stage(g Gas, t1, p1, p2, eta float64) (Stage, error) {
 			return w.hLast - h2, w.cpLast, nil
 		}, t2s+(h2-h2s)/w.cpLast)
 		if err != nil {
-			return Stage{}, err
+			return Stage{}, model.Errorf("process", "the actual outlet at %g Pa: %v", p2, err)
 		}
 		_, s2 = w.at(t2)
 	}

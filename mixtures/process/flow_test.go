@@ -160,3 +160,33 @@ func FuzzParseTarget(f *testing.F) {
 		}
 	})
 }
+
+// The smaller parsers: volume, efficiency and reference condition. Each
+// gives a value in range or one line of error.
+func FuzzParseOthers(f *testing.F) {
+	for _, s := range []string{"2.5 m3", "50 L", "12 ft3", "0.8", "80%", "normal", "15C", "25C, 1 bar", "", "-1 L", "1e400 m3", "120%"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, s string) {
+		oneLine := func(what string, err error) {
+			if msg := model.UserMessage(err); msg == "" || strings.Contains(msg, "\n") {
+				t.Fatalf("%s(%q): error %q, want one line", what, s, msg)
+			}
+		}
+		if v, err := ParseVolume(s); err != nil {
+			oneLine("ParseVolume", err)
+		} else if !(v > 0) || math.IsInf(v, 0) {
+			t.Fatalf("ParseVolume(%q) = %g", s, v)
+		}
+		if e, err := ParseEfficiency(s); err != nil {
+			oneLine("ParseEfficiency", err)
+		} else if !(e > 0 && e <= 1) {
+			t.Fatalf("ParseEfficiency(%q) = %g", s, e)
+		}
+		if r, err := ParseReference(s); err != nil {
+			oneLine("ParseReference", err)
+		} else if !(r.TempK > 0 && r.PresPa > 0) {
+			t.Fatalf("ParseReference(%q) = %+v", s, r)
+		}
+	})
+}

@@ -25,6 +25,9 @@ type HeatingResult struct {
 	DutyJPerMol, DutyJPerKg, DutyW float64
 	EntropyChangeJPerMolK          float64
 	MeanCpJPerMolK                 float64
+
+	gas            Gas // for the path
+	t1, t2, presPa float64
 }
 
 var (
@@ -60,7 +63,8 @@ func (h Heating) Solve() (*HeatingResult, error) {
 	if err := g.State(&st, h.OutletTempK, h.PresPa); err != nil {
 		return nil, err
 	}
-	r := &HeatingResult{DutyJPerMol: st.HJPerMol - h1, EntropyChangeJPerMolK: st.SJPerMolK - s1}
+	r := &HeatingResult{DutyJPerMol: st.HJPerMol - h1, EntropyChangeJPerMolK: st.SJPerMolK - s1,
+		gas: g, t1: h.InletTempK, t2: h.OutletTempK, presPa: h.PresPa}
 	r.DutyJPerKg = r.DutyJPerMol / h.Mixture.MolarMassKgPerMol
 	r.DutyW = r.DutyJPerMol * h.RateMolPerSec
 	r.kind = "heat"
