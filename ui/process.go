@@ -623,6 +623,23 @@ func (p *processPane) resultLines(add func(string), wrapped func(func(...string)
 		}
 		add(line)
 	}
+	// The tables (stages, streams, composition) and the outlet's
+	// composition, written by the commands' own table writer.
+	var tb strings.Builder
+	for _, table := range res.Tables() {
+		report.WriteFigureTable(&tb, table)
+	}
+	if st := res.Outlet(); st != nil {
+		tb.WriteString("Outlet composition\n")
+		report.WriteComposition(&tb, st)
+	}
+	if tb.Len() > 0 {
+		add("")
+		for _, l := range strings.Split(strings.TrimRight(tb.String(), "\n"), "\n") {
+			add(t(l))
+		}
+		add("")
+	}
 	wrapped(s.Muted.Render, "", "Model: "+res.Assumptions()+".")
 	if n := len(res.Cautions()); n > 0 {
 		var titles []string

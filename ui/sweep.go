@@ -132,6 +132,20 @@ type sweepDrafts struct {
 	steps  string
 }
 
+// sweepSplit splits a whole range typed into the from field with the
+// commands' range parser; ends that do not read are split all the same,
+// so that each shows its error on its own field.
+func sweepSplit(vi mixtures.SweepVar, s string) (from, to string, err error) {
+	r, err := mixtures.ParseSweepRange(vi, s)
+	if err == nil {
+		return r.FromText, r.ToText, nil
+	}
+	if a, b, perr := mixtures.ParseRange(s); perr == nil {
+		return a, b, nil
+	}
+	return "", "", err
+}
+
 // vi is the variable swept, which also indexes the ranges the pane
 // remembers, one per variable.
 func (p *sweepPane) vi() mixtures.SweepVar { return p.set.Var }
@@ -194,7 +208,7 @@ func (p *sweepPane) tryApply() bool {
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
 	var rangeTyped error
 	if strings.Contains(from, "..") { // a whole range typed at once
-		a, b, err := mixtures.ParseRange(from)
+		a, b, err := sweepSplit(vi, from)
 		if err == nil {
 			from, to = a, b
 			p.drafts[vi] = [2]string{a, b}
@@ -529,7 +543,7 @@ func (p *sweepPane) validate() {
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
 	var rangeTyped error
 	if strings.Contains(from, "..") {
-		a, b, err := mixtures.ParseRange(from)
+		a, b, err := sweepSplit(vi, from)
 		if err == nil {
 			from, to = a, b
 		}

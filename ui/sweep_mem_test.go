@@ -1,7 +1,9 @@
 package ui
 
 import (
+	"context"
 	"os"
+	"reflect"
 	"runtime"
 	"strconv"
 	"strings"
@@ -87,4 +89,44 @@ func TestSweepWaitsUntilShown(t *testing.T) {
 	if r2.panes[paneSweep].(*sweepPane).Result() == nil {
 		t.Error("no sweep at start with the sweep pane on screen")
 	}
+}
+
+// A long sweep run again takes over the storage of the one on screen,
+// which is released when the new one starts (nothing draws from it while
+// it is overwritten), and the new result is the engine's.
+func TestSweepReusesLongResult(t *testing.T) {
+	defer func(v int) { sweepReleaseValues = v }(sweepReleaseValues)
+	sweepReleaseValues = 1000 // the test's sweep counts as long
+	s := SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 3000, Property: "Cp", Overlay: true}
+	p := sweepTestPane(t, false, s, 100, 30)
+	first := p.Result()
+	storage := &first.Column(0)[0]
+	in := sweepTestInputs(t)
+	in.Gen, in.PresPa = 2, 3e5
+	cmd := p.SetInputs(in)
+	if p.Result() != nil || len(p.series) != 0 {
+		t.Fatal("the long result stayed on screen while its storage is reused")
+	}
+	sweepRun(t, p, cmd)
+	res := p.Result()
+	if res == nil || &res.Column(0)[0] != storage {
+		t.Fatal("the new sweep did not take over the old storage")
+	}
+	want, err := in.Mixture.Tabulate(context.Background(), res.Sweep, 0, 3e5, in.Opts, sweepColumns(in.Mixture))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for c := range want.Columns {
+		if !reflect.DeepEqual(res.Column(c), want.Column(c)) {
+			t.Fatalf("column %d differs from the engine's", c)
+		}
+	}
+	// A short sweep stays on screen until the next one is done.
+	sweepReleaseValues = 1 << 30
+	in.Gen, in.PresPa = 3, 4e5
+	cmd = p.SetInputs(in)
+	if p.Result() != res {
+		t.Error("a short result left the screen before the next was done")
+	}
+	sweepRun(t, p, cmd)
 }

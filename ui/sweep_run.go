@@ -30,7 +30,7 @@ const (
 // tables of a 200 000-point sweep would hold some 150 MB together, and
 // Go would keep that much for a while after. Smaller results stay on
 // screen until the next one is done.
-const sweepReleaseValues = 4 << 20
+var sweepReleaseValues = 4 << 20 // a variable only so that tests can lower it
 
 // sweepKey is everything a sweep result depends on. Equal keys give
 // equal results, so a request equal to the shown result is not rerun.

@@ -190,7 +190,7 @@ func TestSweepRangeEntry(t *testing.T) {
 		{name: "pressure unit on a T sweep", start: def, to: "5 bar", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: `unknown unit "bar"`},
 		// One range syntax with the commands: the points are their own
 		// field, and a step typed into the range says so.
-		{name: "step typed into the range", start: def, from: "300..600..900 K", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "has 3 parts"},
+		{name: "step typed into the range", start: def, from: "300..600..900 K", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "has 3 parts; want FROM..TO"},
 		{name: "unit on the first end", start: def, from: "300 K..900", wantFrom: "300 K", wantTo: "900 K", wantSteps: 200, wantGridFirst: 300},
 	}
 	for _, tc := range tests {

@@ -16,24 +16,40 @@ const (
 )
 
 // temperatureCautions are the reminders for a gas of mix that a process
-// brings to tempK: hot gas, a flammable above it with no autoignition
-// temperature to compare against, cold gas, and a species below its
-// normal boiling point.
+// brings to tempK: hot gas, a flammable gas at or above its autoignition
+// temperature (or hot with none in the catalogue), cold gas, and a species
+// below its normal boiling point.
 func temperatureCautions(mix *mixtures.Mixture, tempK float64, where string) []mixtures.Caution {
 	var out []mixtures.Caution
 	if tempK > HotGasK {
 		out = append(out, mixtures.Caution{Title: "Hot gas", Text: fmt.Sprintf(
 			"the %s reaches %.4g °C, above the 60 °C at which surfaces burn on contact; insulate or guard hot parts and check the rating of seals, lubricants and downstream equipment.",
 			where, mixtures.KelvinToCelsius(tempK))})
-		var fuels []string
+		// A flammable gas made hot: against its autoignition temperature
+		// where the catalogue has one, else a reminder to look it up.
+		var unknown []string
 		for _, c := range mix.Components {
-			if c.Species.Hazards&(model.Flammable|model.Pyrophoric) != 0 {
-				fuels = append(fuels, c.Species.Formula)
+			sp := c.Species
+			if sp.Hazards&(model.Flammable|model.Pyrophoric) == 0 {
+				continue
+			}
+			ait := sp.Safety.AutoIgnitionK
+			switch {
+			case ait <= 0:
+				unknown = append(unknown, sp.Formula)
+			case tempK >= ait:
+				src := sp.Sources["autoign_K"]
+				if src == "" {
+					src = "the catalogue"
+				}
+				out = append(out, mixtures.Caution{Title: "Above autoignition", Species: []string{sp.Formula}, Text: fmt.Sprintf(
+					"the %s, %.4g °C, is at or above the autoignition temperature in air of %s, %.4g °C (%s): any air let in can ignite it without a spark.",
+					where, mixtures.KelvinToCelsius(tempK), sp.Formula, mixtures.KelvinToCelsius(ait), src)})
 			}
 		}
-		if len(fuels) > 0 {
-			out = append(out, mixtures.Caution{Title: "Hot flammable gas", Species: fuels, Text: fmt.Sprintf(
-				"the catalogue holds no autoignition temperature for these; compare the %s temperature, %.4g °C, with the autoignition temperature on the safety data sheet, and keep air out.",
+		if len(unknown) > 0 {
+			out = append(out, mixtures.Caution{Title: "Hot flammable gas", Species: unknown, Text: fmt.Sprintf(
+				"the catalogue holds no autoignition temperature for these; compare the %s temperature, %.4g °C, with the one on the safety data sheet, and keep air out.",
 				where, mixtures.KelvinToCelsius(tempK))})
 		}
 	}

@@ -99,10 +99,26 @@ func (b *base) Tables() []Table               { return b.tables }
 func (b *base) Outlet() *mixtures.State       { return b.outlet }
 func (b *base) Notes() []string               { return b.notes }
 func (b *base) Cautions() []mixtures.Caution  { return b.cautions }
-func (b *base) in(f *Figure, si float64)      { b.inputs = append(b.inputs, Value{f, si}) }
-func (b *base) out(f *Figure, si float64)     { b.outputs = append(b.outputs, Value{f, si}) }
 func (b *base) note(line string)              { b.notes = append(b.notes, line) }
 func (b *base) caution(c ...mixtures.Caution) { b.cautions = append(b.cautions, c...) }
+
+// A result has a dozen figures at most: room for them up front saves
+// the slices growing one by one.
+const figuresCap = 12
+
+func (b *base) in(f *Figure, si float64) {
+	if b.inputs == nil {
+		b.inputs = make([]Value, 0, figuresCap)
+	}
+	b.inputs = append(b.inputs, Value{f, si})
+}
+
+func (b *base) out(f *Figure, si float64) {
+	if b.outputs == nil {
+		b.outputs = make([]Value, 0, figuresCap)
+	}
+	b.outputs = append(b.outputs, Value{f, si})
+}
 
 // Lookup returns the value of the figure with the key among the result's
 // inputs and outputs, and false when it has none.
@@ -119,10 +135,8 @@ func Lookup(r Result, key string) (Value, bool) {
 
 // Units shared by the figure tables.
 const (
-	unitJPerMol   = "J/mol"
 	unitKJPerMol  = "kJ/mol"
 	unitKJPerKg   = "kJ/kg"
-	unitW         = "W"
 	unitKW        = "kW"
 	unitWPerK     = "W/K"
 	unitJPerMolK  = "J/(mol·K)"

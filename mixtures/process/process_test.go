@@ -352,3 +352,39 @@ func TestGasCorrectionFactor(t *testing.T) {
 		}
 	}
 }
+
+// A compression that heats a fuel past its catalogue autoignition
+// temperature says so, with the figure's source; a fuel without one gets
+// the reminder to look it up; a cool outlet gets neither.
+func TestCompressionAutoignitionCaution(t *testing.T) {
+	titles := func(r *CompressionResult) string {
+		var s []string
+		for _, c := range r.Cautions() {
+			s = append(s, c.Title+": "+c.Text)
+		}
+		return strings.Join(s, "\n")
+	}
+	// Methane, 300 K by a ratio of 100 at η = 0.6: far above 810 K.
+	r, err := Compression{Mixture: mixOf(t, "CH4 1"), InletTempK: 300, InletPresPa: 1e5, OutletPresPa: 1e7, Efficiency: 0.6}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := titles(r); r.OutletTempK < 810 || !strings.Contains(got, "Above autoignition") || !strings.Contains(got, "NFPA 325") {
+		t.Errorf("CH4 to %.0f K: cautions\n%s\nwant one above autoignition with its source", r.OutletTempK, got)
+	}
+	// Silane has no autoignition temperature in the catalogue.
+	r, err = Compression{Mixture: mixOf(t, "SiH4 2%, N2 bal"), InletTempK: 300, InletPresPa: 1e5, OutletPresPa: 5e5}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := titles(r); !strings.Contains(got, "Hot flammable gas (") && !strings.Contains(got, "Hot flammable gas:") {
+		t.Errorf("SiH4 hot: cautions\n%s\nwant the reminder to look up its autoignition temperature", got)
+	}
+	r, err = Compression{Mixture: mixOf(t, "CH4 1"), InletTempK: 280, InletPresPa: 1e5, OutletPresPa: 1.1e5}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := titles(r); strings.Contains(got, "autoignition") || strings.Contains(got, "Hot gas") {
+		t.Errorf("CH4 barely compressed: cautions\n%s\nwant no temperature caution", got)
+	}
+}

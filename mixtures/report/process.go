@@ -75,7 +75,7 @@ func WriteProcessText(w io.Writer, r *ProcessReport) error {
 	figureSection(w, "Given", res.Inputs(), true)
 	figureSection(w, "Result", res.Outputs(), false)
 	for _, tb := range res.Tables() {
-		writeFigureTable(w, tb)
+		WriteFigureTable(w, tb)
 	}
 	if st := res.Outlet(); st != nil {
 		fmt.Fprintln(w, "Outlet")
@@ -131,9 +131,10 @@ func figureSection(w io.Writer, title string, values []process.Value, given bool
 	fmt.Fprintln(w)
 }
 
-// writeFigureTable writes a table of rows: the figures' symbols and units
-// as headings, a row label first when the rows have them.
-func writeFigureTable(w io.Writer, tb process.Table) {
+// WriteFigureTable writes a table of rows: its title, the figures'
+// symbols and units as headings, a row label first when the rows have
+// them, and only the Brief columns when the table names some.
+func WriteFigureTable(w io.Writer, tb process.Table) {
 	labelled := len(tb.RowLabels) == len(tb.Rows)
 	if len(tb.Rows) == 0 || (len(tb.Rows) == 1 && !labelled) {
 		return // one unlabelled row repeats the result above it
@@ -191,6 +192,13 @@ func outletTable(w io.Writer, st *mixtures.State) {
 		t.Row(q.Label, Number(q.Get(st)*q.Scale, q.Digits), q.Unit)
 	}
 	t.Write(w)
+	fmt.Fprintln(w)
+	WriteComposition(w, st)
+}
+
+// WriteComposition writes each species' mole fraction and partial
+// pressure in the state.
+func WriteComposition(w io.Writer, st *mixtures.State) {
 	x, _ := mixtures.SpeciesQuantityByKey("x")
 	p, _ := mixtures.SpeciesQuantityByKey("p")
 	sp := NewTable("  ", Left, Right, Right)
@@ -200,7 +208,6 @@ func outletTable(w io.Writer, st *mixtures.State) {
 		tm := &st.Species[i]
 		sp.Row(model.Printable(tm.Species.Formula), Number(x.Get(tm)*x.Scale, x.Digits), Number(p.Get(tm)*p.Scale, p.Digits))
 	}
-	fmt.Fprintln(w)
 	sp.Write(w)
 }
 
