@@ -235,7 +235,8 @@ func (m *Mixture) StreamSpan(ctx context.Context, sw Sweep, from, to int, fixedT
 
 // SweepResult holds one full mixture state per grid point. It is large
 // (every species' state at every point); Stream and SweepTable keep
-// memory flat or small.
+// memory flat or small. Only export.go's WriteSweepJSON still takes it:
+// with that gone, SweepResult, Run and RunContext can go too.
 type SweepResult struct {
 	Sweep  Sweep
 	Grid   []float64
