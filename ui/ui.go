@@ -59,7 +59,7 @@ func Run(cfg Config) error {
 		return err
 	}
 	g := newGuard(r, dir, time.Now)
-	p := tea.NewProgram(g, tea.WithAltScreen(), tea.WithoutSignalHandler())
+	p := tea.NewProgram(g, tea.WithAltScreen(), tea.WithoutSignalHandler(), tea.WithOutput(terminalOutput()))
 	g.kill = p.Kill
 	_, runErr := p.Run()
 
