@@ -103,7 +103,7 @@ func DefaultKeyMap() *KeyMap {
 		Safety:    key.NewBinding(key.WithKeys("!"), key.WithHelp("!", "safety reminders in full")),
 		SaveBlend: key.NewBinding(key.WithKeys("ctrl+s"), key.WithHelp("ctrl+s", "save blend file")),
 		OpenBlend: key.NewBinding(key.WithKeys("ctrl+o"), key.WithHelp("ctrl+o", "open blend file")),
-		Export:    key.NewBinding(key.WithKeys("ctrl+e"), key.WithHelp("ctrl+e", "export readout or sweep (.csv/.json)")),
+		Export:    key.NewBinding(key.WithKeys("ctrl+e"), key.WithHelp("ctrl+e", "export readout, sweep or process result")),
 		Accept:    key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "confirm")),
 		Yes:       key.NewBinding(key.WithKeys("y", "Y"), key.WithHelp("y", "yes")),
 		No:        key.NewBinding(key.WithKeys("n", "N"), key.WithHelp("n", "no")),
