@@ -122,8 +122,12 @@ Usage:
 
 Commands:
 `)
+	width := 0
 	for _, c := range commands {
-		fmt.Fprintf(&b, "  %-8s %s\n", c.name, c.summary)
+		width = max(width, len(c.name))
+	}
+	for _, c := range commands {
+		fmt.Fprintf(&b, "  %-*s  %s\n", width, c.name, c.summary)
 	}
 	b.WriteString(`
 Flags for every command:

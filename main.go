@@ -71,6 +71,12 @@ func init() {
 	commands = []command{
 		{"state", "the full readout of a blend at one temperature and pressure", (*app).cmdState, usageState},
 		{"sweep", "a blend's properties over a range of temperature or pressure", (*app).cmdSweep, usageSweep},
+		{"flow", "convert a flow between molar, mass, actual and standard volume units", (*app).cmdFlow, usageFlow},
+		{"compress", "compress or expand a blend: outlet temperature, work and power", (*app).cmdCompress, usageCompress},
+		{"heat", "the duty to heat or cool a blend at constant pressure", (*app).cmdHeat, usageHeat},
+		{"mix", "join streams adiabatically: outlet state and entropy generated", (*app).cmdMix, usageMix},
+		{"dilute", "the diluent flow for a target level, or the level of a ratio", (*app).cmdDilute, usageDilute},
+		{"purge", "purge cycles or time to bring a species down to a target", (*app).cmdPurge, usagePurge},
 		{"hazard", "a blend's flammable limits, ISO 10156 and GHS classification", (*app).cmdHazard, usageHazard},
 		{"catalog", "the species list, or one species' data, sources and table", (*app).cmdCatalog, usageCatalog},
 		{"open", "the workbench on a saved blend file", (*app).cmdOpen, usageOpen},

@@ -56,29 +56,29 @@ func (sp *Species) linearRotor(tempK, invT, lnT float64, how RotationTreatment) 
 }
 
 // linearRotorSeries is the Euler–Maclaurin expansion of the rigid-rotor
-// sum, q = T/(σΘ)·(1 + y/3 + y²/15 + 4y³/315) with y = Θ/T. Its error at
-// T ≥ 50 Θ is below 1e-8 in ln q. The polynomials are in Horner form with
-// the fractions as constants: one division instead of eleven.
+// sum, q = T/(σΘ)·f(y) with f = 1 + y/3 + y²/15 + 4y³/315 and y = Θ/T. Its
+// error at T ≥ 50 Θ is below 1e-8 in ln q.
+//
+// ln f is taken as its Taylor series in y to y⁷, whose coefficients are
+// exact fractions (from expanding ln(1 + a) with a = f − 1); the first
+// term left out is below 1e-19 at y = 1/50, so this is ln f to rounding,
+// with no log and no division. With D = T∂/∂T = −y∂/∂y and
+// ln f = Σ a_k y^k: U = 1 + D ln f = 1 − Σ k a_k y^k and
+// Cv = U + D² ln q = 1 + Σ k(k−1) a_k y^k.
 func linearRotorSeries(lnInvSigmaTheta, y, lnT float64) Terms {
 	const (
-		c1  = 1.0 / 3
-		c2  = 1.0 / 15
-		c3  = 4.0 / 315
-		c2d = 2 * c2 // y·d/dy of y² and y³ brings down 2 and 3
-		c3d = 3 * c3
-		c3e = 6 * c3 // y²·d²/dy² of y³ brings down 6
+		a1 = 1.0 / 3
+		a2 = 1.0 / 90
+		a3 = 8.0 / 2835
+		a4 = -121.0 / 56700
+		a5 = 17.0 / 42525
+		a6 = -457.0 / 13395375
+		a7 = 83.0 / 13395375
 	)
-	f := 1 + y*(c1+y*(c2+y*c3))
-	// y·df/dy and y²·d²f/dy², to carry the derivatives through T = Θ/y.
-	yf1 := y * (c1 + y*(c2d+y*c3d))
-	y2f2 := y * y * (c2d + y*c3e)
-	// With D = T∂/∂T = −y∂/∂y on ln q = ln T + ln f(y):
-	// U = D ln q and Cv = D ln q + D² ln q.
-	invF := 1 / f
-	g1 := yf1 * invF
-	u := 1 - g1
-	d2 := g1 + y2f2*invF - g1*g1
-	return Terms{LnQ: lnInvSigmaTheta + lnT + math.Log(f), U: u, Cv: u + d2}
+	lnF := y * (a1 + y*(a2+y*(a3+y*(a4+y*(a5+y*(a6+y*a7))))))
+	kA := y * (a1 + y*(2*a2+y*(3*a3+y*(4*a4+y*(5*a5+y*(6*a6+y*7*a7))))))
+	kkA := y * y * (2*a2 + y*(6*a3+y*(12*a4+y*(20*a5+y*(30*a6+y*42*a7)))))
+	return Terms{LnQ: lnInvSigmaTheta + lnT + lnF, U: 1 - kA, Cv: 1 + kkA}
 }
 
 // linearRotorSum sums Σ g_J (2J+1) exp(−J(J+1)Θ/T) directly, with the

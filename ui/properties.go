@@ -87,7 +87,16 @@ func (p *propertiesPane) wantHeight(avail int) int {
 	if p.b.in.Mixture != nil {
 		nSpecies = len(p.b.in.Mixture.Components) + len(cautionNotes(p.b.notes)) // a caution line each
 	}
-	return max(10, min(20+nSpecies, avail-16))
+	// Besides its figures the readout has nine rows: the frame, the
+	// heading, the mixing-entropy line, the blank lines and the species
+	// table's headings and note.
+	figures := 0
+	for i := range mixtures.Quantities {
+		if q := &mixtures.Quantities[i]; q.Section == mixtures.SectionMixture && q.Key != mixingKey {
+			figures++
+		}
+	}
+	return max(10, min(figures+9+nSpecies, avail-16))
 }
 
 // readoutRow is one figure of the blend, per mole and per kilogram.

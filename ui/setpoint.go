@@ -198,6 +198,9 @@ func (p *setpointPane) refresh() {
 	if p.b.presErr == "" && in.PresPa > 0 {
 		// In the reading chosen (show P as), like every pressure on screen.
 		pNote = p.b.presShown(in.PresPa)
+		if squeeze(pNote) == squeeze(p.b.presText) {
+			pNote = "" // shown as typed: nothing to add
+		}
 		switch {
 		case in.Gauge && !p.b.showGauge:
 			pNote += ", entered as gauge"
@@ -230,6 +233,9 @@ func (p *setpointPane) refresh() {
 	p.scroll.setLines(lines)
 	p.scroll.show(selLine, selLine)
 }
+
+// squeeze lowers s and drops its spaces, to compare typed values.
+func squeeze(s string) string { return strings.ToLower(strings.Join(strings.Fields(s), "")) }
 
 func (p *setpointPane) View() string { return p.scroll.view() }
 
