@@ -36,7 +36,9 @@
 //     q = √π/σ · T^{3/2}/√(ΘA ΘB ΘC). Treatment selects the choice. The
 //     summed levels' Boltzmann factors come by recurrence, with one exp a
 //     sum: e^{−ε_{J+1}/kT} = e^{−ε_J/kT}·e^{−2(J+1)Θ/T}, and the step
-//     itself shrinks by e^{−2Θ/T} each level.
+//     itself shrinks by e^{−2Θ/T} each level. Above 50 Θrot, ln of the
+//     series' bracket is taken as its own Taylor series in Θ/T, so that the
+//     rotor costs no log.
 //   - Vibration: harmonic oscillators, energy zero at v = 0 (the zero-point
 //     energy is inside E0).
 //   - Electronic: a sum over the listed levels, ground level at zero.

@@ -169,7 +169,7 @@ func TestPressureViewEverywhere(t *testing.T) {
 			}
 		}
 	}
-	check("gauge view", "295.15 K · 0.38675 barg", "295.15 K, 0.38675 barg", "0.38675 barg,", "entered as")
+	check("gauge view", "295.15 K · 0.38675 barg", "295.15 K, 0.38675 barg", "0.38675 barg, entered as")
 	press(t, r, "4")
 	check("T sweep", "at P = 0.38675 barg")
 	press(t, r, "v")
@@ -270,7 +270,7 @@ func TestNothingCutMidWord(t *testing.T) {
 		{"blend name, 120x40", 120, 40, nil, []string{"nitride feed", "(demo)"}},
 		{"450 °C, 120x40", 120, 40, []string{"2", "t", "ctrl+u", "type:450 C", "enter"}, []string{"723.15 K, 450.00 °C"}},
 		{"Setpoint readout, 100x24", 100, 24, []string{"2", "t", "ctrl+u", "type:450 C", "enter", "p", "ctrl+u", "type:30 psig", "enter"},
-			[]string{"723.15 K, 450.00 °C", "44.696 psia,", "entered as"}},
+			[]string{"450 C     723.15 K", "30 psig   44.696 psia"}}, // the °C echo gives way to keep every row in view
 	} {
 		r := testRoot(t, c.w, c.h, testRootOpts{})
 		if err := os.MkdirAll(filepath.Join(r.cwd, long), 0o755); err != nil {
@@ -295,5 +295,19 @@ func TestModelCautionWithoutHazards(t *testing.T) {
 	got := strings.Join(lines, "\n")
 	if !strings.Contains(got, "MODEL CAUTION (Ar)") || !strings.Contains(got, "professional practice.") {
 		t.Errorf("strip without hazards:\n%s", got)
+	}
+}
+
+// In a narrow Setpoint (the split layouts) every line stays in view: the
+// conversions wrap under their values and the hints give way (issue 7,
+// item 8: the Setpoint readout at 100×24).
+func TestSetpointFitsNarrow(t *testing.T) {
+	for _, size := range [][2]int{{100, 24}, {100, 30}} {
+		r := testRoot(t, size[0], size[1], testRootOpts{})
+		walk(t, r, []string{"2", "t", "ctrl+u", "type:450 C", "enter", "p", "ctrl+u", "type:30 psig", "enter"})
+		sp := r.panes[1]
+		if above, below := sp.More(); above || below {
+			t.Errorf("%dx%d: Setpoint hides lines (above %v, below %v):\n%s", size[0], size[1], above, below, r.View())
+		}
 	}
 }

@@ -27,7 +27,15 @@
 //
 // A safety strip with the blend's hazard classes and the line that defers
 // to site codes, data sheets and licensed practice stays on screen while
-// any caution applies.
+// any caution applies. The model's validity cautions (a species near
+// condensing, real-gas effects) head it as a MODEL CAUTION line, stand as
+// lines in Properties and are in full in the ! overlay.
+//
+// Pressures are shown in the unit of the pressure typed (a sweep's axis:
+// of the range typed) and in the reading chosen with "show P as",
+// absolute or gauge (mixtures.PressureUnit, report.PressureIn). Text is
+// wrapped or shortened between words, never cut mid-word; ASCII mode
+// (report.ToASCII) spells out every glyph the workbench draws.
 //
 // # Conventions
 //
@@ -42,6 +50,10 @@
 // Cp − Cv (the P dV work at constant pressure) is shown with translation.
 //
 // # Files
+//
+// Saving, opening and exporting propose the folder last used, else the
+// blend file's, else $XDG_DATA_HOME/zmix (default ~/.local/share/zmix),
+// made on the first write there.
 //
 // The workbench state (everything as typed, in blend-file form, the sweep
 // settings, the pane, the path of the blend file in use) is written
