@@ -218,6 +218,14 @@ func TestWriteFileAtomicRefuses(t *testing.T) {
 		if err := WriteFileAtomic(p, []byte("x"), 0o666); !errors.Is(err, ErrNotRegular) || !strings.Contains(err.Error(), p) {
 			t.Errorf("write over %s: %v, want ErrNotRegular naming it", p, err)
 		}
+		if err := CheckWriteTarget(p); !errors.Is(err, ErrNotRegular) {
+			t.Errorf("CheckWriteTarget(%s) = %v, want ErrNotRegular", p, err)
+		}
+	}
+	for _, p := range []string{real, link, filepath.Join(dir, "new.json")} {
+		if err := CheckWriteTarget(p); err != nil {
+			t.Errorf("CheckWriteTarget(%s) = %v, want nil", p, err)
+		}
 	}
 	if st, err := os.Stat(os.DevNull); err != nil || st.Mode()&fs.ModeDevice == 0 {
 		t.Errorf("%s harmed: %v", os.DevNull, err)
