@@ -56,6 +56,10 @@ var sweepProps = []sweepProp{
 		key: "gamma", symbol: "γ", symASCII: "gamma", scale: 1,
 		blend: "gamma",
 	},
+	{
+		key: "Z", symbol: "Z", symASCII: "Z", scale: 1,
+		blend: "Z",
+	},
 }
 
 // sweepColumns are the columns a sweep of m keeps: the swept and held

@@ -148,6 +148,10 @@ const (
 // polar lists species whose dipole makes Tsonopoulos' polar term matter.
 var polar = map[string]bool{"H2O": true, "NH3": true, "HF": true, "HCl": true, "SO2": true, "H2S": true, "NO2": true}
 
+// PolarLeftOut reports whether the species is one whose polar terms of
+// Tsonopoulos' correlation are left out.
+func PolarLeftOut(formula string) bool { return polar[formula] }
+
 // New builds the models' constants for a blend.
 func New(comps []Component) *Mixture {
 	m := &Mixture{}
