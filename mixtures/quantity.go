@@ -19,6 +19,9 @@ type Section int
 const (
 	SectionMixture    Section = iota // the blend's own figures (the zero value)
 	SectionConditions                // T, P, P°: what the state was asked at
+	// SectionRealGas: the real-gas figures beside the ideal-gas ones,
+	// shown on a line of their own with the model that gives them.
+	SectionRealGas
 )
 
 // Quantity is one figure of the blend.
@@ -97,11 +100,11 @@ var Quantities = []Quantity{
 	{Key: "rho", Label: "density ρ", Symbol: "ρ", SymbolASCII: "rho", Unit: "kg/m³", UnitASCII: "kg/m3", Scale: 1,
 		Name: "density_kg_m3", Digits: Digits{Sig: 5},
 		Get: func(s *State) float64 { return s.DensityKgPerM3 }},
-	{Key: "rho_real", Label: "real density ρ", Symbol: "ρreal", SymbolASCII: "rho_real", Unit: "kg/m³", UnitASCII: "kg/m3", Scale: 1,
-		Name: "real_density_kg_m3", Digits: Digits{Sig: 5}, Optional: true,
+	{Key: "rho_real", Label: "real density ρ", Symbol: "ρ", SymbolASCII: "rho", Unit: "kg/m³", UnitASCII: "kg/m3", Scale: 1,
+		Name: "real_density_kg_m3", Digits: Digits{Sig: 5}, Optional: true, Section: SectionRealGas,
 		Get: (*State).RealDensityKgPerM3},
 	{Key: "Z", Label: "compressibility Z", Symbol: "Z", SymbolASCII: "Z", Scale: 1,
-		Name: "z", Digits: Digits{Sig: 5}, Optional: true,
+		Name: "z", Digits: Digits{Sig: 5}, Optional: true, Section: SectionRealGas,
 		Get: (*State).Z},
 	{Key: "Cp", Label: "heat capacity Cp", Symbol: "Cp", SymbolASCII: "Cp", Unit: unitJPerMolK, UnitASCII: unitJPerMolKASCII, Scale: 1,
 		Name: "cp_J_molK", PerKgName: "cp_J_kgK", PerKgUnit: unitJPerKgK, PerKgUnitASCII: unitJPerKgKASCII, Digits: Digits{Sig: 5},

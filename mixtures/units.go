@@ -277,3 +277,85 @@ func KelvinToCelsius(tempK float64) float64 { return tempK - celsiusZeroK }
 func FormatTemperature(tempK float64) string {
 	return strconv.FormatFloat(tempK, 'g', 6, 64) + " K"
 }
+
+// PressureUnit is a unit pressures are shown in: a size in Pa and a
+// reading, absolute or gauge (above AtmospherePa). The workbench shows
+// every total pressure in the unit the user typed and the reading chosen.
+type PressureUnit struct {
+	key    string // the unit's family in pressureUnitNames
+	SizePa float64
+	Gauge  bool
+}
+
+// pressureUnitNames are each unit family's names for an absolute and a
+// gauge reading; "abs" marks units that would otherwise be read either way.
+var pressureUnitNames = map[string][2]string{
+	"pa": {"Pa abs", "Pa gauge"}, "kpa": {"kPa abs", "kPag"}, "mpa": {"MPa abs", "MPa gauge"},
+	"bar": {"bar abs", "barg"}, "mbar": {"mbar abs", "mbar gauge"}, "atm": {"atm", "atm gauge"},
+	"torr": {"Torr", "Torr gauge"}, "psi": {"psia", "psig"},
+}
+
+// pressureUnitFamily maps each accepted unit word to its family.
+var pressureUnitFamily = map[string]string{
+	"pa": "pa", "kpa": "kpa", "kpag": "kpa", "mpa": "mpa", "bar": "bar", "bara": "bar", "barg": "bar",
+	"mbar": "mbar", "atm": "atm", "torr": "torr", "psi": "psi", "psia": "psi", "psig": "psi",
+}
+
+// BarAbsolute is the unit of pressures nobody typed: bar, absolute.
+var BarAbsolute = PressureUnit{key: "bar", SizePa: 1e5}
+
+// PressureUnitOf returns the unit of a typed pressure ("30 psig" gives
+// psig), and false when the text names no unit zmix reads.
+func PressureUnitOf(text string) (PressureUnit, bool) {
+	_, unit, err := splitNumber(text)
+	if err != nil {
+		return PressureUnit{}, false
+	}
+	size, gauge, ok := pressureUnit(unit)
+	if !ok {
+		return PressureUnit{}, false
+	}
+	return PressureUnit{key: pressureUnitFamily[strings.ToLower(unit)], SizePa: size, Gauge: gauge}, true
+}
+
+// Reading returns the same unit read as gauge or as absolute.
+func (u PressureUnit) Reading(gauge bool) PressureUnit {
+	u.Gauge = gauge
+	return u
+}
+
+// Name is the unit's name for its reading: "bar abs", "barg", "psig".
+func (u PressureUnit) Name() string {
+	names, ok := pressureUnitNames[u.key]
+	if !ok {
+		names = pressureUnitNames["bar"]
+	}
+	if u.Gauge {
+		return names[1]
+	}
+	return names[0]
+}
+
+// FromPa converts an absolute pressure in Pa to this unit and reading.
+func (u PressureUnit) FromPa(pa float64) float64 {
+	if u.Gauge {
+		pa -= AtmospherePa
+	}
+	return pa / u.size()
+}
+
+// ToPa converts a value in this unit and reading to absolute Pa.
+func (u PressureUnit) ToPa(v float64) float64 {
+	pa := v * u.size()
+	if u.Gauge {
+		pa += AtmospherePa
+	}
+	return pa
+}
+
+func (u PressureUnit) size() float64 {
+	if u.SizePa > 0 {
+		return u.SizePa
+	}
+	return 1e5
+}

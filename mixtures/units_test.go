@@ -261,3 +261,44 @@ func TestAmountPressureUnitCase(t *testing.T) {
 		t.Errorf(`ParseAmount("1e303 MPa") = %+v, %v; want a "too large" error`, a, err)
 	}
 }
+
+// A pressure unit reads back what was typed, in either reading; gauge
+// readings are above the standard atmosphere, 101 325 Pa (its definition).
+func TestPressureUnitOf(t *testing.T) {
+	for _, c := range []struct {
+		text      string
+		gaugeView bool
+		pa        float64
+		want      float64
+		name      string
+		tol       float64
+	}{
+		{"30 psig", true, 30*6894.757293168361 + 101325, 30, "psig", 1e-12},
+		{"30 psig", false, 30*6894.757293168361 + 101325, 44.69594, "psia", 1e-6}, // 101325 Pa = 14.69595 psi (1 lbf/in² = 6894.757 Pa)
+		{"1.4 bar", false, 1.4e5, 1.4, "bar abs", 1e-12},
+		{"1.4 bar", true, 1.4e5, 0.38675, "barg", 1e-12},
+		{"2 barg", false, 3e5, 3, "bar abs", 1e-12},
+		{"500 kPag", true, 601325, 500, "kPag", 1e-12},
+		{"760 Torr", false, 101325, 760, "Torr", 1e-12},
+		{"1 atm", true, 101325, 0, "atm gauge", 1e-12},
+	} {
+		u, ok := PressureUnitOf(c.text)
+		if !ok {
+			t.Errorf("PressureUnitOf(%q) found no unit", c.text)
+			continue
+		}
+		u = u.Reading(c.gaugeView)
+		if got := u.FromPa(c.pa); math.Abs(got-c.want) > c.tol*math.Max(1, math.Abs(c.want)) {
+			t.Errorf("%q in %s: FromPa(%g) = %g, want %g", c.text, u.Name(), c.pa, got, c.want)
+		}
+		if u.Name() != c.name {
+			t.Errorf("%q (gauge %v): name %q, want %q", c.text, c.gaugeView, u.Name(), c.name)
+		}
+		if back := u.ToPa(u.FromPa(c.pa)); math.Abs(back-c.pa) > 1e-9*c.pa+1e-9 {
+			t.Errorf("%q: ToPa(FromPa(%g)) = %g", c.text, c.pa, back)
+		}
+	}
+	if _, ok := PressureUnitOf("3 furlongs"); ok {
+		t.Error(`PressureUnitOf("3 furlongs") found a unit`)
+	}
+}

@@ -25,17 +25,27 @@ type StateNote struct {
 	model.Note
 }
 
-// Notes returns the validity remarks of a state: the model's notes for
-// every species at its partial pressure, and the blend-wide pressure note.
+// Notes returns the validity remarks of a state: the blend's Z, the
+// model's notes for every species at its partial pressure, and how near
+// each species is to condensing.
 // Info-level notes are left out unless all is set.
 func Notes(s *State, all bool) []StateNote {
 	out := realGasNotes(s, all)
 	for i := range s.Species {
 		t := &s.Species[i]
 		v := t.Species.Validity(s.TempK, t.PartialPresPa)
-		// Condensation depends on the partial pressure, but the boiling
-		// point is at 1 atm; report it for the species present.
-		for _, n := range v.Notes(t.Species) {
+		notes := v.Notes(t.Species)
+		// The vapour pressure from IAPWS or the critical constants
+		// replaces the model's estimate from the boiling point, which
+		// it gives only when the boiling point is known.
+		if n, ok := condensationNote(t, s.TempK); ok {
+			if v.TOverBoiling > 0 {
+				v.TOverBoiling = 0
+				notes = v.Notes(t.Species)
+			}
+			notes = append(notes, n)
+		}
+		for _, n := range notes {
 			if n.Severity == model.Info && !all {
 				continue
 			}

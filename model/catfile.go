@@ -263,7 +263,7 @@ func (p *catParser) line(raw string) error {
 	key = strings.TrimSpace(key)
 	value, source, _ := strings.Cut(value, "|")
 	value, source = strings.TrimSpace(value), strings.TrimSpace(source)
-	if _, known := catalogueFields[key]; !known {
+	if !knownField(key) {
 		return p.errf(p.lineNo, key, "unknown field (known: %s)", knownFieldList())
 	}
 	if at, seen := p.fieldAt[key]; seen {
@@ -305,6 +305,9 @@ func (p *catParser) finish() error {
 	}
 	if _, ok := p.fieldAt["rot_cm"]; sp.Rotor != Atom && !ok {
 		return p.errf(p.curLine, "rot_cm", "missing for a %s rotor", sp.Rotor)
+	}
+	if err := sp.Safety.check(); err != nil {
+		return p.errf(p.curLine, "", "%s", UserMessage(err))
 	}
 	if err := sp.Prepare(); err != nil {
 		return p.errf(p.curLine, "", "%s", UserMessage(err))
@@ -404,15 +407,19 @@ func checkText(what, s string, maxRunes int) error {
 }
 
 func knownFieldList() string {
-	keys := make([]string, 0, len(catalogueFields))
+	keys := make([]string, 0, len(catalogueFields)+len(safetyFields))
 	for k := range catalogueFields {
 		keys = append(keys, k)
 	}
+	keys = append(keys, SafetyFieldNames()...)
 	sort.Strings(keys)
 	return strings.Join(keys, ", ")
 }
 
 func setField(sp *Species, key, value string) error {
+	if _, ok := safetyFields[key]; ok {
+		return setSafetyField(&sp.Safety, key, value)
+	}
 	switch key {
 	case "name":
 		if value == "" {

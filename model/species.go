@@ -127,6 +127,7 @@ type Species struct {
 	Acentric   float64 // acentric factor ω
 	QuantumGas bool
 	Hazards    Hazard
+	Safety     SafetyData // flammable limits, ISO 10156 coefficients, LC50
 
 	// Sources maps a field name of the catalogue file (for example "vib")
 	// to the publication its numbers come from.

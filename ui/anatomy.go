@@ -8,6 +8,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 	"github.com/charmbracelet/lipgloss"
 
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -116,7 +117,7 @@ func (p *anatomyPane) render() []string {
 	var lines []string
 	add := func(l string) { lines = append(lines, l) }
 	addWrapped := func(style func(...string) string, indent, text string) {
-		for i, l := range wrap(t(text), p.w-len(indent)) {
+		for i, l := range report.Wrap(t(text), p.w-len(indent)) {
 			if i > 0 {
 				l = strings.Repeat(" ", len(indent)) + l
 			} else {
@@ -128,7 +129,7 @@ func (p *anatomyPane) render() []string {
 	// addLabeled hangs wrapped text after a label column.
 	addLabeled := func(label, text string) {
 		lw := lipgloss.Width(t("Θvib")) + 3
-		for i, l := range wrap(t(text), p.w-lw) {
+		for i, l := range report.Wrap(t(text), p.w-lw) {
 			head := strings.Repeat(" ", lw)
 			if i == 0 {
 				head = padRight(t(label), lw)
@@ -145,7 +146,7 @@ func (p *anatomyPane) render() []string {
 	sp := term.Species
 	st := &term.State
 	n := len(p.b.state.Species)
-	addWrapped(s.Title.Render, "", fmt.Sprintf("%s, %s: x %s at pᵢ %s, %s K", sp.Formula, sp.Name, sig(term.X, 4), presText(term.PartialPresPa), short(st.TempK, 6)))
+	addWrapped(s.Title.Render, "", fmt.Sprintf("%s, %s: x %s at pᵢ %s, %s K", sp.Formula, sp.Name, report.Sig(term.X, 4), report.PressureAuto(term.PartialPresPa), report.Short(st.TempK, 6)))
 	if n > 1 {
 		add(s.Muted.Render(t(fmt.Sprintf("species %d of %d (←/→ for the others)", i+1, n))))
 	}
@@ -157,9 +158,9 @@ func (p *anatomyPane) render() []string {
 		if f.Name == "translation" {
 			mark = " *"
 		}
-		add(s.Label.Render(padRight(f.Name, lw)) + s.Value.Render(padLeft(fixed(f.SJPerMolK, 3), vw)+padLeft(fixed(f.CpJPerMolK, 3), vw+1)) + mark)
+		add(s.Label.Render(padRight(f.Name, lw)) + s.Value.Render(padLeft(report.Fixed(f.SJPerMolK, 3), vw)+padLeft(report.Fixed(f.CpJPerMolK, 3), vw+1)) + mark)
 	}
-	add(s.Label.Render(padRight("total", lw)) + s.Value.Render(padLeft(fixed(st.SJPerMolK, 3), vw)+padLeft(fixed(st.CpJPerMolK, 3), vw+1)))
+	add(s.Label.Render(padRight("total", lw)) + s.Value.Render(padLeft(report.Fixed(st.SJPerMolK, 3), vw)+padLeft(report.Fixed(st.CpJPerMolK, 3), vw+1)))
 	addWrapped(s.Muted.Render, "", "* Cp = Cv + R: the R, the P dV work of heating at constant pressure, is booked with translation.")
 
 	add("")
@@ -203,7 +204,7 @@ func (p *anatomyPane) thetas(sp *model.Species, addLabeled func(label, text stri
 	list := func(ks []float64, deg func(int) int) string {
 		parts := make([]string, len(ks))
 		for i, k := range ks {
-			parts[i] = sig(k, 4)
+			parts[i] = report.Sig(k, 4)
 			if g := deg(i); g > 1 {
 				parts[i] += fmt.Sprintf(" ×%d", g)
 			}
@@ -230,6 +231,6 @@ func (p *anatomyPane) thetas(sp *model.Species, addLabeled func(label, text stri
 		addLabeled("Θel", ground+" only")
 	}
 	if sp.BoilingK > 0 {
-		addLabeled("Tb", sig(sp.BoilingK, 5)+" K at 1 atm")
+		addLabeled("Tb", report.Sig(sp.BoilingK, 5)+" K at 1 atm")
 	}
 }

@@ -7,6 +7,7 @@ import (
 	"testing"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -83,10 +84,10 @@ func TestAnatomyThetasAndNotes(t *testing.T) {
 	v := p.View()
 	sp, _ := model.Builtin().Lookup("NH3")
 	for _, want := range []string{
-		"Θrot", sig(sp.RotThetaK()[0], 4), "nonlinear, σ = 3",
-		"Θvib", sig(sp.VibThetaK()[2], 4) + " ×2",
+		"Θrot", report.Sig(sp.RotThetaK()[0], 4), "nonlinear, σ = 3",
+		"Θvib", report.Sig(sp.VibThetaK()[2], 4) + " ×2",
 		"ground level g = 1",
-		"boiling point", // 0.9 bar of NH3 at 230 K is above its vapour pressure (about 0.6 bar): the note must say so
+		"above its vapour pressure", // 0.9 bar of NH3 at 230 K is above its vapour pressure (about 0.6 bar): the note must say so
 		"outside model",
 	} {
 		if !strings.Contains(v, want) {

@@ -39,19 +39,19 @@ func (in Inputs) Valid() bool { return in.Mixture != nil && in.TempK > 0 && in.P
 // SweepSettings are the sweep pane's settings, saved with the workbench
 // state. Ranges keep the text the user typed, with units.
 type SweepSettings struct {
-	Var      string `json:"var"`      // "T" or "P"
-	From     string `json:"from"`     // e.g. "200 K"
-	To       string `json:"to"`       // e.g. "1500 K"
-	Steps    int    `json:"steps"`    // points, end points included
-	Log      bool   `json:"log"`      // log grid (P sweeps are always log)
-	Property string `json:"property"` // "S", "Cp", "mu", "H", "G" or "gamma"
-	Species  string `json:"species"`  // formula for per-species μ; "" for the blend
-	Overlay  bool   `json:"overlay"`  // overlay per-species curves
+	Var      mixtures.SweepVar `json:"var"`      // saved as "T" or "P"
+	From     string            `json:"from"`     // e.g. "200 K"
+	To       string            `json:"to"`       // e.g. "1500 K"
+	Steps    int               `json:"steps"`    // points, end points included
+	Log      bool              `json:"log"`      // log grid (P sweeps are always log)
+	Property string            `json:"property"` // "S", "Cp", "mu", "H", "G" or "gamma"
+	Species  string            `json:"species"`  // formula for per-species μ; "" for the blend
+	Overlay  bool              `json:"overlay"`  // overlay per-species curves
 }
 
 // DefaultSweepSettings is the sweep a new workbench starts with.
 func DefaultSweepSettings() SweepSettings {
-	return SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 200, Property: "Cp"}
+	return SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 200, Property: "Cp"}
 }
 
 // SweepKeys are the sweep pane's bindings; they live in KeyMap.Sweep.

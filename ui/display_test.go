@@ -1,8 +1,11 @@
 package ui
 
 import (
+	"path/filepath"
 	"strings"
 	"testing"
+
+	"zmix/mixtures"
 )
 
 // screenTour is a walk through every pane, overlay and prompt of the
@@ -92,11 +95,11 @@ func TestValidityCautionInSight(t *testing.T) {
 			}
 		}
 		press(t, r, "3")
-		if screen := r.View(); !strings.Contains(screen, "! caution: NH3: pressure is") {
+		if screen := r.View(); !strings.Contains(screen, "! caution: NH3: partial pressure is") {
 			t.Errorf("%dx%d: Properties lacks the caution line:\n%s", size[0], size[1], screen)
 		}
 		press(t, r, "!")
-		if screen := r.View(); !strings.Contains(screen, "* caution: NH3: pressure is") {
+		if screen := r.View(); !strings.Contains(screen, "* caution: NH3: partial pressure is") {
 			t.Errorf("%dx%d: the safety overlay lacks the caution in full:\n%s", size[0], size[1], screen)
 		}
 	}
@@ -125,4 +128,46 @@ func TestHeadlineMarkedStale(t *testing.T) {
 	if f := strings.Fields(h); len(f) > 0 && strings.Contains("MρCpγc", f[len(f)-1]) {
 		t.Errorf("key figures = %q: a figure's value is cut off", h)
 	}
+}
+
+// Pressures show in the unit typed and the reading chosen everywhere: tab
+// bar, Setpoint, Properties, the sweep's header, axis and cursor; the
+// choice survives opening a file (issue 7, item 9).
+func TestPressureViewEverywhere(t *testing.T) {
+	dir := t.TempDir()
+	r := testRoot(t, 120, 40, testRootOpts{stateDir: dir})
+	press(t, r, "2", "g")
+	check := func(when string, want ...string) {
+		t.Helper()
+		screen := r.View()
+		if strings.Contains(screen, "bar abs") {
+			t.Errorf("%s: an absolute pressure on a gauge screen:\n%s", when, screen)
+		}
+		for _, w := range want {
+			if !strings.Contains(screen, w) {
+				t.Errorf("%s: screen lacks %q:\n%s", when, w, screen)
+			}
+		}
+	}
+	check("gauge view", "295.15 K · 0.38675 barg", "295.15 K, 0.38675 barg", "0.38675 barg,", "entered as")
+	press(t, r, "4")
+	check("T sweep", "at P = 0.38675 barg")
+	press(t, r, "v")
+	check("P sweep", "P in barg", " barg (point")
+
+	// A range typed in psig is shown in psig.
+	walk(t, r, []string{"e", "ctrl+u", "type:5..150 psig", "enter"})
+	check("psig range", "P in psig", " psig (point")
+
+	f := mixtures.DemoFile()
+	f.Pressure = "2 bar"
+	path := filepath.Join(dir, "other.json")
+	if err := f.Save(path); err != nil {
+		t.Fatal(err)
+	}
+	walk(t, r, []string{"ctrl+o", "ctrl+u", "type:" + path, "enter"})
+	if !r.b.showGauge {
+		t.Fatalf("opening a file reset the pressure view to absolute (status %q)", r.status)
+	}
+	check("after ctrl+o", "0.98675 barg") // 2 bar absolute
 }

@@ -14,6 +14,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 var blendAir = mixtures.BlendFile{
@@ -218,10 +219,29 @@ func TestSaveRefusesInvalidRecipe(t *testing.T) {
 func TestExportReadout(t *testing.T) {
 	dir := t.TempDir()
 	r := testRoot(t, 80, 24, testRootOpts{stateDir: dir})
-	st := r.b.state
+	// What zmix state prints for the demo blend at its conditions.
+	st := engineState(t, "SiH4 4%, NH3 18%, H2 500ppm, N2 bal", 295.15, 1.4e5)
+	mix, err := mixtures.ParseBlend("SiH4 4%, NH3 18%, H2 500ppm, N2 bal")
+	if err != nil {
+		t.Fatal(err)
+	}
+	m, err := mix.Resolve(model.Builtin(), 1.4e5)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rep := &report.StateReport{State: &st, PresText: "1.4 bar", Cautions: mixtures.Cautions(m, 1.4e5), Notes: mixtures.Notes(&st, false)}
 	var wantCSV, wantJSON bytes.Buffer
-	mixtures.WriteCSV(&wantCSV, []mixtures.State{st}, false)
-	mixtures.WriteJSON(&wantJSON, &st, false)
+	if err := report.WriteStateCSV(&wantCSV, rep); err != nil {
+		t.Fatal(err)
+	}
+	if err := report.WriteStateJSON(&wantJSON, rep); err != nil {
+		t.Fatal(err)
+	}
+	for _, key := range []string{`"cautions": [`, `"notes": [`, "Pyrophoric (SiH4)", `"real_gas": {`} {
+		if !strings.Contains(wantJSON.String(), key) {
+			t.Fatalf("the state command's JSON lacks %q; the test no longer checks the safety text", key)
+		}
+	}
 	for name, want := range map[string][]byte{"out.csv": wantCSV.Bytes(), "out.json": wantJSON.Bytes()} {
 		press(t, r, "ctrl+e", "ctrl+u")
 		typeIn(t, r, name)

@@ -3,6 +3,7 @@ package ui
 import (
 	"math"
 	"strings"
+	"unicode/utf8"
 
 	"github.com/NimbleMarkets/ntcharts/canvas"
 	"github.com/NimbleMarkets/ntcharts/canvas/graph"
@@ -36,12 +37,14 @@ type plotSeries struct {
 
 // plotSpec is what the plot shows.
 type plotSpec struct {
-	grid   []float64 // the swept variable in data units (K, Pa), monotone
-	xScale float64   // display units per data unit (1e-5 shows Pa in bar)
-	xLog   bool
-	xLabel string
-	yLabel string
-	series []plotSeries
+	grid []float64 // the swept variable in data units (K, Pa), monotone
+	// xDisplay converts a grid value to the axis unit (Pa to psig), and
+	// xData back; nil for the identity. Both must increase together.
+	xDisplay, xData func(float64) float64
+	xLog            bool
+	xLabel          string
+	yLabel          string
+	series          []plotSeries
 }
 
 // plotSample is the legend's picture of curve k.
@@ -138,6 +141,8 @@ type plotModel struct {
 	cells        []rune  // the drawn chart below the label line, (plotH+2)×w
 	cls          []uint8
 
+	covered []int // by curve: the curve drawn over it, or -1
+
 	cursor int // grid index, or -1
 	lines  []string
 }
@@ -180,8 +185,8 @@ func (pl *plotModel) setSpec(spec plotSpec) {
 	if len(spec.series) > plotMaxSeries {
 		spec.series = spec.series[:plotMaxSeries]
 	}
-	if spec.xScale == 0 {
-		spec.xScale = 1
+	if spec.xDisplay == nil || spec.xData == nil {
+		spec.xDisplay, spec.xData = plotIdentity, plotIdentity
 	}
 	pl.spec = spec
 	pl.yMin, pl.yMax = math.Inf(1), math.Inf(-1)
@@ -291,10 +296,13 @@ func (pl *plotModel) layout() {
 	pl.render()
 }
 
-// xTicks places the x-axis ticks in display units.
+func plotIdentity(x float64) float64 { return x }
+
+// xTicks places the x-axis ticks at round values of the axis unit. On a
+// log axis whose unit reads below zero (gauge, from below the atmosphere)
+// round values are spaced linearly; drawing keeps the labels apart.
 func (pl *plotModel) xTicks() []plotTick {
-	s := pl.spec.xScale
-	lo, hi := pl.xAxis.lo*s, pl.xAxis.hi*s
+	lo, hi := pl.spec.xDisplay(pl.xAxis.lo), pl.spec.xDisplay(pl.xAxis.hi)
 	target := min(max(pl.plotW/10, 2), 8)
 	var vals []float64
 	var labels []string
@@ -315,7 +323,7 @@ func (pl *plotModel) xTicks() []plotTick {
 	}
 	ticks := make([]plotTick, 0, len(vals))
 	for i, v := range vals {
-		pos := int(math.Round(pl.xAxis.frac(v/s) * float64(pl.plotW-1)))
+		pos := int(math.Round(pl.xAxis.frac(pl.spec.xData(v)) * float64(pl.plotW-1)))
 		if pos < 0 || pos >= pl.plotW {
 			continue
 		}
@@ -455,12 +463,14 @@ func (pl *plotModel) draw(yTicks, xTicks []plotTick) {
 	// Markers first, the last series lowest; then the line curve on top,
 	// so the blend's curve is never hidden behind a species'.
 	x0 := ox + 1
+	marked := make([][]int, len(pl.spec.series)) // the cells each marker curve drew
 	for k := len(pl.spec.series) - 1; k >= 1; k-- {
 		m := plotMarkers[(k-1)%len(plotMarkers)]
 		c := plotClsSeries + uint8(k)
 		for _, run := range plotTrace(pl.envelope(pl.spec.series[k], pl.sub), pl.plotH) {
 			for _, p := range run {
 				put(x0+p.X, p.Y, m, c)
+				marked[k] = append(marked[k], p.Y*w+x0+p.X)
 			}
 		}
 	}
@@ -496,6 +506,8 @@ func (pl *plotModel) draw(yTicks, xTicks []plotTick) {
 		}
 	}
 
+	pl.findCovered(marked, cls)
+
 	// The frame.
 	for y := 0; y < ax; y++ {
 		put(ox, y, g.vert, plotClsAxis)
@@ -508,24 +520,46 @@ func (pl *plotModel) draw(yTicks, xTicks []plotTick) {
 		put(ox, t.pos, g.yTick, plotClsAxis)
 		text(ox-len(t.label), t.pos, t.label, plotClsTick)
 	}
-	// x tick labels centred under their ticks, never overlapping each
-	// other or the axis name at the right end.
-	name := pl.spec.xLabel
+	// x tick labels centred under their ticks, kept inside the row and
+	// never overlapping: the first and last ticks are labelled first, the
+	// ticks between them where there is room. The axis name goes on the
+	// label line when it fits there (render), else at the row's right end.
 	limit := w
-	if len(name)+2 <= w-x0 {
+	if name := pl.spec.xLabel; !pl.xNameOnTop() && len(name)+2 <= w-x0 {
 		limit = w - len(name) - 1
 		text(w-len(name), ax+1, name, plotClsTick)
 	}
-	end := -1
+	place := func(t plotTick) (int, int) {
+		start := max(x0+t.pos-len(t.label)/2, 0)
+		if start+len(t.label) > limit {
+			start = max(limit-len(t.label), 0)
+		}
+		return start, start + len(t.label)
+	}
 	for _, t := range xTicks {
 		put(x0+t.pos, ax, g.xTick, plotClsAxis)
-		start := x0 + t.pos - len(t.label)/2
-		start = max(start, 0)
-		if start <= end || start+len(t.label) > limit {
-			continue
+	}
+	if n := len(xTicks); n > 0 {
+		firstEnd, lastStart := -1, limit+1
+		fs, fe := place(xTicks[0])
+		text(fs, ax+1, xTicks[0].label, plotClsTick)
+		firstEnd = fe
+		if n > 1 {
+			ls, _ := place(xTicks[n-1])
+			if ls > firstEnd {
+				text(ls, ax+1, xTicks[n-1].label, plotClsTick)
+				lastStart = ls
+			}
 		}
-		text(start, ax+1, t.label, plotClsTick)
-		end = start + len(t.label)
+		end := firstEnd
+		for _, t := range xTicks[1:max(n-1, 1)] {
+			st, e := place(t)
+			if st <= end || e >= lastStart {
+				continue
+			}
+			text(st, ax+1, t.label, plotClsTick)
+			end = e
+		}
 	}
 
 	pl.cells = make([]rune, w*rows)
@@ -535,6 +569,58 @@ func (pl *plotModel) draw(yTicks, xTicks []plotTick) {
 		}
 	}
 	pl.cls = cls
+}
+
+// plotAgainst joins the y and x axis names on the label line.
+const plotAgainst = "  against "
+
+// xNameOnTop reports whether the x axis name fits on the label line,
+// after the y axis name, leaving the tick row to the tick labels.
+func (pl *plotModel) xNameOnTop() bool {
+	return utf8.RuneCountInString(pl.spec.yLabel)+len(plotAgainst)+utf8.RuneCountInString(pl.spec.xLabel) <= pl.w
+}
+
+// findCovered notes, for each marker curve, the curve drawn over most of
+// it when little of it is left in sight (a species that coincides with the
+// blend), so that the legend can say where it is.
+func (pl *plotModel) findCovered(marked [][]int, cls []uint8) {
+	pl.covered = make([]int, len(pl.spec.series))
+	for k := range pl.covered {
+		pl.covered[k] = -1
+		cells := marked[k]
+		if len(cells) == 0 {
+			continue
+		}
+		seen := 0
+		over := make([]int, len(pl.spec.series))
+		for _, i := range cells {
+			owner := int(cls[i]) - int(plotClsSeries)
+			if owner == k {
+				seen++
+			} else if owner >= 0 && owner < len(over) {
+				over[owner]++
+			}
+		}
+		if 4*seen >= len(cells) {
+			continue // a quarter or more in sight: it can be followed
+		}
+		best := 0
+		for j, n := range over {
+			if n > over[best] {
+				best = j
+			}
+		}
+		pl.covered[k] = best
+	}
+}
+
+// coveredBy returns the curve drawn over most of curve k, or -1 when
+// curve k can be seen.
+func (pl *plotModel) coveredBy(k int) int {
+	if !pl.ok || k < 0 || k >= len(pl.covered) {
+		return -1
+	}
+	return pl.covered[k]
 }
 
 // cursorColumn is the canvas column of grid index i.
@@ -556,7 +642,10 @@ func (pl *plotModel) render() {
 	}
 	lines := make([]string, 0, rows+1)
 	label := pl.spec.yLabel
-	if len(label) > w {
+	if pl.xNameOnTop() {
+		label += plotAgainst + pl.spec.xLabel
+	}
+	if utf8.RuneCountInString(label) > w {
 		label = string([]rune(label)[:w])
 	}
 	lines = append(lines, pl.wraps[plotClsTick].open+label+pl.wraps[plotClsTick].close)

@@ -20,7 +20,7 @@ func plotTestSpec(n int, lo, hi float64, log bool, fs ...func(x float64) float64
 			grid[i] = lo + f*(hi-lo)
 		}
 	}
-	spec := plotSpec{grid: grid, xScale: 1, xLog: log, xLabel: "T / K", yLabel: "y / 1"}
+	spec := plotSpec{grid: grid, xLog: log, xLabel: "T / K", yLabel: "y / 1"}
 	for k, f := range fs {
 		f := f
 		spec.series = append(spec.series, plotSeries{name: "s" + strconv.Itoa(k), y: func(i int) float64 { return f(grid[i]) }})
@@ -202,7 +202,7 @@ func TestPlotASCIIRunes(t *testing.T) {
 		func(x float64) float64 { return math.Log(x) },
 		func(x float64) float64 { return -math.Log(x) },
 		func(x float64) float64 { return math.Sin(math.Log(x)) })
-	spec.xScale, spec.xLabel = 1e-5, "P / bar"
+	spec.xDisplay, spec.xData, spec.xLabel = func(pa float64) float64 { return pa / 1e5 }, func(bar float64) float64 { return bar * 1e5 }, "P / bar"
 	pl := plotTestModel(spec, 80, 20, true)
 	pl.setCursor(2500)
 	lines := pl.view()
@@ -314,5 +314,59 @@ func BenchmarkPlotCursor(b *testing.B) {
 	for i := 0; i < b.N; i++ {
 		pl.setCursor(i % 1000)
 		plotSink = pl.view()
+	}
+}
+
+// The first and last ticks of an axis always carry their labels, at every
+// width, on linear, log and gauge axes (issue 7, item 10).
+func TestPlotEndTicksLabelled(t *testing.T) {
+	gauge := func(spec plotSpec) plotSpec {
+		psi := 6894.757293168361 // Pa per psi: 1 lbf/in²
+		spec.xDisplay = func(pa float64) float64 { return (pa - 101325) / psi }
+		spec.xData = func(v float64) float64 { return v*psi + 101325 }
+		spec.xLabel = "P in psig"
+		return spec
+	}
+	for _, c := range []struct {
+		name string
+		spec plotSpec
+	}{
+		{"T 200..1500 K", plotTestSpec(200, 200, 1500, false, func(x float64) float64 { return x })},
+		{"P 1..100 bar, log", plotTestSpec(200, 1e5, 1e7, true, math.Log)},
+		{"P 0.5..20 bar, log", plotTestSpec(200, 0.5e5, 20e5, true, math.Log)},
+		{"P 1 bar..150 psig, log, gauge", gauge(plotTestSpec(200, 1e5, 150*6894.757293168361+101325, true, math.Log))},
+	} {
+		for _, w := range []int{40, 60, 78, 118, 198} {
+			pl := plotTestModel(c.spec, w, 16, true)
+			ticks := pl.xTicks()
+			if len(ticks) < 2 {
+				t.Errorf("%s at %d: %d ticks", c.name, w, len(ticks))
+				continue
+			}
+			row := strings.ReplaceAll(string(pl.cells[(pl.plotH+1)*pl.w:(pl.plotH+2)*pl.w]), "\x00", " ")
+			for _, tk := range []plotTick{ticks[0], ticks[len(ticks)-1]} {
+				if !strings.Contains(" "+row+" ", " "+tk.label+" ") {
+					t.Errorf("%s at %d: end tick %q has no label in %q", c.name, w, tk.label, row)
+				}
+			}
+		}
+	}
+}
+
+// A curve drawn under another is named in the legend's terms: the plot
+// knows which curve covers it (issue 7, item 10).
+func TestPlotCoveredCurve(t *testing.T) {
+	spec := plotTestSpec(300, 200, 1500, false,
+		func(x float64) float64 { return x },
+		func(x float64) float64 { return x },        // on the first curve
+		func(x float64) float64 { return 1500 - x }) // crosses it
+	for _, ascii := range []bool{true, false} {
+		pl := plotTestModel(spec, 80, 20, ascii)
+		if got := pl.coveredBy(1); got != 0 {
+			t.Errorf("ascii %v: curve 1 lies on curve 0; coveredBy = %d", ascii, got)
+		}
+		if got := pl.coveredBy(2); got != -1 {
+			t.Errorf("ascii %v: curve 2 can be seen; coveredBy = %d", ascii, got)
+		}
 	}
 }

@@ -265,12 +265,14 @@ func (r *root) export(path string) {
 			r.setError("nothing to export: " + r.b.stateErr)
 			return
 		}
-		st := r.b.state
+		// The state command's writers: the file holds what
+		// zmix state --json (or --csv) prints, cautions and notes included.
+		rep := r.b.stateReport()
 		write = func(w io.Writer) error {
 			if asJSON {
-				return mixtures.WriteJSON(w, &st, gauge)
+				return report.WriteStateJSON(w, rep)
 			}
-			return mixtures.WriteCSV(w, []mixtures.State{st}, gauge)
+			return report.WriteStateCSV(w, rep)
 		}
 	}
 	if err := mixtures.WriteFileAtomicFunc(path, 0o666, write); err != nil {

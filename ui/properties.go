@@ -6,6 +6,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 
 	"github.com/charmbracelet/bubbles/key"
@@ -86,7 +87,20 @@ func (p *propertiesPane) wantHeight(avail int) int {
 	if p.b.in.Mixture != nil {
 		nSpecies = len(p.b.in.Mixture.Components) + len(cautionNotes(p.b.notes)) // a caution line each
 	}
-	return max(10, min(20+nSpecies, avail-16))
+	// The figures' rows, the heading, per-kg, mixing and real-gas lines,
+	// the species table's heading and the frame.
+	return max(10, min(readoutRowCount()+10+nSpecies, avail-16))
+}
+
+// readoutRowCount is how many figures readoutRows gives.
+func readoutRowCount() int {
+	n := 0
+	for i := range mixtures.Quantities {
+		if q := &mixtures.Quantities[i]; q.Section == mixtures.SectionMixture && q.Key != mixingKey {
+			n++
+		}
+	}
+	return n
 }
 
 // readoutRow is one figure of the blend, per mole and per kilogram.
@@ -97,39 +111,55 @@ type readoutRow struct {
 	shortLabel, extra string
 }
 
-// readoutRows formats the blend's figures with the same digits as the
-// state command.
+// readoutRows formats the blend's figures, as the state command does,
+// from the quantity table: every figure of the mixture section except the
+// mixing entropy, which has a line of its own.
 func (p *propertiesPane) readoutRows() []readoutRow {
 	st := &p.b.state
-	perKg := func(x float64) float64 { return st.PerKg(x) }
-	jmk, jkk := "J/(mol·K)", "J/(kg·K)"
-	return []readoutRow{
-		{label: "molar mass M", shortLabel: "M", perMol: sig(1000*st.MolarMassKgPerMol, 6), molUnit: "g/mol"},
-		{label: "density ρ", shortLabel: "ρ", perMol: sig(st.DensityKgPerM3, 5), molUnit: "kg/m³"},
-		{label: "heat capacity Cp", shortLabel: "Cp", perMol: sig(st.CpJPerMolK, 5), molUnit: jmk, perKg: sig(perKg(st.CpJPerMolK), 5), kgUnit: jkk},
-		{label: "heat capacity Cv", shortLabel: "Cv", perMol: sig(st.CvJPerMolK, 5), molUnit: jmk, perKg: sig(perKg(st.CvJPerMolK), 5), kgUnit: jkk},
-		{label: "γ = Cp/Cv", shortLabel: "γ", perMol: sig(st.Gamma, 5)},
-		{label: "speed of sound c", shortLabel: "c", perMol: sig(st.SoundSpeedMPerS, 5), molUnit: "m/s"},
-		{label: "enthalpy H", shortLabel: "H", perMol: fixed(st.HJPerMol/1000, 3), molUnit: "kJ/mol", perKg: fixed(perKg(st.HJPerMol)/1000, 3), kgUnit: "kJ/kg"},
-		{label: "internal energy U", shortLabel: "U", perMol: fixed(st.UJPerMol/1000, 3), molUnit: "kJ/mol", perKg: fixed(perKg(st.UJPerMol)/1000, 3), kgUnit: "kJ/kg"},
-		{label: "entropy S", shortLabel: "S", perMol: sig(st.SJPerMolK, 6), molUnit: jmk, perKg: sig(perKg(st.SJPerMolK), 6), kgUnit: jkk},
-		{label: "Gibbs energy G", shortLabel: "G", perMol: fixed(st.GJPerMol/1000, 3), molUnit: "kJ/mol", perKg: fixed(perKg(st.GJPerMol)/1000, 3), kgUnit: "kJ/kg"},
-		{label: "Helmholtz energy A", shortLabel: "A", perMol: fixed(st.AJPerMol/1000, 3), molUnit: "kJ/mol", perKg: fixed(perKg(st.AJPerMol)/1000, 3), kgUnit: "kJ/kg"},
+	var rows []readoutRow
+	for i := range mixtures.Quantities {
+		q := &mixtures.Quantities[i]
+		if q.Section != mixtures.SectionMixture || q.Key == mixingKey {
+			continue
+		}
+		r := readoutRow{label: q.Label, shortLabel: p.symbol(q), perMol: quantityText(q, q.Get(st)), molUnit: p.unit(q.Unit, q.UnitASCII)}
+		if q.HasPerKg() {
+			r.perKg, r.kgUnit = quantityText(q, q.PerKg(st)), p.unit(q.PerKgUnit, q.PerKgUnitASCII)
+		}
+		rows = append(rows, r)
 	}
+	return rows
 }
 
-// speciesCells formats one species with the same digits as the state command.
-func speciesCells(b *bench, i int) []string {
-	t := &b.state.Species[i]
-	return []string{
-		t.Species.Formula,
-		sig(t.X, 4),
-		sig(t.MassFrac, 4),
-		sig(t.PartialPresPa/1000, 4),
-		fixed(t.MuJPerMol/1000, 3),
-		sig(t.SJPerMolK, 5),
-		sig(t.CpJPerMolK, 4),
+// mixingKey is the quantity the readout gives a line of its own.
+const mixingKey = "Smix"
+
+// symbol and unit pick the quantity table's glyphs or its ASCII forms.
+func (p *propertiesPane) symbol(q *mixtures.Quantity) string {
+	if p.c.ASCII {
+		return q.SymbolASCII
 	}
+	return q.Symbol
+}
+
+func (p *propertiesPane) unit(glyphs, ascii string) string {
+	if p.c.ASCII {
+		return ascii
+	}
+	return glyphs
+}
+
+// speciesKeys are the species quantities of the workbench's table, in the
+// table's order; mass ("w") is left out first when the pane is narrow.
+var speciesKeys = []string{"x", "w", "p", "mu", "S", "Cp"}
+
+// speciesNameWidth is the width of the table's first column.
+const speciesNameWidth = 7
+
+// speciesColumnWidth leaves a value of the table's digits and its unit a
+// space to spare.
+func speciesColumnWidth(q *mixtures.SpeciesQuantity) int {
+	return max(10, lipgloss.Width(q.Unit)+1)
 }
 
 func (p *propertiesPane) refresh() {
@@ -142,13 +172,13 @@ func (p *propertiesPane) render() []string {
 	var lines []string
 	add := func(l string) { lines = append(lines, l) }
 	if p.b.stateErr != "" || !p.b.in.Valid() {
-		for _, l := range wrap(t(p.b.stateErr), p.w) {
+		for _, l := range report.Wrap(t(p.b.stateErr), p.w) {
 			add(s.Error.Render(l))
 		}
 		return lines
 	}
 	in := p.b.in
-	head := short(in.TempK, 6) + " K, " + p.b.presShown(in.PresPa) + ", P° " + p.b.stdText()
+	head := report.Short(in.TempK, 6) + " K, " + p.b.presShown(in.PresPa) + ", P° " + p.b.stdText()
 	// The mark of an entry in error goes on the heading line when it fits,
 	// so that the figures under it do not move: a typing slip then
 	// redraws one line here, not the whole readout.
@@ -160,7 +190,7 @@ func (p *propertiesPane) render() []string {
 		add(s.Title.Render(t(head)) + s.Warning.Render(t(stale)))
 	default:
 		add(s.Title.Render(t(head)))
-		for _, l := range wrap(t("last valid state: an entry has an error (see Recipe / Setpoint)"), p.w) {
+		for _, l := range report.Wrap(t("last valid state: an entry has an error (see Recipe / Setpoint)"), p.w) {
 			add(s.Warning.Render(l))
 		}
 	}
@@ -172,18 +202,18 @@ func (p *propertiesPane) render() []string {
 	notes := cautionNotes(p.b.notes)
 	var full []string
 	for _, note := range notes {
-		full = append(full, wrap(t("! "+noteLine(note)), p.w)...)
+		full = append(full, report.Wrap(t("! "+report.NoteText(note)), p.w)...)
 	}
-	if len(lines)+len(full)+1+len(rows)+1+4+n <= p.h {
+	if len(lines)+len(full)+1+len(rows)+2+4+n <= p.h {
 		for _, l := range full {
 			add(s.Caution.Render(l))
 		}
 	} else {
 		for _, note := range notes {
-			add(s.Caution.Render(p.c.shorten("! "+noteLine(note), p.w)))
+			add(s.Caution.Render(p.c.shorten("! "+report.NoteText(note), p.w)))
 		}
 	}
-	oneCol := len(lines) + 1 + len(rows) + 1 + 4 + n
+	oneCol := len(lines) + 1 + len(rows) + 2 + 4 + n // + the mixing and real-gas lines
 	if p.h < oneCol && p.w >= 60 {
 		p.twoColumns(rows, add)
 	} else {
@@ -209,6 +239,7 @@ func (p *propertiesPane) oneColumn(rows []readoutRow, add func(string)) {
 		add(strings.TrimRight(line, " "))
 	}
 	p.mixingLine(lw, vw, add)
+	p.realGasLine(add)
 }
 
 // twoColumns packs the figures per mole side by side, for short panes.
@@ -229,13 +260,15 @@ func (p *propertiesPane) twoColumns(rows []readoutRow, add func(string)) {
 		add(strings.TrimRight(line, " "))
 	}
 	p.mixingLine(lw+8, vw, add)
+	p.realGasLine(add)
 }
 
 func (p *propertiesPane) mixingLine(lw, vw int, add func(string)) {
 	s := p.c.Styles
 	t := p.c.Text
-	line := s.Label.Render(padRight("mixing entropy", lw)) + s.Value.Render(padLeft(sig(p.b.state.SMixJPerMolK, 5), vw)) + " " +
-		s.Unit.Render(t("J/(mol·K)"))
+	q, _ := mixtures.QuantityByKey(mixingKey)
+	line := s.Label.Render(padRight(t(q.Label), lw)) + s.Value.Render(padLeft(quantityText(q, q.Get(&p.b.state)), vw)) + " " +
+		s.Unit.Render(p.unit(q.Unit, q.UnitASCII))
 	note := t("  −R Σ xᵢ ln xᵢ, part of S")
 	if lipgloss.Width(line)+lipgloss.Width(note) > p.w {
 		add(line)
@@ -245,56 +278,75 @@ func (p *propertiesPane) mixingLine(lw, vw int, add func(string)) {
 	add(line + s.Muted.Render(note))
 }
 
-// speciesColumns are the table's headings and widths; mass goes first
-// when the pane is narrow.
-var speciesColumns = []struct {
-	head, unit string
-	width      int
-}{
-	{"species", "", 7}, {"x", "mol/mol", 10}, {"mass", "kg/kg", 10}, {"pᵢ", "kPa", 9},
-	{"μᵢ", "kJ/mol", 10}, {"Sᵢ", "J/(mol·K)", 10}, {"Cpᵢ", "J/(mol·K)", 10},
+// realGasLine gives the real-gas figures of the quantity table on one
+// line, with the model that gives them: they stand beside the ideal-gas
+// figures and do not replace them.
+func (p *propertiesPane) realGasLine(add func(string)) {
+	s := p.c.Styles
+	t := p.c.Text
+	st := &p.b.state
+	line := s.Label.Render("real gas ")
+	if !st.RealGasKnown {
+		add(line + s.Muted.Render(t(" not known: no critical constants")))
+		return
+	}
+	for i := range mixtures.Quantities {
+		q := &mixtures.Quantities[i]
+		if q.Section != mixtures.SectionRealGas {
+			continue
+		}
+		item := " " + p.symbol(q) + " " + quantityText(q, q.Get(st))
+		if u := p.unit(q.Unit, q.UnitASCII); u != "" {
+			item += " " + u
+		}
+		line += s.Value.Render(t(item))
+	}
+	if model := "  " + st.RealGas.Model.String(); lipgloss.Width(line)+lipgloss.Width(model) <= p.w {
+		line += s.Muted.Render(t(model))
+	}
+	add(line)
 }
 
 func (p *propertiesPane) speciesTable(add func(string)) {
 	s := p.c.Styles
 	t := p.c.Text
-	full := 0
-	for _, c := range speciesColumns {
-		full += c.width
+	var cols []*mixtures.SpeciesQuantity
+	full := speciesNameWidth
+	for _, k := range speciesKeys {
+		if q, ok := mixtures.SpeciesQuantityByKey(k); ok {
+			cols = append(cols, q)
+			full += speciesColumnWidth(q)
+		}
 	}
 	skipMass := p.w < full
 	add("")
-	var h1, h2 strings.Builder
-	for i, c := range speciesColumns {
-		if skipMass && i == 2 {
+	h1 := padRight(t("species"), speciesNameWidth)
+	h2 := strings.Repeat(" ", speciesNameWidth)
+	for _, q := range cols {
+		if skipMass && q.Key == "w" {
 			continue
 		}
-		if i == 0 {
-			h1.WriteString(padRight(t(c.head), c.width))
-			h2.WriteString(strings.Repeat(" ", c.width))
-			continue
+		label := q.Label
+		if p.c.ASCII {
+			label = q.LabelASCII
 		}
-		h1.WriteString(padLeft(t(c.head), c.width))
-		h2.WriteString(padLeft(t(c.unit), c.width))
+		h1 += padLeft(label, speciesColumnWidth(q))
+		h2 += padLeft(p.unit(q.Unit, q.UnitASCII), speciesColumnWidth(q))
 	}
-	add(s.Label.Render(h1.String()))
-	add(s.Unit.Render(h2.String()))
+	add(s.Label.Render(h1))
+	add(s.Unit.Render(h2))
 	for i := range p.b.state.Species {
-		cells := speciesCells(p.b, i)
-		var row strings.Builder
-		for j, c := range speciesColumns {
-			if skipMass && j == 2 {
+		sp := &p.b.state.Species[i]
+		row := padRight(t(sp.Species.Formula), speciesNameWidth)
+		for _, q := range cols {
+			if skipMass && q.Key == "w" {
 				continue
 			}
-			if j == 0 {
-				row.WriteString(padRight(t(cells[0]), c.width))
-				continue
-			}
-			row.WriteString(padLeft(cells[j], c.width))
+			row += padLeft(report.Number(q.Get(sp)*q.Scale, q.Digits), speciesColumnWidth(q))
 		}
-		add(s.Value.Render(row.String()))
+		add(s.Value.Render(row))
 	}
-	for _, l := range wrap(t("each species at its partial pressure pᵢ; μᵢ = μᵢ°(T) + RT ln(xᵢP/P°), elements at 0 K as zero"), p.w) {
+	for _, l := range report.Wrap(t("each species at its partial pressure pᵢ; μᵢ = μᵢ°(T) + RT ln(xᵢP/P°), elements at 0 K as zero"), p.w) {
 		add(s.Muted.Render(l))
 	}
 }
@@ -348,11 +400,7 @@ func (p *propertiesPane) headline(w int) string {
 // quantityText writes a figure in display units with the digits its row
 // of the quantity table gives.
 func quantityText(q *mixtures.Quantity, si float64) string {
-	v := si * q.Scale
-	if q.Digits.Decimals > 0 {
-		return fixed(v, q.Digits.Decimals)
-	}
-	return sig(v, q.Digits.Sig)
+	return report.Number(si*q.Scale, q.Digits)
 }
 
 // cautionNotes are the validity notes at caution level or worse: those the
@@ -365,12 +413,4 @@ func cautionNotes(notes []mixtures.StateNote) []mixtures.StateNote {
 		}
 	}
 	return out
-}
-
-// noteLine is a validity note as the state command writes it.
-func noteLine(n mixtures.StateNote) string {
-	if n.Species == "" {
-		return n.Severity.String() + ": " + n.Text
-	}
-	return n.Severity.String() + ": " + n.Species + ": " + n.Text
 }

@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -42,16 +43,16 @@ func engineState(t *testing.T, blend string, tempK, presPa float64) mixtures.Sta
 // as the state command formats them.
 func wantReadout(st *mixtures.State, perKg bool) []string {
 	want := []string{
-		sig(1000*st.MolarMassKgPerMol, 6), sig(st.DensityKgPerM3, 5), sig(st.CpJPerMolK, 5), sig(st.CvJPerMolK, 5),
-		sig(st.Gamma, 5), sig(st.SoundSpeedMPerS, 5), fixed(st.HJPerMol/1000, 3), fixed(st.UJPerMol/1000, 3),
-		sig(st.SJPerMolK, 6), fixed(st.GJPerMol/1000, 3), fixed(st.AJPerMol/1000, 3), sig(st.SMixJPerMolK, 5),
+		report.Sig(1000*st.MolarMassKgPerMol, 6), report.Sig(st.DensityKgPerM3, 5), report.Sig(st.CpJPerMolK, 5), report.Sig(st.CvJPerMolK, 5),
+		report.Sig(st.Gamma, 5), report.Sig(st.SoundSpeedMPerS, 5), report.Fixed(st.HJPerMol/1000, 3), report.Fixed(st.UJPerMol/1000, 3),
+		report.Sig(st.SJPerMolK, 6), report.Fixed(st.GJPerMol/1000, 3), report.Fixed(st.AJPerMol/1000, 3), report.Sig(st.SMixJPerMolK, 5),
 	}
 	if perKg {
-		want = append(want, sig(st.PerKg(st.CpJPerMolK), 5), fixed(st.PerKg(st.GJPerMol)/1000, 3))
+		want = append(want, report.Sig(st.PerKg(st.CpJPerMolK), 5), report.Fixed(st.PerKg(st.GJPerMol)/1000, 3))
 	}
 	for _, t := range st.Species {
-		want = append(want, t.Species.Formula+" ", sig(t.X, 4), sig(t.PartialPresPa/1000, 4),
-			fixed(t.MuJPerMol/1000, 3), sig(t.SJPerMolK, 5), sig(t.CpJPerMolK, 4))
+		want = append(want, t.Species.Formula+" ", report.Sig(t.X, 4), report.Sig(t.PartialPresPa/1000, 4),
+			report.Fixed(t.MuJPerMol/1000, 3), report.Sig(t.SJPerMolK, 5), report.Sig(t.CpJPerMolK, 4))
 	}
 	return want
 }

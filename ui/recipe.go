@@ -6,6 +6,7 @@ import (
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
 
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -227,7 +228,7 @@ func (p *recipePane) refresh() {
 		}
 		x := ""
 		if v, ok := p.b.moleFraction(e.Species); ok {
-			x = sig(v, 4)
+			x = report.Sig(v, 4)
 		}
 		name := padRight(p.c.Text(e.Species), sw)
 		if i == p.sel {
@@ -238,7 +239,7 @@ func (p *recipePane) refresh() {
 		}
 		lines = append(lines, mark+name+" "+amt+" "+s.Value.Render(x))
 		if i < len(p.b.rowErr) && p.b.rowErr[i] != "" {
-			for _, l := range wrap(p.c.Text(p.b.rowErr[i]), p.w-4) {
+			for _, l := range report.Wrap(p.c.Text(p.b.rowErr[i]), p.w-4) {
 				lines = append(lines, "    "+s.Error.Render(l))
 			}
 		}
@@ -250,12 +251,12 @@ func (p *recipePane) refresh() {
 		lines = append(lines, s.Muted.Render("  (no species: press a to add one)"))
 	}
 	if p.b.blendErr != "" {
-		for _, l := range wrap(p.c.Text(p.b.blendErr), p.w-2) {
+		for _, l := range report.Wrap(p.c.Text(p.b.blendErr), p.w-2) {
 			lines = append(lines, s.Error.Render(l))
 		}
 	}
 	if p.msg != "" {
-		for _, l := range wrap(p.c.Text(p.msg), p.w) {
+		for _, l := range report.Wrap(p.c.Text(p.msg), p.w) {
 			lines = append(lines, s.Warning.Render(l))
 		}
 	}

@@ -112,6 +112,10 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 			return nil, err
 		}
 		b.loadFile(f)
+		b.viewFromFile(f)
+		if saved != nil && saved.PressureView != "" {
+			b.showGauge = saved.PressureView == "gauge" // the user's setting
+		}
 		r.blendPath = r.absPath(cfg.BlendFile)
 		r.setStatus("opened " + r.shortPath(r.blendPath))
 		if saved != nil && saved.Unsaved {
@@ -125,6 +129,7 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 	default:
 		demo := mixtures.DemoFile()
 		b.loadFile(demo)
+		b.viewFromFile(demo)
 		if r.status == "" {
 			r.setStatus("demo blend (invented scenario); " + c.Keys.OpenBlend.Help().Key + " opens a file")
 		}

@@ -4,6 +4,7 @@ import (
 	"strings"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // maxSafetyClassLines bounds the strip's list of hazard classes; the full
@@ -38,7 +39,7 @@ func safetyLines(c *Common, cautions []mixtures.Caution, notes []mixtures.StateN
 		}
 	}
 	head := "SAFETY: " + strings.Join(parts, " · ") + "  [" + c.Keys.Safety.Help().Key + " details]"
-	classes := wrap(c.Text(head), w)
+	classes := report.Wrap(c.Text(head), w)
 	if len(classes) > maxSafetyClassLines {
 		classes = classes[:maxSafetyClassLines]
 		last := []rune(classes[maxSafetyClassLines-1])
@@ -49,7 +50,7 @@ func safetyLines(c *Common, cautions []mixtures.Caution, notes []mixtures.StateN
 	for _, l := range classes {
 		out = append(out, s.Caution.Render(l))
 	}
-	for _, l := range wrap(c.Text(mixtures.DeferLine), w) {
+	for _, l := range report.Wrap(c.Text(mixtures.DeferLine), w) {
 		out = append(out, s.Warning.Render(l))
 	}
 	return out
@@ -84,7 +85,7 @@ func safetyDetail(c *Common, cautions []mixtures.Caution, notes []mixtures.State
 	var out []string
 	notes = cautionNotes(notes)
 	for _, n := range notes {
-		for i, l := range wrap(c.Text(noteLine(n)), w-2) {
+		for i, l := range report.Wrap(c.Text(report.NoteText(n)), w-2) {
 			if i == 0 {
 				out = append(out, s.Caution.Render("* "+l))
 			} else {
@@ -99,7 +100,7 @@ func safetyDetail(c *Common, cautions []mixtures.Caution, notes []mixtures.State
 		return append(out, s.Muted.Render(c.Text("No hazard class applies to this blend at this pressure. Gases still call for the care of the data sheets.")))
 	}
 	for _, ca := range cautions {
-		for i, l := range wrap(c.Text(mixtures.FormatCaution(ca)), w-2) {
+		for i, l := range report.Wrap(c.Text(mixtures.FormatCaution(ca)), w-2) {
 			if i == 0 {
 				out = append(out, s.Caution.Render("* "+l))
 			} else {
@@ -108,7 +109,7 @@ func safetyDetail(c *Common, cautions []mixtures.Caution, notes []mixtures.State
 		}
 	}
 	out = append(out, "")
-	for _, l := range wrap(c.Text(mixtures.DeferLine), w) {
+	for _, l := range report.Wrap(c.Text(mixtures.DeferLine), w) {
 		out = append(out, s.Warning.Render(l))
 	}
 	return out

@@ -1,10 +1,14 @@
 package ui
 
 import (
+	"strings"
+
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
+	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // The setpoint pane's lines.
@@ -156,10 +160,20 @@ func (p *setpointPane) refresh() {
 			selLine = len(lines)
 		}
 		line := mark + l + " " + value
-		if note != "" {
-			line += "  " + s.Muted.Render(note)
+		if note == "" || lipgloss.Width(line)+2+lipgloss.Width(note) <= p.w {
+			if note != "" {
+				line += "  " + s.Muted.Render(note)
+			}
+			lines = append(lines, line)
+			return
 		}
+		// No room beside the value: the note goes under it, wrapped
+		// between words, never cut.
 		lines = append(lines, line)
+		indent := strings.Repeat(" ", 2+lw+1)
+		for _, l := range report.Wrap(note, p.w-len(indent)) {
+			lines = append(lines, indent+s.Muted.Render(l))
+		}
 	}
 	typed := func(i int, text string) string {
 		if p.editing && p.sel == i {
@@ -171,7 +185,7 @@ func (p *setpointPane) refresh() {
 		return padRight(p.c.Text(text), fw)
 	}
 	errLines := func(msg string) {
-		for _, l := range wrap(p.c.Text(msg), p.w-4) {
+		for _, l := range report.Wrap(p.c.Text(msg), p.w-4) {
 			lines = append(lines, "    "+s.Error.Render(l))
 		}
 	}
@@ -179,16 +193,16 @@ func (p *setpointPane) refresh() {
 	in := p.b.in
 	tNote, pNote := "", ""
 	if p.b.tempErr == "" && in.TempK > 0 {
-		tNote = p.c.Text(short(in.TempK, 6) + " K, " + fixed(mixtures.KelvinToCelsius(in.TempK), 2) + " °C")
+		tNote = p.c.Text(report.Short(in.TempK, 6) + " K, " + report.Fixed(mixtures.KelvinToCelsius(in.TempK), 2) + " °C")
 	}
 	if p.b.presErr == "" && in.PresPa > 0 {
-		if p.b.showGauge {
-			pNote = presText(in.PresPa) + " abs"
-		} else {
-			pNote = p.b.presShown(in.PresPa)
-			if in.Gauge {
-				pNote += ", entered as gauge"
-			}
+		// In the reading chosen (show P as), like every pressure on screen.
+		pNote = p.b.presShown(in.PresPa)
+		switch {
+		case in.Gauge && !p.b.showGauge:
+			pNote += ", entered as gauge"
+		case !in.Gauge && p.b.showGauge:
+			pNote += ", entered as absolute"
 		}
 	}
 	row(spTemp, "temperature", typed(spTemp, p.b.tempText), tNote)
@@ -203,7 +217,7 @@ func (p *setpointPane) refresh() {
 	if p.b.presErr != "" {
 		msg := p.b.presErr
 		if in.PresPa > 0 {
-			msg += " (" + presText(in.PresPa) + " abs still in force)"
+			msg += " (" + p.b.presShown(in.PresPa) + " still in force)"
 		}
 		errLines(msg)
 	}

@@ -106,7 +106,12 @@ func TestSetpointToggles(t *testing.T) {
 	if b.in.Gen != gen {
 		t.Errorf("the pressure view changed the inputs")
 	}
-	if got := b.presShown(1.4e5); got != "0.38675 bar gauge" {
+	// Gauge in the unit typed, bar, under its gauge name; the pressure
+	// line reads the same way as every other pressure (issue 7, item 9).
+	if got := b.presShown(1.4e5); got != "0.38675 barg" {
 		t.Errorf("presShown = %q", got)
+	}
+	if v := p.View(); !strings.Contains(v, "0.38675 barg, entered as absolute") || strings.Contains(v, "bar abs") {
+		t.Errorf("the pressure line does not follow the gauge view:\n%s", v)
 	}
 }

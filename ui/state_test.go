@@ -74,7 +74,7 @@ func TestStateFormatV1Loads(t *testing.T) {
 	if x, _ := b.moleFraction("NH3"); x != 0.02 {
 		t.Errorf("last valid x(NH3) = %g, want 0.02", x)
 	}
-	if s := r.panes[paneSweep].(*sweepPane).Settings(); s.Var != "P" || s.Steps != 50 || s.Property != "S" {
+	if s := r.panes[paneSweep].(*sweepPane).Settings(); s.Var != mixtures.SweepPressure || s.Steps != 50 || s.Property != "S" {
 		t.Errorf("sweep settings %+v", s)
 	}
 	st := readState(t, dir)

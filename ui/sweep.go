@@ -9,18 +9,13 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // The sweep pane moves T or P across a grid, plots one property of the
 // blend (or of its species, overlaid) and reads exact values off the grid
 // at a cursor. Sweeps run as chains of commands (sweep_run.go); the chart
 // is drawn in Update (plot.go), so View only joins finished lines.
-
-// Sweep variables by index: the pane remembers a range for each.
-const (
-	sweepVarT = 0
-	sweepVarP = 1
-)
 
 // Fields of the range editor.
 const (
@@ -32,8 +27,6 @@ const (
 
 // sweepDefaultRanges are the ranges a variable starts with.
 var sweepDefaultRanges = [2][2]string{{"200 K", "1500 K"}, {"1 bar", "100 bar"}}
-
-var sweepVarNames = [2]string{"T", "P"}
 
 type sweepPane struct {
 	c    *Common
@@ -72,9 +65,11 @@ type sweepPane struct {
 
 	plot      *plotModel
 	series    []plotSeries
-	plotNote  string // what the plot leaves out, or why it is empty
-	xScale    float64
-	xUnit     string
+	plotNote  string                // what the plot leaves out, or why it is empty
+	plotted   string                // whose curves the plot draws, for the header
+	xUnit     string                // the x axis unit's name
+	xPres     mixtures.PressureUnit // the unit of a pressure sweep's axis
+	presShown string                // the held pressure as last shown
 	cursor    int
 	chartRows int
 	view      string
@@ -105,13 +100,13 @@ func (p *sweepPane) load(s SweepSettings) {
 	if s == (SweepSettings{}) {
 		s = def
 	}
-	if s.Var != "P" {
-		s.Var = "T"
+	if s.Var != mixtures.SweepPressure {
+		s.Var = mixtures.SweepTemperature
 	}
 	if _, ok := sweepPropIndex(s.Property); !ok {
 		s.Property = def.Property
 	}
-	vi := sweepVarIndex(s.Var)
+	vi := s.Var
 	// Start from a range known to be good, then take the saved text as
 	// if typed: a saved entry that no longer parses is shown with its
 	// error instead of being dropped.
@@ -134,21 +129,16 @@ type sweepDrafts struct {
 	steps  string
 }
 
-func sweepVarIndex(v string) int {
-	if v == "P" {
-		return sweepVarP
-	}
-	return sweepVarT
-}
-
-func (p *sweepPane) vi() int { return sweepVarIndex(p.set.Var) }
+// vi is the variable swept, which also indexes the ranges the pane
+// remembers, one per variable.
+func (p *sweepPane) vi() mixtures.SweepVar { return p.set.Var }
 
 // sweepParse reads a range and a number of points as typed. It returns
 // the sweep, an error per field, and an error for the range as a whole.
-func sweepParse(vi int, fromText, toText, stepsText string, logGrid bool) (sw mixtures.Sweep, errs [sweepFieldCount]string, rangeErr string) {
+func sweepParse(vi mixtures.SweepVar, fromText, toText, stepsText string, logGrid bool) (sw mixtures.Sweep, errs [sweepFieldCount]string, rangeErr string) {
 	sw.Log = logGrid
 	parse := func(s string) (float64, error) { return mixtures.ParseTemperature(s) }
-	if vi == sweepVarP {
+	if vi == mixtures.SweepPressure {
 		sw.Var, sw.Log = mixtures.SweepPressure, true
 		parse = func(s string) (float64, error) {
 			pr, err := mixtures.ParsePressure(s)
@@ -403,8 +393,8 @@ func (p *sweepPane) moveCursor(d int) {
 
 func (p *sweepPane) toggleVar() tea.Cmd {
 	p.saveDrafts()
-	vi := 1 - p.vi()
-	p.set.Var = sweepVarNames[vi]
+	vi := p.vi().Other()
+	p.set.Var = vi
 	p.set.From, p.set.To = p.applied[vi][0], p.applied[vi][1]
 	// The remembered range is valid; the drafts may be too.
 	p.sweep, _, _ = sweepParse(vi, p.set.From, p.set.To, strconv.Itoa(p.set.Steps), p.set.Log)
@@ -564,25 +554,29 @@ func (p *sweepPane) rebuildPlot() {
 	p.plotNote = ""
 	if p.result == nil {
 		p.series = nil
+		p.plotted = ""
 		p.plot.clear()
 		return
 	}
 	res := p.result
 	ascii := p.c.ASCII
-	prop := sweepProps[p.propIndex()]
-	scale := prop.scale
+	prop := &sweepProps[p.propIndex()]
+	scale, speciesScale := prop.scale(), 1.0
+	if prop.hasSpecies() {
+		speciesScale = prop.speciesScale()
+	}
 	blendValues := res.Blend(prop.blend)
 	blend := plotSeries{name: "blend", y: func(i int) float64 { return blendValues[i] * scale }}
 	comps := p.resultKey.mix.Components
 	speciesSeries := func(j int) plotSeries {
 		values := res.Species(prop.species, j)
-		return plotSeries{name: comps[j].Species.Formula, y: func(i int) float64 { return values[i] * scale }}
+		return plotSeries{name: comps[j].Species.Formula, y: func(i int) float64 { return values[i] * speciesScale }}
 	}
 	var series []plotSeries
 	var of string
 	overlay := false
 	switch {
-	case prop.species == "":
+	case !prop.hasSpecies():
 		series = []plotSeries{blend}
 		if p.set.Overlay || p.set.Species != "" {
 			p.plotNote = prop.sym(ascii) + " is plotted for the blend only"
@@ -611,25 +605,30 @@ func (p *sweepPane) rebuildPlot() {
 		series = []plotSeries{blend}
 	}
 	p.series = series
-
-	// The x axis: kelvin, or pressure in bar (Pa for ranges below 0.1 bar).
-	sw := res.Sweep
-	p.xScale, p.xUnit = 1, "K"
-	name := "T"
-	if sw.Var == mixtures.SweepPressure {
-		name = "P"
-		p.xUnit = "Pa"
-		if math.Max(sw.From, sw.To) >= 1e4 {
-			p.xScale, p.xUnit = 1e-5, "bar"
-		}
+	// The header names what is drawn, never a choice that could not be.
+	p.plotted = "blend"
+	switch {
+	case overlay:
+		p.plotted = "blend and species"
+	case of != "":
+		p.plotted = of
 	}
-	xLog := sw.Log || sw.Var == mixtures.SweepPressure
-	xLabel := name + " / " + p.xUnit
+
+	// The x axis: kelvin, or pressure in the unit the range was typed in,
+	// read as gauge where it was typed so or the workbench shows gauge.
+	sw := res.Sweep
+	spec := plotSpec{grid: res.Grid, xLog: sw.Log || sw.Var == mixtures.SweepPressure,
+		yLabel: prop.axisLabel(ascii, of, overlay), series: series}
+	p.xUnit = "K"
+	name := sw.Var.Key()
+	if sw.Var == mixtures.SweepPressure {
+		p.xPres = p.pressureUnit()
+		p.xUnit = p.xPres.Name()
+		spec.xDisplay, spec.xData = p.xPres.FromPa, p.xPres.ToPa
+	}
+	spec.xLabel = name + " in " + p.xUnit
 	p.plot.cursor = p.cursor
-	p.plot.setSpec(plotSpec{
-		grid: res.Grid, xScale: p.xScale, xLog: xLog, xLabel: xLabel,
-		yLabel: prop.axisLabel(ascii, of, overlay), series: series,
-	})
+	p.plot.setSpec(spec)
 	if p.plotNote == "" {
 		p.plotNote = p.nonFiniteNote()
 	}
@@ -656,11 +655,28 @@ func (p *sweepPane) nonFiniteNote() string {
 
 // xText writes a grid value in the x axis unit.
 func (p *sweepPane) xText(x float64) string {
-	name := "T"
-	if p.result != nil && p.result.Sweep.Var == mixtures.SweepPressure {
-		name = "P"
+	name := mixtures.SweepTemperature.Key()
+	if p.result != nil {
+		name = p.result.Sweep.Var.Key()
 	}
-	return name + " = " + sweepTrimZeros(sig(x*p.xScale, 6)) + " " + p.xUnit
+	if p.result != nil && p.result.Sweep.Var == mixtures.SweepPressure {
+		x = p.xPres.FromPa(x)
+	}
+	return name + " = " + sweepTrimZeros(report.Sig(x, 6)) + " " + p.xUnit
+}
+
+// pressureUnit is the unit pressures of the sweep show in: that of the
+// range as typed, read as gauge when typed so or when the workbench shows
+// pressures as gauge.
+func (p *sweepPane) pressureUnit() mixtures.PressureUnit {
+	u, ok := mixtures.PressureUnitOf(p.set.From)
+	if !ok {
+		u = mixtures.BarAbsolute
+	}
+	if p.b != nil && p.b.showGauge {
+		u = u.Reading(true)
+	}
+	return u
 }
 
 // sweepTrimZeros drops trailing zeros after a decimal point: grid points
@@ -710,6 +726,15 @@ func (p *sweepPane) Sync() tea.Cmd {
 	if p.b == nil {
 		return nil
 	}
+	if shown := p.b.presShown(p.b.in.PresPa); shown != p.presShown {
+		// The workbench's pressure view changed: the header and a
+		// pressure axis follow.
+		p.presShown = shown
+		if p.result != nil && p.result.Sweep.Var == mixtures.SweepPressure {
+			p.rebuildPlot()
+		}
+		p.refresh()
+	}
 	return p.SetInputs(p.b.in)
 }
 
@@ -719,7 +744,7 @@ func (p *sweepPane) More() (above, below bool) { return false, false }
 func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }
 func (p *sweepPane) stateChanged() bool       { return p.Changed() }
 func (p *sweepPane) restoreState(st *savedState) {
-	if st.Sweep.Var != "" {
+	if st.Sweep != (SweepSettings{}) {
 		p.load(st.Sweep)
 	}
 }

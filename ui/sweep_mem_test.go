@@ -43,7 +43,7 @@ func BenchmarkSweepPaneMemory200k(b *testing.B) {
 	}
 	in := Inputs{Mixture: m, TempK: 300, PresPa: 1e5, Gen: 1}
 	for i := 0; i < b.N; i++ {
-		p := newSweepPane(sweepTestCommon(false), SweepSettings{Var: "T", From: "20 K", To: "3000 K", Steps: mixtures.MaxSweepSteps, Property: "Cp", Overlay: true})
+		p := newSweepPane(sweepTestCommon(false), SweepSettings{Var: mixtures.SweepTemperature, From: "20 K", To: "3000 K", Steps: mixtures.MaxSweepSteps, Property: "Cp", Overlay: true})
 		p.SetSize(120, 40)
 		sweepRun(b, p, p.SetInputs(in))
 		if p.Result() == nil || p.Result().Len() != mixtures.MaxSweepSteps {

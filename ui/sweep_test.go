@@ -14,6 +14,7 @@ import (
 	"github.com/charmbracelet/x/exp/teatest"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -57,7 +58,7 @@ func sweepTestPane(t testing.TB, ascii bool, s SweepSettings, w, h int) *sweepPa
 	p.SetSize(w, h)
 	sweepRun(t, p, p.SetInputs(sweepTestInputs(t)))
 	if p.Result() == nil {
-		t.Fatalf("no result after the first sweep; status %q", p.statusLine())
+		t.Fatalf("no result after the first sweep; status %q", p.statusLines(200))
 	}
 	return p
 }
@@ -116,10 +117,10 @@ func TestSweepKeysChangeSettings(t *testing.T) {
 		want      SweepSettings
 		recompute bool // a new sweep ran
 	}{
-		{"variable to P", []string{"v"}, with(func(s *SweepSettings) { s.Var, s.From, s.To = "P", "1 bar", "100 bar" }), true},
+		{"variable to P", []string{"v"}, with(func(s *SweepSettings) { s.Var, s.From, s.To = mixtures.SweepPressure, "1 bar", "100 bar" }), true},
 		{"variable back to T", []string{"v", "v"}, def, true},
 		{"log grid", []string{"g"}, with(func(s *SweepSettings) { s.Log = true }), true},
-		{"no linear grid for P", []string{"v", "g"}, with(func(s *SweepSettings) { s.Var, s.From, s.To = "P", "1 bar", "100 bar" }), true},
+		{"no linear grid for P", []string{"v", "g"}, with(func(s *SweepSettings) { s.Var, s.From, s.To = mixtures.SweepPressure, "1 bar", "100 bar" }), true},
 		{"next property", []string{"p"}, with(func(s *SweepSettings) { s.Property = "mu" }), false},
 		{"previous property", []string{"P"}, with(func(s *SweepSettings) { s.Property = "S" }), false},
 		{"property wraps", []string{"p", "p", "p", "p", "p", "p"}, with(func(s *SweepSettings) { s.Property = "S" }), false},
@@ -152,7 +153,7 @@ func TestSweepKeysChangeSettings(t *testing.T) {
 }
 
 func TestSweepPressureOnlyLog(t *testing.T) {
-	p := sweepTestPane(t, false, SweepSettings{Var: "P", From: "1 bar", To: "50 bar", Steps: 30, Property: "S"}, 100, 30)
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepPressure, From: "1 bar", To: "50 bar", Steps: 30, Property: "S"}, 100, 30)
 	sweepPress(t, p, "g")
 	if !strings.Contains(p.View(), "pressure sweeps always use a log grid") {
 		t.Errorf("no notice that P sweeps are log:\n%s", p.View())
@@ -185,7 +186,7 @@ func TestSweepRangeEntry(t *testing.T) {
 		{name: "one point", start: def, pts: "1", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: `points "1": want a whole number from 2 to 200000`},
 		{name: "too many points", start: def, pts: "200001", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "from 2 to 200000"},
 		{name: "equal ends", start: def, from: "500 K", to: "500 K", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "two different end points"},
-		{name: "pressure, gauge", start: SweepSettings{Var: "P", From: "1 bar", To: "100 bar", Steps: 40, Property: "S"}, from: "0 barg", to: "10 barg", wantFrom: "0 barg", wantTo: "10 barg", wantSteps: 40, wantGridFirst: 101325, wantGridLastPa: 1101325},
+		{name: "pressure, gauge", start: SweepSettings{Var: mixtures.SweepPressure, From: "1 bar", To: "100 bar", Steps: 40, Property: "S"}, from: "0 barg", to: "10 barg", wantFrom: "0 barg", wantTo: "10 barg", wantSteps: 40, wantGridFirst: 101325, wantGridLastPa: 1101325},
 		{name: "pressure unit on a T sweep", start: def, to: "5 bar", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: `unknown unit "bar"`},
 	}
 	for _, tc := range tests {
@@ -289,7 +290,7 @@ func TestSweepEscUndoesEdit(t *testing.T) {
 func TestSweepRestoresBadSettings(t *testing.T) {
 	// A saved range that no longer parses is shown, with its error, over
 	// the default range in force.
-	p := newSweepPane(sweepTestCommon(false), SweepSettings{Var: "T", From: "3OO K", To: "900 K", Steps: 50, Property: "nonsense"})
+	p := newSweepPane(sweepTestCommon(false), SweepSettings{Var: mixtures.SweepTemperature, From: "3OO K", To: "900 K", Steps: 50, Property: "nonsense"})
 	p.SetSize(100, 30)
 	s := p.Settings()
 	if s.From != "200 K" || s.To != "1500 K" || s.Property != "Cp" {
@@ -360,7 +361,7 @@ func TestSweepStaleResultsDropped(t *testing.T) {
 	}
 
 	// A stale chunk of a long sweep ends its chain.
-	long := SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 40000, Property: "Cp"}
+	long := SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 40000, Property: "Cp"}
 	p = newSweepPane(sweepTestCommon(false), long)
 	p.SetSize(100, 30)
 	msg := p.SetInputs(in)()
@@ -376,7 +377,7 @@ func TestSweepStaleResultsDropped(t *testing.T) {
 }
 
 func TestSweepLongSweepShowsProgress(t *testing.T) {
-	s := SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 100000, Property: "S"}
+	s := SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 100000, Property: "S"}
 	p := newSweepPane(sweepTestCommon(false), s)
 	p.SetSize(100, 30)
 	cmd := p.SetInputs(sweepTestInputs(t))
@@ -443,7 +444,7 @@ func (h *sweepHost) View() string { return h.p.View() }
 // the new one finishes.
 func TestSweepInProgram(t *testing.T) {
 	in := sweepTestInputs(t)
-	p := newSweepPane(sweepTestCommon(false), SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 60000, Property: "Cp"})
+	p := newSweepPane(sweepTestCommon(false), SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 60000, Property: "Cp"})
 	tm := teatest.NewTestModel(t, &sweepHost{p: p, in: in}, teatest.WithInitialTermSize(100, 30))
 	tm.Send(sweepKeyMsg("o"))
 	in.Gen, in.PresPa = 2, 5e5
@@ -519,17 +520,17 @@ func TestSweepCursorReadsEngineValues(t *testing.T) {
 		// want is the engine's value in display units at (T, P).
 		want func(s *mixtures.State) float64
 	}{
-		{"Cp of blend", SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp"}, []string{"home", "right", "right", "."},
+		{"Cp of blend", SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp"}, []string{"home", "right", "right", "."},
 			func(s *mixtures.State) float64 { return s.CpJPerMolK }},
-		{"S of NH3 at end", SweepSettings{Var: "T", From: "300 K", To: "1000 K", Steps: 71, Property: "S", Species: "NH3"}, []string{"end", ","},
+		{"S of NH3 at end", SweepSettings{Var: mixtures.SweepTemperature, From: "300 K", To: "1000 K", Steps: 71, Property: "S", Species: "NH3"}, []string{"end", ","},
 			func(s *mixtures.State) float64 { return sweepTestTerm(s, "NH3").SJPerMolK }},
-		{"mu of SiH4 over P", SweepSettings{Var: "P", From: "0.5 bar", To: "20 bar", Steps: 300, Property: "mu", Species: "SiH4"}, []string{"home", "right", "right", "right"},
+		{"mu of SiH4 over P", SweepSettings{Var: mixtures.SweepPressure, From: "0.5 bar", To: "20 bar", Steps: 300, Property: "mu", Species: "SiH4"}, []string{"home", "right", "right", "right"},
 			func(s *mixtures.State) float64 { return sweepTestTerm(s, "SiH4").MuJPerMol * 1e-3 }},
-		{"mu of blend is G", SweepSettings{Var: "T", From: "200 K", To: "900 K", Steps: 50, Property: "mu"}, []string{"left", "left"},
+		{"mu of blend is G", SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "900 K", Steps: 50, Property: "mu"}, []string{"left", "left"},
 			func(s *mixtures.State) float64 { return s.GJPerMol * 1e-3 }},
-		{"gamma, descending grid", SweepSettings{Var: "T", From: "1500 K", To: "250 K", Steps: 400, Log: true, Property: "gamma"}, []string{"home", "right"},
+		{"gamma, descending grid", SweepSettings{Var: mixtures.SweepTemperature, From: "1500 K", To: "250 K", Steps: 400, Log: true, Property: "gamma"}, []string{"home", "right"},
 			func(s *mixtures.State) float64 { return s.Gamma }},
-		{"H", SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 200, Property: "H"}, []string{"end", "left"},
+		{"H", SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 200, Property: "H"}, []string{"end", "left"},
 			func(s *mixtures.State) float64 { return s.HJPerMol * 1e-3 }},
 	}
 	for _, tc := range tests {
@@ -551,7 +552,7 @@ func TestSweepCursorReadsEngineValues(t *testing.T) {
 				t.Errorf("cursor value at point %d = %v, want %v (engine)", i, got, want)
 			}
 			view := p.View()
-			for _, s := range []string{sig(want, 5), p.xText(res.Grid[i])} {
+			for _, s := range []string{report.Sig(want, 5), p.xText(res.Grid[i])} {
 				if !strings.Contains(view, s) {
 					t.Errorf("readout lacks %q:\n%s", s, view)
 				}
@@ -566,12 +567,14 @@ func TestSweepPressureAxisUnit(t *testing.T) {
 		label    string
 		readout  string // the unit in the cursor line
 	}{
-		{"0.5 bar", "20 bar", "P / bar", " bar "},
-		{"10 Pa", "5000 Pa", "P / Pa", " Pa "},
-		{"1 atm", "2 atm", "P / bar", " bar "},
+		// The unit typed, its reading named (issue 7, item 9).
+		{"0.5 bar", "20 bar", "P in bar abs", " bar abs "},
+		{"10 Pa", "5000 Pa", "P in Pa abs", " Pa abs "},
+		{"1 atm", "2 atm", "P in atm", " atm "},
+		{"5 psig", "150 psig", "P in psig", " psig "},
 	}
 	for _, tc := range tests {
-		p := sweepTestPane(t, false, SweepSettings{Var: "P", From: tc.from, To: tc.to, Steps: 100, Property: "S"}, 100, 30)
+		p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepPressure, From: tc.from, To: tc.to, Steps: 100, Property: "S"}, 100, 30)
 		if got := p.plot.spec.xLabel; got != tc.label {
 			t.Errorf("%s..%s: x label %q, want %q", tc.from, tc.to, got, tc.label)
 		}
@@ -596,7 +599,7 @@ func TestSweepRunErrorShown(t *testing.T) {
 }
 
 func TestSweepCursorMoves(t *testing.T) {
-	p := sweepTestPane(t, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp"}, 100, 30)
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp"}, 100, 30)
 	sweepPress(t, p, "home")
 	if p.cursor != 0 {
 		t.Fatalf("home: cursor %d, want 0", p.cursor)
@@ -621,7 +624,7 @@ func TestSweepCursorMoves(t *testing.T) {
 }
 
 func TestSweepOverlayLegend(t *testing.T) {
-	p := sweepTestPane(t, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 300, Property: "Cp", Overlay: true}, 120, 40)
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 300, Property: "Cp", Overlay: true}, 120, 40)
 	if len(p.series) != 5 {
 		t.Fatalf("%d curves, want the blend and 4 species", len(p.series))
 	}
@@ -641,9 +644,9 @@ func TestSweepOverlayLegend(t *testing.T) {
 // TestSweepASCIIOnly scans every screen of ASCII mode for bytes above 127.
 func TestSweepASCIIOnly(t *testing.T) {
 	for _, s := range []SweepSettings{
-		{Var: "T", From: "200 K", To: "1500 K", Steps: 500, Property: "Cp", Overlay: true},
-		{Var: "P", From: "1 bar", To: "100 bar", Steps: 200, Property: "mu", Species: "NH3"},
-		{Var: "T", From: "200 K", To: "1500 K", Steps: 50, Property: "gamma"},
+		{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 500, Property: "Cp", Overlay: true},
+		{Var: mixtures.SweepPressure, From: "1 bar", To: "100 bar", Steps: 200, Property: "mu", Species: "NH3"},
+		{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 50, Property: "gamma"},
 	} {
 		p := sweepTestPane(t, true, s, 80, 24)
 		screens := []string{p.View()}
@@ -665,7 +668,7 @@ func TestSweepASCIIOnly(t *testing.T) {
 }
 
 func TestSweepNoNaNOnScreen(t *testing.T) {
-	p := sweepTestPane(t, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 100, Property: "Cp"}, 100, 30)
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 100, Property: "Cp"}, 100, 30)
 	// Spoil a copy of the result, as a broken model would.
 	bad := p.Result().Clone()
 	cp := bad.Blend("Cp")
@@ -692,7 +695,7 @@ func TestSweepNoNaNOnScreen(t *testing.T) {
 func TestSweepTinySizes(t *testing.T) {
 	sizes := [][2]int{{0, 0}, {1, 1}, {10, 3}, {3, 10}, {20, 5}, {30, 8}, {40, 9}, {80, 24}, {200, 60}}
 	for _, ascii := range []bool{false, true} {
-		p := sweepTestPane(t, ascii, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 200, Property: "S", Overlay: true}, 80, 24)
+		p := sweepTestPane(t, ascii, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 200, Property: "S", Overlay: true}, 80, 24)
 		for _, sz := range sizes {
 			p.SetSize(sz[0], sz[1])
 			sweepPress(t, p, "right", "e", "esc")
@@ -737,7 +740,7 @@ func TestSweepKeyHelpComplete(t *testing.T) {
 var sweepViewSink string
 
 func BenchmarkSweepPaneView(b *testing.B) {
-	p := sweepTestPane(b, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
+	p := sweepTestPane(b, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
 	b.ReportAllocs()
 	b.ResetTimer()
 	for i := 0; i < b.N; i++ {
@@ -748,7 +751,7 @@ func BenchmarkSweepPaneView(b *testing.B) {
 // BenchmarkSweepCursorKey is one cursor keystroke: Update, which redraws
 // the rows, then View.
 func BenchmarkSweepCursorKey(b *testing.B) {
-	p := sweepTestPane(b, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
+	p := sweepTestPane(b, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
 	left, right := sweepKeyMsg("left"), sweepKeyMsg("right")
 	b.ReportAllocs()
 	b.ResetTimer()
@@ -774,7 +777,7 @@ func TestSweepTrimZeros(t *testing.T) {
 // points arrives: the curves are scanned, reduced and drawn, and the pane
 // laid out at 120x40.
 func BenchmarkSweepResultArrives(b *testing.B) {
-	p := sweepTestPane(b, false, SweepSettings{Var: "T", From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
+	p := sweepTestPane(b, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp", Overlay: true}, 120, 40)
 	job := &sweepJob{key: p.resultKey, res: p.Result()}
 	b.ReportAllocs()
 	b.ResetTimer()
@@ -783,5 +786,24 @@ func BenchmarkSweepResultArrives(b *testing.B) {
 		p.running = true
 		p.Update(sweepProgressMsg{gen: p.gen, job: job, done: 1000, total: 1000})
 		sweepViewSink = p.View()
+	}
+}
+
+// The legend says where a curve hidden under the blend is, and the header
+// names only what is plotted (issue 7, item 10).
+func TestSweepHiddenCurveAndHeader(t *testing.T) {
+	// The sweep pane of the 120×40 screen.
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepPressure, From: "1 bar", To: "100 bar", Steps: 200, Property: "Cp", Overlay: true}, 72, 17)
+	if v := p.View(); !strings.Contains(v, "N2 29.113 (under ") {
+		t.Errorf("N2 lies under another curve, and the legend does not say so:\n%s", v)
+	}
+	for _, s := range []SweepSettings{
+		{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 100, Property: "gamma", Species: "SiH4"}, // γ: the blend only
+		{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 100, Property: "Cp", Species: "Xe"},      // not in the blend
+	} {
+		p := sweepTestPane(t, false, s, 118, 20)
+		if v := p.View(); strings.Contains(v, "of "+s.Species) || !strings.Contains(v, "of blend") {
+			t.Errorf("%s of %s: the header names a curve that is not drawn:\n%s", s.Property, s.Species, v)
+		}
 	}
 }

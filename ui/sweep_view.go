@@ -8,6 +8,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // refresh lays the pane out and builds the lines View returns. It runs at
@@ -18,18 +19,25 @@ func (p *sweepPane) refresh() {
 		p.view = ""
 		return
 	}
-	top := []string{p.settingsLine()}
-	if e := p.errorLine(); e != "" {
-		top = append(top, e)
-	}
-	top = append(top, p.propertyLine())
-	bottom := append(p.readoutLines(w), p.statusLine())
+	// Every line is packed or wrapped to the width, never cut mid-word.
+	top := p.pack(w, "  ", p.settingsParts()...)
+	top = append(top, p.errorLines(w)...)
+	top = append(top, p.pack(w, "  ", p.propertyParts()...)...)
+	bottom := append(p.readoutLines(w), p.statusLines(w)...)
 
-	rows := max(h-len(top)-len(bottom), 0)
-	if rows != p.chartRows || w != p.plot.w {
+	// The legend says which curves lie under others, which depends on the
+	// chart's size, which depends on the legend's lines: settle it in two
+	// passes at most.
+	for pass := 0; pass < 2; pass++ {
+		rows := max(h-len(top)-len(bottom), 0)
+		if rows == p.chartRows && w == p.plot.w {
+			break
+		}
 		p.chartRows = rows
 		p.plot.setSize(w, rows)
+		bottom = append(p.readoutLines(w), p.statusLines(w)...)
 	}
+	rows := p.chartRows
 	lines := top
 	if chart := p.plot.view(); chart != nil {
 		lines = append(lines, chart...)
@@ -46,8 +54,7 @@ func (p *sweepPane) refresh() {
 		if len(out) == h {
 			break
 		}
-		// Typed text can hold any glyph; ASCII mode spells it out.
-		out = append(out, fitLine(p.c.Text(l), w))
+		out = append(out, fitLine(l, w))
 	}
 	blank := strings.Repeat(" ", w)
 	for len(out) < h {
@@ -73,9 +80,9 @@ func (p *sweepPane) emptyText() string {
 	return "no sweep yet"
 }
 
-// settingsLine shows the sweep: variable, range, points, grid and the
+// settingsParts show the sweep: variable and range, points, grid and the
 // value held fixed. While editing, the field being typed in is bracketed.
-func (p *sweepPane) settingsLine() string {
+func (p *sweepPane) settingsParts() []string {
 	st := p.c.Styles
 	vi := p.vi()
 	values := [sweepFieldCount]string{p.drafts[vi][0], p.drafts[vi][1], p.stepsDraft}
@@ -98,24 +105,51 @@ func (p *sweepPane) settingsLine() string {
 	if p.sweep.Log || p.sweep.Var == mixtures.SweepPressure {
 		grid = "log grid"
 	}
-	line := label("sweep ") + st.Value.Render(p.set.Var) +
-		label("  from ") + field(sweepFieldFrom) + label(" to ") + field(sweepFieldTo) +
-		"  " + field(sweepFieldSteps) + label(" points") + "  " + label(grid)
-	if p.haveIn && p.in.Valid() {
-		held := "  at P = " + presText(p.in.PresPa)
-		if p.in.Gauge {
-			held += " abs"
-		}
-		if p.sweep.Var == mixtures.SweepPressure {
-			held = "  at T = " + sig(p.in.TempK, 6) + " K"
-		}
-		line += st.Muted.Render(held)
+	parts := []string{
+		label("sweep ") + st.Value.Render(p.set.Var.Key()) + label("  from ") + field(sweepFieldFrom) + label(" to ") + field(sweepFieldTo),
+		field(sweepFieldSteps) + label(" points"),
+		label(grid),
 	}
-	return line
+	if p.haveIn && p.in.Valid() {
+		var held string
+		switch {
+		case p.sweep.Var == mixtures.SweepPressure:
+			held = "at T = " + report.Short(p.in.TempK, 6) + " K"
+		case p.b != nil:
+			held = "at P = " + p.b.presShown(p.in.PresPa)
+		default:
+			held = "at P = " + report.PressureIn(p.in.PresPa, mixtures.BarAbsolute)
+		}
+		parts = append(parts, st.Muted.Render(held))
+	}
+	return parts
 }
 
-// errorLine is the error of the typed range, or "".
-func (p *sweepPane) errorLine() string {
+// pack joins parts (which may hold styles) with sep into lines of at most
+// w cells, starting a new line where the next part does not fit, so that
+// no part is cut; ASCII mode spells out each part first.
+func (p *sweepPane) pack(w int, sep string, parts ...string) []string {
+	var lines []string
+	line, width := "", 0
+	for _, part := range parts {
+		part = p.c.Text(part)
+		pw := lipgloss.Width(part)
+		if width > 0 && width+len(sep)+pw > w {
+			lines = append(lines, line)
+			line, width = "", 0
+		}
+		if width > 0 {
+			line += sep
+			width += len(sep)
+		}
+		line += part
+		width += pw
+	}
+	return append(lines, line)
+}
+
+// errorLines are the error of the typed range, wrapped, or none.
+func (p *sweepPane) errorLines(w int) []string {
 	var e string
 	if p.editing && p.errs[p.focus] != "" {
 		e = p.errs[p.focus]
@@ -129,14 +163,23 @@ func (p *sweepPane) errorLine() string {
 		e = p.rangeErr
 	}
 	if e == "" {
-		return ""
+		return nil
 	}
-	return p.c.Styles.Error.Render(p.c.Text("! " + e))
+	return p.styledWrap(p.c.Styles.Error, "! "+e, w)
 }
 
-// propertyLine shows the properties, the chosen one bracketed, and which
+// styledWrap wraps plain text to w cells, as drawn, in one style.
+func (p *sweepPane) styledWrap(style lipgloss.Style, text string, w int) []string {
+	lines := report.Wrap(p.c.Text(text), w)
+	for i, l := range lines {
+		lines[i] = style.Render(l)
+	}
+	return lines
+}
+
+// propertyParts show the properties, the chosen one bracketed, and which
 // curves are drawn.
-func (p *sweepPane) propertyLine() string {
+func (p *sweepPane) propertyParts() []string {
 	st := p.c.Styles
 	ascii := p.c.ASCII
 	var b strings.Builder
@@ -153,17 +196,15 @@ func (p *sweepPane) propertyLine() string {
 			b.WriteString(st.Muted.Render(sym))
 		}
 	}
-	of := "blend"
-	if p.set.Species != "" {
-		of = p.set.Species
+	parts := []string{b.String()}
+	if p.plotted != "" {
+		parts = append(parts, st.Label.Render("of ")+st.Value.Render(p.plotted))
 	}
-	b.WriteString(st.Label.Render("  of ") + st.Value.Render(p.c.Text(of)))
 	overlay := "off"
 	if p.set.Overlay {
 		overlay = "on"
 	}
-	b.WriteString(st.Label.Render("  overlay ") + st.Value.Render(overlay))
-	return b.String()
+	return append(parts, st.Label.Render("overlay ")+st.Value.Render(overlay))
 }
 
 // readoutLines read the curves off at the cursor: the grid value, then
@@ -205,40 +246,44 @@ func (p *sweepPane) readoutLines(w int) []string {
 		v := s.y(i)
 		val := "not finite"
 		if plotFinite(v) {
-			val = sig(v, 5)
+			val = report.Sig(v, 5)
 		}
 		sample := plotSample(k, p.c.ASCII)
-		add(sample+" "+s.name+" "+val,
-			st.Series[k%len(st.Series)].Render(sample)+" "+st.Label.Render(s.name)+" "+st.Value.Render(val))
+		under := ""
+		if j := p.plot.coveredBy(k); j >= 0 && j < len(p.series) {
+			under = " (under " + p.series[j].name + ")"
+		}
+		add(sample+" "+s.name+" "+val+under,
+			st.Series[k%len(st.Series)].Render(sample)+" "+st.Label.Render(s.name)+" "+st.Value.Render(val)+st.Muted.Render(under))
 	}
 	return append(lines, line.String())
 }
 
-// statusLine is the one line of news: a failure, progress, a notice, or
-// a reminder of the main keys.
-func (p *sweepPane) statusLine() string {
+// statusLines are the news, wrapped: a failure, progress, a notice, or a
+// reminder of the main keys (those that fit, whole).
+func (p *sweepPane) statusLines(w int) []string {
 	st := p.c.Styles
 	switch {
 	case p.runErr != "":
-		return st.Error.Render(p.c.Text("! sweep failed: " + p.runErr))
+		return p.styledWrap(st.Error, "! sweep failed: "+p.runErr, w)
 	case p.running && p.done > 0:
 		pct := strconv.Itoa(int(100 * float64(p.done) / float64(max(p.total, 1))))
-		return st.Muted.Render("sweeping: " + strconv.Itoa(p.done) + " of " + strconv.Itoa(p.total) + " points (" + pct + " %)")
+		return p.styledWrap(st.Muted, "sweeping: "+strconv.Itoa(p.done)+" of "+strconv.Itoa(p.total)+" points ("+pct+" %)", w)
 	case p.running:
-		return st.Muted.Render("sweeping " + strconv.Itoa(p.total) + " points...")
+		return p.styledWrap(st.Muted, "sweeping "+strconv.Itoa(p.total)+" points...", w)
 	case p.note != "":
-		return st.Warning.Render(p.c.Text(p.note))
+		return p.styledWrap(st.Warning, p.note, w)
 	case !p.editing && p.hasErrors():
-		return st.Warning.Render(p.c.Text("in force until the entry is fixed: " + p.set.From + " to " + p.set.To + ", " + strconv.Itoa(p.set.Steps) + " points"))
+		return p.styledWrap(st.Warning, "in force until the entry is fixed: "+p.set.From+" to "+p.set.To+", "+strconv.Itoa(p.set.Steps)+" points", w)
 	case p.plotNote != "":
-		return st.Warning.Render(p.c.Text(p.plotNote))
+		return p.styledWrap(st.Warning, p.plotNote, w)
 	}
 	k := &p.c.Keys.Sweep
 	if p.editing {
-		return p.hint(sweepHint{k.Apply, "apply"}, sweepHint{k.NextField, "next field"}, sweepHint{p.c.Keys.Back, "undo"})
+		return []string{p.hint(w, sweepHint{k.Apply, "apply"}, sweepHint{k.NextField, "next field"}, sweepHint{p.c.Keys.Back, "undo"})}
 	}
-	return p.hint(sweepHint{k.EditRange, "range"}, sweepHint{k.Variable, "T/P"}, sweepHint{k.Property, "property"},
-		sweepHint{k.NextSpecies, "species"}, sweepHint{k.Overlay, "overlay"}, sweepHint{k.CursorLeft, "cursor"}, sweepHint{k.CursorRight, ""})
+	return []string{p.hint(w, sweepHint{k.EditRange, "range"}, sweepHint{k.Variable, "T/P"}, sweepHint{k.Property, "property"},
+		sweepHint{k.CursorLeft, ""}, sweepHint{k.CursorRight, "cursor"}, sweepHint{k.NextSpecies, "species"}, sweepHint{k.Overlay, "overlay"})}
 }
 
 // sweepHint is a binding with the one word the status line gives it.
@@ -249,14 +294,31 @@ type sweepHint struct {
 
 // hint lists a few bindings as "key word" pairs; the key names come from
 // the key map, so they follow any change of binding.
-func (p *sweepPane) hint(hs ...sweepHint) string {
-	parts := make([]string, 0, len(hs))
+//
+// A binding with no word shares the next one's ("←/h →/l cursor"). Hints
+// that do not fit in w cells are left out whole, from the end.
+func (p *sweepPane) hint(w int, hs ...sweepHint) string {
+	var groups []string
+	keys := ""
 	for _, h := range hs {
-		s := p.c.KeyText(h.b.Help().Key)
-		if h.word != "" {
-			s += " " + h.word
+		keys += p.c.KeyText(h.b.Help().Key)
+		if h.word == "" {
+			keys += " "
+			continue
 		}
-		parts = append(parts, s)
+		groups = append(groups, p.c.Text(keys+" "+h.word))
+		keys = ""
 	}
-	return p.c.Styles.Help.Render(p.c.Text(strings.Join(parts, "  ")))
+	line := ""
+	for _, g := range groups {
+		next := g
+		if line != "" {
+			next = line + "  " + g
+		}
+		if lipgloss.Width(next) > w {
+			break
+		}
+		line = next
+	}
+	return p.c.Styles.Help.Render(line)
 }

@@ -1,33 +1,12 @@
 package ui
 
 import (
-	"math"
-	"strconv"
 	"strings"
 	"unicode/utf8"
 
 	"github.com/charmbracelet/lipgloss"
 
-	"zmix/mixtures"
-)
-
-// asciiReplacer spells out the non-ASCII glyphs that the engine's notes and
-// our own labels use, for terminals and fonts without them. It follows the
-// commands' ASCII output: a degree sign of a unit goes, the one left marks
-// a standard state (P°, μ°) and becomes 0, and J/(mol·K) is J/(mol.K).
-var asciiReplacer = strings.NewReplacer(
-	"°C", "C", "°F", "F", "°", "0", "³", "3", "²", "2", "·", ".",
-	"μ", "mu", "µ", "mu", "γ", "gamma", "ρ", "rho", "σ", "sigma",
-	"Θrot", "Theta_rot", "Θvib", "Theta_vib", "Θel", "Theta_el", "Θ", "Theta", "θ", "theta",
-	"Δf", "Delta_f", "Δ", "Delta", "ν̃", "nu", "ν", "nu", "Σ", "sum", "Π", "Pi", "Λ", "Lambda",
-	"α", "alpha", "β", "beta", "ε", "eps", "λ", "lambda", "ω", "omega", "π", "pi",
-	"≪", "<<", "≫", ">>", "≈", "~", "≤", "<=", "≥", ">=", "≠", "!=", "×", "x",
-	"−", "-", "–", "-", "—", "-", "ᵢ", "_i", "⁻¹", "^-1", "⁻", "^-", "∞", "inf", "√", "sqrt", "∂", "d",
-	"₀", "0", "₁", "1", "₂", "2", "₃", "3", "₄", "4", "₅", "5", "₆", "6", "₇", "7", "₈", "8", "₉", "9",
-	"⁰", "^0", "¹", "^1", "⁴", "^4",
-	"→", "->", "←", "<-", "↑", "^", "↓", "v", "…", "...", "•", "*", "▸", ">",
-	"│", "|", "┊", ":", "─", "-",
-	"’", "'", "‘", "'", "“", "\"", "”", "\"",
+	"zmix/mixtures/report"
 )
 
 // keyWords spells out arrow glyphs in key help, where a word reads better
@@ -52,35 +31,19 @@ func (c *Common) KeyText(s string) string {
 	return c.toASCII(keyWords.Replace(s))
 }
 
-// toASCII is the package's toASCII that also tells the test hook of every
+// toASCII is report.ToASCII, which also tells the test hook of every
 // glyph the table lacks, so that a test can fail on a "?" that stands in
 // for a glyph of ours.
 func (c *Common) toASCII(s string) string {
-	out := toASCII(s)
+	out := report.ToASCII(s)
 	if c.missingGlyph != nil && strings.Contains(out, "?") {
-		for _, r := range asciiReplacer.Replace(s) {
-			if r >= utf8.RuneSelf {
+		for _, r := range s {
+			if r >= utf8.RuneSelf && report.ToASCII(string(r)) == "?" && !strings.ContainsRune("̃", r) {
 				c.missingGlyph(r)
 			}
 		}
 	}
 	return out
-}
-
-func toASCII(s string) string {
-	if isASCII(s) {
-		return s
-	}
-	s = asciiReplacer.Replace(s)
-	if isASCII(s) {
-		return s
-	}
-	return strings.Map(func(r rune) rune {
-		if r >= utf8.RuneSelf {
-			return '?'
-		}
-		return r
-	}, s)
 }
 
 func isASCII(s string) bool {
@@ -90,45 +53,6 @@ func isASCII(s string) bool {
 		}
 	}
 	return true
-}
-
-// sig formats x with n significant figures, in plain notation for everyday
-// magnitudes and in e-notation for very large or small ones.
-func sig(x float64, n int) string { return mixtures.FormatSig(x, n) }
-
-// short formats x with up to n significant figures and no trailing
-// zeros, for values the user typed, such as a temperature.
-func short(x float64, n int) string {
-	if math.IsNaN(x) || math.IsInf(x, 0) {
-		return "n/a"
-	}
-	return strconv.FormatFloat(x, 'g', n, 64)
-}
-
-// fixed formats x with a fixed number of decimals.
-func fixed(x float64, decimals int) string {
-	if math.IsNaN(x) || math.IsInf(x, 0) {
-		return "n/a"
-	}
-	s := strconv.FormatFloat(x, 'f', decimals, 64)
-	if s == "-0" || strings.HasPrefix(s, "-0.") && strings.Trim(s[3:], "0") == "" {
-		s = s[1:]
-	}
-	return s
-}
-
-// presText writes a pressure in Pa with a unit chosen by its size.
-func presText(pa float64) string {
-	a := math.Abs(pa)
-	switch {
-	case a >= 1e6:
-		return short(pa/1e6, 5) + " MPa"
-	case a >= 1e4:
-		return short(pa/1e5, 5) + " bar"
-	case a >= 1e3:
-		return short(pa/1e3, 5) + " kPa"
-	}
-	return short(pa, 5) + " Pa"
 }
 
 // fitLine cuts s (which may hold styles) to width w cells and pads it to
@@ -158,52 +82,6 @@ func truncate(s string, w int) string {
 		return s
 	}
 	return truncStyle.MaxWidth(w).Render(s)
-}
-
-// wrap breaks plain text into lines of at most w cells at spaces.
-func wrap(s string, w int) []string {
-	if w < 8 {
-		w = 8
-	}
-	var out []string
-	for _, para := range strings.Split(s, "\n") {
-		words := strings.Fields(para)
-		var line strings.Builder
-		n := 0
-		for _, word := range words {
-			ww := lipgloss.Width(word)
-			for ww > w { // a word longer than the line is cut
-				if n > 0 {
-					out = append(out, line.String())
-					line.Reset()
-					n = 0
-				}
-				r := []rune(word)
-				cut := min(len(r), w)
-				out = append(out, string(r[:cut]))
-				word = string(r[cut:])
-				ww = lipgloss.Width(word)
-			}
-			if ww == 0 {
-				continue
-			}
-			if n > 0 && n+1+ww > w {
-				out = append(out, line.String())
-				line.Reset()
-				n = 0
-			}
-			if n > 0 {
-				line.WriteByte(' ')
-				n++
-			}
-			line.WriteString(word)
-			n += ww
-		}
-		if n > 0 || len(words) == 0 {
-			out = append(out, line.String())
-		}
-	}
-	return out
 }
 
 // shorten fits plain text into w cells, as it may be drawn (Text): whole

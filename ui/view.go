@@ -6,6 +6,8 @@ import (
 	"strings"
 
 	"github.com/charmbracelet/lipgloss"
+
+	"zmix/mixtures/report"
 )
 
 // View draws the whole screen. It only puts together what Update and
@@ -34,7 +36,7 @@ func (r *root) View() string {
 func (r *root) tooSmallView() string {
 	msg := fmt.Sprintf("zmix needs a terminal of at least %d×%d; this one is %d×%d. Enlarge the window or use a smaller font. q quits.",
 		minWidth, minHeight, r.width, r.height)
-	lines := wrap(r.c.Text(msg), r.width)
+	lines := report.Wrap(r.c.Text(msg), r.width)
 	if len(lines) > r.height {
 		lines = lines[:r.height]
 	}
@@ -59,7 +61,7 @@ func (r *root) tabBar() string {
 	}
 	left := sb.String()
 	if in := r.b.in; in.Valid() {
-		right := r.c.Text(short(in.TempK, 6) + " K · " + r.b.presShown(in.PresPa))
+		right := r.c.Text(report.Short(in.TempK, 6) + " K · " + r.b.presShown(in.PresPa))
 		if gap := r.width - lipgloss.Width(left) - lipgloss.Width(right) - 1; gap >= 2 {
 			return left + strings.Repeat(" ", gap) + s.Muted.Render(right) + " "
 		}
@@ -153,7 +155,7 @@ func (r *root) bottomLine() string {
 			bar = s.Error
 		}
 		if r.statusRows > 1 {
-			lines := wrap(t(r.status), r.width-1)
+			lines := report.Wrap(t(r.status), r.width-1)
 			if len(lines) > 2 {
 				lines = lines[:2]
 			}

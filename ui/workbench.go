@@ -7,6 +7,7 @@ import (
 	"strings"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -47,6 +48,8 @@ type bench struct {
 func newBench(cat *model.Catalogue) *bench { return &bench{cat: cat} }
 
 // loadFile replaces the recipe and conditions with those of a blend file.
+// How pressures are shown (absolute or gauge) is the user's setting, which
+// a file does not change; see viewFromFile.
 func (b *bench) loadFile(f *mixtures.BlendFile) {
 	b.entries = append(b.entries[:0], f.Components...)
 	b.name, b.note = f.Name, f.Note
@@ -58,9 +61,6 @@ func (b *bench) loadFile(f *mixtures.BlendFile) {
 		b.presText = f.Pressure
 	}
 	b.std, _ = mixtures.ParseStdPressure(f.StandardPressure)
-	if p, err := mixtures.ParsePressure(b.presText); err == nil {
-		b.showGauge = p.Gauge
-	}
 	b.touch()
 }
 
@@ -141,7 +141,7 @@ func (b *bench) setBalance(i int) {
 	}
 	share := func(j int) string {
 		if x, ok := b.moleFraction(b.entries[j].Species); ok {
-			return short(100*x, 6) + "%"
+			return report.Short(100*x, 6) + "%"
 		}
 		return ""
 	}
@@ -231,6 +231,14 @@ func (b *bench) toggleStd() { b.std = 1 - b.std; b.touch() }
 
 // toggleGauge changes only how pressures are shown, which a blend file
 // does not hold.
+// viewFromFile shows pressures the way a file's pressure was written, for
+// a workbench that starts on the file with no setting of its own.
+func (b *bench) viewFromFile(f *mixtures.BlendFile) {
+	if p, err := mixtures.ParsePressure(f.Pressure); err == nil {
+		b.showGauge = p.Gauge
+	}
+}
+
 func (b *bench) toggleGauge() { b.showGauge = !b.showGauge; b.changed = true }
 
 // cleanErr drops the package prefixes from an engine error, which the user
@@ -379,7 +387,7 @@ func (b *bench) derive() {
 	}
 	if name := nonFinite(&st); name != "" {
 		b.stateErr = fmt.Sprintf("the model gives no finite %s at %s and %s; try another temperature or pressure",
-			name, mixtures.FormatTemperature(b.in.TempK), presText(b.in.PresPa))
+			name, mixtures.FormatTemperature(b.in.TempK), b.presShown(b.in.PresPa))
 		return
 	}
 	b.state = st
@@ -419,8 +427,30 @@ func nonFinite(s *mixtures.State) string {
 
 // presShown writes the total pressure as absolute or gauge, as chosen.
 func (b *bench) presShown(presPa float64) string {
-	if b.showGauge {
-		return presText(presPa-mixtures.AtmospherePa) + " gauge"
+	return report.PressureIn(presPa, b.presUnit())
+}
+
+// presUnit is the unit pressures show in: the one of the pressure last
+// typed that read, as absolute or gauge as the user chose.
+func (b *bench) presUnit() mixtures.PressureUnit {
+	u, ok := mixtures.PressureUnitOf(b.validPres)
+	if !ok {
+		u = mixtures.BarAbsolute
 	}
-	return presText(presPa) + " abs"
+	return u.Reading(b.showGauge)
+}
+
+// stateReport is the current state as the state command reports it: the
+// figures, the hazard cautions and the validity notes at caution level
+// (those the command prints without --all-notes).
+func (b *bench) stateReport() *report.StateReport {
+	st := b.state
+	return &report.StateReport{
+		Label:    b.name,
+		State:    &st,
+		PresText: b.validPres,
+		Gauge:    b.in.Gauge,
+		Cautions: b.cautions,
+		Notes:    cautionNotes(b.notes),
+	}
 }

@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -206,12 +207,12 @@ func TestBenchBlendFileRoundTrip(t *testing.T) {
 // included, is in mixtures/format_test.go), the same as the commands'.
 func TestSig(t *testing.T) {
 	for _, x := range []float64{29.1234, 0, math.NaN()} {
-		if got, want := sig(x, 5), mixtures.FormatSig(x, 5); got != want {
-			t.Errorf("sig(%g, 5) = %q, want %q", x, got, want)
+		if got, want := report.Sig(x, 5), mixtures.FormatSig(x, 5); got != want {
+			t.Errorf("report.Sig(%g, 5) = %q, want %q", x, got, want)
 		}
 	}
-	if got := fixed(-0.0001, 3); got != "0.000" {
-		t.Errorf("fixed(-0.0001, 3) = %q, want 0.000", got)
+	if got := report.Fixed(-0.0001, 3); got != "0.000" {
+		t.Errorf("report.Fixed(-0.0001, 3) = %q, want 0.000", got)
 	}
 }
 
@@ -225,8 +226,8 @@ func TestToASCII(t *testing.T) {
 		{"odd ☃", "odd ?"},
 	}
 	for _, c := range cases {
-		if got := toASCII(c.in); got != c.want {
-			t.Errorf("toASCII(%q) = %q, want %q", c.in, got, c.want)
+		if got := report.ToASCII(c.in); got != c.want {
+			t.Errorf("report.ToASCII(%q) = %q, want %q", c.in, got, c.want)
 		}
 	}
 }

@@ -21,6 +21,8 @@ var asciiText = strings.NewReplacer(
 	"⁰", "^0", "¹", "^1", "⁴", "^4",
 	"→", "->", "←", "<-", "↑", "^", "↓", "v", "…", "...", "•", "*", "▸", ">", "·", ".",
 	"’", "'", "‘", "'", "“", "\"", "”", "\"", "\u00a0", " ",
+	// The workbench's separators and rules.
+	"│", "|", "┊", ":", "─", "-",
 )
 
 // ToASCII rewrites s for ASCII mode. Anything the table does not cover,

@@ -57,3 +57,9 @@ func StdPressure(pa float64) string {
 func Temperature(tempK float64) string {
 	return Short(tempK, 6) + " K  (" + Fixed(mixtures.KelvinToCelsius(tempK), 2) + " °C)"
 }
+
+// PressureIn writes an absolute pressure in the unit and reading the user
+// chose: "1.4 bar abs", "5.6 psig", "38.675 kPag".
+func PressureIn(pa float64, u mixtures.PressureUnit) string {
+	return Short(u.FromPa(pa), 5) + " " + u.Name()
+}

@@ -15,9 +15,9 @@ import (
 // with its method, so that nothing above it changes meaning.
 
 // RealGasLines are the real-gas figures of a state as label and value
-// pairs, for the text readout and the workbench alike; a single line
-// saying why when they are not known. Z and the real density also stand
-// in the quantity table, beside the ideal-gas density.
+// pairs; a single line saying why when they are not known. Z and the
+// real density are rows of the quantity table too (SectionRealGas), for
+// JSON, CSV, sweeps and the workbench.
 func RealGasLines(st *mixtures.State) [][2]string {
 	if !st.RealGasKnown {
 		return [][2]string{{"not known", "no species of the blend carries critical constants (Tc, Pc, ω)"}}
@@ -27,6 +27,7 @@ func RealGasLines(st *mixtures.State) [][2]string {
 	lines := [][2]string{
 		{"model", ModelText(rg)},
 		{"Z = PV/(RT)", Sig(rg.Z, 5) + fmt.Sprintf("   |Z − 1| = %s %%: the ideal-gas density is off by that much", Sig(deviation, 2))},
+		{"real density", Sig(st.RealDensityKgPerM3(), 5) + " kg/m³   (ideal gas " + Sig(st.DensityKgPerM3, 5) + ")"},
 		{"H − H(ideal)", Sig(rg.HResJPerMol, 4) + " J/mol   (departure at the same T and P)"},
 		{"S − S(ideal)", Sig(rg.SResJPerMolK, 4) + " J/(mol·K)"},
 		{"Cp, real gas", Sig(rg.CpJPerMolK, 5) + " J/(mol·K)   (ideal gas " + Sig(st.CpJPerMolK, 5) + ")"},
@@ -84,6 +85,31 @@ func realGasRemarks(st *mixtures.State) []string {
 	return out
 }
 
+// DewPointLine is the blend's dew point at the line pressure as a label
+// and a value, with the margin to the state's temperature and its method.
+func DewPointLine(st *mixtures.State, dp realgas.DewPoint) [2]string {
+	if !dp.Known {
+		return [2]string{"dew point", "none: " + dp.Why}
+	}
+	label := "dew point"
+	if dp.Frost {
+		label = "frost point"
+	}
+	margin := st.TempK - dp.TempK
+	where := Short(math.Abs(margin), 3) + " K below T"
+	if margin <= 0 {
+		where = "T is " + Short(-margin, 3) + " K below it: the blend condenses"
+	}
+	how := strings.Join(dp.Species, ", ")
+	if dp.Raoult {
+		how += "; ideal-solution (Raoult) estimate"
+	}
+	if dp.Rough {
+		how += "; rough: a vapour pressure from Trouton's rule"
+	}
+	return [2]string{label, Temperature(dp.TempK) + " at the line pressure, " + where + " (" + model.Printable(how) + ")"}
+}
+
 // writeRealGasText writes the section of the text readout.
 func writeRealGasText(w io.Writer, st *mixtures.State) {
 	fmt.Fprintln(w, "Real gas, beside the ideal-gas figures above")
@@ -91,6 +117,8 @@ func writeRealGasText(w io.Writer, st *mixtures.State) {
 	for _, l := range RealGasLines(st) {
 		t.Row(l[0], l[1])
 	}
+	dp := DewPointLine(st, mixtures.DewPoint(st))
+	t.Row(dp[0], dp[1])
 	t.Write(w)
 	for _, r := range realGasRemarks(st) {
 		WriteWrapped(w, "  ", "    ", r)
@@ -99,8 +127,44 @@ func writeRealGasText(w io.Writer, st *mixtures.State) {
 }
 
 // realGas appends the member "real_gas": an object with the real-gas
-// figures in SI units and the model's name, or null when not known.
+// figures in SI units and the model's name, or null when not known; then
+// the dew point at the line pressure: dew_point_K (null when nothing can
+// condense at any temperature the catalogue covers), dew_point_species,
+// dew_point_kind ("dew" or "frost") and dew_point_method.
 func (j *jsonWriter) realGas(st *mixtures.State, indent string) {
+	j.realGasObject(st, indent)
+	dp := mixtures.DewPoint(st)
+	j.buf = append(j.buf, ",\n"...)
+	j.key(indent, "dew_point_K")
+	if dp.Known {
+		j.float(dp.TempK)
+	} else {
+		j.buf = append(j.buf, "null"...)
+	}
+	j.buf = append(j.buf, ",\n"...)
+	j.strings(indent, "dew_point_species", dp.Species)
+	kind, method := "dew", "vapour pressures: IAPWS for water, Lee-Kesler from Tc, Pc and omega for the others"
+	if dp.Frost {
+		kind = "frost"
+	}
+	if dp.Raoult {
+		method += "; ideal-solution (Raoult) estimate"
+	}
+	if dp.Rough {
+		method += "; rough: a vapour pressure from Trouton's rule"
+	}
+	if !dp.Known {
+		kind, method = "", dp.Why
+	}
+	j.buf = append(j.buf, ",\n"...)
+	j.key(indent, "dew_point_kind")
+	j.buf = appendJSONString(j.buf, kind)
+	j.buf = append(j.buf, ",\n"...)
+	j.key(indent, "dew_point_method")
+	j.buf = appendJSONString(j.buf, method)
+}
+
+func (j *jsonWriter) realGasObject(st *mixtures.State, indent string) {
 	j.key(indent, "real_gas")
 	if !st.RealGasKnown {
 		j.buf = append(j.buf, "null"...)
