@@ -93,11 +93,34 @@ func parseFlags(fs *flag.FlagSet, args []string, interleave bool) ([]string, err
 		}
 		args = fs.Args()
 		if !interleave || len(args) == 0 {
+			if err := noBlankValues(fs); err != nil {
+				return nil, err
+			}
 			return append(positional, args...), nil
 		}
 		positional = append(positional, args[0])
 		args = args[1:]
 	}
+}
+
+// noBlankValues refuses a flag given with an empty value (--std ""): it
+// would otherwise read as the flag left out, and a default would be used
+// silently.
+func noBlankValues(fs *flag.FlagSet) error {
+	var blank string
+	fs.Visit(func(f *flag.Flag) {
+		// String flags only: a Func flag (--species) checks its own value.
+		if g, ok := f.Value.(flag.Getter); ok {
+			if v, ok := g.Get().(string); ok && blank == "" && strings.TrimSpace(v) == "" {
+				blank = f.Name
+			}
+		}
+	})
+	if blank != "" {
+		_, usage := flag.UnquoteUsage(fs.Lookup(blank))
+		return badInput("--%s was given an empty value; want %s (see %s --help)", blank, usage, fs.Name())
+	}
+	return nil
 }
 
 // flagError rewrites the flag package's messages into zmix's one-line
@@ -132,7 +155,7 @@ func flagsGiven(fs *flag.FlagSet) map[string]bool {
 // noArgs rejects positional arguments for commands that take none.
 func noArgs(cmd string, rest []string) error {
 	if len(rest) > 0 {
-		return badInput("unexpected argument %q; every input is a flag, and a value with a space needs quotes, e.g. --pres \"1 bar\" (see zmix %s --help)", rest[0], cmd)
+		return badInput("unexpected argument %s; every input is a flag, and a value with a space needs quotes, e.g. --pres \"1 bar\" (see zmix %s --help)", model.Quote(rest[0]), cmd)
 	}
 	return nil
 }

@@ -102,7 +102,7 @@ func (a *app) cmdHelp(g *globalOpts, args []string) error {
 	case 1:
 		c, ok := lookupCommand(args[0])
 		if !ok {
-			return badInput("no help on %q; the commands are %s", args[0], commandNames())
+			return badInput("no help on %s; the commands are %s", model.Quote(args[0]), commandNames())
 		}
 		c.usage(a.stdout)
 		return nil
@@ -115,14 +115,19 @@ func usageMain(w io.Writer) {
 	b.WriteString(`zmix: the state of an ideal-gas mixture, from molecular partition functions
 
 Usage:
-  zmix [--ascii] [--no-color] [--species FILE]     open the workbench on the demo blend
+  zmix [--ascii] [--no-color] [--species FILE]     open the workbench where you left it
+                                                   (the built-in demo blend the first time)
   zmix open FILE                                   open the workbench on a saved blend file
   zmix COMMAND [flags]
 
 Commands:
 `)
+	width := 0
 	for _, c := range commands {
-		fmt.Fprintf(&b, "  %-8s %s\n", c.name, c.summary)
+		width = max(width, len(c.name))
+	}
+	for _, c := range commands {
+		fmt.Fprintf(&b, "  %-*s  %s\n", width, c.name, c.summary)
 	}
 	b.WriteString(`
 Flags for every command:
@@ -145,8 +150,8 @@ func usageOpen(w io.Writer) {
 	io.WriteString(w, `Usage: zmix open [--ascii] [--no-color] [--species FILE] FILE
 
 Opens the workbench on a saved blend file (JSON, format "zmix-blend/1"; see
-the README). Without a terminal, or in a build without the workbench, it
-prints the file's readout, as zmix state --blend @FILE does.
+the README). Without a terminal it prints the file's readout instead, as
+zmix state --blend @FILE does.
 
 Examples:
   zmix open line3-nitride.json

@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"errors"
 	"fmt"
 	"strings"
 
@@ -88,7 +89,7 @@ func computeState(cat *model.Catalogue, cfg stateConfig) (*report.StateReport, e
 	}
 	st, err := mix.State(cfg.temp.kelvin, cfg.pres.Pa, mixtures.Options{Std: cfg.std})
 	if err != nil {
-		return nil, badInput("%s", model.UserMessage(err))
+		return nil, conditionError(err, cfg.temp.text, cfg.pres.text)
 	}
 	if err := report.CheckFinite(&st); err != nil {
 		return nil, badInput("%s", model.UserMessage(err))
@@ -131,4 +132,16 @@ func (a *app) cautionsToStderr(cautions []mixtures.Caution) {
 	for _, line := range report.CautionLines(cautions) {
 		fmt.Fprintln(a.stderr, "zmix: caution: "+line)
 	}
+}
+
+// conditionError names the flag and the text typed for a state the model
+// cannot compute, instead of the converted value alone.
+func conditionError(err error, tempText, presText string) error {
+	switch {
+	case errors.Is(err, model.ErrTemperature):
+		return badInput("--temp %s: %s", model.Quote(strings.TrimSpace(tempText)), model.UserMessage(err))
+	case errors.Is(err, model.ErrPressure) && strings.TrimSpace(presText) != "":
+		return badInput("--pres %s: %s", model.Quote(strings.TrimSpace(presText)), model.UserMessage(err))
+	}
+	return badInput("%s", model.UserMessage(err))
 }

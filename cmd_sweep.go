@@ -56,7 +56,7 @@ func (a *app) cmdSweep(g *globalOpts, args []string) error {
 	tempIsRange, presIsRange := strings.Contains(tempText, ".."), strings.Contains(presText, "..")
 	switch {
 	case tempIsRange && presIsRange:
-		return badInput("--temp %q and --pres %q are both ranges; sweep one and give the other as one value, e.g. --temp 300..1500K --pres 1atm", tempText, presText)
+		return badInput("--temp %s and --pres %s are both ranges; sweep one and give the other as one value, e.g. --temp 300..1500K --pres 1atm", model.Quote(tempText), model.Quote(presText))
 	case !tempIsRange && !presIsRange:
 		return badInput("nothing to sweep; give --temp A..B (e.g. 300..1500K) with a fixed --pres, or --pres A..B (e.g. 1..50bar) with a fixed --temp")
 	}

@@ -70,6 +70,12 @@ func init() {
 	commands = []command{
 		{"state", "the full readout of a blend at one temperature and pressure", (*app).cmdState, usageState},
 		{"sweep", "a blend's properties over a range of temperature or pressure", (*app).cmdSweep, usageSweep},
+		{"flow", "convert a flow between molar, mass, actual and standard volume units", (*app).cmdFlow, usageFlow},
+		{"compress", "compress or expand a blend: outlet temperature, work and power", (*app).cmdCompress, usageCompress},
+		{"heat", "the duty to heat or cool a blend at constant pressure", (*app).cmdHeat, usageHeat},
+		{"mix", "join streams adiabatically: outlet state and entropy generated", (*app).cmdMix, usageMix},
+		{"dilute", "the diluent flow for a target level, or the level of a ratio", (*app).cmdDilute, usageDilute},
+		{"purge", "purge cycles or time to bring a species down to a target", (*app).cmdPurge, usagePurge},
 		{"catalog", "the species list, or one species' data, sources and table", (*app).cmdCatalog, usageCatalog},
 		{"open", "the workbench on a saved blend file", (*app).cmdOpen, usageOpen},
 		{"help", "help on zmix or on one command", (*app).cmdHelp, usageHelp},
@@ -111,7 +117,7 @@ func (a *app) run(args []string) int {
 	}
 	c, ok := lookupCommand(rest[0])
 	if !ok {
-		return a.fail("zmix", badInput("unknown command %q; the commands are %s (zmix --help shows them all)", rest[0], commandNames()))
+		return a.fail("zmix", badInput("unknown command %s; the commands are %s (zmix --help shows them all)", model.Quote(rest[0]), commandNames()))
 	}
 	err = c.run(a, g, rest[1:])
 	if errors.Is(err, errHelp) {
@@ -155,18 +161,9 @@ func (a *app) fail(prefix string, err error) int {
 	}
 	// One line, and nothing in it that a terminal would act on: the
 	// message may quote a file's contents.
-	fmt.Fprintf(a.stderr, "%s: %s\n", prefix, model.Printable(untypedPrefixes.Replace(model.UserMessage(err))))
+	fmt.Fprintf(a.stderr, "%s: %s\n", prefix, model.Printable(model.UserMessage(err)))
 	return code
 }
-
-// untypedPrefixes is transitional: it goes once every engine error is
-// built with model.Errorf (work in flight in mixtures and model).
-var untypedPrefixes = strings.NewReplacer(
-	"mixtures: bad value: ", "",
-	"mixtures: bad sweep: ", "",
-	"mixtures: ", "",
-	"model: ", "",
-)
 
 // isTerminal reports whether w is a character device such as a terminal.
 func isTerminal(w io.Writer) bool {

@@ -102,19 +102,32 @@ func TestBadInput(t *testing.T) {
 		{"sweep pressure of partial pressures", []string{"sweep", "--blend", "Ar 0.5bar, He 0.5bar", "--temp", "300K", "--pres", "1..2bar"}, 2, "partial pressures"},
 		{"sweep missing fixed pressure", append([]string{"sweep", "--temp", "300..400K"}, okBlend...), 2, "--pres is missing"},
 		{"sweep json and csv", append([]string{"sweep", "--temp", "300..400K", "--pres", "1bar", "--json", "--csv"}, okBlend...), 2, "--json and --csv"},
-		{"unknown command", []string{"mix"}, 2, "unknown command \"mix\"; the commands are state, sweep, catalog, open, help"},
+		{"unknown command", []string{"stir"}, 2, "unknown command \"stir\"; the commands are state, sweep, flow, compress, heat, mix, dilute, purge, catalog, open, help"},
 		{"unknown global flag", []string{"--verbose"}, 2, "unknown flag --verbose"},
 		{"unknown catalog species", []string{"catalog", "CO22"}, 2, "did you mean CO2"},
 		{"two catalog species", []string{"catalog", "CO2", "N2"}, 2, "one species at a time"},
 		{"bad table temperature", []string{"catalog", "N2", "--temps", "300, cold"}, 2, `"cold"`},
 		{"open without file", []string{"open"}, 2, "the blend file is missing"},
-		{"help on nothing", []string{"help", "mix"}, 2, "no help on \"mix\""},
+		{"help on nothing", []string{"help", "stir"}, 2, "no help on \"stir\""},
 		{"missing blend file", append([]string{"state", "--blend", "@testdata/blends/no-such-file.json"}, "--temp", "300K", "--pres", "1bar"), 1, "cannot read it"},
 		{"blend file with a bad amount", []string{"state", "--blend", "@testdata/blends/bad-amount.json", "--temp", "300K", "--pres", "1bar"}, 2, `"N2 lots"`},
 		{"blend file not JSON", []string{"state", "--blend", "@testdata/blends/not-json.json", "--temp", "300K", "--pres", "1bar"}, 2, "not-json.json:1:"},
 		{"missing species file", append([]string{"state", "--species", "testdata/species/none.cat", "--temp", "300K", "--pres", "1bar"}, okBlend...), 1, "cannot read it"},
 		{"species file with a bad field", append([]string{"state", "--species", "testdata/species/bad-field.cat", "--temp", "300K", "--pres", "1bar"}, okBlend...), 2, `bad-field.cat:5: field "colour": unknown field`},
 		{"open missing file", []string{"open", "testdata/blends/no-such-file.json"}, 1, "cannot read it"},
+		// Issue 7, item 12: the list is quoted as typed, with the real reason.
+		{"table temperature below zero", []string{"catalog", "N2", "--temps", "-5 K"}, 2, `--temps "-5 K": temperature "-5 K" is at or below absolute zero`},
+		{"table temperature not a number", []string{"catalog", "N2", "--temps", "abc"}, 2, `--temps "abc": temperature "abc"`},
+		// Issue 7, item 15: an empty value is not a value left out.
+		{"empty table temperatures", []string{"catalog", "N2", "--temps", ""}, 2, "--temps was given an empty value"},
+		{"empty standard pressure", append([]string{"state", "--temp", "300K", "--pres", "1bar", "--std", ""}, okBlend...), 2, "--std was given an empty value"},
+		// Issue 7, item 13: a huge value is quoted in part.
+		{"huge value quoted in part", append([]string{"state", "--temp", strings.Repeat("9", 120_000), "--pres", "1bar"}, okBlend...), 2, "(120000 characters)"},
+		{"huge argument quoted in part", []string{"state", strings.Repeat("x", 5000)}, 2, "(5000 characters)"},
+		// Issue 7, item 19: out of range names the flag and what was typed.
+		{"temperature out of the model's range", append([]string{"state", "--temp", "1e7 K", "--pres", "1bar"}, okBlend...), 2, `--temp "1e7 K": temperature must be`},
+		// Issue 7, item 2: a name cannot carry escapes to the terminal.
+		{"escape in a command name", []string{"mix\x1b[2J"}, 2, `unknown command "mix\x1b[2J"`},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
@@ -126,6 +139,12 @@ func TestBadInput(t *testing.T) {
 				t.Errorf("zmix %q: wrote to stdout on error:\n%s", tt.args, stdout)
 			}
 			checkOneLineError(t, stderr)
+			if len(stderr) > 1000 {
+				t.Errorf("zmix %q: a %d-byte error line", tt.args[:min(len(tt.args), 2)], len(stderr))
+			}
+			if strings.ContainsRune(stderr, 0x1b) {
+				t.Errorf("zmix %q: the error holds an ESC byte", tt.args)
+			}
 			if !strings.Contains(stderr, tt.want) {
 				t.Errorf("zmix %q: error %q does not contain %q", tt.args, stderr, tt.want)
 			}
@@ -518,8 +537,11 @@ func TestHelp(t *testing.T) {
 		}
 	}
 	_, stdout, _ := zmix(t, "state", "--help")
-	for _, unit := range []string{"K, C (°C), F (°F), R (Rankine)", "Pa, kPa, MPa, bar, mbar, atm, Torr, psi (psia)", "barg, psig"} {
-		if !strings.Contains(stdout, unit) {
+	// The help lists every unit the parser accepts, from the engine's own
+	// list (issue 7, item 19: kPag and bara worked but were not listed).
+	flat := strings.Join(strings.Fields(stdout), " ")
+	for _, unit := range []string{mixtures.TemperatureUnits, mixtures.PressureUnits, "Pa, kPa, MPa, bar, mbar, atm, Torr, psi", "psia", "bara", "kPag", "MPag", "barg", "psig"} {
+		if !strings.Contains(flat, unit) {
 			t.Errorf("state --help lacks the units %q", unit)
 		}
 	}

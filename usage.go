@@ -1,15 +1,23 @@
 package main
 
-import "io"
+import (
+	"io"
+	"strings"
+
+	"zmix/mixtures"
+	"zmix/mixtures/report"
+)
 
 // The help of each command, written out so that it can carry examples and
 // the accepted forms; the flag package's generated text has neither.
 
-const unitsHelp = `Units:
-  temperature  K, C (°C), F (°F), R (Rankine): 300K, 25C, 77 F, 540 R
-  pressure     Pa, kPa, MPa, bar, mbar, atm, Torr, psi (psia): 1atm, 14.7 psia
-               gauge: barg, psig (plus 101325 Pa; flagged as gauge in the output)
-`
+// unitsHelp lists the units from the engine's own lists, so that help
+// cannot fall behind what the parser accepts.
+var unitsHelp = "Units:\n" +
+	"  temperature  " + mixtures.TemperatureUnits + ": 300K, 25C, 77 F, 540 R\n" +
+	"  pressure     " + strings.Join(report.Wrap(mixtures.PressureUnits, 64), "\n               ") + "\n" +
+	"               e.g. 1atm, 14.7 psia, 2 barg; a gauge pressure is read as\n" +
+	"               101325 Pa above the value and flagged as gauge in the output\n"
 
 const blendHelp = `Blend text: "SPECIES AMOUNT" items separated by , ; or new lines. An amount is
   a mole fraction (0.21), mol % (21% or 21 mol%), ppm or ppb by moles, a mass

@@ -126,3 +126,33 @@ func BenchmarkParseResolve10(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkItemsResolve10 is the engine's part of a keystroke in the
+// workbench's recipe: each row checked on its own, then the rows as items
+// resolved into a mixture, with no text joined or parsed.
+func BenchmarkItemsResolve10(b *testing.B) {
+	cat := testCatalogue(b)
+	bl, err := ParseBlend(blend10)
+	if err != nil {
+		b.Fatal(err)
+	}
+	items := make([]BlendItem, len(bl.Items))
+	for i, it := range bl.Items {
+		items[i] = BlendItem{Species: it.Key, Amount: it.Text}
+	}
+	b.ReportAllocs()
+	for b.Loop() {
+		for _, it := range items {
+			if err := CheckItem(cat, it); err != nil {
+				b.Fatal(err)
+			}
+		}
+		nb, err := NewBlend(items)
+		if err != nil {
+			b.Fatal(err)
+		}
+		if benchMix, err = nb.Resolve(cat, 1e5); err != nil {
+			b.Fatal(err)
+		}
+	}
+}

@@ -89,6 +89,8 @@ type BlendError struct {
 	Origin string // where the item was written ("lab.json:7"), or ""
 	Err    error  // one of the Err… values above
 	Detail string
+
+	ofSpecies bool // Token is the species alone
 }
 
 // Error is the message with the package prefix, for logs.
@@ -99,7 +101,7 @@ func (e *BlendError) Error() string { return "mixtures: " + e.UserMessage() }
 func (e *BlendError) UserMessage() string {
 	var b strings.Builder
 	what := "item"
-	if errors.Is(e.Err, ErrUnknownSpecies) {
+	if e.ofSpecies || errors.Is(e.Err, ErrUnknownSpecies) {
 		what = "species"
 	}
 	switch {
@@ -195,9 +197,9 @@ func newBlend(text string, items []BlendItem, offsets, lengths []int) (*Blend, *
 	for i, in := range items {
 		token := text[offsets[i] : offsets[i]+lengths[i]]
 		fail := func(err *BlendError) *BlendError {
-			err.Text, err.Index, err.Origin = text, i, in.Origin
-			if err.Token == "" {
-				err.Token, err.Offset = token, offsets[i]
+			err.Text, err.Index, err.Origin, err.Offset = text, i, in.Origin, offsets[i]
+			if err.Token == "" || !strings.HasPrefix(token, err.Token) {
+				err.Token = token
 			}
 			return err
 		}
@@ -242,7 +244,7 @@ func parseItem(in BlendItem) (Item, *BlendError) {
 	key := strings.TrimSpace(in.Species)
 	switch n := utf8.RuneCountInString(in.Species); {
 	case n > MaxSpeciesChars:
-		return Item{}, &BlendError{Err: ErrTooLong,
+		return Item{}, &BlendError{Err: ErrTooLong, Token: in.Species, ofSpecies: true,
 			Detail: fmt.Sprintf("a species of %d characters; want a formula or name of at most %d", n, MaxSpeciesChars)}
 	case key == "":
 		return Item{}, &BlendError{Err: ErrSyntax, Detail: "the species is missing; want a formula or name such as N2"}

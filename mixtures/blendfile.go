@@ -475,6 +475,14 @@ func WriteFileAtomicFunc(path string, perm os.FileMode, write func(io.Writer) er
 	return nil
 }
 
+// CheckWriteTarget reports whether WriteFileAtomic would refuse path (not
+// a regular file, a link to nothing, another user's file), so that a
+// caller can say so before asking whether to replace it.
+func CheckWriteTarget(path string) error {
+	_, _, err := writeTarget(path)
+	return err
+}
+
 // writeTarget returns the file a write to path replaces, following a
 // symbolic link, and the permissions of that file (0 when it does not
 // exist yet). Anything but a regular file is refused.

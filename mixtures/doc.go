@@ -42,7 +42,24 @@
 // sum to 100 % within 0.05 % are renormalised. A species listed twice is
 // one species: its amounts add, and it adds no mixing entropy.
 //
+// Blend text is one front end: NewBlend builds the same Blend from
+// (species, amount) items, such as recipe rows or blend-file components,
+// and its errors name the item by index and by the origin the caller gave
+// ("lab.json:7"). A balance species that would get nothing is an error.
+//
 // Unit words ignore case, except that "mPa" is refused: read as MPa it
-// would be 10⁹ times off. Gauge units (barg, psig) add 101 325 Pa and
-// are not accepted as partial pressures.
+// would be 10⁹ times off. Every pressure unit with a gauge form takes it
+// (kPag, MPag, barg, mbarg, psig: 101 325 Pa is added) and the matching
+// absolute form (kPaa, bara, psia, …); gauge units are not accepted as
+// partial pressures.
+//
+// # Sweeps
+//
+// A Sweep is a grid of Steps points over T (linear, or log on request) or
+// P (always log), end points exactly as typed. A range reads as
+// "FROM..TO UNIT" or "FROM UNIT..TO UNIT" (ParseSweepRange); the number of
+// points is given apart (ParseSteps). Mixture.CheckSweep checks every
+// point up front; Mixture.Stream computes the points in order into one
+// reused State, keeping none; a SweepTable keeps chosen figures of every
+// point as float64 columns.
 package mixtures

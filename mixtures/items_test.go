@@ -136,6 +136,8 @@ func TestBlendFileLimits(t *testing.T) {
 		name, text, mentions string
 	}{
 		{"1 MB species", `{"format":"zmix-blend/1","components":[{"species":"` + huge + `","amount":"bal"}]}`, "KB"},
+		{"900 KB species, under the file cap", `{"format":"zmix-blend/1","components":[{"species":"` + huge[:900<<10] + `","amount":"bal"}]}`, "at most 64"},
+		{"900 KB note", `{"format":"zmix-blend/1","note":"` + huge[:900<<10] + `","components":[{"species":"N2","amount":"bal"}]}`, "note of"},
 		{"long species", `{"format":"zmix-blend/1","components":[{"species":"` + strings.Repeat("N", 65) + `","amount":"bal"}]}`, "at most 64"},
 		{"long amount", `{"format":"zmix-blend/1","components":[{"species":"N2","amount":"` + strings.Repeat("1", 65) + `"}]}`, "at most 64"},
 		{"long name", `{"format":"zmix-blend/1","name":"` + strings.Repeat("n", MaxNameChars+1) + `","components":[{"species":"N2","amount":"bal"}]}`, "name of"},
@@ -216,9 +218,59 @@ func TestWriteFileAtomicRefuses(t *testing.T) {
 		if err := WriteFileAtomic(p, []byte("x"), 0o666); !errors.Is(err, ErrNotRegular) || !strings.Contains(err.Error(), p) {
 			t.Errorf("write over %s: %v, want ErrNotRegular naming it", p, err)
 		}
+		if err := CheckWriteTarget(p); !errors.Is(err, ErrNotRegular) {
+			t.Errorf("CheckWriteTarget(%s) = %v, want ErrNotRegular", p, err)
+		}
+	}
+	for _, p := range []string{real, link, filepath.Join(dir, "new.json")} {
+		if err := CheckWriteTarget(p); err != nil {
+			t.Errorf("CheckWriteTarget(%s) = %v, want nil", p, err)
+		}
 	}
 	if st, err := os.Stat(os.DevNull); err != nil || st.Mode()&fs.ModeDevice == 0 {
 		t.Errorf("%s harmed: %v", os.DevNull, err)
 	}
 	assertOnlyFiles(t, dir, "dangling.json", "link.json", "real.json", "sub", "todir")
+}
+
+// FuzzNewBlend feeds arbitrary items to the items front end: it never
+// panics; an error names an item that exists (or the blend as a whole)
+// on one bounded line; a blend that resolves has fractions that sum to
+// one.
+func FuzzNewBlend(f *testing.F) {
+	f.Add("N2", "bal", "O2", "21%")
+	f.Add("N2", "80%", "O2", "30%")
+	f.Add("", "", "Xx", "bal")
+	f.Add("N2 O2", "1,2", "O2", "0.2 bar")
+	f.Add(strings.Repeat("N", 70), "bal", "O2", strings.Repeat("9", 70))
+	cat := testCatalogue(f)
+	f.Fuzz(func(t *testing.T, s1, a1, s2, a2 string) {
+		items := []BlendItem{{s1, a1, "f.json:1"}, {s2, a2, "f.json:2"}}
+		b, err := NewBlend(items)
+		var m *Mixture
+		if err == nil {
+			m, err = b.Resolve(cat, 1e5)
+		}
+		if err != nil {
+			var be *BlendError
+			if !errors.As(err, &be) {
+				t.Fatalf("error %T %v, want *BlendError", err, err)
+			}
+			msg := be.UserMessage()
+			if be.Index < -1 || be.Index >= len(items) || strings.ContainsAny(msg, "\n\r") || len(msg) > 1000 {
+				t.Fatalf("error index %d, message %q", be.Index, msg)
+			}
+			if be.Index >= 0 && !strings.HasPrefix(msg, items[be.Index].Origin+": ") {
+				t.Fatalf("message %q does not start with the item's origin", msg)
+			}
+			return
+		}
+		sum := 0.0
+		for _, c := range m.Components {
+			sum += c.X
+		}
+		if !relClose(sum, 1, 1e-12, 0) {
+			t.Fatalf("fractions sum to %g", sum)
+		}
+	})
 }

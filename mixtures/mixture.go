@@ -160,7 +160,12 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 		s.Species = make([]SpeciesTerm, len(m.Components))
 	}
 	if len(m.lnX) != len(m.Components) {
-		m.prepare()
+		// Not made by NewMixture. Fill may run on several goroutines at
+		// once (the workbench's state and its sweep), so it computes
+		// what NewMixture would have kept without storing it.
+		c := *m
+		c.prepare()
+		m = &c
 	}
 	p0 := opts.Std.Pa()
 	r := model.GasConstant

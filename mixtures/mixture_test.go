@@ -4,6 +4,7 @@ import (
 	"errors"
 	"math"
 	"math/rand/v2"
+	"reflect"
 	"strconv"
 	"testing"
 
@@ -410,5 +411,21 @@ func TestStateErrors(t *testing.T) {
 		if _, err := m.State(c.tempK, c.presPa, Options{}); !errors.Is(err, c.want) {
 			t.Errorf("%s: State error %v, want %v", c.name, err, c.want)
 		}
+	}
+}
+
+// A Mixture made without NewMixture (a literal) computes the same states:
+// ln xᵢ and the mixing entropy, which NewMixture keeps, are computed on
+// the fly without writing to the shared Mixture.
+func TestMixtureLiteralSameState(t *testing.T) {
+	m := mustMixture(t, "SiH4 2%, H2 500ppm, N2 bal", 1e5)
+	lit := &Mixture{Components: m.Components, MolarMassKgPerMol: m.MolarMassKgPerMol}
+	want := mustState(t, m, 450, 2e5)
+	got := mustState(t, lit, 450, 2e5)
+	if !reflect.DeepEqual(got, want) {
+		t.Errorf("a literal Mixture's state differs from NewMixture's")
+	}
+	if lit.lnX != nil {
+		t.Errorf("Fill wrote to a literal Mixture")
 	}
 }

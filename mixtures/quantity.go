@@ -140,6 +140,11 @@ var Quantities = []Quantity{
 	{Key: "Smix", Label: "mixing entropy", Symbol: "ΔSmix", SymbolASCII: "dSmix", Unit: unitJPerMolK, UnitASCII: unitJPerMolKASCII, Scale: 1,
 		Name: "s_mix_J_molK", Digits: Digits{Sig: 5},
 		Get: func(s *State) float64 { return s.SMixJPerMolK }},
+	// The reversible work to part the blend into its pure gases at the
+	// same T and P: the counterpart of the mixing entropy, T·ΔSmix.
+	{Key: "Wsep", Label: "min. separation work", Symbol: "Wsep", SymbolASCII: "Wsep", Unit: "kJ/mol", UnitASCII: "kJ/mol", Scale: 1e-3,
+		Name: "min_separation_work_J_mol", PerKgName: "min_separation_work_J_kg", PerKgUnit: "kJ/kg", PerKgUnitASCII: "kJ/kg", Digits: Digits{Sig: 5},
+		Get: func(s *State) float64 { return s.TempK * s.SMixJPerMolK }},
 }
 
 // SpeciesQuantities lists each species' figures in the order every output

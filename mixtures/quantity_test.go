@@ -3,6 +3,8 @@ package mixtures
 import (
 	"math"
 	"testing"
+
+	"zmix/model"
 )
 
 // The table is read by every output, so its rows must be unambiguous:
@@ -67,6 +69,7 @@ func TestQuantityGetters(t *testing.T) {
 		"Cp": s.CpJPerMolK, "Cv": s.CvJPerMolK, "gamma": s.Gamma, "c": s.SoundSpeedMPerS,
 		"H": s.HJPerMol, "U": s.UJPerMol, "S": s.SJPerMolK, "G": s.GJPerMol, "A": s.AJPerMol, "Smix": s.SMixJPerMolK,
 		"Z": s.RealGas.Z, "rho_real": s.MolarMassKgPerMol / s.RealGas.VM3PerMol,
+		"Wsep": s.TempK * s.SMixJPerMolK,
 	}
 	if len(want) != len(Quantities) {
 		t.Errorf("the test checks %d quantities, the table has %d: add the new row here", len(want), len(Quantities))
@@ -125,5 +128,35 @@ func TestFirstNonFinite(t *testing.T) {
 	}
 	if n := testing.AllocsPerRun(100, func() { FirstNonFinite(&s) }); n != 0 {
 		t.Errorf("FirstNonFinite allocates %v times, want 0", n)
+	}
+}
+
+// The minimum separation work is T·ΔSmix, the reversible work of
+// un-mixing: for an equimolar binary it is RT ln 2 per mole, and for a
+// pure gas it is zero (exact identities of ideal mixing).
+func TestMinSeparationWork(t *testing.T) {
+	q, ok := QuantityByKey("Wsep")
+	if !ok {
+		t.Fatal("no Wsep row")
+	}
+	cases := []struct {
+		name  string
+		blend string
+		tempK float64
+		want  float64
+	}{
+		{"equimolar N2/O2", "N2 50%, O2 50%", 300, model.GasConstant * 300 * math.Ln2},
+		{"equimolar He/Ar at 1000 K", "He 0.5, Ar 0.5", 1000, model.GasConstant * 1000 * math.Ln2},
+		{"pure N2", "N2 1", 300, 0},
+	}
+	for _, c := range cases {
+		m := mustMixture(t, c.blend, 1e5)
+		s, err := m.State(c.tempK, 1e5, Options{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if got := q.Get(&s); math.Abs(got-c.want) > 1e-6*math.Max(1, c.want) {
+			t.Errorf("%s: Wsep = %.9g J/mol, want %.9g", c.name, got, c.want)
+		}
 	}
 }

@@ -113,30 +113,45 @@ func (sw Sweep) IsLog() bool { return sw.Log || sw.Var == SweepPressure }
 // to see as 299.99999999999994, and every point lies between them, even
 // where the rounding of exp(ln x) would step past an end that is close to
 // the largest float.
-func (sw Sweep) Point(i int) float64 {
-	n := sw.Steps
+func (sw Sweep) Point(i int) float64 { return sw.grid().point(i) }
+
+// gridPoints computes the points of a sweep with its logarithms taken
+// once, for loops over the whole grid.
+type gridPoints struct {
+	from, to, lo, hi float64
+	n                int
+	log              bool
+}
+
+func (sw Sweep) grid() gridPoints {
+	g := gridPoints{from: sw.From, to: sw.To, lo: sw.From, hi: sw.To, n: sw.Steps, log: sw.IsLog()}
+	if g.log {
+		g.lo, g.hi = math.Log(sw.From), math.Log(sw.To)
+	}
+	return g
+}
+
+func (g gridPoints) point(i int) float64 {
 	switch i {
 	case 0:
-		return sw.From
-	case n - 1:
-		return sw.To
+		return g.from
+	case g.n - 1:
+		return g.to
 	}
-	f := float64(i) / float64(n-1)
-	var x float64
-	if sw.IsLog() {
-		lo, hi := math.Log(sw.From), math.Log(sw.To)
-		x = math.Exp(lo + (hi-lo)*f)
-	} else {
-		x = sw.From + (sw.To-sw.From)*f
+	f := float64(i) / float64(g.n-1)
+	x := g.lo + (g.hi-g.lo)*f
+	if g.log {
+		x = math.Exp(x)
 	}
-	return min(max(x, min(sw.From, sw.To)), max(sw.From, sw.To))
+	return min(max(x, min(g.from, g.to)), max(g.from, g.to))
 }
 
 // Grid returns every point of a checked sweep.
 func (sw Sweep) Grid() []float64 {
 	xs := make([]float64, sw.Steps)
+	g := sw.grid()
 	for i := range xs {
-		xs[i] = sw.Point(i)
+		xs[i] = g.point(i)
 	}
 	return xs
 }
@@ -158,8 +173,9 @@ func (m *Mixture) CheckSweep(sw Sweep, fixedTempK, fixedPresPa float64) error {
 	if err := sw.Check(); err != nil {
 		return err
 	}
+	g := sw.grid()
 	for i := range sw.Steps {
-		x := sw.Point(i)
+		x := g.point(i)
 		t, p := sw.Conditions(x, fixedTempK, fixedPresPa)
 		if err := m.CheckConditions(t, p); err != nil {
 			if i == 0 || i == sw.Steps-1 {
@@ -200,13 +216,14 @@ func (m *Mixture) StreamSpan(ctx context.Context, sw Sweep, from, to int, fixedT
 	if s == nil {
 		s = new(State)
 	}
+	g := sw.grid()
 	for i := from; i < to; i++ {
 		if (i-from)%progressEvery == 0 && i > from {
 			if err := ctx.Err(); err != nil {
 				return err
 			}
 		}
-		x := sw.Point(i)
+		x := g.point(i)
 		t, p := sw.Conditions(x, fixedTempK, fixedPresPa)
 		m.Fill(s, t, p, opts)
 		if err := fn(i, x, s); err != nil {
@@ -218,7 +235,8 @@ func (m *Mixture) StreamSpan(ctx context.Context, sw Sweep, from, to int, fixedT
 
 // SweepResult holds one full mixture state per grid point. It is large
 // (every species' state at every point); Stream and SweepTable keep
-// memory flat or small.
+// memory flat or small. Only export.go's WriteSweepJSON still takes it:
+// with that gone, SweepResult, Run and RunContext can go too.
 type SweepResult struct {
 	Sweep  Sweep
 	Grid   []float64

@@ -11,6 +11,9 @@ import (
 	"zmix/model"
 )
 
+// nopPoint is a point function that keeps nothing.
+func nopPoint(int, float64, *State) error { return nil }
+
 func TestSweepGrid(t *testing.T) {
 	cases := []struct {
 		name string
@@ -71,8 +74,8 @@ func TestSweepCheck(t *testing.T) {
 		if err := c.sw.Check(); !errors.Is(err, ErrSweep) {
 			t.Errorf("%s: Check() = %v, want ErrSweep", c.name, err)
 		}
-		if _, err := m.Run(c.sw, 300, 1e5, Options{}); !errors.Is(err, ErrSweep) {
-			t.Errorf("%s: Run error %v, want ErrSweep", c.name, err)
+		if err := m.Stream(context.Background(), c.sw, 300, 1e5, Options{}, nopPoint); !errors.Is(err, ErrSweep) {
+			t.Errorf("%s: Stream error %v, want ErrSweep", c.name, err)
 		}
 	}
 }
@@ -92,22 +95,28 @@ func TestSweepPointsEqualState(t *testing.T) {
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
 			tFixed, pFixed := c.fixed, c.fixed
-			res, err := m.Run(c.sw, tFixed, pFixed, Options{})
-			if err != nil {
-				t.Fatal(err)
-			}
-			if len(res.Points) != c.sw.Steps || len(res.Grid) != c.sw.Steps || res.Sweep != c.sw {
-				t.Fatalf("%d points, %d grid values; want %d", len(res.Points), len(res.Grid), c.sw.Steps)
-			}
-			for i, x := range res.Grid {
+			grid := c.sw.Grid()
+			n := 0
+			err := m.Stream(context.Background(), c.sw, tFixed, pFixed, Options{}, func(i int, x float64, s *State) error {
+				if i != n || x != grid[i] {
+					t.Fatalf("point %d at %g, want point %d at %g", i, x, n, grid[n])
+				}
+				n++
 				tempK, presPa := x, pFixed
 				if c.sw.Var == SweepPressure {
 					tempK, presPa = tFixed, x
 				}
 				want := mustState(t, m, tempK, presPa)
-				if !reflect.DeepEqual(res.Points[i], want) {
+				if !reflect.DeepEqual(*s, want) {
 					t.Fatalf("point %d (%g) differs from State(%g K, %g Pa)", i, x, tempK, presPa)
 				}
+				return nil
+			})
+			if err != nil {
+				t.Fatal(err)
+			}
+			if n != c.sw.Steps || len(grid) != c.sw.Steps {
+				t.Fatalf("%d points, %d grid values; want %d", n, len(grid), c.sw.Steps)
 			}
 		})
 	}
@@ -120,10 +129,10 @@ func TestSweepConditions(t *testing.T) {
 	m := mustMixture(t, dryAir, 1e5)
 	tSweep := Sweep{Var: SweepTemperature, From: 300, To: 1500, Steps: 4}
 	pSweep := Sweep{Var: SweepPressure, From: 1e5, To: 1e7, Steps: 4}
-	if _, err := m.Run(tSweep, 0, 1e5, Options{}); err != nil {
+	if err := m.Stream(context.Background(), tSweep, 0, 1e5, Options{}, nopPoint); err != nil {
 		t.Errorf("T sweep with no fixed T: %v", err)
 	}
-	if _, err := m.Run(pSweep, 300, 0, Options{}); err != nil {
+	if err := m.Stream(context.Background(), pSweep, 300, 0, Options{}, nopPoint); err != nil {
 		t.Errorf("P sweep with no fixed P: %v", err)
 	}
 	bad := []struct {
@@ -139,13 +148,13 @@ func TestSweepConditions(t *testing.T) {
 		{"P sweep into underflow", Sweep{Var: SweepPressure, From: 1e-320, To: 1e5, Steps: 4}, 300, 0, model.ErrPressure},
 	}
 	for _, c := range bad {
-		if _, err := m.Run(c.sw, c.fixT, c.fixP, Options{}); !errors.Is(err, c.want) {
+		if err := m.Stream(context.Background(), c.sw, c.fixT, c.fixP, Options{}, nopPoint); !errors.Is(err, c.want) {
 			t.Errorf("%s: error %v, want %v", c.name, err, c.want)
 		}
 	}
 }
 
-// A sweep allocates its result and nothing per point beyond it: the count
+// A sweep allocates its one reused State and nothing per point: the count
 // of allocations is the same for 10 points and for 1000.
 func TestSweepAllocations(t *testing.T) {
 	m := mustMixture(t, dryAir, 1e5)
@@ -155,7 +164,7 @@ func TestSweepAllocations(t *testing.T) {
 			sw.From, sw.To = 1e3, 1e7
 		}
 		return testing.AllocsPerRun(20, func() {
-			if _, err := m.Run(sw, 300, 1e5, Options{}); err != nil {
+			if err := m.Stream(context.Background(), sw, 300, 1e5, Options{}, nopPoint); err != nil {
 				t.Fatal(err)
 			}
 		})
@@ -166,7 +175,7 @@ func TestSweepAllocations(t *testing.T) {
 			t.Errorf("%v sweep: %g allocations for 10 points, %g for 1000; want the same", v, small, large)
 		}
 		if small > 6 {
-			t.Errorf("%v sweep: %g allocations, want the result's few slices only", v, small)
+			t.Errorf("%v sweep: %g allocations, want the State's few slices only", v, small)
 		}
 		t.Logf("%v sweep: %g allocations for 10 and for 1000 points", v, small)
 	}

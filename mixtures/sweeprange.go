@@ -18,8 +18,12 @@ import (
 // The number of points is given apart from the range: --steps N in the
 // commands, the points field in the workbench (ParseSteps reads both).
 
-// rangeForms is what a range error says is accepted.
-const rangeForms = "want FROM..TO with a unit, such as 300..900 K, 300 K..900 K or 5..150 psig; the number of points is given on its own (--steps N, or the points field)"
+// rangeForms is what a range error says is accepted; sweepRangeForms adds
+// where a sweep's number of points goes.
+const (
+	rangeForms      = "want FROM..TO with a unit, such as 300..900 K, 300 K..900 K or 5..150 psig"
+	sweepRangeForms = rangeForms + "; the number of points is given on its own (--steps N, or the points field)"
+)
 
 // ParseRange splits "A..B" into its two ends, each with its unit: a unit
 // written on one end only applies to the other too ("300..1500 K" gives
@@ -58,11 +62,21 @@ type Range struct {
 // ParseSweepRange reads a range of the variable v in the one range
 // syntax. Errors quote what was typed and say what is accepted.
 func ParseSweepRange(v SweepVar, s string) (Range, error) {
+	if n := strings.Count(s, ".."); n > 1 {
+		// Most likely a step written into the range, 300..600..900 K.
+		return Range{}, model.KindErrorf("mixtures", ErrValue, "range %s has %d parts; %s", model.Quote(s), n+1, sweepRangeForms)
+	}
 	from, to, err := ParseRange(s)
 	if err != nil {
 		return Range{}, err
 	}
-	return ParseSweepEnds(v, from, to)
+	r, err := ParseSweepEnds(v, from, to)
+	if err != nil {
+		// Name the range as typed: the end alone may read as a unit
+		// the user never wrote ("300..900" has no unit at all).
+		return Range{}, model.KindErrorf("mixtures", ErrValue, "range %s: %w", model.Quote(s), err)
+	}
+	return r, nil
 }
 
 // ParseSweepEnds reads the two ends of a range typed apart (the

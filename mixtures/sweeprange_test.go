@@ -1,7 +1,9 @@
 package mixtures
 
 import (
+	"context"
 	"errors"
+	"reflect"
 	"strings"
 	"testing"
 )
@@ -97,5 +99,58 @@ func TestParseSteps(t *testing.T) {
 		if _, err := ParseSteps(in); !errors.Is(err, ErrSweep) || !strings.Contains(err.Error(), "from 2 to 200000") {
 			t.Errorf("ParseSteps(%q): error %v, want ErrSweep naming the accepted range", in, err)
 		}
+	}
+}
+
+func TestSplitNumber(t *testing.T) {
+	for in, want := range map[string]struct {
+		x    float64
+		unit string
+	}{"25 °C": {25, "°C"}, "1.5bar": {1.5, "bar"}, " -2e3 Pa ": {-2e3, "Pa"}, "120 Nm3/h": {120, "Nm3/h"}, "7": {7, ""}} {
+		x, unit, err := SplitNumber(in)
+		if err != nil || x != want.x || unit != want.unit {
+			t.Errorf("SplitNumber(%q) = %g, %q, %v; want %g, %q", in, x, unit, err, want.x, want.unit)
+		}
+	}
+	for _, in := range []string{"", "bar", "NaN K", "1e999 Pa", "-"} {
+		if _, _, err := SplitNumber(in); err == nil {
+			t.Errorf("SplitNumber(%q): no error", in)
+		}
+	}
+}
+
+// A table computed again in the storage of the last one holds what a
+// fresh table holds, and takes no new storage when it fits.
+func TestSweepTableReuse(t *testing.T) {
+	m := mustMixture(t, dryAir, 1e5)
+	cols, _ := SpeciesColumns("mu", m)
+	cp, _ := BlendColumn("Cp")
+	cols = append(cols, cp)
+	ctx := context.Background()
+	sw := Sweep{Var: SweepTemperature, From: 300, To: 1500, Steps: 500}
+	first, err := m.Tabulate(ctx, sw, 0, 1e5, Options{}, cols)
+	if err != nil {
+		t.Fatal(err)
+	}
+	firstData := &first.data[0]
+	sw2 := Sweep{Var: SweepPressure, From: 1e4, To: 1e7, Steps: 400}
+	again := first.Reuse(sw2, cols)
+	if &again.data[0] != firstData || first.Len() != 0 {
+		t.Errorf("Reuse took new storage, or left the old table usable")
+	}
+	if err := m.StreamSpan(ctx, sw2, 0, sw2.Steps, 300, 0, Options{}, nil, again.Record); err != nil {
+		t.Fatal(err)
+	}
+	fresh, _ := m.Tabulate(ctx, sw2, 300, 0, Options{}, cols)
+	if !reflect.DeepEqual(again.Grid, fresh.Grid) || !reflect.DeepEqual(again.data, fresh.data) || again.Sweep != fresh.Sweep {
+		t.Errorf("a reused table differs from a fresh one")
+	}
+	bigger := again.Reuse(Sweep{Var: SweepTemperature, From: 300, To: 1500, Steps: 1000}, cols)
+	if bigger.Len() != 1000 || len(bigger.Column(len(cols)-1)) != 1000 {
+		t.Errorf("a larger sweep got a table of %d points", bigger.Len())
+	}
+	var none *SweepTable
+	if got := none.Reuse(sw, cols); got.Len() != sw.Steps {
+		t.Errorf("Reuse of nil: %d points", got.Len())
 	}
 }

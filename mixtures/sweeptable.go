@@ -57,6 +57,19 @@ func NewSweepTable(sw Sweep, cols []SweepColumn) *SweepTable {
 	return &SweepTable{Sweep: sw, Grid: make([]float64, n), Columns: cols, data: make([]float64, n*len(cols))}
 }
 
+// Reuse returns an empty table for the sweep and the columns that takes
+// over t's storage where it is large enough, so that a long sweep run
+// again does not hold two tables at once. t must not be used afterwards.
+func (t *SweepTable) Reuse(sw Sweep, cols []SweepColumn) *SweepTable {
+	n := sw.Steps
+	if t == nil || cap(t.Grid) < n || cap(t.data) < n*len(cols) {
+		return NewSweepTable(sw, cols)
+	}
+	r := &SweepTable{Sweep: sw, Grid: t.Grid[:n], Columns: cols, data: t.data[:n*len(cols)]}
+	*t = SweepTable{}
+	return r
+}
+
 // Len is the number of points.
 func (t *SweepTable) Len() int { return len(t.Grid) }
 

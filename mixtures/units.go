@@ -32,6 +32,12 @@ var PressureUnits = pressureUnitsText()
 // ErrValue is wrapped by every value-parsing error.
 var ErrValue = errors.New("bad value")
 
+// SplitNumber splits a value with a unit, "25 °C" or "1.5bar", into the
+// finite number that leads it and the unit text after it, trimmed. Every
+// parser of values with units (temperatures, pressures, amounts, rates)
+// reads its number this way.
+func SplitNumber(s string) (float64, string, error) { return splitNumber(s) }
+
 // splitNumber splits "25 °C" or "1.5bar" into the number and the unit text.
 func splitNumber(s string) (float64, string, error) {
 	x, rest, err := splitNumberRaw(strings.TrimSpace(s))
@@ -282,23 +288,9 @@ func FormatTemperature(tempK float64) string {
 // reading, absolute or gauge (above AtmospherePa). The workbench shows
 // every total pressure in the unit the user typed and the reading chosen.
 type PressureUnit struct {
-	key    string // the unit's family in pressureUnitNames
+	key    string // the unit's name in pressureUnitTable
 	SizePa float64
 	Gauge  bool
-}
-
-// pressureUnitNames are each unit family's names for an absolute and a
-// gauge reading; "abs" marks units that would otherwise be read either way.
-var pressureUnitNames = map[string][2]string{
-	"pa": {"Pa abs", "Pa gauge"}, "kpa": {"kPa abs", "kPag"}, "mpa": {"MPa abs", "MPa gauge"},
-	"bar": {"bar abs", "barg"}, "mbar": {"mbar abs", "mbar gauge"}, "atm": {"atm", "atm gauge"},
-	"torr": {"Torr", "Torr gauge"}, "psi": {"psia", "psig"},
-}
-
-// pressureUnitFamily maps each accepted unit word to its family.
-var pressureUnitFamily = map[string]string{
-	"pa": "pa", "kpa": "kpa", "kpag": "kpa", "mpa": "mpa", "bar": "bar", "bara": "bar", "barg": "bar",
-	"mbar": "mbar", "atm": "atm", "torr": "torr", "psi": "psi", "psia": "psi", "psig": "psi",
 }
 
 // BarAbsolute is the unit of pressures nobody typed: bar, absolute.
@@ -315,7 +307,12 @@ func PressureUnitOf(text string) (PressureUnit, bool) {
 	if !ok {
 		return PressureUnit{}, false
 	}
-	return PressureUnit{key: pressureUnitFamily[strings.ToLower(unit)], SizePa: size, Gauge: gauge}, true
+	for _, u := range pressureUnitTable {
+		if strings.EqualFold(unit, u.name) || u.suffixes && len(unit) == len(u.name)+1 && strings.EqualFold(unit[:len(u.name)], u.name) {
+			return PressureUnit{key: u.name, SizePa: size, Gauge: gauge}, true
+		}
+	}
+	return PressureUnit{}, false
 }
 
 // Reading returns the same unit read as gauge or as absolute.
@@ -324,16 +321,28 @@ func (u PressureUnit) Reading(gauge bool) PressureUnit {
 	return u
 }
 
-// Name is the unit's name for its reading: "bar abs", "barg", "psig".
+// Name is the unit's name for its reading: "bar abs", "barg", "psia",
+// "psig", "atm", "Torr gauge". Units the trade writes with a g take it for
+// gauge; an absolute reading says "abs" where the bare name could be read
+// either way.
 func (u PressureUnit) Name() string {
-	names, ok := pressureUnitNames[u.key]
-	if !ok {
-		names = pressureUnitNames["bar"]
+	name, suffixes := "bar", true
+	for _, t := range pressureUnitTable {
+		if t.name == u.key {
+			name, suffixes = t.name, t.suffixes
+		}
 	}
-	if u.Gauge {
-		return names[1]
+	switch {
+	case u.Gauge && suffixes:
+		return name + "g"
+	case u.Gauge:
+		return name + " gauge"
+	case name == "psi":
+		return "psia"
+	case suffixes:
+		return name + " abs"
 	}
-	return names[0]
+	return name
 }
 
 // FromPa converts an absolute pressure in Pa to this unit and reading.

@@ -280,6 +280,9 @@ func TestPressureUnitOf(t *testing.T) {
 		{"2 barg", false, 3e5, 3, "bar abs", 1e-12},
 		{"500 kPag", true, 601325, 500, "kPag", 1e-12},
 		{"760 Torr", false, 101325, 760, "Torr", 1e-12},
+		{"0.5 MPag", true, 601325, 0.5, "MPag", 1e-12},
+		{"250 mbarg", false, 126325, 1263.25, "mbar abs", 1e-12},
+		{"1000 Pa", true, 1000, -100325, "Pa gauge", 1e-12},
 		{"1 atm", true, 101325, 0, "atm gauge", 1e-12},
 	} {
 		u, ok := PressureUnitOf(c.text)

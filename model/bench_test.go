@@ -65,23 +65,20 @@ func BenchmarkSpeciesStateFloor(b *testing.B) {
 // on the state's own arguments, and nothing else:
 //   - ln T and ln P (translation; ln T also serves rotation);
 //   - a summed linear rotor: one exp, e^{−2Θ/T}, from which every level
-//     follows by products, and one log of the sum; the series: one log;
+//     follows by products, and one log of the sum; above 50 Θ, where the
+//     rotor is a series in Θ/T, and for a nonlinear rotor: none;
 //   - vibration: one exp per distinct mode not frozen out, and one log of
 //     the product of the modes' factors;
 //   - electronic levels: one exp per populated excited level, and one log
 //     of the sum, when there is more than one level.
 //
-// A nonlinear rotor needs no call beyond ln T. The results are summed only
-// so that no call can be dropped.
+// The results are summed only so that no call can be dropped.
 func stateFloor(sp *Species, tempK, presPa float64) float64 {
 	invT := 1 / tempK
 	acc := math.Log(tempK) + math.Log(presPa)
 	if sp.Rotor == Linear {
-		theta := sp.rotThetaK[0]
-		if tempK < rotorSumLimit*theta {
+		if theta := sp.rotThetaK[0]; tempK < rotorSumLimit*theta {
 			acc += math.Log(1 + math.Exp(-2*theta*invT))
-		} else {
-			acc += math.Log(1 + theta*invT/3)
 		}
 	}
 	prod := 1.0

@@ -304,3 +304,42 @@ func TestEveryStateIsPhysical(t *testing.T) {
 		}
 	}
 }
+
+// FuzzParseCatalogue: any file either is refused with one printable line
+// naming the file, or loads species whose every state is physical
+// (Cp ≥ 5R/2, 1 < γ ≤ 5/3) and whose text is printable.
+func FuzzParseCatalogue(f *testing.F) {
+	f.Add(speciesBlock("", ""))
+	f.Add(speciesBlock("vib_cm", "500x9223372036854775807 500x9223372036854775807"))
+	f.Add("[H2O]\nname = w\nrotor = nonlinear\nrot_cm = 1e-300 1 1\nvib_cm = 1595 3657 3756\ndHf0_kJ = -238.9\n")
+	f.Add("[O]\nname = o\nrotor = atom\nelec_cm = 0x5 158.265x3 226.977x1\ndHf0_kJ = 246.8\n")
+	f.Add("[H2]\nname = h\nrotor = linear\nrot_cm = 59.3\nsigma = 2\nspin = 1 3\nvib_cm = 4161\ndHf0_kJ = 0\n")
+	r := GasConstant
+	f.Fuzz(func(t *testing.T, text string) {
+		list, err := ParseCatalogue("fuzz.cat", strings.NewReader(text))
+		if err != nil {
+			msg := UserMessage(err)
+			if !strings.HasPrefix(msg, "fuzz.cat") || Printable(msg) != msg {
+				t.Fatalf("error %q: want one printable line starting with the file name", msg)
+			}
+			return
+		}
+		for _, sp := range list {
+			for _, s := range []string{sp.Formula, sp.Name, sp.Notes} {
+				if Printable(s) != s {
+					t.Fatalf("%q loaded with text %q that is not printable", sp.Formula, s)
+				}
+			}
+			for _, tempK := range []float64{MinTempK, 1, 77, 300, 3000, MaxTempK} {
+				s, err := sp.State(tempK, 1e5)
+				if err != nil {
+					t.Fatalf("%s at %g K: %v", sp.Formula, tempK, err)
+				}
+				gamma := s.CpJPerMolK / s.CvJPerMolK
+				if s.CpJPerMolK < 2.5*r*(1-1e-9) || !(gamma > 1) || gamma > 5.0/3*(1+1e-9) {
+					t.Fatalf("%s at %g K: Cp = %g, γ = %g", sp.Formula, tempK, s.CpJPerMolK, gamma)
+				}
+			}
+		}
+	})
+}

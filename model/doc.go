@@ -33,7 +33,12 @@
 //     E_J = kΘ J(J+1) exactly while T < 50 Θrot and use the Euler–Maclaurin
 //     series q = T/(σΘ)·(1 + Θ/3T + Θ²/15T² + 4Θ³/315T³) above; nonlinear
 //     molecules use the classical rigid-rotor limit
-//     q = √π/σ · T^{3/2}/√(ΘA ΘB ΘC). Treatment selects the choice.
+//     q = √π/σ · T^{3/2}/√(ΘA ΘB ΘC). Treatment selects the choice. The
+//     summed levels' Boltzmann factors come by recurrence, with one exp a
+//     sum: e^{−ε_{J+1}/kT} = e^{−ε_J/kT}·e^{−2(J+1)Θ/T}, and the step
+//     itself shrinks by e^{−2Θ/T} each level. Above 50 Θrot, ln of the
+//     series' bracket is taken as its own Taylor series in Θ/T, so that the
+//     rotor costs no log.
 //   - Vibration: harmonic oscillators, energy zero at v = 0 (the zero-point
 //     energy is inside E0).
 //   - Electronic: a sum over the listed levels, ground level at zero.
@@ -62,6 +67,45 @@
 // State accepts temperatures from MinTempK to MaxTempK and any finite
 // pressure above 0 Pa; every figure it returns is then finite. Whether the
 // model is trustworthy there is a separate question, answered by Validity.
+//
+// # Species files
+//
+// The built-in catalogue (species.cat, embedded) and the user's species
+// files share one format, read by ParseCatalogue: a block per species
+// opened by its formula in brackets, one "field = value" a line, an
+// optional source after "|", comments after "#". A file is checked
+// whole as it is read, and the first fault is a *CatalogueError whose
+// line reads "file:line: field "f": value, and the range accepted":
+//
+//   - every number lies in a physical range (see numRange in catfile.go):
+//     rotational constants 1e-4 to 100 cm⁻¹, vibrational wavenumbers 1 to
+//     5000 cm⁻¹ with degeneracies 1 to 5, electronic levels 0 to 2e5 cm⁻¹
+//     (ground level first, at 0) with degeneracies 1 to 100, σ 1 to 60
+//     (1 or 2 for a linear molecule), spin weights whole numbers 0 to 100,
+//     ΔfH°(0 K) −10 000 to 10 000 kJ/mol, boiling point 1 to 6000 K;
+//   - the rotor agrees with the formula (an atom is one atom, a linear
+//     molecule two or more, a nonlinear one three or more), and the
+//     vibrational modes, counted with their degeneracies, number 3N − 5
+//     (linear) or 3N − 6 (nonlinear) for the formula's N atoms;
+//   - names, notes, sources and field names hold no control character,
+//     no invalid UTF-8 and nothing that does not print (they are refused,
+//     not cleaned); a name holds at most 64 characters, a note 500 and a
+//     source 300;
+//   - a line holds at most MaxSpeciesLineBytes (64 KiB) and a file at most
+//     MaxSpeciesFileBytes (1 MiB); no more than that is read before a
+//     file is refused.
+//
+// Prepare applies the same ranges to a species built in code, so that
+// every prepared species gives, at every state State accepts,
+// Cp ≥ 5R/2 and 1 < γ ≤ 5/3.
+//
+// # Errors
+//
+// Errors are built by Errorf and KindErrorf: Error() reads "model: …"
+// for logs, and UserMessage (or the function UserMessage) is the line a
+// person reads, without the prefix. Errors of State and CheckConditions
+// match ErrTemperature or ErrPressure with errors.Is. A *CatalogueError
+// names its file and line instead of a package.
 //
 // Physical constants are the CODATA 2018 exact values from
 // gonum.org/v1/gonum/unit/constant. Molar masses are summed from the formula

@@ -393,3 +393,29 @@ func directRotorSum(sp *Species, tempK float64) Terms {
 	mean := m1 / z
 	return Terms{LnQ: math.Log(z) - shift, U: mean, Cv: m2/z - mean*mean}
 }
+
+// TestRotorSeriesIsLnF checks the Taylor coefficients of linearRotorSeries
+// against ln f, f = 1 + y/3 + y²/15 + 4y³/315, taken here with math.Log,
+// and U and Cv against the closed forms U = 1 − y f′/f and
+// Cv = U + y f′/f + y² f″/f − (y f′/f)², over the y = Θ/T where Auto uses
+// the series.
+func TestRotorSeriesIsLnF(t *testing.T) {
+	const veryclose = 4e-16
+	for _, y := range []float64{1e-8, 1e-4, 1e-3, 5e-3, 0.01, 0.015, 0.02} {
+		f := 1 + y/3 + y*y/15 + 4*y*y*y/315
+		yf1 := y/3 + 2*y*y/15 + 12*y*y*y/315
+		y2f2 := 2*y*y/15 + 24*y*y*y/315
+		g1 := yf1 / f
+		want := Terms{LnQ: math.Log(f), U: 1 - g1}
+		want.Cv = want.U + g1 + y2f2/f - g1*g1
+		got := linearRotorSeries(0, y, 0)
+		for _, c := range []struct {
+			name      string
+			got, want float64
+		}{{"ln f", got.LnQ, want.LnQ}, {"U", got.U, want.U}, {"Cv", got.Cv, want.Cv}} {
+			if math.Abs(c.got-c.want) > veryclose*max(1, math.Abs(c.want)) {
+				t.Errorf("series at y = %g: %s = %.17g, closed form %.17g", y, c.name, c.got, c.want)
+			}
+		}
+	}
+}

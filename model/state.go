@@ -119,8 +119,12 @@ func (sp *Species) fill(s *State, tempK, presPa float64, tr Treatment) {
 	s.TempK, s.PresPa = tempK, presPa
 	lnT := math.Log(tempK)
 	invT := 1 / tempK // one division, shared by every factor
-	s.Trans = sp.translation(lnT, presPa)
-	s.Rot = sp.rotation(tempK, invT, lnT, tr.Rotation)
+	s.Trans = sp.translation(lnT, math.Log(presPa))
+	if sp.Rotor == Linear {
+		s.Rot = sp.linearRotor(tempK, invT, lnT, tr.Rotation)
+	} else {
+		s.Rot = sp.rigidBodyRotor(lnT) // inlined: no call for most species
+	}
 	s.Vib = Terms{}
 	if tr.Vibration == VibrationHarmonic && len(sp.vibModes) > 0 {
 		s.Vib = sp.vibration(invT)

@@ -15,27 +15,33 @@ func (t Terms) S() float64 { return t.LnQ + t.U }
 
 func (t Terms) add(o Terms) Terms { return Terms{t.LnQ + o.LnQ, t.U + o.U, t.Cv + o.Cv} }
 
-// translation returns the translational terms at (T, P), given ln T,
-// with the 1/N! of indistinguishable molecules folded in (Sackur-Tetrode).
-func (sp *Species) translation(lnT, presPa float64) Terms {
+// translation returns the translational terms at (T, P), given ln T and
+// ln P, with the 1/N! of indistinguishable molecules folded in
+// (Sackur-Tetrode).
+func (sp *Species) translation(lnT, lnP float64) Terms {
 	lnNQ := sp.lnNQ0 + 1.5*lnT
 	// V/N = kT/P, taken in logs so that no product over- or underflows.
-	lnVPerN := lnBoltzmann + lnT - math.Log(presPa)
+	lnVPerN := lnBoltzmann + lnT - lnP
 	return Terms{LnQ: lnNQ + lnVPerN + 1, U: 1.5, Cv: 1.5}
 }
 
 // rotorSumLimit is the T/Θrot below which linear rotor levels are summed.
 const rotorSumLimit = 50
 
-// rotation returns the rigid-rotor terms; invT is 1/T.
-func (sp *Species) rotation(tempK, invT, lnT float64, how RotationTreatment) Terms {
-	switch sp.Rotor {
-	case Atom:
-		return Terms{}
-	case Nonlinear:
+// rigidBodyRotor returns the terms of an atom (none) or of a nonlinear
+// molecule (the classical limit). It is small enough to be inlined, so
+// that fill calls nothing for them.
+func (sp *Species) rigidBodyRotor(lnT float64) Terms {
+	var t Terms
+	if sp.Rotor == Nonlinear {
 		// ln q = const + (3/2) ln T: U = 3/2 and Cv = ∂(T·U)/∂T = 3/2.
-		return Terms{LnQ: sp.lnRotClassical + 1.5*lnT, U: 1.5, Cv: 1.5}
+		t = Terms{LnQ: sp.lnRotClassical + 1.5*lnT, U: 1.5, Cv: 1.5}
 	}
+	return t
+}
+
+// linearRotor returns the terms of a linear rigid rotor; invT is 1/T.
+func (sp *Species) linearRotor(tempK, invT, lnT float64, how RotationTreatment) Terms {
 	theta := sp.rotThetaK[0]
 	switch how {
 	case RotationClassical:
@@ -50,29 +56,29 @@ func (sp *Species) rotation(tempK, invT, lnT float64, how RotationTreatment) Ter
 }
 
 // linearRotorSeries is the Euler–Maclaurin expansion of the rigid-rotor
-// sum, q = T/(σΘ)·(1 + y/3 + y²/15 + 4y³/315) with y = Θ/T. Its error at
-// T ≥ 50 Θ is below 1e-8 in ln q. The polynomials are in Horner form with
-// the fractions as constants: one division instead of eleven.
+// sum, q = T/(σΘ)·f(y) with f = 1 + y/3 + y²/15 + 4y³/315 and y = Θ/T. Its
+// error at T ≥ 50 Θ is below 1e-8 in ln q.
+//
+// ln f is taken as its Taylor series in y to y⁷, whose coefficients are
+// exact fractions (from expanding ln(1 + a) with a = f − 1); the first
+// term left out is below 1e-19 at y = 1/50, so this is ln f to rounding,
+// with no log and no division. With D = T∂/∂T = −y∂/∂y and
+// ln f = Σ a_k y^k: U = 1 + D ln f = 1 − Σ k a_k y^k and
+// Cv = U + D² ln q = 1 + Σ k(k−1) a_k y^k.
 func linearRotorSeries(lnInvSigmaTheta, y, lnT float64) Terms {
 	const (
-		c1  = 1.0 / 3
-		c2  = 1.0 / 15
-		c3  = 4.0 / 315
-		c2d = 2 * c2 // y·d/dy of y² and y³ brings down 2 and 3
-		c3d = 3 * c3
-		c3e = 6 * c3 // y²·d²/dy² of y³ brings down 6
+		a1 = 1.0 / 3
+		a2 = 1.0 / 90
+		a3 = 8.0 / 2835
+		a4 = -121.0 / 56700
+		a5 = 17.0 / 42525
+		a6 = -457.0 / 13395375
+		a7 = 83.0 / 13395375
 	)
-	f := 1 + y*(c1+y*(c2+y*c3))
-	// y·df/dy and y²·d²f/dy², to carry the derivatives through T = Θ/y.
-	yf1 := y * (c1 + y*(c2d+y*c3d))
-	y2f2 := y * y * (c2d + y*c3e)
-	// With D = T∂/∂T = −y∂/∂y on ln q = ln T + ln f(y):
-	// U = D ln q and Cv = D ln q + D² ln q.
-	invF := 1 / f
-	g1 := yf1 * invF
-	u := 1 - g1
-	d2 := g1 + y2f2*invF - g1*g1
-	return Terms{LnQ: lnInvSigmaTheta + lnT + math.Log(f), U: u, Cv: u + d2}
+	lnF := y * (a1 + y*(a2+y*(a3+y*(a4+y*(a5+y*(a6+y*a7))))))
+	kA := y * (a1 + y*(2*a2+y*(3*a3+y*(4*a4+y*(5*a5+y*(6*a6+y*7*a7))))))
+	kkA := y * y * (2*a2 + y*(6*a3+y*(12*a4+y*(20*a5+y*(30*a6+y*42*a7)))))
+	return Terms{LnQ: lnInvSigmaTheta + lnT + lnF, U: 1 - kA, Cv: 1 + kkA}
 }
 
 // linearRotorSum sums Σ g_J (2J+1) exp(−J(J+1)Θ/T) directly, with the
@@ -139,12 +145,15 @@ func (sp *Species) vibration(invT float64) Terms {
 	for _, m := range sp.vibModes {
 		x := m.thetaK * invT
 		if x > 700 {
-			continue // exp(−x) underflows: the mode is frozen
+			continue // e^{−x} underflows: the mode is frozen
 		}
-		em := math.Exp(-x) // e^{−x}
-		om := 1 - em       // 1 − e^{−x}: exact enough while e^{−x} < 1/2
-		if em > 0.5 {
-			om = -math.Expm1(-x)
+		var em, om float64 // e^{−x} and 1 − e^{−x}, for one call
+		if x < expm1Below {
+			om = -math.Expm1(-x) // 1 − e^{−x} would lose digits
+			em = 1 - om
+		} else {
+			em = math.Exp(-x)
+			om = 1 - em
 		}
 		switch m.nDeg {
 		case 1:
@@ -165,11 +174,16 @@ func (sp *Species) vibration(invT float64) Terms {
 		u += m.deg * xe
 		cv += m.deg * xe * r // x² e^x/(e^x − 1)²
 	}
-	if prod != 1 { // no modes, or all frozen: ln 1 costs a call for nothing
+	if prod != 1 { // no mode excited: ln 1 costs a call for nothing
 		lnQ -= math.Log(prod)
 	}
 	return Terms{LnQ: lnQ, U: u, Cv: cv}
 }
+
+// expm1Below is the x under which 1 − e^{−x} is taken from expm1: there
+// e^{−x} > 0.78, and 1 − e^{−x} would lose more than two bits. Either way
+// a mode costs one call.
+const expm1Below = 0.25
 
 // powInt returns x^n for n ≥ 0 by squaring: a degeneracy needs no exp and
 // log, as math.Pow would spend.
@@ -184,14 +198,18 @@ func powInt(x float64, n int) float64 {
 	return p
 }
 
-// electronic returns the terms of the listed electronic levels.
+// electronic returns the terms of the listed electronic levels. It is
+// small enough to be inlined, so that a single level costs no call.
 func (sp *Species) electronic(invT float64, how ElectronicTreatment) Terms {
-	if len(sp.elecThetaK) == 0 {
-		return Terms{}
-	}
+	// Prepare lists at least the ground level.
 	if how == ElectronicGroundOnly || len(sp.elecThetaK) == 1 {
 		return Terms{LnQ: sp.lnElecG0}
 	}
+	return sp.electronicLevels(invT)
+}
+
+// electronicLevels sums the electronic levels.
+func (sp *Species) electronicLevels(invT float64) Terms {
 	// The ground level sits at 0: its Boltzmann factor is 1, with no exp.
 	z, m1, m2 := sp.elecDeg[0], 0.0, 0.0
 	for i := 1; i < len(sp.elecThetaK); i++ {

@@ -7,10 +7,14 @@ import "strings"
 // edge, the edge of the pane beside it and an empty styled run each cost
 // a reset and a new code; here a style is set only before text that needs
 // it, a reset only when the next text needs less, and every line ends
-// plain, because the renderer redraws lines one by one. Codes other than
-// SGR (ESC [ … m) pass through untouched.
+// plain, because the renderer redraws lines one by one.
+//
+// It is also the last guard of the terminal: every other control byte
+// (an ESC that starts no SGR code, a carriage return, a bell) becomes "?",
+// so that text that slipped past model.Printable still cannot move the
+// cursor or clear the screen.
 func compactSGR(s string) string {
-	if !strings.Contains(s, "\x1b[") {
+	if !needsCompact(s) {
 		return s
 	}
 	var out strings.Builder
@@ -27,6 +31,9 @@ func compactSGR(s string) string {
 			continue
 		}
 		c := s[i]
+		if c < 0x20 && c != '\n' || c == 0x7f {
+			c = '?'
+		}
 		if c == '\n' {
 			if have != "" {
 				out.WriteString("\x1b[0m")
@@ -47,6 +54,16 @@ func compactSGR(s string) string {
 		out.WriteString("\x1b[0m")
 	}
 	return out.String()
+}
+
+// needsCompact reports whether s holds an escape or a control byte.
+func needsCompact(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if c := s[i]; c < 0x20 && c != '\n' || c == 0x7f {
+			return true
+		}
+	}
+	return false
 }
 
 // sgrLen is the length of the SGR code at the start of s, or 0.

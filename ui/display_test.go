@@ -1,11 +1,14 @@
 package ui
 
 import (
+	"fmt"
+	"os"
 	"path/filepath"
 	"strings"
 	"testing"
 
 	"zmix/mixtures"
+	"zmix/model"
 )
 
 // screenTour is a walk through every pane, overlay and prompt of the
@@ -50,11 +53,30 @@ func walk(t *testing.T, r *root, keys []string) {
 	}
 }
 
+// paneTour is a step per registered pane, by its number key, so that a
+// pane added later is walked too.
+func paneTour() []struct {
+	name string
+	keys []string
+} {
+	var out []struct {
+		name string
+		keys []string
+	}
+	for i := range paneSpecs {
+		out = append(out, struct {
+			name string
+			keys []string
+		}{"pane_" + paneSpecs[i].key, []string{string(rune('1' + i))}})
+	}
+	return out
+}
+
 // ASCII mode sends no byte above 127 on any screen: panes, overlays,
 // prompts and the status bar (issue 7, item 7).
 func TestASCIIModeEveryScreen(t *testing.T) {
 	for _, size := range [][2]int{{80, 24}, {100, 30}, {120, 40}, {200, 50}} {
-		for _, step := range screenTour {
+		for _, step := range append(paneTour(), screenTour...) {
 			r := testRoot(t, size[0], size[1], testRootOpts{ascii: true})
 			missing := map[rune]bool{}
 			r.c.missingGlyph = func(ru rune) { missing[ru] = true }
@@ -149,7 +171,7 @@ func TestPressureViewEverywhere(t *testing.T) {
 			}
 		}
 	}
-	check("gauge view", "295.15 K · 0.38675 barg", "295.15 K, 0.38675 barg", "0.38675 barg,", "entered as")
+	check("gauge view", "295.15 K · 0.38675 barg", "295.15 K, 0.38675 barg", "0.38675 barg, entered as")
 	press(t, r, "4")
 	check("T sweep", "at P = 0.38675 barg")
 	press(t, r, "v")
@@ -170,4 +192,124 @@ func TestPressureViewEverywhere(t *testing.T) {
 		t.Fatalf("opening a file reset the pressure view to absolute (status %q)", r.status)
 	}
 	check("after ctrl+o", "0.98675 barg") // 2 bar absolute
+}
+
+// Save and export propose the user's data directory at first, then the
+// folder last used; the data directory is made when first written to.
+func TestSaveProposesDataDirThenLastFolder(t *testing.T) {
+	data := filepath.Join(t.TempDir(), "share", "zmix")
+	r := testRoot(t, 100, 30, testRootOpts{dataDir: data})
+	press(t, r, "ctrl+s")
+	if got, want := r.input.value(), filepath.Join(data, "blend.json"); got != want {
+		t.Fatalf("save proposes %q, want %q", got, want)
+	}
+	press(t, r, "enter")
+	if _, err := os.Stat(filepath.Join(data, "blend.json")); err != nil {
+		t.Fatalf("saving as proposed: %v (status %q)", err, r.status)
+	}
+	press(t, r, "ctrl+e")
+	if got, want := r.input.value(), filepath.Join(data, "readout.csv"); got != want {
+		t.Errorf("export proposes %q, want %q", got, want)
+	}
+	other := t.TempDir()
+	walk(t, r, []string{"ctrl+u", "type:" + filepath.Join(other, "x.json"), "enter", "ctrl+e"})
+	if got, want := r.input.value(), filepath.Join(other, "readout.csv"); got != want {
+		t.Errorf("after an export elsewhere, export proposes %q, want %q (the last folder)", got, want)
+	}
+}
+
+// goldenTour is the screens kept as golden files at every size: each pane,
+// each overlay and a prompt of each kind.
+var goldenTour = []struct {
+	name string
+	keys []string
+}{
+	{"recipe", nil},
+	{"setpoint", []string{"2"}},
+	{"properties", []string{"3"}},
+	{"sweep", []string{"4"}},
+	{"sweep_pressure_overlay", []string{"4", "v", "o"}},
+	{"anatomy", []string{"5"}},
+	{"help", []string{"?"}},
+	{"safety", []string{"!"}},
+	{"export", []string{"ctrl+e"}},
+	{"quit", []string{"ctrl+s", "enter", "d", "q"}},
+}
+
+// Golden screens of every pane, overlay and prompt at the four sizes the
+// issue names (issue 7, item 8).
+func TestGoldenEveryScreen(t *testing.T) {
+	for _, size := range [][2]int{{80, 24}, {100, 30}, {120, 40}, {200, 50}} {
+		for _, step := range goldenTour {
+			name := fmt.Sprintf("tour_%s_%dx%d", step.name, size[0], size[1])
+			t.Run(name, func(t *testing.T) {
+				r := testRoot(t, size[0], size[1], testRootOpts{})
+				walk(t, r, step.keys)
+				compareGolden(t, name, r.View())
+			})
+		}
+	}
+}
+
+// Nothing a user needs is cut mid-word (issue 7, item 8): each case is a
+// screen and text that must stand on it whole.
+func TestNothingCutMidWord(t *testing.T) {
+	long := strings.Repeat("very-long-folder-name/", 5)
+	// The export goes into the folder as long as the path typed.
+	for _, c := range []struct {
+		name string
+		w, h int
+		keys []string
+		want []string
+	}{
+		{"help overlay units, 80 columns", 80, 24, []string{"?", "end"}, []string{"0.2 bar (partial),", "bal", "psig"}},
+		{"quit prompt", 80, 24, []string{"ctrl+s", "enter", "d", "q"}, []string{"y quit · s save and quit · n stay"}},
+		{"export confirmation", 80, 24, []string{"ctrl+e", "ctrl+u", "type:" + long + "x.csv", "enter"}, []string{"exported the readout to", "/x.csv"}},
+		{"open-file error", 80, 24, []string{"ctrl+o", "ctrl+u", "type:" + long + "missing.json", "enter"}, []string{"missing.json", "(ctrl+o to try again)"}},
+		{"sweep key hint, 80", 80, 24, []string{"4"}, []string{"←/h →/l cursor"}},
+		{"sweep key hint, 120", 120, 40, []string{"4"}, []string{"←/h →/l cursor"}},
+		{"sweep header at 30 psig", 80, 24, []string{"2", "p", "ctrl+u", "type:30 psig", "enter", "4"}, []string{"at P = 44.696 psia"}},
+		{"blend name, 120x40", 120, 40, nil, []string{"nitride feed", "(demo)"}},
+		{"450 °C, 120x40", 120, 40, []string{"2", "t", "ctrl+u", "type:450 C", "enter"}, []string{"723.15 K, 450.00 °C"}},
+		{"Setpoint readout, 100x24", 100, 24, []string{"2", "t", "ctrl+u", "type:450 C", "enter", "p", "ctrl+u", "type:30 psig", "enter"},
+			[]string{"450 C     723.15 K", "30 psig   44.696 psia"}}, // the °C echo gives way to keep every row in view
+	} {
+		r := testRoot(t, c.w, c.h, testRootOpts{})
+		if err := os.MkdirAll(filepath.Join(r.cwd, long), 0o755); err != nil {
+			t.Fatal(err)
+		}
+		walk(t, r, c.keys)
+		screen := r.View()
+		for _, w := range c.want {
+			if !strings.Contains(screen, w) {
+				t.Errorf("%s: screen lacks %q whole:\n%s", c.name, w, screen)
+			}
+		}
+	}
+}
+
+// A blend with no hazard class can still have a model caution: the strip
+// then holds its marker and the line deferring to site practice, whole.
+func TestModelCautionWithoutHazards(t *testing.T) {
+	c := testPaneCommon(false)
+	notes := []mixtures.StateNote{{Species: "Ar", Note: model.Note{Severity: model.Caution, Text: "T/x = 1: a test note"}}}
+	lines := safetyLines(c, nil, notes, 40)
+	got := strings.Join(lines, "\n")
+	if !strings.Contains(got, "MODEL CAUTION (Ar)") || !strings.Contains(got, "professional practice.") {
+		t.Errorf("strip without hazards:\n%s", got)
+	}
+}
+
+// In a narrow Setpoint (the split layouts) every line stays in view: the
+// conversions wrap under their values and the hints give way (issue 7,
+// item 8: the Setpoint readout at 100×24).
+func TestSetpointFitsNarrow(t *testing.T) {
+	for _, size := range [][2]int{{100, 24}, {100, 30}} {
+		r := testRoot(t, size[0], size[1], testRootOpts{})
+		walk(t, r, []string{"2", "t", "ctrl+u", "type:450 C", "enter", "p", "ctrl+u", "type:30 psig", "enter"})
+		sp := r.panes[1]
+		if above, below := sp.More(); above || below {
+			t.Errorf("%dx%d: Setpoint hides lines (above %v, below %v):\n%s", size[0], size[1], above, below, r.View())
+		}
+	}
 }

@@ -27,7 +27,15 @@
 //
 // A safety strip with the blend's hazard classes and the line that defers
 // to site codes, data sheets and licensed practice stays on screen while
-// any caution applies.
+// any caution applies. The model's validity cautions (a species near
+// condensing, real-gas effects) head it as a MODEL CAUTION line, stand as
+// lines in Properties and are in full in the ! overlay.
+//
+// Pressures are shown in the unit of the pressure typed (a sweep's axis:
+// of the range typed) and in the reading chosen with "show P as",
+// absolute or gauge (mixtures.PressureUnit, report.PressureIn). Text is
+// wrapped or shortened between words, never cut mid-word; ASCII mode
+// (report.ToASCII) spells out every glyph the workbench draws.
 //
 // # Conventions
 //
@@ -43,15 +51,35 @@
 //
 // # Files
 //
-// The workbench state (everything as typed, the sweep settings, the pane,
-// the path of the blend file in use) is written atomically to
-// $XDG_STATE_HOME/zmix/state.json (default ~/.local/state/zmix) after
-// every change, and read back on the next start. A state file that cannot
-// be read is renamed state.json.corrupt-TIME. SIGHUP, SIGTERM and SIGINT
-// save and quit. A panic saves the state and writes crash-TIME.txt in the
-// same directory; Run returns an error that names it.
+// Saving, opening and exporting propose the folder last used, else the
+// blend file's, else $XDG_DATA_HOME/zmix (default ~/.local/share/zmix),
+// made on the first write there.
+//
+// The workbench state (everything as typed, in blend-file form, the sweep
+// settings, the pane, the path of the blend file in use) is written
+// atomically, mode 0600, to $XDG_STATE_HOME/zmix/state.json (default
+// ~/.local/state/zmix) after every change that alters it, and read back on
+// the next start. A state file that cannot be read, is not a regular
+// file, is larger than 2 MiB or breaks the limits of a blend file is
+// renamed state.json.corrupt-TIME (-2, -3 … if that name is taken).
+// Temporary files of a write that a kill interrupted are removed at start.
+//
+// Each state file has an advisory lock (flock on state.lock). A second
+// workbench on the same directory starts from the first one's state and
+// saves to state-2.json (up to state-9.json), saying so on the status
+// line; with every one taken it opens read-only. SIGHUP, SIGTERM and
+// SIGINT are caught before any other work, and save and quit. A panic
+// saves the state and writes crash-TIME.txt in the same directory; Run
+// returns an error that names it.
+//
+// Text from a file or the state (names, notes, species, amounts, paths,
+// error lines) goes through model.Printable before it is drawn, and View
+// turns any other control byte into "?".
 //
 // View is pure and cheap: panes render their lines when their data or size
-// changes, and View only frames them. Nothing ticks: no cursor blinks, no
-// timers, so an idle workbench writes nothing to the terminal.
+// changes, and View only frames them and drops colour codes that change
+// nothing (compactSGR). Focus shows in the tab row and a bracketed title,
+// so that moving it redraws a few rows, not two frames. Nothing ticks: no
+// cursor blinks, no timers, so an idle workbench writes nothing to the
+// terminal.
 package ui

@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"fmt"
 	"strings"
 	"unicode"
 
@@ -8,6 +9,8 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 	"github.com/charmbracelet/lipgloss"
 	"github.com/muesli/termenv"
+
+	"zmix/model"
 )
 
 // field is a one-line text entry with a cursor that does not blink, so
@@ -25,17 +28,30 @@ type field struct {
 	// suggested marks text offered by zmix (a default file name): the first
 	// typed character replaces it whole, and any edit key keeps it.
 	suggested bool
+	limit     int // the most characters the field holds
 }
 
-// maxFieldRunes bounds a field, so that a runaway paste cannot grow it
-// without end.
+// maxFieldRunes bounds a field unless it sets a limit of its own, so that
+// a runaway paste cannot grow it without end, nor make any later work
+// (a wrap, a search) long.
 const maxFieldRunes = 256
 
-func newField(c *Common) field { return field{c: c} }
+func newField(c *Common) field { return field{c: c, limit: maxFieldRunes} }
+
+// newFieldLimit is a field that holds at most limit characters: what the
+// engine accepts for its kind of entry.
+func newFieldLimit(c *Common, limit int) field { return field{c: c, limit: limit} }
+
+// noticeMsg is a remark for the status line from a part that has no
+// place of its own to say it, such as a field that cut a paste.
+type noticeMsg struct{ text string }
 
 // start opens the field on value with the cursor at its end.
 func (f *field) start(value string) {
 	f.runes = []rune(value)
+	if len(f.runes) > f.limit {
+		f.runes = f.runes[:f.limit]
+	}
 	f.pos = len(f.runes)
 	f.focused = true
 	f.suggested = false
@@ -98,12 +114,17 @@ func (f *field) update(msg tea.KeyMsg) tea.Cmd {
 	case key.Matches(msg, k.DeleteToEnd):
 		f.runes = f.runes[:f.pos]
 	case msg.Type == tea.KeyRunes || msg.Type == tea.KeySpace:
-		f.insert(msg.Runes)
+		if lost := f.insert(msg.Runes); lost > 0 {
+			text := fmt.Sprintf("this field holds at most %d characters; %d typed or pasted were left out", f.limit, lost)
+			return func() tea.Msg { return noticeMsg{text} }
+		}
 	}
 	return nil
 }
 
-func (f *field) insert(rs []rune) {
+// insert puts printable runes at the cursor, up to the field's limit; it
+// returns how many it had to leave out.
+func (f *field) insert(rs []rune) (lost int) {
 	var clean []rune
 	for _, r := range rs {
 		switch {
@@ -113,13 +134,17 @@ func (f *field) insert(rs []rune) {
 			clean = append(clean, r)
 		}
 	}
-	clean = clean[:min(len(clean), maxFieldRunes-len(f.runes))]
+	if room := max(f.limit-len(f.runes), 0); len(clean) > room {
+		lost = len(clean) - room
+		clean = clean[:room]
+	}
 	if len(clean) == 0 {
-		return
+		return lost
 	}
 	tail := append([]rune{}, f.runes[f.pos:]...)
 	f.runes = append(append(f.runes[:f.pos], clean...), tail...)
 	f.pos += len(clean)
+	return lost
 }
 
 func (f *field) wordStart() int {
@@ -147,7 +172,8 @@ func (f *field) wordEnd() int {
 // view draws the field in at most w cells, keeping the cursor in sight.
 func (f *field) view(w int) string {
 	w = max(w, 2)
-	rs := []rune(f.c.Text(string(f.runes)))
+	// Text a field opens on came from a file or the state: made printable.
+	rs := []rune(f.c.Text(model.Printable(string(f.runes))))
 	pos := min(f.pos, len(rs))
 	// The cursor needs a cell of its own after the text.
 	start := 0

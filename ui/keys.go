@@ -33,6 +33,7 @@ type KeyMap struct {
 	Setpoint SetpointKeys
 	Scroll   ScrollKeys
 	Anatomy  AnatomyKeys
+	Process  ProcessKeys
 }
 
 // FieldKeys edit a line of text.
@@ -56,6 +57,9 @@ type RecipeKeys struct {
 	SearchDown key.Binding
 	// While an amount is typed in.
 	Done key.Binding
+	// Undo takes back the last change of the recipe (again: redo); Name
+	// and Note edit the blend's name and note.
+	Undo, Name, Note key.Binding
 }
 
 // SetpointKeys are the conditions pane's bindings.
@@ -78,6 +82,14 @@ type AnatomyKeys struct {
 	PrevSpecies, NextSpecies key.Binding
 }
 
+// ProcessKeys are the process pane's bindings.
+type ProcessKeys struct {
+	PrevKind, NextKind key.Binding
+	Up, Down           key.Binding
+	Edit               key.Binding
+	Plot               key.Binding
+}
+
 // DefaultKeyMap returns the workbench's bindings.
 func DefaultKeyMap() *KeyMap {
 	k := &KeyMap{
@@ -91,7 +103,7 @@ func DefaultKeyMap() *KeyMap {
 		Safety:    key.NewBinding(key.WithKeys("!"), key.WithHelp("!", "safety reminders in full")),
 		SaveBlend: key.NewBinding(key.WithKeys("ctrl+s"), key.WithHelp("ctrl+s", "save blend file")),
 		OpenBlend: key.NewBinding(key.WithKeys("ctrl+o"), key.WithHelp("ctrl+o", "open blend file")),
-		Export:    key.NewBinding(key.WithKeys("ctrl+e"), key.WithHelp("ctrl+e", "export readout or sweep (.csv/.json)")),
+		Export:    key.NewBinding(key.WithKeys("ctrl+e"), key.WithHelp("ctrl+e", "export readout, sweep or process result")),
 		Accept:    key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "confirm")),
 		Yes:       key.NewBinding(key.WithKeys("y", "Y"), key.WithHelp("y", "yes")),
 		No:        key.NewBinding(key.WithKeys("n", "N"), key.WithHelp("n", "no")),
@@ -121,6 +133,9 @@ func DefaultKeyMap() *KeyMap {
 			SearchUp:   key.NewBinding(key.WithKeys("up", "ctrl+p"), key.WithHelp("↑", "up: previous match")),
 			SearchDown: key.NewBinding(key.WithKeys("down", "ctrl+n"), key.WithHelp("↓", "down: next match")),
 			Done:       key.NewBinding(key.WithKeys("enter"), key.WithHelp("enter", "keep: the amount as typed (esc undoes)")),
+			Undo:       key.NewBinding(key.WithKeys("u"), key.WithHelp("u", "undo: the last recipe change, a removal too (u again redoes)")),
+			Name:       key.NewBinding(key.WithKeys("r"), key.WithHelp("r", "rename: type the blend's name")),
+			Note:       key.NewBinding(key.WithKeys("c"), key.WithHelp("c", "comment: type the blend's note")),
 		},
 		Setpoint: SetpointKeys{
 			Up:          key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("↑/k", "up: previous line")),
@@ -138,6 +153,14 @@ func DefaultKeyMap() *KeyMap {
 			PageDown: key.NewBinding(key.WithKeys("pgdown", " "), key.WithHelp("pgdn", "page: down")),
 			Top:      key.NewBinding(key.WithKeys("home", "g"), key.WithHelp("home", "top: first line")),
 			Bottom:   key.NewBinding(key.WithKeys("end", "G"), key.WithHelp("end", "bottom: last line")),
+		},
+		Process: ProcessKeys{
+			PrevKind: key.NewBinding(key.WithKeys("left", "["), key.WithHelp("←/[", "process: previous one")),
+			NextKind: key.NewBinding(key.WithKeys("right", "]"), key.WithHelp("→/]", "process: next one (flow, compress, heat, mix, dilute, purge)")),
+			Up:       key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("↑/k", "up: previous field")),
+			Down:     key.NewBinding(key.WithKeys("down", "j"), key.WithHelp("↓/j", "down: next field")),
+			Edit:     key.NewBinding(key.WithKeys("enter", "e"), key.WithHelp("enter/e", "edit: type the field, or switch its choice")),
+			Plot:     key.NewBinding(key.WithKeys("p"), key.WithHelp("p", "plot: the path, T against P or H against T")),
 		},
 		Anatomy: AnatomyKeys{
 			PrevSpecies: key.NewBinding(key.WithKeys("left", "["), key.WithHelp("←/[", "species: previous one")),
@@ -160,14 +183,14 @@ func (k *KeyMap) globalHelp() []key.Binding {
 
 func defaultSweepKeys() SweepKeys {
 	return SweepKeys{
-		Variable:        key.NewBinding(key.WithKeys("v"), key.WithHelp("v", "sweep T or P")),
-		EditRange:       key.NewBinding(key.WithKeys("e", "enter"), key.WithHelp("e/enter", "type the range and points")),
+		Variable:        key.NewBinding(key.WithKeys("v"), key.WithHelp("v", "variable: sweep T or P")),
+		EditRange:       key.NewBinding(key.WithKeys("e", "enter"), key.WithHelp("e/enter", "range: type the range and points")),
 		ToggleLog:       key.NewBinding(key.WithKeys("g"), key.WithHelp("g", "linear or log grid (T)")),
-		Property:        key.NewBinding(key.WithKeys("p"), key.WithHelp("p", "next property")),
+		Property:        key.NewBinding(key.WithKeys("p"), key.WithHelp("p", "property: the next one")),
 		PrevProperty:    key.NewBinding(key.WithKeys("P"), key.WithHelp("P", "previous property")),
 		NextSpecies:     key.NewBinding(key.WithKeys("s"), key.WithHelp("s", "next species (or blend)")),
 		PrevSpecies:     key.NewBinding(key.WithKeys("S"), key.WithHelp("S", "previous species")),
-		Overlay:         key.NewBinding(key.WithKeys("o"), key.WithHelp("o", "overlay every species")),
+		Overlay:         key.NewBinding(key.WithKeys("o"), key.WithHelp("o", "overlay: every species with the blend")),
 		CursorLeft:      key.NewBinding(key.WithKeys("left", "h"), key.WithHelp("←/h", "cursor left one column")),
 		CursorRight:     key.NewBinding(key.WithKeys("right", "l"), key.WithHelp("→/l", "cursor right one column")),
 		CursorStepLeft:  key.NewBinding(key.WithKeys(",", "shift+left"), key.WithHelp(",", "cursor back one grid point")),

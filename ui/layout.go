@@ -43,7 +43,10 @@ type layout struct {
 // computeLayout places the panes in a body of w × bodyH cells. Where a
 // pane goes follows from its role in paneSpecs; only heights in a column
 // are asked of the panes themselves.
-func computeLayout(w, h, bodyH int, focus, viewer paneID, panes []pane) layout {
+//
+// shared is the roleResultShared pane the full layout shows in place of
+// the right column's last pane, or -1 for none.
+func computeLayout(w, h, bodyH int, focus, viewer, shared paneID, panes []pane) layout {
 	n := len(panes)
 	l := layout{bodyH: bodyH, boxes: make([]box, n), visible: make([]bool, n)}
 	switch {
@@ -57,7 +60,7 @@ func computeLayout(w, h, bodyH int, focus, viewer paneID, panes []pane) layout {
 	default:
 		l.kind = layoutSingle
 	}
-	var inputs, results, leftCol, rightCol []paneID
+	var inputs, results, leftCol, rightCol, sharers []paneID
 	for id := range panes {
 		switch paneSpecs[id].role {
 		case roleInput:
@@ -66,6 +69,9 @@ func computeLayout(w, h, bodyH int, focus, viewer paneID, panes []pane) layout {
 		case roleResultLeft:
 			results = append(results, paneID(id))
 			leftCol = append(leftCol, paneID(id))
+		case roleResultShared:
+			results = append(results, paneID(id))
+			sharers = append(sharers, paneID(id))
 		default:
 			results = append(results, paneID(id))
 			rightCol = append(rightCol, paneID(id))
@@ -109,10 +115,24 @@ func computeLayout(w, h, bodyH int, focus, viewer paneID, panes []pane) layout {
 		l.leftW = max(40, min(56, w*3/8))
 		l.stack(leftCol, l.leftW, bodyH, panes)
 		l.stack(rightCol, w-l.leftW, bodyH, panes)
-		l.leftPanes, l.right = leftCol, rightCol
 		for id := range l.visible {
 			l.visible[id] = true
 		}
+		// A shared pane takes the box of the right column's last pane,
+		// shown in its place from when it is focused until that pane is.
+		if len(rightCol) > 0 {
+			last := rightCol[len(rightCol)-1]
+			rightCol = append([]paneID(nil), rightCol...)
+			for _, id := range sharers {
+				l.boxes[id] = l.boxes[last]
+				l.visible[id] = id == shared
+				if id == shared {
+					l.visible[last] = false
+					rightCol[len(rightCol)-1] = id
+				}
+			}
+		}
+		l.leftPanes, l.right = leftCol, rightCol
 	}
 	return l
 }
@@ -200,4 +220,29 @@ func frame(c *Common, title, body string, b box, focused, above, below bool) str
 	}
 	sb.WriteString(edge.Render(bd.BottomLeft + strings.Repeat(bd.Bottom, max(iw-lipgloss.Width(tag), 0)) + tag + bd.BottomRight))
 	return sb.String()
+}
+
+// sharedSlot is the pane a roleResultShared pane replaces in the full
+// layout: the last result pane of the right column.
+func sharedSlot() paneID {
+	slot := paneID(-1)
+	for id := range paneSpecs {
+		if paneSpecs[id].role == roleResult {
+			slot = paneID(id)
+		}
+	}
+	return slot
+}
+
+// nextShared is which shared pane the full layout shows after focus moves
+// to focus, from cur: the shared pane focused, none once its slot's own
+// pane is focused, else as it was.
+func nextShared(cur, focus paneID) paneID {
+	switch {
+	case paneSpecs[focus].role == roleResultShared:
+		return focus
+	case focus == sharedSlot():
+		return -1
+	}
+	return cur
 }

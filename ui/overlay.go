@@ -1,10 +1,13 @@
 package ui
 
 import (
+	"strings"
+
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // overlayKind is what covers the panes, if anything.
@@ -64,13 +67,27 @@ func (r *root) buildOverlay() {
 			if h.Key == "" {
 				continue
 			}
-			lines = append(lines, "  "+s.HelpKey.Render(padRight(r.c.KeyText(h.Key), 12))+" "+r.c.Text(h.Desc))
+			// A description too long for the line goes on under itself.
+			const keyW = 12
+			for i, d := range report.Wrap(r.c.Text(h.Desc), iw-2-keyW-1) {
+				k := strings.Repeat(" ", keyW)
+				if i == 0 {
+					k = s.HelpKey.Render(padRight(r.c.KeyText(h.Key), keyW))
+				}
+				lines = append(lines, "  "+k+" "+d)
+			}
 		}
 		lines = append(lines, "")
 	}
 	section("In "+r.focus.name(), r.focused().KeyHelp())
 	section("Everywhere", r.c.Keys.globalHelp())
-	lines = append(lines, s.Muted.Render(r.c.Text("Amounts: 2%, 500 ppm, 0.3 (fraction), 30 wt%, 0.3 kg/kg, 0.2 bar (partial), bal")))
-	lines = append(lines, s.Muted.Render(r.c.Text("T: K, C, F, R   P: "+mixtures.PressureUnits)))
+	for _, text := range []string{
+		"Amounts: 2%, 500 ppm, 0.3 (fraction), 30 wt%, 0.3 kg/kg, 0.2 bar (partial), bal",
+		"T: K, C, F, R   P: " + mixtures.PressureUnits,
+	} {
+		for _, l := range report.Wrap(r.c.Text(text), iw) {
+			lines = append(lines, s.Muted.Render(l))
+		}
+	}
 	r.overlayScroll.setLines(lines)
 }

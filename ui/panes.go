@@ -5,6 +5,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // pane is what the root asks of every pane. The root holds the panes in
@@ -53,6 +54,13 @@ type (
 		Result() *mixtures.SweepTable
 		StreamResult(yield func(i int, s *mixtures.State) error) error
 	}
+	// processSource has a process result to export instead of the
+	// readout; nil when it has none.
+	processSource interface{ processReport() *report.ProcessReport }
+	// lazyPane does costly work (a sweep) only while it is on screen:
+	// the root tells it, after every message, whether it is shown, and
+	// runs the command it returns.
+	lazyPane interface{ setShown(shown bool) tea.Cmd }
 	// heightPane asks for a height of its own in a column of the full
 	// layout, out of avail rows; the last pane of a column takes the rest.
 	heightPane interface{ wantHeight(avail int) int }
@@ -70,6 +78,10 @@ const (
 	// roleResultLeft is a result pane that the full layout puts under the
 	// inputs, in the left column.
 	roleResultLeft
+	// roleResultShared is a result pane that the full layout shows in
+	// place of the right column's last pane, while it is the result pane
+	// last focused; elsewhere it is a result pane like the others.
+	roleResultShared
 )
 
 // paneSpec registers a pane. Its place in paneSpecs is its place in the
@@ -90,6 +102,7 @@ var paneSpecs = []paneSpec{
 	{key: "properties", name: "Properties", role: roleResult, newPane: func(c *Common, b *bench) pane { return newPropertiesPane(c, b) }},
 	{key: "sweep", name: "Sweep", role: roleResult, newPane: func(c *Common, b *bench) pane { return newBenchSweepPane(c, b) }},
 	{key: "anatomy", name: "Anatomy", role: roleResultLeft, newPane: func(c *Common, b *bench) pane { return newAnatomyPane(c, b) }},
+	{key: "process", name: "Process", role: roleResultShared, newPane: func(c *Common, b *bench) pane { return newProcessPane(c, b) }},
 }
 
 // paneID is a pane's index in paneSpecs and in the root's list.

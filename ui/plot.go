@@ -308,6 +308,15 @@ func (pl *plotModel) xTicks() []plotTick {
 	var labels []string
 	if pl.xAxis.log {
 		vals = plotLogTicks(lo, hi, target)
+		if lo <= 0 && hi > 0 {
+			// A gauge reading from below the atmosphere: 0, then round
+			// values on the log scale from about one tick's width on.
+			d0 := pl.spec.xData(0)
+			d1 := pl.spec.xDisplay(d0 * math.Pow(pl.xAxis.hi/d0, 1/float64(target)))
+			if pos := plotLogTicks(d1, hi, target-1); len(pos) > 0 {
+				vals = append([]float64{0}, pos...)
+			}
+		}
 		for _, v := range vals {
 			labels = append(labels, plotCompactNumber(v))
 		}

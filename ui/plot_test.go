@@ -343,6 +343,9 @@ func TestPlotEndTicksLabelled(t *testing.T) {
 				t.Errorf("%s at %d: %d ticks", c.name, w, len(ticks))
 				continue
 			}
+			if second, _ := strconv.ParseFloat(ticks[min(1, len(ticks)-1)].label, 64); strings.Contains(c.name, "gauge") && w >= 78 && (ticks[0].label != "0" || second > 10) {
+				t.Errorf("%s at %d: ticks %v, want 0 and round values on the log scale after it", c.name, w, ticks)
+			}
 			row := strings.ReplaceAll(string(pl.cells[(pl.plotH+1)*pl.w:(pl.plotH+2)*pl.w]), "\x00", " ")
 			for _, tk := range []plotTick{ticks[0], ticks[len(ticks)-1]} {
 				if !strings.Contains(" "+row+" ", " "+tk.label+" ") {

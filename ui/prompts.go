@@ -13,6 +13,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 // The prompts on the bottom line: save, open and export paths, and the
@@ -29,6 +30,9 @@ const (
 	promptQuit                 // unsaved changes to the blend file: quit?
 	promptReplace              // unsaved changes: open another file anyway?
 )
+
+// maxPathRunes bounds a typed path; longer ones are no path a system takes.
+const maxPathRunes = 1024
 
 // absPath resolves a typed path: ~ is the home directory, and a relative
 // path is taken from where zmix was started.
@@ -58,28 +62,71 @@ func (r *root) shortPath(p string) string {
 	return p
 }
 
+// makeDataDir creates the user's data directory when a file is written
+// into it, as proposed, for the first time. Other folders are the user's
+// to make.
+func (r *root) makeDataDir(path string) {
+	if r.dataDir != "" && filepath.Dir(path) == r.dataDir {
+		_ = os.MkdirAll(r.dataDir, 0o755) // a failure shows as the write's error
+	}
+}
+
+// proposalDir is where a save or export is proposed: the folder last
+// used, else that of the blend file, else the user's data directory, so
+// that files do not land wherever zmix happened to be started.
+func (r *root) proposalDir() string {
+	switch {
+	case r.lastDir != "":
+		return r.lastDir
+	case r.blendPath != "":
+		return filepath.Dir(r.blendPath)
+	case r.dataDir != "":
+		return r.dataDir
+	}
+	return r.cwd
+}
+
+// showPath writes a path as short as it reads: relative to the start
+// directory inside it, from ~ inside the home directory.
+func (r *root) showPath(p string) string {
+	if s := r.shortPath(p); s != p {
+		return s
+	}
+	if home, err := os.UserHomeDir(); err == nil && home != "" {
+		if rel, err := filepath.Rel(home, p); err == nil && !strings.HasPrefix(rel, "..") {
+			return filepath.Join("~", rel)
+		}
+	}
+	return p
+}
+
 func (r *root) openPrompt(kind promptKind) {
 	r.prompt = kind
 	value := ""
 	switch kind {
 	case promptSave:
-		value = "blend.json"
+		value = r.showPath(filepath.Join(r.proposalDir(), "blend.json"))
 		if r.blendPath != "" {
-			value = r.shortPath(r.blendPath)
+			value = r.showPath(r.blendPath)
 		}
 	case promptOpen:
-		if r.blendPath != "" {
-			value = r.shortPath(filepath.Dir(r.blendPath)) + string(filepath.Separator)
+		if dir := r.proposalDir(); dir != "" {
+			value = r.showPath(dir) + string(filepath.Separator)
 			if value == "."+string(filepath.Separator) {
 				value = ""
 			}
 		}
 	case promptExport:
 		r.exportSrc, _ = r.focused().(sweepSource)
-		value = "readout.csv"
-		if r.exportSrc != nil {
-			value = "sweep.csv"
+		r.exportProc, _ = r.focused().(processSource)
+		name := "readout.csv"
+		switch {
+		case r.exportSrc != nil:
+			name = "sweep.csv"
+		case r.exportProc != nil:
+			name = "process.json"
 		}
+		value = r.showPath(filepath.Join(r.proposalDir(), name))
 	}
 	if last, ok := r.lastTyped[kind]; ok {
 		// The user's own text comes back as they left it, to edit.
@@ -211,12 +258,14 @@ func (r *root) saveBlend(path string) bool {
 		r.setError("not saved: fix this first: " + p)
 		return false
 	}
+	r.makeDataDir(path)
 	if err := r.b.blendFile().Save(path); err != nil {
 		r.setError("not saved: " + cleanErr(err))
 		return false
 	}
 	r.blendPath, r.unsaved, r.contentSeen = path, false, r.b.content
-	r.setStatus("saved the blend to " + r.shortPath(path))
+	r.lastDir = filepath.Dir(path)
+	r.setStatus("saved the blend to " + r.showPath(path))
 	return true
 }
 
@@ -234,7 +283,8 @@ func (r *root) openBlend(path string) {
 	r.b.loadFile(f)
 	r.contentSeen = r.b.content
 	r.blendPath, r.unsaved = path, false
-	r.setStatus("opened " + r.shortPath(path))
+	r.lastDir = filepath.Dir(path)
+	r.setStatus("opened " + r.showPath(path))
 }
 
 // export writes the readout, or the sweep when asked from the sweep pane,
@@ -244,7 +294,24 @@ func (r *root) export(path string) {
 	gauge := r.b.in.Gauge
 	what := "readout"
 	var write func(w io.Writer) error
-	if r.exportSrc != nil {
+	if r.exportProc != nil {
+		// The process commands' writers: JSON, or their text readout.
+		rep := r.exportProc.processReport()
+		if rep == nil {
+			r.setError("no process result to export: see the Process pane's message")
+			return
+		}
+		what = rep.Result.Kind() + " result"
+		write = func(w io.Writer) error {
+			if asJSON {
+				return report.WriteProcessJSON(w, rep)
+			}
+			if r.c.ASCII {
+				w = &report.ASCIIWriter{W: w}
+			}
+			return report.WriteProcessText(w, rep)
+		}
+	} else if r.exportSrc != nil {
 		res := r.exportSrc.Result()
 		if res == nil {
 			r.setError("no finished sweep to export yet")
@@ -275,30 +342,41 @@ func (r *root) export(path string) {
 			return report.WriteStateCSV(w, rep)
 		}
 	}
+	r.makeDataDir(path)
 	if err := mixtures.WriteFileAtomicFunc(path, 0o666, write); err != nil {
 		r.setError("export failed: " + cleanErr(err))
 		return
 	}
-	msg := "exported the " + what + " to " + r.shortPath(path)
-	if !r.b.valid() && r.exportSrc == nil {
+	r.lastDir = filepath.Dir(path)
+	msg := "exported the " + what + " to " + r.showPath(path)
+	if !r.b.valid() && r.exportSrc == nil && r.exportProc == nil {
 		msg += " (the last valid state: an entry has an error)"
 	}
 	r.setStatus(msg)
 }
 
-func (r *root) promptLine() string {
-	s := r.c.Styles
-	t := r.c.Text
+// question is the text of a prompt answered by one key.
+func (r *root) question() string {
 	k := r.c.Keys
 	switch r.prompt {
 	case promptQuit:
-		return s.Prompt.Render(t(fmt.Sprintf(" %s: changes not saved. Quit? %s quit · %s save and quit · %s stay",
-			filepath.Base(r.blendPath), k.Yes.Help().Key, k.SaveQuit.Help().Key, k.No.Help().Key)))
+		return fmt.Sprintf("%s: changes not saved. Quit? %s quit · %s save and quit · %s stay",
+			filepath.Base(r.blendPath), k.Yes.Help().Key, k.SaveQuit.Help().Key, k.No.Help().Key)
 	case promptReplace:
-		return s.Prompt.Render(t(fmt.Sprintf(" %s: changes not saved. Open another file? %s yes · %s no",
-			filepath.Base(r.blendPath), k.Yes.Help().Key, k.No.Help().Key)))
+		return fmt.Sprintf("%s: changes not saved. Open another file? %s yes · %s no",
+			filepath.Base(r.blendPath), k.Yes.Help().Key, k.No.Help().Key)
 	case promptOverwrite:
-		return s.Prompt.Render(t(fmt.Sprintf(" %s exists. Replace it? %s yes · %s no", r.shortPath(r.pending), k.Yes.Help().Key, k.No.Help().Key)))
+		return fmt.Sprintf("%s exists. Replace it? %s yes · %s no", r.shortPath(r.pending), k.Yes.Help().Key, k.No.Help().Key)
+	}
+	return ""
+}
+
+func (r *root) promptLine() string {
+	s := r.c.Styles
+	t := r.c.Text
+	switch r.prompt {
+	case promptQuit, promptReplace, promptOverwrite:
+		return s.Prompt.Render(" " + t(model.Printable(r.question())))
 	}
 	label := map[promptKind]string{
 		promptSave:   " Save blend to: ",
@@ -307,6 +385,9 @@ func (r *root) promptLine() string {
 	}[r.prompt]
 	if r.prompt == promptExport && r.exportSrc != nil {
 		label = " Export sweep to (.csv/.json): "
+	}
+	if r.prompt == promptExport && r.exportProc != nil {
+		label = " Export process result to (.json, or .txt for text): "
 	}
 	hint := t("  enter ok · esc cancel")
 	return s.Prompt.Render(label) + r.input.view(max(r.width-lipgloss.Width(label)-lipgloss.Width(hint)-2, 8)) + s.Muted.Render(hint)

@@ -87,20 +87,16 @@ func (p *propertiesPane) wantHeight(avail int) int {
 	if p.b.in.Mixture != nil {
 		nSpecies = len(p.b.in.Mixture.Components) + len(cautionNotes(p.b.notes)) // a caution line each
 	}
-	// The figures' rows, the heading, per-kg, mixing and real-gas lines,
-	// the species table's heading and the frame.
-	return max(10, min(readoutRowCount()+10+nSpecies, avail-16))
-}
-
-// readoutRowCount is how many figures readoutRows gives.
-func readoutRowCount() int {
-	n := 0
+	// Besides its figures the readout has ten rows: the frame, the
+	// heading, the mixing-entropy and real-gas lines, the blank lines and the species
+	// table's headings and note.
+	figures := 0
 	for i := range mixtures.Quantities {
 		if q := &mixtures.Quantities[i]; q.Section == mixtures.SectionMixture && q.Key != mixingKey {
-			n++
+			figures++
 		}
 	}
-	return n
+	return max(10, min(figures+10+nSpecies, avail-16))
 }
 
 // readoutRow is one figure of the blend, per mole and per kilogram.
@@ -238,8 +234,8 @@ func (p *propertiesPane) oneColumn(rows []readoutRow, add func(string)) {
 		}
 		add(strings.TrimRight(line, " "))
 	}
-	p.mixingLine(lw, vw, add)
 	p.realGasLine(add)
+	p.mixingLine(lw, vw, add)
 }
 
 // twoColumns packs the figures per mole side by side, for short panes.
@@ -259,8 +255,8 @@ func (p *propertiesPane) twoColumns(rows []readoutRow, add func(string)) {
 		}
 		add(strings.TrimRight(line, " "))
 	}
-	p.mixingLine(lw+8, vw, add)
 	p.realGasLine(add)
+	p.mixingLine(lw+8, vw, add)
 }
 
 func (p *propertiesPane) mixingLine(lw, vw int, add func(string)) {
@@ -290,18 +286,20 @@ func (p *propertiesPane) realGasLine(add func(string)) {
 		add(line + s.Muted.Render(t(" not known: no critical constants")))
 		return
 	}
+	var items []string
 	for i := range mixtures.Quantities {
 		q := &mixtures.Quantities[i]
 		if q.Section != mixtures.SectionRealGas {
 			continue
 		}
-		item := " " + p.symbol(q) + " " + quantityText(q, q.Get(st))
+		item := p.symbol(q) + " " + quantityText(q, q.Get(st))
 		if u := p.unit(q.Unit, q.UnitASCII); u != "" {
 			item += " " + u
 		}
-		line += s.Value.Render(t(item))
+		items = append(items, item)
 	}
-	if model := "  " + st.RealGas.Model.String(); lipgloss.Width(line)+lipgloss.Width(model) <= p.w {
+	line += s.Value.Render(t(" " + strings.Join(items, "  ")))
+	if model := "  " + st.RealGas.Model.Short(); lipgloss.Width(line)+lipgloss.Width(model) <= p.w {
 		line += s.Muted.Render(t(model))
 	}
 	add(line)

@@ -2,10 +2,12 @@ package ui
 
 import (
 	"fmt"
+	"strings"
 
 	"github.com/charmbracelet/bubbles/key"
 	tea "github.com/charmbracelet/bubbletea"
 
+	"zmix/mixtures"
 	"zmix/mixtures/report"
 	"zmix/model"
 )
@@ -16,6 +18,15 @@ const (
 	recipeBrowse recipeMode = iota
 	recipeEditing
 	recipeSearching
+	recipeNaming // the blend's name or note is typed in
+)
+
+// recipeField is the text being typed in recipeNaming mode.
+type recipeField int
+
+const (
+	fieldName recipeField = iota
+	fieldNote
 )
 
 // recipePane is the composition: species and amounts as typed, each with
@@ -29,17 +40,23 @@ type recipePane struct {
 	mode   recipeMode
 	amount field
 	before string // the amount before editing, for esc
+	added  bool   // the row being edited was just added by the search
+	field  recipeField
 	search field
 	hits   []*model.Species
 	hit    int
-	msg    string // the pane's last remark, e.g. why normalise refused
-	loads  uint64 // the bench's loads when last synced
+	// nearest says the hits are the names nearest a query that matched
+	// nothing; beforeEntries is the recipe when an amount was opened.
+	nearest       bool
+	beforeEntries []mixtures.FileComponent
+	msg           string // the pane's last remark, e.g. why normalise refused
+	loads         uint64 // the bench's loads when last synced
 
 	scroll scroller
 }
 
 func newRecipePane(c *Common, b *bench) *recipePane {
-	p := &recipePane{c: c, b: b, amount: newField(c), search: newField(c), loads: b.loads}
+	p := &recipePane{c: c, b: b, amount: newFieldLimit(c, mixtures.MaxAmountChars), search: newFieldLimit(c, mixtures.MaxSpeciesChars), loads: b.loads}
 	return p
 }
 
@@ -60,8 +77,10 @@ func (p *recipePane) KeyHelp() []key.Binding {
 		return []key.Binding{k.Done, p.c.Keys.Back, p.c.Keys.Interrupt}
 	case recipeSearching:
 		return []key.Binding{k.Pick, k.SearchUp, k.SearchDown, p.c.Keys.Back}
+	case recipeNaming:
+		return []key.Binding{p.c.Keys.Accept, p.c.Keys.Back, p.c.Keys.Interrupt}
 	}
-	return []key.Binding{k.Up, k.Down, k.Add, k.Edit, k.Balance, k.Remove, k.Normalise}
+	return []key.Binding{k.Up, k.Down, k.Add, k.Edit, k.Balance, k.Remove, k.Normalise, k.Undo, k.Name, k.Note}
 }
 
 // ShortHelp is the few keys the status line names.
@@ -72,8 +91,10 @@ func (p *recipePane) ShortHelp() []key.Binding {
 		return []key.Binding{k.Done, p.c.Keys.Back}
 	case recipeSearching:
 		return []key.Binding{k.Pick, p.c.Keys.Back}
+	case recipeNaming:
+		return []key.Binding{p.c.Keys.Accept, p.c.Keys.Back}
 	}
-	return []key.Binding{k.Add, k.Edit, k.Balance, k.Remove, k.Normalise}
+	return []key.Binding{k.Add, k.Edit, k.Balance, k.Remove, k.Normalise, k.Undo}
 }
 
 func (p *recipePane) Update(m tea.Msg) tea.Cmd {
@@ -85,15 +106,36 @@ func (p *recipePane) Update(m tea.Msg) tea.Cmd {
 	var cmd tea.Cmd
 	switch p.mode {
 	case recipeEditing:
+		p.msg = ""
 		switch {
+		case key.Matches(msg, p.c.Keys.Back) && p.added && strings.TrimSpace(p.before) == "":
+			// Esc on a row the search just added takes the row back out.
+			p.msg = "not added: " + p.b.entries[p.sel].Species
+			p.b.undoRecipe()
+			p.stopEdit()
 		case key.Matches(msg, p.c.Keys.Back):
 			p.b.setAmount(p.sel, p.before)
 			p.stopEdit()
+		case key.Matches(msg, k.Done) && strings.TrimSpace(p.amount.value()) == "":
+			// An empty amount is not a recipe line: ask for one.
+			p.msg = "enter keeps an amount: type one for " + p.b.entries[p.sel].Species + "; esc " + p.escWord()
 		case key.Matches(msg, k.Done):
+			if p.b.entries[p.sel].Amount != p.before && !p.added {
+				p.b.rememberRecipe(p.beforeEntries)
+			}
 			p.stopEdit()
 		default:
 			cmd = p.amount.update(msg)
 			p.b.setAmount(p.sel, p.amount.value())
+		}
+	case recipeNaming:
+		switch {
+		case key.Matches(msg, p.c.Keys.Back):
+			p.stopNaming(false)
+		case key.Matches(msg, p.c.Keys.Accept):
+			p.stopNaming(true)
+		default:
+			cmd = p.amount.update(msg)
 		}
 	case recipeSearching:
 		switch {
@@ -108,8 +150,7 @@ func (p *recipePane) Update(m tea.Msg) tea.Cmd {
 			p.hit = min(p.hit+1, len(p.hits)-1)
 		default:
 			cmd = p.search.update(msg)
-			p.hits = p.c.Catalogue.Search(p.search.value())
-			p.hit = 0
+			p.findHits()
 		}
 	default:
 		p.msg = ""
@@ -121,23 +162,38 @@ func (p *recipePane) Update(m tea.Msg) tea.Cmd {
 		case key.Matches(msg, k.Add):
 			p.mode = recipeSearching
 			p.search.start("")
-			p.hits = p.c.Catalogue.Search("")
-			p.hit = 0
+			p.findHits()
 		case key.Matches(msg, k.Edit):
 			if len(p.b.entries) > 0 {
 				p.startEdit()
 			}
 		case key.Matches(msg, k.Balance):
-			p.b.setBalance(p.sel)
+			if len(p.b.entries) > 0 {
+				p.b.rememberRecipe(nil)
+				p.b.setBalance(p.sel)
+			}
 		case key.Matches(msg, k.Remove):
 			if len(p.b.entries) > 0 {
-				p.msg = "removed " + p.b.entries[p.sel].Species
+				p.msg = "removed " + p.b.entries[p.sel].Species + "; " + k.Undo.Help().Key + " puts it back"
+				p.b.rememberRecipe(nil)
 				p.b.remove(p.sel)
 			}
+		case key.Matches(msg, k.Undo):
+			if p.b.undoRecipe() {
+				p.msg = "undone: the recipe is as before its last change (" + k.Undo.Help().Key + " again redoes)"
+			} else {
+				p.msg = "nothing to undo yet"
+			}
+		case key.Matches(msg, k.Name):
+			p.startNaming(fieldName)
+		case key.Matches(msg, k.Note):
+			p.startNaming(fieldNote)
 		case key.Matches(msg, k.Normalise):
+			before := append([]mixtures.FileComponent{}, p.b.entries...)
 			if err := p.b.normalise(); err != nil {
 				p.msg = err.Error()
 			} else {
+				p.b.rememberRecipe(before)
 				p.msg = "amounts scaled to sum to 100 %"
 			}
 		}
@@ -150,12 +206,63 @@ func (p *recipePane) Update(m tea.Msg) tea.Cmd {
 func (p *recipePane) startEdit() {
 	p.mode = recipeEditing
 	p.before = p.b.entries[p.sel].Amount
+	p.beforeEntries = append(p.beforeEntries[:0], p.b.entries...)
 	p.amount.start(p.before)
 }
 
 func (p *recipePane) stopEdit() {
 	p.mode = recipeBrowse
+	p.added = false
 	p.amount.stop()
+}
+
+// escWord says what esc does while an amount is typed.
+func (p *recipePane) escWord() string {
+	if p.added && strings.TrimSpace(p.before) == "" {
+		return "drops the species"
+	}
+	return "undoes the edit"
+}
+
+// startNaming opens the blend's name or note for typing, in the amount's
+// field, which is free while no amount is typed.
+func (p *recipePane) startNaming(f recipeField) {
+	p.mode, p.field = recipeNaming, f
+	text := p.b.name
+	if f == fieldNote {
+		text = p.b.note
+	}
+	p.amount.setWidth(max(p.w-8, 8))
+	p.amount.start(text)
+}
+
+func (p *recipePane) stopNaming(keep bool) {
+	if keep {
+		if p.field == fieldName {
+			p.b.setName(p.amount.value())
+		} else {
+			p.b.setNote(p.amount.value())
+		}
+	}
+	p.mode = recipeBrowse
+	p.amount.stop()
+	p.amount.setWidth(p.amountWidth())
+}
+
+// findHits searches the catalogue for the query; when nothing matches, it
+// offers the nearest names instead, as the commands' "did you mean" does.
+func (p *recipePane) findHits() {
+	q := p.search.value()
+	p.hits, p.hit, p.nearest = p.c.Catalogue.Search(q), 0, false
+	if len(p.hits) > 0 || strings.TrimSpace(q) == "" {
+		return
+	}
+	for _, f := range p.c.Catalogue.Suggest(q, 3) {
+		if sp, ok := p.c.Catalogue.Lookup(f); ok {
+			p.hits = append(p.hits, sp)
+		}
+	}
+	p.nearest = len(p.hits) > 0
 }
 
 // pick adds the marked search hit and opens its amount for typing.
@@ -167,12 +274,17 @@ func (p *recipePane) pick() {
 		return
 	}
 	sp := p.hits[p.hit]
+	before := append([]mixtures.FileComponent{}, p.b.entries...)
 	i, added := p.b.addSpecies(sp.Formula)
 	p.sel = i
 	if !added {
 		p.msg = sp.Formula + " is in the recipe already; edit its amount"
+	} else {
+		p.b.rememberRecipe(before)
 	}
+	// The new row's amount is open, ready to type: focus stays in it.
 	p.startEdit()
+	p.added = added
 }
 
 // selectSpecies marks the entry of a formula, if present.
@@ -205,9 +317,29 @@ func (p *recipePane) refresh() {
 	}
 	s := p.c.Styles
 	var lines []string
-	if p.b.name != "" {
-		lines = append(lines, s.Muted.Render(p.c.Text(p.b.name)))
+	// The blend's name and note, wrapped; while one is typed, its field.
+	// The note is shown only where the pane has the rows for it.
+	var noteLines []string
+	for _, f := range []recipeField{fieldName, fieldNote} {
+		text, label := p.b.name, "name: "
+		if f == fieldNote {
+			text, label = p.b.note, "note: "
+		}
+		var out []string
+		if p.mode == recipeNaming && p.field == f {
+			out = []string{s.Label.Render(label) + p.amount.view(max(p.w-len(label)-1, 8))}
+		} else if text != "" {
+			for _, l := range report.Wrap(p.c.Text(model.Printable(text)), p.w) {
+				out = append(out, s.Muted.Render(l))
+			}
+		}
+		if f == fieldNote {
+			noteLines = out
+		} else {
+			lines = append(lines, out...)
+		}
 	}
+	nameEnd := len(lines)
 	sw, aw := p.speciesWidth(), p.amountWidth()
 	xHead := "x mol/mol"
 	if p.b.blendErr != "" || anyErr(p.b.rowErr) {
@@ -260,6 +392,11 @@ func (p *recipePane) refresh() {
 			lines = append(lines, s.Warning.Render(l))
 		}
 	}
+	if len(noteLines) > 0 && (len(lines)+len(noteLines) <= p.h || p.mode == recipeNaming) {
+		lines = append(lines[:nameEnd], append(noteLines, lines[nameEnd:]...)...)
+		selFirst += len(noteLines)
+		selLast += len(noteLines)
+	}
 	p.scroll.setLines(lines)
 	p.scroll.show(selFirst, selLast)
 	if p.msg != "" || p.b.blendErr != "" {
@@ -270,12 +407,15 @@ func (p *recipePane) refresh() {
 
 func (p *recipePane) searchLines() []string {
 	s := p.c.Styles
-	lines := []string{
-		s.Label.Render("add species: ") + p.search.view(max(p.w-14, 4)),
-		s.Muted.Render(p.c.Text("type a formula or name; ↑↓ choose, enter adds, esc cancels")),
+	lines := []string{s.Label.Render("add species: ") + p.search.view(max(p.w-14, 4))}
+	for _, l := range report.Wrap(p.c.Text("type a formula or name; ↑↓ choose, enter adds, esc cancels"), p.w) {
+		lines = append(lines, s.Muted.Render(l))
 	}
-	if len(p.hits) == 0 {
+	switch {
+	case len(p.hits) == 0:
 		lines = append(lines, s.Error.Render("  no match in the catalogue"))
+	case p.nearest:
+		lines = append(lines, s.Warning.Render(p.c.Text("  no match; the nearest names:")))
 	}
 	// The query stays in view; the list scrolls under it.
 	room := max(p.h-len(lines), 1)

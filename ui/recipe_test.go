@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"reflect"
 	"strings"
 	"testing"
 
@@ -195,5 +196,97 @@ func TestRecipeKeyHelpPerMode(t *testing.T) {
 	recipeKeys(p, b, "a")
 	if !hasBinding(p.KeyHelp(), k.Pick) {
 		t.Errorf("search help lacks pick")
+	}
+}
+
+// A query that matches nothing offers the catalogue's nearest names, the
+// engine's suggestion that the commands give, and enter adds the marked one.
+func TestRecipeSearchSuggestsNearest(t *testing.T) {
+	p, b := testRecipe(t)
+	recipeKeys(p, b, "a")
+	recipeType(p, b, "Ni2")
+	want := p.c.Catalogue.Suggest("Ni2", 3)
+	if len(want) == 0 {
+		t.Fatal("the catalogue suggests nothing for Ni2; the test needs a query it can place")
+	}
+	var got []string
+	for _, sp := range p.hits {
+		got = append(got, sp.Formula)
+	}
+	if strings.Join(got, " ") != strings.Join(want, " ") || !strings.Contains(p.View(), "nearest names") {
+		t.Fatalf("hits for Ni2 = %v, want the nearest names %v; view:\n%s", got, want, p.View())
+	}
+	recipeKeys(p, b, "enter")
+	if p.mode != recipeEditing || b.entries[p.sel].Species != want[0] {
+		t.Errorf("enter did not add %s and open its amount", want[0])
+	}
+}
+
+// The new row's amount is ready to type; enter on an empty amount asks for
+// one and keeps the field open; after the amount, the row stays marked;
+// esc on a new row takes it back out.
+func TestRecipeNewRowAmount(t *testing.T) {
+	p, b := testRecipe(t)
+	recipeKeys(p, b, "a")
+	recipeType(p, b, "ar")
+	recipeKeys(p, b, "enter", "enter")
+	if p.mode != recipeEditing || !strings.Contains(p.View(), "type one for Ar") {
+		t.Fatalf("enter on an empty amount: mode %d; view:\n%s", p.mode, p.View())
+	}
+	recipeType(p, b, "1%")
+	recipeKeys(p, b, "enter")
+	if p.mode != recipeBrowse || b.entries[p.sel].Species != "Ar" || b.entries[p.sel].Amount != "1%" {
+		t.Fatalf("after the amount: mode %d, marked row %+v", p.mode, b.entries[p.sel])
+	}
+	n := len(b.entries)
+	recipeKeys(p, b, "a")
+	recipeType(p, b, "xe")
+	recipeKeys(p, b, "enter", "esc")
+	if len(b.entries) != n || p.mode != recipeBrowse {
+		t.Errorf("esc on a new row kept it: %+v", b.entries)
+	}
+}
+
+// One undo takes back the last recipe change, a removal included; undo
+// again redoes it.
+func TestRecipeUndo(t *testing.T) {
+	p, b := testRecipe(t)
+	before := append([]mixtures.FileComponent{}, b.entries...)
+	recipeKeys(p, b, "down", "d")
+	if len(b.entries) != len(before)-1 {
+		t.Fatalf("d removed nothing")
+	}
+	recipeKeys(p, b, "u")
+	if !reflect.DeepEqual(b.entries, before) {
+		t.Fatalf("u after d: %+v, want %+v", b.entries, before)
+	}
+	recipeKeys(p, b, "u")
+	if len(b.entries) != len(before)-1 {
+		t.Errorf("u again did not redo the removal: %+v", b.entries)
+	}
+	recipeKeys(p, b, "u", "enter", "ctrl+u")
+	recipeType(p, b, "20%")
+	recipeKeys(p, b, "enter", "u")
+	if !reflect.DeepEqual(b.entries, before) {
+		t.Errorf("u after an amount edit: %+v, want %+v", b.entries, before)
+	}
+}
+
+// The blend's name and note are typed in the pane and go to its file.
+func TestRecipeNameAndNote(t *testing.T) {
+	p, b := testRecipe(t)
+	recipeKeys(p, b, "r", "ctrl+u")
+	recipeType(p, b, "Line 4 purge")
+	recipeKeys(p, b, "enter", "c", "ctrl+u")
+	recipeType(p, b, "Invented: bench test")
+	recipeKeys(p, b, "enter")
+	if f := b.blendFile(); f.Name != "Line 4 purge" || f.Note != "Invented: bench test" {
+		t.Errorf("blend file name %q, note %q", f.Name, f.Note)
+	}
+	recipeKeys(p, b, "r")
+	recipeType(p, b, " (draft)")
+	recipeKeys(p, b, "esc")
+	if b.name != "Line 4 purge" {
+		t.Errorf("esc kept the typed name: %q", b.name)
 	}
 }

@@ -4,6 +4,7 @@ import (
 	"errors"
 	"os"
 	"path/filepath"
+	"strings"
 	"time"
 
 	"github.com/charmbracelet/bubbles/key"
@@ -11,6 +12,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -33,6 +35,7 @@ type root struct {
 	safety        []string
 	sizes         []box // by paneID: the size each pane was last given
 	focus, viewer paneID
+	shared        paneID // the shared pane in view in the full layout, or -1
 
 	overlay       overlayKind
 	overlayScroll scroller
@@ -42,6 +45,7 @@ type root struct {
 	pending     string                // a path waiting for the overwrite answer
 	pendingKind promptKind            // what the path is for
 	exportSrc   sweepSource           // the pane whose sweep the export prompt writes; nil: the readout
+	exportProc  processSource         // the pane whose process result the export prompt writes
 	lastTyped   map[promptKind]string // what a failed prompt held, to offer again
 
 	status    string
@@ -63,6 +67,8 @@ type root struct {
 	signals  <-chan os.Signal
 	now      func() time.Time
 	cwd      string
+	dataDir  string // where saves and exports are proposed at first
+	lastDir  string // the folder of the file last saved, opened or exported
 	quitting bool
 }
 
@@ -72,8 +78,10 @@ type rootOptions struct {
 	store   *stateStore
 	now     func() time.Time
 	cwd     string
+	dataDir string
 	signals <-chan os.Signal
 	mono    bool
+	notice  string // for the status line: which state file this workbench uses
 }
 
 func newRoot(cfg Config, opt rootOptions) (*root, error) {
@@ -86,8 +94,8 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 	}
 	c := &Common{Styles: DefaultStyles(opt.mono, cfg.ASCII), Keys: DefaultKeyMap(), ASCII: cfg.ASCII, Catalogue: cat}
 	b := newBench(cat)
-	r := &root{c: c, b: b, store: opt.store, now: opt.now, cwd: opt.cwd, signals: opt.signals,
-		input: newField(c), viewer: paneID(-1), lastTyped: map[promptKind]string{},
+	r := &root{c: c, b: b, store: opt.store, now: opt.now, cwd: opt.cwd, dataDir: opt.dataDir, signals: opt.signals,
+		input: newFieldLimit(c, maxPathRunes), viewer: paneID(-1), shared: paneID(-1), lastTyped: map[promptKind]string{},
 		dirty: true} // the first message writes the state, in the current format
 
 	var saved *savedState
@@ -134,6 +142,12 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 			r.setStatus("demo blend (invented scenario); " + c.Keys.OpenBlend.Help().Key + " opens a file")
 		}
 	}
+	if opt.notice != "" {
+		if r.status != "" {
+			opt.notice += "; " + r.status
+		}
+		r.status = model.Printable(opt.notice) // keeps statusErr
+	}
 	b.update()
 	r.contentSeen = b.content
 
@@ -141,6 +155,11 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 		r.panes = append(r.panes, s.newPane(c, b))
 	}
 	r.sizes = make([]box, len(r.panes))
+	for _, p := range r.panes {
+		if lp, ok := p.(lazyPane); ok {
+			lp.setShown(false) // until the first layout says otherwise
+		}
+	}
 	if saved != nil {
 		for _, p := range r.panes {
 			if sp, ok := p.(statePane); ok {
@@ -156,6 +175,7 @@ func newRoot(cfg Config, opt rootOptions) (*root, error) {
 	if r.focus.isViewer() {
 		r.viewer = r.focus
 	}
+	r.shared = nextShared(r.shared, r.focus)
 	return r, nil
 }
 
@@ -180,6 +200,8 @@ func (r *root) Update(msg tea.Msg) tea.Cmd {
 		return tea.Quit
 	case saveDoneMsg:
 		cmds = append(cmds, r.saveDone(msg))
+	case noticeMsg:
+		r.setError(msg.text)
 	case tea.KeyMsg:
 		if msg.Type == tea.KeyRunes && !msg.Paste && len(msg.Runes) > 1 {
 			// Keys typed fast, or sent in one packet over a slow SSH
@@ -230,7 +252,20 @@ func (r *root) afterChange() tea.Cmd {
 	if r.wantStatusRows() != r.statusRows {
 		r.relayout()
 	}
-	return tea.Batch(cmd, r.autosave())
+	return tea.Batch(cmd, r.showPanes(), r.autosave())
+}
+
+// showPanes tells each lazy pane whether it is on screen (or about to be
+// exported from), so that a sweep runs only when someone looks at it.
+func (r *root) showPanes() tea.Cmd {
+	var cmds []tea.Cmd
+	for id, p := range r.panes {
+		if lp, ok := p.(lazyPane); ok {
+			shown := id < len(r.lay.visible) && r.lay.visible[id] && r.lay.kind != layoutTooSmall
+			cmds = append(cmds, lp.setShown(shown || paneID(id) == r.focus))
+		}
+	}
+	return tea.Batch(cmds...)
 }
 
 // syncPanes tells every pane that the document changed.
@@ -248,7 +283,7 @@ func (r *root) relayout() {
 	r.safety = safetyLines(r.c, r.b.cautions, r.b.notes, r.width)
 	r.statusRows = r.wantStatusRows()
 	bodyH := r.height - 1 - r.statusRows - len(r.safety)
-	r.lay = computeLayout(r.width, r.height, bodyH, r.focus, r.viewer, r.panes)
+	r.lay = computeLayout(r.width, r.height, bodyH, r.focus, r.viewer, r.shared, r.panes)
 	if r.lay.kind == layoutTooSmall {
 		return
 	}
@@ -272,19 +307,95 @@ func (r *root) setFocus(id paneID) {
 	if r.focus.isViewer() {
 		r.viewer = r.focus
 	}
+	r.shared = nextShared(r.shared, r.focus)
 	r.relayout()
 }
 
-// wantStatusRows is 2 when the message does not fit on one row.
-func (r *root) wantStatusRows() int {
-	if r.status != "" && r.prompt == promptNone && lipgloss.Width(r.c.Text(r.status))+2 > r.width {
-		return 2
+// maxBottomRows bounds the rows a long message or question may take.
+const maxBottomRows = 3
+
+// wantStatusRows is the rows the bottom line needs: more than one when a
+// message or question does not fit on one row and is wrapped.
+func (r *root) wantStatusRows() int { return max(1, len(r.bottomWrapped())) }
+
+// bottomWrapped is the status message, or a question to answer, wrapped
+// between words into at most maxBottomRows rows, when it does not fit on
+// one row (a message beside the key reminder); nil when it does. Past the
+// last row the text is shortened with an ellipsis, never cut mid-word.
+func (r *root) bottomWrapped() []string {
+	var text string
+	switch r.prompt {
+	case promptNone:
+		if r.status == "" {
+			return nil
+		}
+		text = r.c.Text(r.status)
+		if 1+lipgloss.Width(text)+lipgloss.Width(r.keysReminder()) <= r.width {
+			return nil
+		}
+	case promptQuit, promptReplace, promptOverwrite:
+		text = r.c.Text(model.Printable(r.question()))
+		if 1+lipgloss.Width(text) <= r.width {
+			return nil
+		}
+	default:
+		return nil
 	}
-	return 1
+	w := max(r.width-1, 1)
+	lines := report.Wrap(text, w)
+	for len(lines) > maxBottomRows || longestWord(text) > w {
+		// A long path is what usually overflows, or would be broken across
+		// rows: shorten it in the middle, keeping its start and its file
+		// name, before anything else.
+		shorter := shortenLongestWord(text)
+		if shorter == text {
+			break
+		}
+		text = shorter
+		lines = report.Wrap(text, w)
+	}
+	if len(lines) > maxBottomRows {
+		rest := strings.Join(lines[maxBottomRows-1:], " ")
+		lines = append(lines[:maxBottomRows-1], r.c.shorten(rest, w))
+	}
+	return lines
 }
 
-func (r *root) setStatus(s string) { r.status, r.statusErr = s, false }
-func (r *root) setError(s string)  { r.status, r.statusErr = s, true }
+// shortenLongestWord shortens the longest word of s over 40 cells (a path)
+// to its first 12 and last 24 runes around an ellipsis, and returns s
+// unchanged when no word is that long.
+func shortenLongestWord(s string) string {
+	words := strings.Fields(s)
+	best := -1
+	for i, w := range words {
+		if n := len([]rune(w)); n > 40 && (best < 0 || n > len([]rune(words[best]))) {
+			best = i
+		}
+	}
+	if best < 0 {
+		return s
+	}
+	rs := []rune(words[best])
+	return strings.Replace(s, words[best], string(rs[:12])+"…"+string(rs[len(rs)-24:]), 1)
+}
+
+// longestWord is the width of the longest word of s.
+func longestWord(s string) int {
+	n := 0
+	for _, w := range strings.Fields(s) {
+		n = max(n, lipgloss.Width(w))
+	}
+	return n
+}
+
+// keysReminder is the right end of the status line.
+func (r *root) keysReminder() string { return r.c.Text(" ? keys · tab pane · q quit ") }
+
+// setStatus and setError put a message on the status line. Messages name
+// paths and values from files and the user: they are made printable here,
+// once for all of them.
+func (r *root) setStatus(s string) { r.status, r.statusErr = model.Printable(s), false }
+func (r *root) setError(s string)  { r.status, r.statusErr = model.Printable(s), true }
 
 // focused is the pane that has the keys.
 func (r *root) focused() pane { return r.panes[r.focus] }

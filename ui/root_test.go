@@ -15,8 +15,8 @@ func TestRootFocusKeys(t *testing.T) {
 		key  string
 		want paneID
 	}{
-		{"tab", paneSetpoint}, {"tab", paneProperties}, {"tab", paneSweep}, {"tab", paneAnatomy},
-		{"tab", paneRecipe}, {"shift+tab", paneAnatomy}, {"3", paneProperties}, {"1", paneRecipe}, {"5", paneAnatomy},
+		{"tab", paneSetpoint}, {"tab", paneProperties}, {"tab", paneSweep}, {"tab", paneAnatomy}, {"tab", paneProcess},
+		{"tab", paneRecipe}, {"shift+tab", paneProcess}, {"shift+tab", paneAnatomy}, {"3", paneProperties}, {"1", paneRecipe}, {"5", paneAnatomy}, {"6", paneProcess},
 	}
 	for _, s := range steps {
 		press(t, r, s.key)

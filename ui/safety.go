@@ -29,7 +29,10 @@ func safetyLines(c *Common, cautions []mixtures.Caution, notes []mixtures.StateN
 		out = append(out, s.Caution.Render(c.shorten(validityMarker(c, notes), w)))
 	}
 	if len(cautions) == 0 {
-		return append(out, s.Warning.Render(c.shorten(mixtures.DeferLine, w)))
+		for _, l := range report.Wrap(c.Text(mixtures.DeferLine), w) {
+			out = append(out, s.Warning.Render(l))
+		}
+		return out
 	}
 	parts := make([]string, len(cautions))
 	for i, ca := range cautions {
@@ -75,7 +78,13 @@ func validityMarker(c *Common, notes []mixtures.StateNote) string {
 	if len(notes) > 1 {
 		head = "MODEL CAUTIONS"
 	}
-	return head + " (" + strings.Join(who, ", ") + ") [" + c.Keys.Safety.Help().Key + " details]: " + notes[0].Text
+	// A note reads "figure: consequence"; the marker gives the consequence
+	// ("a cooler spot or a compression may condense it"), the overlay all.
+	text := notes[0].Text
+	if i := strings.LastIndex(text, ": "); i >= 0 {
+		text = text[i+2:]
+	}
+	return head + " (" + strings.Join(who, ", ") + ") [" + c.Keys.Safety.Help().Key + " details]: " + text
 }
 
 // safetyDetail is the full text of every caution, for the overlay: the
@@ -84,14 +93,18 @@ func safetyDetail(c *Common, cautions []mixtures.Caution, notes []mixtures.State
 	s := c.Styles
 	var out []string
 	notes = cautionNotes(notes)
-	for _, n := range notes {
-		for i, l := range report.Wrap(c.Text(report.NoteText(n)), w-2) {
+	// Each text is a bullet, wrapped under itself.
+	bullet := func(text string) {
+		for i, l := range report.Wrap(c.Text(text), w-2) {
 			if i == 0 {
 				out = append(out, s.Caution.Render("* "+l))
 			} else {
 				out = append(out, "  "+l)
 			}
 		}
+	}
+	for _, n := range notes {
+		bullet(report.NoteText(n))
 	}
 	if len(notes) > 0 {
 		out = append(out, "")
@@ -100,13 +113,7 @@ func safetyDetail(c *Common, cautions []mixtures.Caution, notes []mixtures.State
 		return append(out, s.Muted.Render(c.Text("No hazard class applies to this blend at this pressure. Gases still call for the care of the data sheets.")))
 	}
 	for _, ca := range cautions {
-		for i, l := range report.Wrap(c.Text(mixtures.FormatCaution(ca)), w-2) {
-			if i == 0 {
-				out = append(out, s.Caution.Render("* "+l))
-			} else {
-				out = append(out, "  "+l)
-			}
-		}
+		bullet(mixtures.FormatCaution(ca))
 	}
 	out = append(out, "")
 	for _, l := range report.Wrap(c.Text(mixtures.DeferLine), w) {

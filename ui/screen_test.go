@@ -128,6 +128,9 @@ func TestGoldenPanes(t *testing.T) {
 		{"ascii_recipe_80x24", 80, 24, true, nil},
 		{"ascii_anatomy_80x24", 80, 24, true, []string{"5"}},
 		{"too_small_60x20", 60, 20, false, nil},
+		{"process_compress_80x24", 80, 24, false, []string{"6", "right"}},
+		{"process_mix_80x24", 80, 24, false, []string{"6", "right", "right", "right", "pgdown"}},
+		{"ascii_process_plot_80x24", 80, 24, true, []string{"6", "right", "p"}},
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			r := testRoot(t, c.w, c.h, testRootOpts{ascii: c.ascii})

@@ -146,12 +146,27 @@ func (p *setpointPane) stopEdit() {
 func (p *setpointPane) fieldWidth() int { return max(8, min(18, p.w-16-22)) }
 
 func (p *setpointPane) refresh() {
+	// Extras wrap under their values while the pane has the rows for
+	// them; past that they give way, so that every line stays in view.
+	lines, selLine := p.render(true)
+	if len(lines) > p.h {
+		lines, selLine = p.render(false)
+	}
+	p.scroll.setLines(lines)
+	p.scroll.show(selLine, selLine)
+}
+
+// render builds the pane's lines; wrapExtras says whether an extra that
+// does not fit beside its value may go under it.
+func (p *setpointPane) render(wrapExtras bool) (lines []string, selLine int) {
 	s := p.c.Styles
 	fw := p.fieldWidth()
 	const lw = 12
-	var lines []string
-	selLine := 0
-	row := func(i int, label, value, note string) {
+	// A note has a part the user needs (a conversion) and an extra (a
+	// second form, a hint). Beside the value goes all that fits of that
+	// order; a needed part that does not fit is wrapped under the value,
+	// never cut, and an extra that does not fit is left out.
+	row := func(i int, label, value, need, extra string) {
 		mark := "  "
 		l := padRight(label, lw)
 		if i == p.sel {
@@ -160,7 +175,14 @@ func (p *setpointPane) refresh() {
 			selLine = len(lines)
 		}
 		line := mark + l + " " + value
-		if note == "" || lipgloss.Width(line)+2+lipgloss.Width(note) <= p.w {
+		fits := func(n string) bool { return lipgloss.Width(line)+2+lipgloss.Width(n) <= p.w }
+		note := need + extra
+		switch {
+		case fits(note):
+		case need == "" && !wrapExtras, fits(need) && !wrapExtras:
+			note = need
+		}
+		if note == "" || fits(note) {
 			if note != "" {
 				line += "  " + s.Muted.Render(note)
 			}
@@ -191,21 +213,25 @@ func (p *setpointPane) refresh() {
 	}
 
 	in := p.b.in
-	tNote, pNote := "", ""
+	tNote, tExtra, pNote, pExtra := "", "", "", ""
 	if p.b.tempErr == "" && in.TempK > 0 {
-		tNote = p.c.Text(report.Short(in.TempK, 6) + " K, " + report.Fixed(mixtures.KelvinToCelsius(in.TempK), 2) + " °C")
+		tNote = report.Short(in.TempK, 6) + " K"
+		tExtra = p.c.Text(", " + report.Fixed(mixtures.KelvinToCelsius(in.TempK), 2) + " °C")
 	}
 	if p.b.presErr == "" && in.PresPa > 0 {
 		// In the reading chosen (show P as), like every pressure on screen.
 		pNote = p.b.presShown(in.PresPa)
+		if squeeze(pNote) == squeeze(p.b.presText) {
+			pNote = "" // shown as typed: nothing to add
+		}
 		switch {
 		case in.Gauge && !p.b.showGauge:
-			pNote += ", entered as gauge"
+			pExtra = ", entered as gauge"
 		case !in.Gauge && p.b.showGauge:
-			pNote += ", entered as absolute"
+			pExtra = ", entered as absolute"
 		}
 	}
-	row(spTemp, "temperature", typed(spTemp, p.b.tempText), tNote)
+	row(spTemp, "temperature", typed(spTemp, p.b.tempText), tNote, tExtra)
 	if p.b.tempErr != "" {
 		msg := p.b.tempErr
 		if in.TempK > 0 {
@@ -213,7 +239,7 @@ func (p *setpointPane) refresh() {
 		}
 		errLines(msg)
 	}
-	row(spPres, "pressure", typed(spPres, p.b.presText), pNote)
+	row(spPres, "pressure", typed(spPres, p.b.presText), pNote, pExtra)
 	if p.b.presErr != "" {
 		msg := p.b.presErr
 		if in.PresPa > 0 {
@@ -221,15 +247,17 @@ func (p *setpointPane) refresh() {
 		}
 		errLines(msg)
 	}
-	row(spStd, p.c.Text("P° (std)"), padRight(p.b.stdText(), fw), p.c.Text("reference of μ°"))
+	row(spStd, p.c.Text("P° (std)"), padRight(p.b.stdText(), fw), "", p.c.Text("reference of μ°"))
 	view := "absolute"
 	if p.b.showGauge {
 		view = "gauge"
 	}
-	row(spView, "show P as", padRight(view, fw), "1 atm = 0 gauge")
-	p.scroll.setLines(lines)
-	p.scroll.show(selLine, selLine)
+	row(spView, "show P as", padRight(view, fw), "", "1 atm = 0 gauge")
+	return lines, selLine
 }
+
+// squeeze lowers s and drops its spaces, to compare typed values.
+func squeeze(s string) string { return strings.ToLower(strings.Join(strings.Fields(s), "")) }
 
 func (p *setpointPane) View() string { return p.scroll.view() }
 

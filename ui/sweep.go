@@ -2,6 +2,7 @@ package ui
 
 import (
 	"math"
+	"runtime/debug"
 	"strconv"
 	"strings"
 
@@ -10,6 +11,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 // The sweep pane moves T or P across a grid, plots one property of the
@@ -51,6 +53,7 @@ type sweepPane struct {
 
 	in     Inputs
 	haveIn bool
+	hidden bool // off screen: sweeps wait until it is shown
 
 	// The sweep being computed, if any.
 	gen     uint64
@@ -129,6 +132,20 @@ type sweepDrafts struct {
 	steps  string
 }
 
+// sweepSplit splits a whole range typed into the from field with the
+// commands' range parser; ends that do not read are split all the same,
+// so that each shows its error on its own field.
+func sweepSplit(vi mixtures.SweepVar, s string) (from, to string, err error) {
+	r, err := mixtures.ParseSweepRange(vi, s)
+	if err == nil {
+		return r.FromText, r.ToText, nil
+	}
+	if a, b, perr := mixtures.ParseRange(s); perr == nil {
+		return a, b, nil
+	}
+	return "", "", err
+}
+
 // vi is the variable swept, which also indexes the ranges the pane
 // remembers, one per variable.
 func (p *sweepPane) vi() mixtures.SweepVar { return p.set.Var }
@@ -156,8 +173,11 @@ func sweepParse(vi mixtures.SweepVar, fromText, toText, stepsText string, logGri
 		errs[sweepFieldSteps] = err.Error()
 	}
 	if errs == [sweepFieldCount]string{} {
-		if err := sw.Check(); err != nil {
+		// The range as a whole, by the parser the commands use too.
+		if r, err := mixtures.ParseSweepEnds(vi, fromText, toText); err != nil {
 			rangeErr = cleanErr(err)
+		} else if sw = r.Sweep(sw.Steps, logGrid); sw.Check() != nil {
+			rangeErr = cleanErr(sw.Check())
 		}
 	}
 	return sw, errs, rangeErr
@@ -186,13 +206,19 @@ func sweepParseSteps(s string) (int, error) {
 func (p *sweepPane) tryApply() bool {
 	vi := p.vi()
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
+	var rangeTyped error
 	if strings.Contains(from, "..") { // a whole range typed at once
-		if a, b, err := mixtures.ParseRange(from); err == nil {
+		a, b, err := sweepSplit(vi, from)
+		if err == nil {
 			from, to = a, b
 			p.drafts[vi] = [2]string{a, b}
 		}
+		rangeTyped = err
 	}
 	sw, errs, rangeErr := sweepParse(vi, from, to, p.stepsDraft, p.set.Log)
+	if rangeTyped != nil {
+		errs[sweepFieldFrom] = "from: " + cleanErr(rangeTyped)
+	}
 	p.errs, p.rangeErr = errs, rangeErr
 	if errs != [sweepFieldCount]string{} || rangeErr != "" {
 		return false
@@ -244,7 +270,7 @@ func (p *sweepPane) wanted() (sweepKey, bool) {
 // already. Starting one makes every older message stale.
 func (p *sweepPane) recompute() tea.Cmd {
 	k, ok := p.wanted()
-	if !ok {
+	if !ok || p.hidden {
 		return nil
 	}
 	if p.running && k == p.runKey {
@@ -259,7 +285,15 @@ func (p *sweepPane) recompute() tea.Cmd {
 	}
 	p.gen++
 	p.running, p.runKey, p.done, p.total = true, k, 0, k.sweep.Steps
-	return sweepStartCmd(p.gen, k)
+	var reuse *mixtures.SweepTable
+	if p.result != nil && p.result.Len()*len(p.result.Columns) >= sweepReleaseValues {
+		// The new sweep takes the old one's storage: nothing may read
+		// it from here on, the plot's curves included.
+		reuse = p.result
+		p.result, p.series = nil, nil
+		p.plot.clear()
+	}
+	return sweepStartCmd(p.gen, k, reuse)
 }
 
 // Update handles a key (when the pane has focus) or any other message.
@@ -301,17 +335,23 @@ func (p *sweepPane) progress(msg sweepProgressMsg) tea.Cmd {
 	p.result, p.resultKey = msg.job.res, msg.job.key
 	p.placeCursor(old)
 	p.rebuildPlot()
+	if p.result.Len()*len(p.result.Columns) >= sweepReleaseValues {
+		// A long sweep leaves megabytes of drawing and the last table
+		// behind, and Go would collect them only once the heap doubled
+		// (some 150 MB for 200 000 points). Once per long sweep, give
+		// them back now: the table holds no pointers, so this is quick.
+		debug.FreeOSMemory()
+	}
 	return nil
 }
 
-// placeCursor puts the cursor on a new result: where it was, in
-// proportion, or else (first result, other variable) at the grid point
-// nearest the current state.
+// placeCursor puts the cursor on a new result: where it was when only the
+// blend or conditions changed (the grid is the same), or else (first
+// result, a new range or variable) at the grid point nearest the current
+// state, the setpoint.
 func (p *sweepPane) placeCursor(old *mixtures.SweepTable) {
 	n := len(p.result.Grid)
-	if old != nil && len(old.Grid) > 1 && old.Sweep.Var == p.result.Sweep.Var {
-		f := float64(p.cursor) / float64(len(old.Grid)-1)
-		p.cursor = min(max(int(math.Round(f*float64(n-1))), 0), n-1)
+	if old != nil && old.Sweep == p.result.Sweep && p.cursor < n {
 		return
 	}
 	here := p.in.TempK
@@ -501,12 +541,18 @@ func (p *sweepPane) validate() {
 	p.saveDrafts()
 	vi := p.vi()
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
+	var rangeTyped error
 	if strings.Contains(from, "..") {
-		if a, b, err := mixtures.ParseRange(from); err == nil {
+		a, b, err := sweepSplit(vi, from)
+		if err == nil {
 			from, to = a, b
 		}
+		rangeTyped = err
 	}
 	_, p.errs, p.rangeErr = sweepParse(vi, from, to, p.stepsDraft, p.set.Log)
+	if rangeTyped != nil {
+		p.errs[sweepFieldFrom] = "from: " + cleanErr(rangeTyped)
+	}
 }
 
 // editKey handles a key while the fields are open. As in every field of
@@ -653,6 +699,16 @@ func (p *sweepPane) nonFiniteNote() string {
 	return ""
 }
 
+// seriesDigits are the digits the quantity table gives curve k's value:
+// the blend's row for the blend, the species row for a species.
+func (p *sweepPane) seriesDigits(k int) mixtures.Digits {
+	prop := &sweepProps[p.propIndex()]
+	if k < len(p.series) && p.series[k].name != "blend" && prop.hasSpecies() {
+		return prop.sq.Digits
+	}
+	return prop.q.Digits
+}
+
 // xText writes a grid value in the x axis unit.
 func (p *sweepPane) xText(x float64) string {
 	name := mixtures.SweepTemperature.Key()
@@ -740,12 +796,28 @@ func (p *sweepPane) Sync() tea.Cmd {
 
 func (p *sweepPane) More() (above, below bool) { return false, false }
 
+// setShown starts the wanted sweep when the pane comes on screen; while
+// it is hidden, a change of inputs or settings computes nothing, so that
+// a long sweep in the saved settings costs nothing until it is looked at.
+func (p *sweepPane) setShown(shown bool) tea.Cmd {
+	p.hidden = !shown
+	if !shown {
+		return nil
+	}
+	cmd := p.recompute()
+	if cmd != nil {
+		p.refresh()
+	}
+	return cmd
+}
+
 // The settings are kept with the workbench state.
 func (p *sweepPane) saveState(st *savedState) { st.Sweep = p.set }
 func (p *sweepPane) stateChanged() bool       { return p.Changed() }
 func (p *sweepPane) restoreState(st *savedState) {
-	if st.Sweep != (SweepSettings{}) {
-		p.load(st.Sweep)
+	if s := st.Sweep; s != (SweepSettings{}) {
+		s.From, s.To, s.Species = model.Printable(s.From), model.Printable(s.To), model.Printable(s.Species)
+		p.load(s)
 	}
 }
 

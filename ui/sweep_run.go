@@ -25,6 +25,13 @@ const (
 	sweepChunkPoints = 1 << 14
 )
 
+// sweepReleaseValues is the size, in values kept, from which a result is
+// released when the next sweep starts, its storage passed on to it: two
+// tables of a 200 000-point sweep would hold some 150 MB together, and
+// Go would keep that much for a while after. Smaller results stay on
+// screen until the next one is done.
+var sweepReleaseValues = 4 << 20 // a variable only so that tests can lower it
+
 // sweepKey is everything a sweep result depends on. Equal keys give
 // equal results, so a request equal to the shown result is not rerun.
 type sweepKey struct {
@@ -54,8 +61,9 @@ type sweepProgressMsg struct {
 }
 
 // sweepStartCmd checks the sweep, lays out its grid and computes the
-// first chunk.
-func sweepStartCmd(gen uint64, key sweepKey) tea.Cmd {
+// first chunk. reuse, when not nil, is a released result whose storage
+// the new one takes over.
+func sweepStartCmd(gen uint64, key sweepKey, reuse *mixtures.SweepTable) tea.Cmd {
 	return func() tea.Msg {
 		if key.mix == nil || len(key.mix.Components) == 0 {
 			return sweepProgressMsg{gen: gen, err: errors.New("no blend to sweep")}
@@ -65,7 +73,7 @@ func sweepStartCmd(gen uint64, key sweepKey) tea.Cmd {
 		}
 		job := &sweepJob{
 			key:   key,
-			res:   mixtures.NewSweepTable(key.sweep, sweepColumns(key.mix)),
+			res:   reuse.Reuse(key.sweep, sweepColumns(key.mix)),
 			chunk: min(sweepChunkPoints, max(64, sweepChunkWork/len(key.mix.Components))),
 		}
 		return job.compute(gen, 0)

@@ -188,6 +188,10 @@ func TestSweepRangeEntry(t *testing.T) {
 		{name: "equal ends", start: def, from: "500 K", to: "500 K", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "two different end points"},
 		{name: "pressure, gauge", start: SweepSettings{Var: mixtures.SweepPressure, From: "1 bar", To: "100 bar", Steps: 40, Property: "S"}, from: "0 barg", to: "10 barg", wantFrom: "0 barg", wantTo: "10 barg", wantSteps: 40, wantGridFirst: 101325, wantGridLastPa: 1101325},
 		{name: "pressure unit on a T sweep", start: def, to: "5 bar", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: `unknown unit "bar"`},
+		// One range syntax with the commands: the points are their own
+		// field, and a step typed into the range says so.
+		{name: "step typed into the range", start: def, from: "300..600..900 K", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "has 3 parts; want FROM..TO"},
+		{name: "unit on the first end", start: def, from: "300 K..900", wantFrom: "300 K", wantTo: "900 K", wantSteps: 200, wantGridFirst: 300},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
@@ -486,7 +490,7 @@ func TestSweepChunksMatchRun(t *testing.T) {
 			t.Fatal(err)
 		}
 		var got *mixtures.SweepTable
-		msg := sweepStartCmd(1, key)().(sweepProgressMsg)
+		msg := sweepStartCmd(1, key, nil)().(sweepProgressMsg)
 		for chunks := 1; ; chunks++ {
 			if msg.err != nil {
 				t.Fatal(msg.err)
@@ -569,7 +573,7 @@ func TestSweepPressureAxisUnit(t *testing.T) {
 	}{
 		// The unit typed, its reading named (issue 7, item 9).
 		{"0.5 bar", "20 bar", "P in bar abs", " bar abs "},
-		{"10 Pa", "5000 Pa", "P in Pa abs", " Pa abs "},
+		{"10 Pa", "5000 Pa", "P in Pa", " Pa "},
 		{"1 atm", "2 atm", "P in atm", " atm "},
 		{"5 psig", "150 psig", "P in psig", " psig "},
 	}
@@ -794,7 +798,7 @@ func BenchmarkSweepResultArrives(b *testing.B) {
 func TestSweepHiddenCurveAndHeader(t *testing.T) {
 	// The sweep pane of the 120×40 screen.
 	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepPressure, From: "1 bar", To: "100 bar", Steps: 200, Property: "Cp", Overlay: true}, 72, 17)
-	if v := p.View(); !strings.Contains(v, "N2 29.113 (under ") {
+	if v := p.View(); !strings.Contains(v, "N2 29.11 (under ") {
 		t.Errorf("N2 lies under another curve, and the legend does not say so:\n%s", v)
 	}
 	for _, s := range []SweepSettings{
@@ -805,5 +809,30 @@ func TestSweepHiddenCurveAndHeader(t *testing.T) {
 		if v := p.View(); strings.Contains(v, "of "+s.Species) || !strings.Contains(v, "of blend") {
 			t.Errorf("%s of %s: the header names a curve that is not drawn:\n%s", s.Property, s.Species, v)
 		}
+	}
+}
+
+// A new range puts the cursor back on the setpoint (the grid point nearest
+// the state in force), not where it was in proportion.
+func TestSweepCursorBackToSetpoint(t *testing.T) {
+	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 200, Property: "Cp"}, 100, 30)
+	sweepPress(t, p, "end")
+	sweepPress(t, p, "e")
+	sweepType(t, p, "250 K")
+	sweepPress(t, p, "tab")
+	sweepType(t, p, "1000 K")
+	sweepPress(t, p, "enter")
+	res := p.Result()
+	if res == nil || res.Sweep.From != 250 {
+		t.Fatalf("the new range did not run")
+	}
+	best := 0
+	for i, x := range res.Grid {
+		if math.Abs(x-295.15) < math.Abs(res.Grid[best]-295.15) {
+			best = i
+		}
+	}
+	if p.cursor != best {
+		t.Errorf("cursor at %g K, want the setpoint's grid point %g K", res.Grid[p.cursor], res.Grid[best])
 	}
 }

@@ -246,7 +246,7 @@ func (p *sweepPane) readoutLines(w int) []string {
 		v := s.y(i)
 		val := "not finite"
 		if plotFinite(v) {
-			val = report.Sig(v, 5)
+			val = report.Number(v, p.seriesDigits(k))
 		}
 		sample := plotSample(k, p.c.ASCII)
 		under := ""

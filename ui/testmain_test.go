@@ -30,6 +30,7 @@ type testRootOpts struct {
 	ascii     bool
 	blendFile string
 	stateDir  string
+	dataDir   string // where saves are proposed; "" means the state directory
 }
 
 // testRoot builds a workbench on a fresh state directory (or the given
@@ -39,8 +40,11 @@ func testRoot(t testing.TB, w, h int, o testRootOpts) *root {
 	if o.stateDir == "" {
 		o.stateDir = t.TempDir()
 	}
+	if o.dataDir == "" {
+		o.dataDir = o.stateDir
+	}
 	r, err := newRoot(Config{Catalogue: model.Builtin(), ASCII: o.ascii, BlendFile: o.blendFile},
-		rootOptions{store: newStateStore(o.stateDir), now: func() time.Time { return testClock }, cwd: o.stateDir, mono: true})
+		rootOptions{store: newStateStore(o.stateDir), now: func() time.Time { return testClock }, cwd: o.stateDir, dataDir: o.dataDir, mono: true})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -151,6 +155,7 @@ var (
 	paneProperties = mustPane("properties")
 	paneSweep      = mustPane("sweep")
 	paneAnatomy    = mustPane("anatomy")
+	paneProcess    = mustPane("process")
 )
 
 func mustPane(key string) paneID {

@@ -27,6 +27,14 @@ type Config struct {
 
 // Run opens the workbench and blocks until the user quits.
 func Run(cfg Config) error {
+	// Signals are caught before any work that can take time, so that
+	// SIGTERM or a dropped SSH link (SIGHUP) during the start still ends
+	// in a save: Bubble Tea's own handler would end the program on SIGTERM
+	// without it, and it does not watch SIGHUP.
+	sigs := make(chan os.Signal, 1)
+	signal.Notify(sigs, syscall.SIGHUP, syscall.SIGTERM, syscall.SIGINT)
+	defer signal.Stop(sigs)
+
 	dir := cfg.StateDir
 	if dir == "" {
 		var err error
@@ -40,19 +48,18 @@ func Run(cfg Config) error {
 	}
 	cwd, _ := os.Getwd()
 
-	// Bubble Tea's own handler would end the program on SIGTERM without our
-	// save, and it does not watch SIGHUP, which a dropped SSH link sends.
-	sigs := make(chan os.Signal, 1)
-	signal.Notify(sigs, syscall.SIGHUP, syscall.SIGTERM, syscall.SIGINT)
-	defer signal.Stop(sigs)
-
-	store := newStateStore(dir)
-	r, err := newRoot(cfg, rootOptions{store: store, now: time.Now, cwd: cwd, signals: sigs, mono: mono})
+	store, notice, err := claimStateStore(dir)
+	if err != nil {
+		return err
+	}
+	defer store.release()
+	dataDir, _ := DefaultDataDir() // without one, proposals start where zmix was started
+	r, err := newRoot(cfg, rootOptions{store: store, now: time.Now, cwd: cwd, dataDir: dataDir, signals: sigs, mono: mono, notice: notice})
 	if err != nil {
 		return err
 	}
 	g := newGuard(r, dir, time.Now)
-	p := tea.NewProgram(g, tea.WithAltScreen(), tea.WithoutSignalHandler())
+	p := tea.NewProgram(g, tea.WithAltScreen(), tea.WithoutSignalHandler(), tea.WithOutput(terminalOutput()))
 	g.kill = p.Kill
 	_, runErr := p.Run()
 

@@ -8,6 +8,7 @@ import (
 	"github.com/charmbracelet/lipgloss"
 
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 // View draws the whole screen. It only puts together what Update and
@@ -143,27 +144,31 @@ func (r *root) headlineLine() string {
 func (r *root) bottomLine() string {
 	s := r.c.Styles
 	t := r.c.Text
+	bar := s.StatusBar
+	if r.prompt == promptNone && r.status != "" && r.statusErr {
+		bar = s.Error
+	}
+	if r.prompt != promptNone {
+		bar = s.Prompt
+	}
+	if wrapped := r.bottomWrapped(); len(wrapped) > 0 {
+		out := make([]string, r.statusRows)
+		for i := range out {
+			l := ""
+			if i < len(wrapped) {
+				l = wrapped[i]
+			}
+			out[i] = bar.Render(fitLine(" "+l, r.width))
+		}
+		return strings.Join(out, "\n")
+	}
 	if r.prompt != promptNone {
 		return fitLine(r.promptLine(), r.width)
 	}
-	right := t(" ? keys · tab pane · q quit ")
-	bar := s.StatusBar
+	right := r.keysReminder()
 	var left string
 	switch {
 	case r.status != "":
-		if r.statusErr {
-			bar = s.Error
-		}
-		if r.statusRows > 1 {
-			lines := report.Wrap(t(r.status), r.width-1)
-			if len(lines) > 2 {
-				lines = lines[:2]
-			}
-			for len(lines) < 2 {
-				lines = append(lines, "")
-			}
-			return bar.Render(fitLine(" "+lines[0], r.width)) + "\n" + bar.Render(fitLine(" "+lines[1], r.width))
-		}
 		left = t(" " + r.status)
 	default:
 		left = " " + r.fileState()
@@ -194,7 +199,7 @@ func (r *root) fileState() string {
 	if r.blendPath == "" {
 		return r.c.Text("no file, autosaved")
 	}
-	name := filepath.Base(r.blendPath)
+	name := model.Printable(filepath.Base(r.blendPath))
 	if r.unsaved {
 		return name + " (changed)"
 	}

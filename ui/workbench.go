@@ -19,7 +19,9 @@ type bench struct {
 	cat *model.Catalogue
 
 	entries            []mixtures.FileComponent // the recipe, each line as typed
-	name, note         string                   // carried from a blend file
+	undo               []mixtures.FileComponent // the recipe before its last change
+	canUndo            bool
+	name, note         string // carried from a blend file
 	tempText, presText string
 	std                mixtures.StdPressure // standard pressure P° of μ°
 	showGauge          bool                 // show the total pressure as gauge
@@ -47,10 +49,26 @@ type bench struct {
 
 func newBench(cat *model.Catalogue) *bench { return &bench{cat: cat} }
 
+// printableFile is f with every text made printable (model.Printable):
+// a blend file or a saved state may hold escapes that would otherwise
+// reach the terminal, and what the document holds is what panes draw.
+func printableFile(f *mixtures.BlendFile) *mixtures.BlendFile {
+	c := *f
+	c.Name, c.Note = model.Printable(f.Name), model.Printable(f.Note)
+	c.Temperature, c.Pressure = model.Printable(f.Temperature), model.Printable(f.Pressure)
+	c.StandardPressure = model.Printable(f.StandardPressure)
+	c.Components = make([]mixtures.FileComponent, len(f.Components))
+	for i, fc := range f.Components {
+		c.Components[i] = mixtures.FileComponent{Species: model.Printable(fc.Species), Amount: model.Printable(fc.Amount)}
+	}
+	return &c
+}
+
 // loadFile replaces the recipe and conditions with those of a blend file.
 // How pressures are shown (absolute or gauge) is the user's setting, which
 // a file does not change; see viewFromFile.
 func (b *bench) loadFile(f *mixtures.BlendFile) {
+	f = printableFile(f)
 	b.entries = append(b.entries[:0], f.Components...)
 	b.name, b.note = f.Name, f.Note
 	b.loads++
@@ -81,6 +99,7 @@ func (b *bench) lastValidFile() *mixtures.BlendFile {
 // setText takes the recipe and conditions of f exactly as written, for a
 // restart; unlike loadFile it keeps empty conditions empty.
 func (b *bench) setText(f *mixtures.BlendFile) {
+	f = printableFile(f)
 	b.entries = append(b.entries[:0], f.Components...)
 	b.name, b.note = f.Name, f.Note
 	b.tempText, b.presText = f.Temperature, f.Pressure
@@ -117,6 +136,46 @@ func (b *bench) addSpecies(formula string) (int, bool) {
 	b.entries = append(b.entries, mixtures.FileComponent{Species: formula})
 	b.touch()
 	return len(b.entries) - 1, true
+}
+
+// rememberRecipe keeps a recipe (the current one when before is nil) for
+// one undo of the change about to be made.
+func (b *bench) rememberRecipe(before []mixtures.FileComponent) {
+	if before == nil {
+		before = b.entries
+	}
+	b.undo = append(b.undo[:0], before...)
+	b.canUndo = true
+}
+
+// undoRecipe puts back the remembered recipe and remembers the current
+// one in its place, so that undoing again redoes. It reports whether
+// there was anything to undo.
+func (b *bench) undoRecipe() bool {
+	if !b.canUndo {
+		return false
+	}
+	cur := append([]mixtures.FileComponent{}, b.entries...)
+	b.entries = append(b.entries[:0], b.undo...)
+	b.undo = cur
+	b.touch()
+	return true
+}
+
+// setName and setNote change the blend's name and note, which its file
+// keeps; control characters are left out.
+func (b *bench) setName(s string) {
+	if s = model.Printable(s); s != b.name {
+		b.name = s
+		b.touch()
+	}
+}
+
+func (b *bench) setNote(s string) {
+	if s = model.Printable(s); s != b.note {
+		b.note = s
+		b.touch()
+	}
 }
 
 func (b *bench) remove(i int) {
@@ -241,15 +300,9 @@ func (b *bench) viewFromFile(f *mixtures.BlendFile) {
 
 func (b *bench) toggleGauge() { b.showGauge = !b.showGauge; b.changed = true }
 
-// cleanErr drops the package prefixes from an engine error, which the user
-// does not need in a one-line message.
-func cleanErr(err error) string {
-	s := err.Error()
-	for _, p := range []string{"mixtures: ", "model: ", "bad value: "} {
-		s = strings.TrimPrefix(s, p)
-	}
-	return s
-}
+// cleanErr is an error's one line for the user, with no package prefix
+// and nothing in it that a terminal would act on.
+func cleanErr(err error) string { return model.Printable(model.UserMessage(err)) }
 
 // blendErrText writes a blend error without the blend text, which the
 // pane already shows line by line.

@@ -38,6 +38,14 @@ func (m Model) String() string {
 	return "virial (Tsonopoulos B)"
 }
 
+// Short is the model's name where a line has little room.
+func (m Model) Short() string {
+	if m == PengRobinson {
+		return "Peng-Robinson"
+	}
+	return "virial"
+}
+
 // Range says whether a state lies where the models hold.
 type Range int
 

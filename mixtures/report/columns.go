@@ -167,6 +167,12 @@ func (j *jsonWriter) stateFields(s *mixtures.State, gauge bool, indent string) {
 		}
 	}
 	sep()
+	j.species(s, indent)
+}
+
+// species appends the member "species": the list of s's species, each
+// an object of the species table's figures.
+func (j *jsonWriter) species(s *mixtures.State, indent string) {
 	j.key(indent, "species")
 	j.buf = append(j.buf, "[\n"...)
 	inner := indent + "  "

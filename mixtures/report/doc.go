@@ -19,5 +19,7 @@
 // On top of these sit the readouts: the state text, JSON and CSV; the
 // sweep writers, which stream row by row as the engine computes; and the
 // catalogue listings. Each reads the quantity table of package mixtures,
-// so a new row there appears in every output.
+// so a new row there appears in every output. The process results of
+// package mixtures/process are written the same way, from the figure
+// descriptions each result carries (WriteProcessText, WriteProcessJSON).
 package report

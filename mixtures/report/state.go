@@ -187,14 +187,20 @@ func WriteStateJSON(w io.Writer, r *StateReport) error {
 	j.stateFields(r.State, r.Gauge, "  ")
 	j.buf = append(j.buf, ",\n"...)
 	j.realGas(r.State, "  ")
-	j.buf = append(j.buf, ",\n"...)
-	j.strings("  ", "cautions", CautionLines(r.Cautions))
-	j.buf = append(j.buf, ",\n"...)
-	notes := make([]string, len(r.Notes))
-	for i, n := range r.Notes {
-		notes[i] = NoteText(n)
+	// The lists are left out when empty, as a reader of the file expects
+	// of an optional section.
+	if lines := CautionLines(r.Cautions); len(lines) > 0 {
+		j.buf = append(j.buf, ",\n"...)
+		j.strings("  ", "cautions", lines)
 	}
-	j.strings("  ", "notes", notes)
+	if len(r.Notes) > 0 {
+		notes := make([]string, len(r.Notes))
+		for i, n := range r.Notes {
+			notes[i] = NoteText(n)
+		}
+		j.buf = append(j.buf, ",\n"...)
+		j.strings("  ", "notes", notes)
+	}
 	j.buf = append(j.buf, "\n}\n"...)
 	_, err := w.Write(j.buf)
 	return err

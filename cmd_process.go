@@ -1,0 +1,88 @@
+package main
+
+import (
+	"bytes"
+	"strings"
+
+	"zmix/mixtures"
+	"zmix/mixtures/process"
+	"zmix/mixtures/report"
+	"zmix/model"
+)
+
+// What the process commands share: reading their values and writing a
+// solved process. The calculations live in mixtures/process.
+
+// printProcess writes a solved process as text or JSON, in one go.
+func (a *app) printProcess(label string, res process.Result, asJSON, ascii bool) error {
+	rep := &report.ProcessReport{Label: label, Result: res}
+	var out bytes.Buffer
+	var err error
+	if asJSON {
+		err = report.WriteProcessJSON(&out, rep)
+	} else {
+		err = report.WriteProcessText(page(&out, ascii), rep)
+	}
+	if err != nil {
+		return badInput("%s", model.UserMessage(err))
+	}
+	return a.emit(&out)
+}
+
+// needTemperature parses a temperature flag that must be given.
+func needTemperature(flagName, text string) (temperature, error) {
+	if strings.TrimSpace(text) == "" {
+		return temperature{}, badInput("%s is missing; give a temperature with a unit (%s), e.g. %s 25C", flagName, mixtures.TemperatureUnits, flagName)
+	}
+	return parseTemperature(flagName, text)
+}
+
+// needPressure parses a pressure flag that must be given.
+func needPressure(flagName, text string) (pressure, error) {
+	if strings.TrimSpace(text) == "" {
+		return pressure{}, badInput("%s is missing; give a pressure with a unit (%s), e.g. %s 1atm", flagName, mixtures.PressureUnits, flagName)
+	}
+	return parsePressure(flagName, text)
+}
+
+// parseRate parses a flow flag.
+func parseRate(flagName, text string) (process.Rate, error) {
+	r, err := process.ParseRate(text)
+	if err != nil {
+		return process.Rate{}, badInput("%s: %v", flagName, err)
+	}
+	return r, nil
+}
+
+// resolve turns a blend source into a mixture at pressure presPa (used
+// by partial-pressure amounts).
+func resolve(cat *model.Catalogue, flagName string, src *blendSource, presPa float64) (*mixtures.Mixture, error) {
+	mix, err := src.blend.Resolve(cat, presPa)
+	if err != nil {
+		return nil, badInput("%s: %v", flagName, err)
+	}
+	return mix, nil
+}
+
+// rateMolPerSec converts an optional rate flag for a gas at (T, P): 0 when
+// the flag is empty.
+func rateMolPerSec(flagName, text string, mix *mixtures.Mixture, tempK, presPa float64) (float64, error) {
+	if strings.TrimSpace(text) == "" {
+		return 0, nil
+	}
+	r, err := parseRate(flagName, text)
+	if err != nil {
+		return 0, err
+	}
+	n, err := r.MolPerSec(process.Ideal{}.Gas(mix), process.Conditions{TempK: tempK, PresPa: presPa})
+	if err != nil {
+		return 0, badInput("%s: %v", flagName, err)
+	}
+	return n, nil
+}
+
+// processFailed reports a calculation's error as bad input: the engine's
+// errors describe what was asked.
+func processFailed(err error) error {
+	return badInput("%s", model.UserMessage(err))
+}

@@ -1,0 +1,73 @@
+package process
+
+import (
+	"fmt"
+
+	"zmix/mixtures"
+	"zmix/model"
+)
+
+// Thresholds of the temperature cautions (common practice).
+const (
+	// HotGasK: surfaces above about 60 °C burn on contact.
+	HotGasK = 333.15
+	// ColdGasK: below 0 °C moisture freezes and frost forms on lines.
+	ColdGasK = 273.15
+)
+
+// temperatureCautions are the reminders for a gas of mix that a process
+// brings to tempK: hot gas, a flammable gas at or above its autoignition
+// temperature (or hot with none in the catalogue), cold gas, and a species
+// below its normal boiling point.
+func temperatureCautions(mix *mixtures.Mixture, tempK float64, where string) []mixtures.Caution {
+	var out []mixtures.Caution
+	if tempK > HotGasK {
+		out = append(out, mixtures.Caution{Title: "Hot gas", Text: fmt.Sprintf(
+			"the %s reaches %.4g °C, above the 60 °C at which surfaces burn on contact; insulate or guard hot parts and check the rating of seals, lubricants and downstream equipment.",
+			where, mixtures.KelvinToCelsius(tempK))})
+		// A flammable gas made hot: against its autoignition temperature
+		// where the catalogue has one, else a reminder to look it up.
+		var unknown []string
+		for _, c := range mix.Components {
+			sp := c.Species
+			if sp.Hazards&(model.Flammable|model.Pyrophoric) == 0 {
+				continue
+			}
+			ait := sp.Safety.AutoIgnitionK
+			switch {
+			case ait <= 0:
+				unknown = append(unknown, sp.Formula)
+			case tempK >= ait:
+				src := sp.Sources["autoign_K"]
+				if src == "" {
+					src = "the catalogue"
+				}
+				out = append(out, mixtures.Caution{Title: "Above autoignition", Species: []string{sp.Formula}, Text: fmt.Sprintf(
+					"the %s, %.4g °C, is at or above the autoignition temperature in air of %s, %.4g °C (%s): any air let in can ignite it without a spark.",
+					where, mixtures.KelvinToCelsius(tempK), sp.Formula, mixtures.KelvinToCelsius(ait), src)})
+			}
+		}
+		if len(unknown) > 0 {
+			out = append(out, mixtures.Caution{Title: "Hot flammable gas", Species: unknown, Text: fmt.Sprintf(
+				"the catalogue holds no autoignition temperature for these; compare the %s temperature, %.4g °C, with the one on the safety data sheet, and keep air out.",
+				where, mixtures.KelvinToCelsius(tempK))})
+		}
+	}
+	if tempK < ColdGasK {
+		out = append(out, mixtures.Caution{Title: "Cold gas", Text: fmt.Sprintf(
+			"the %s falls to %.4g °C: moisture freezes, lines frost, and some materials turn brittle; check their rating for the low temperature.",
+			where, mixtures.KelvinToCelsius(tempK))})
+	}
+	var condense []string
+	for _, c := range mix.Components {
+		if c.Species.BoilingK > 0 && tempK < c.Species.BoilingK {
+			condense = append(condense, c.Species.Formula)
+		}
+	}
+	if len(condense) > 0 {
+		out = append(out, mixtures.Caution{Title: "Condensation", Species: condense, Text: fmt.Sprintf(
+			"the %s, %.4g K, is below the normal boiling point of these species: they may condense, and the ideal-gas figures do not hold there.",
+			where, tempK)})
+	}
+	return out
+}

@@ -1,0 +1,192 @@
+package process
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"zmix/model"
+)
+
+// Flow conversions against the ideal-gas molar volume, CODATA 2018:
+// Vm = 22.413 969 54 L/mol at 273.15 K and 101.325 kPa, and RT/P from
+// the exact R, 23.644 9 L/mol, at 288.15 K.
+func TestFlowConversions(t *testing.T) {
+	n2 := mixOf(t, "N2 1")
+	cases := []struct {
+		name    string
+		rate    string
+		ref     Reference
+		wantMol float64 // mol/s
+		wantRef float64 // m³/s at ref
+		tol     float64
+	}{
+		{"1 kmol/h at normal", "1 kmol/h", RefNormal, 1000.0 / 3600, 1000 * 22.41396954e-3 / 3600, 1e-9},
+		{"22.41396954 Nm3/h is 1 kmol/h", "22.41396954 Nm3/h", RefNormal, 1000.0 / 3600, 22.41396954 / 3600, 1e-9},
+		{"1 SLPM of N2 at normal", "1 SLPM", RefNormal, 1e-3 / 60 / 22.41396954e-3, 1e-3 / 60, 1e-9},
+		// Sm3/h defaults to 15 °C (ISO 13443): Vm = 23.6447 L/mol.
+		{"Sm3/h at 15 C", "23.6449 Sm3/h", Reference{}, 1000.0 / 3600, 23.6449 / 3600 * 273.15 / 288.15, 1e-5},
+		// 1 lb/h is 0.45359237 kg/h, exact by definition of the pound.
+		{"lb/h", "1 lb/h", RefNormal, 0.45359237 / 3600 / n2.MolarMassKgPerMol, 0.45359237 / 3600 / n2.MolarMassKgPerMol * 22.41396954e-3, 1e-9},
+	}
+	for _, c := range cases {
+		r, err := ParseRate(c.rate)
+		if err != nil {
+			t.Fatalf("%s: %v", c.name, err)
+		}
+		f, err := Flow{Mixture: n2, Rate: r, Ref: c.ref}.Solve()
+		if err != nil {
+			t.Fatalf("%s: %v", c.name, err)
+		}
+		if math.Abs(f.MolPerSec/c.wantMol-1) > c.tol {
+			t.Errorf("%s: %.10g mol/s, want %.10g", c.name, f.MolPerSec, c.wantMol)
+		}
+		if math.Abs(f.RefM3PerSec/c.wantRef-1) > c.tol {
+			t.Errorf("%s: %.10g m³/s at the reference, want %.10g", c.name, f.RefM3PerSec, c.wantRef)
+		}
+	}
+	// Actual volume at 2 bar and 300 K: V = nRT/P.
+	r, _ := ParseRate("1 kmol/h")
+	f, err := Flow{Mixture: n2, Rate: r, LineTempK: 300, LinePresPa: 2e5}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want := 1000.0 / 3600 * model.GasConstant * 300 / 2e5; math.Abs(f.ActualM3PerSec/want-1) > 1e-12 {
+		t.Errorf("actual volume %g m³/s, want %g", f.ActualM3PerSec, want)
+	}
+	// Relative density of N2 to dry air, 0.9672 (ISO 6976:2016 Table of
+	// properties, from memory; 28.0134/28.96546).
+	if want := 0.9672; math.Abs(f.RelativeDensity/want-1) > 2e-4 {
+		t.Errorf("relative density %g, want %g", f.RelativeDensity, want)
+	}
+}
+
+// Bad input to the parsers: one line naming the value and what is accepted.
+func TestParseErrors(t *testing.T) {
+	cat := model.Builtin()
+	cases := []struct {
+		name, in, want string
+		parse          func(string) error
+	}{
+		{"rate no unit", "12", "no unit", func(s string) error { _, err := ParseRate(s); return err }},
+		{"rate unknown unit", "12 furlongs", "unknown unit", func(s string) error { _, err := ParseRate(s); return err }},
+		{"rate zero", "0 kg/h", "above zero", func(s string) error { _, err := ParseRate(s); return err }},
+		{"rate negative", "-3 kg/h", "above zero", func(s string) error { _, err := ParseRate(s); return err }},
+		{"rate NaN", "NaN kg/h", "want a number", func(s string) error { _, err := ParseRate(s); return err }},
+		{"rate huge", "1e308 kmol/s", "finite", func(s string) error { _, err := ParseRate(s); return err }},
+		{"rate long", strings.Repeat("9", 300) + " kg/h", "at most 200", func(s string) error { _, err := ParseRate(s); return err }},
+		{"stream two fields", "N2 1; 300K", "BLEND; T; RATE", func(s string) error { _, err := ParseStream(s); return err }},
+		{"stream no blend", " ; 300K; 1 mol/s", "blend is missing", func(s string) error { _, err := ParseStream(s); return err }},
+		{"stream bad T", "N2 1; hot; 1 mol/s", "temperature", func(s string) error { _, err := ParseStream(s); return err }},
+		{"target one field", "O2", "SPECIES LEVEL", func(s string) error { _, err := ParseTarget(cat, s); return err }},
+		{"target unknown", "Xx 1ppm", "unknown species", func(s string) error { _, err := ParseTarget(cat, s); return err }},
+		{"target mass", "O2 1 wt%", "by moles", func(s string) error { _, err := ParseTarget(cat, s); return err }},
+		{"target zero", "O2 0ppm", "never reached", func(s string) error { _, err := ParseTarget(cat, s); return err }},
+		{"reference", "tuesday", "normal", func(s string) error { _, err := ParseReference(s); return err }},
+	}
+	for _, c := range cases {
+		err := c.parse(c.in)
+		if err == nil {
+			t.Errorf("%s: %q accepted, want an error", c.name, c.in)
+			continue
+		}
+		msg := model.UserMessage(err)
+		if !strings.Contains(msg, c.want) || strings.Contains(msg, "\n") || strings.HasPrefix(msg, "process:") {
+			t.Errorf("%s: %q gives %q, want one line holding %q", c.name, c.in, msg, c.want)
+		}
+	}
+	s, err := ParseStream("N2 79%; O2 21%; 25C; 120 Nm3/h")
+	if err != nil || s.BlendText != "N2 79%; O2 21%" || s.TempK != 298.15 || s.Rate.Unit.Name != "Nm3/h" {
+		t.Errorf("ParseStream with a ; in the blend = %+v, %v", s, err)
+	}
+	for _, name := range []string{"normal", "15C", "ISO 13443", "20c", "60F", "25C, 1 bar"} {
+		if _, err := ParseReference(name); err != nil {
+			t.Errorf("ParseReference(%q): %v", name, err)
+		}
+	}
+}
+
+func FuzzParseRate(f *testing.F) {
+	for _, s := range []string{"120 Nm3/h", "2.5 kg/h", "500 sccm", "1e3 mol/s", "3 m³/h", "-1 kg/s", "", "kg/h", "1e400 SLPM"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, s string) {
+		r, err := ParseRate(s)
+		if err != nil {
+			if msg := model.UserMessage(err); msg == "" || strings.Contains(msg, "\n") {
+				t.Fatalf("ParseRate(%q): error %q, want one line", s, msg)
+			}
+			return
+		}
+		if !(r.Value > 0) || math.IsInf(r.Value*r.Unit.SI, 0) {
+			t.Fatalf("ParseRate(%q) = %+v: want a finite rate above zero", s, r)
+		}
+	})
+}
+
+func FuzzParseStream(f *testing.F) {
+	for _, s := range []string{"N2 79%, O2 21%; 25C; 120 Nm3/h", "N2 1;300K;1 mol/s", ";;", "a;b;c;d", "N2 1; 0K; 1 kg/h"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, s string) {
+		sp, err := ParseStream(s)
+		if err != nil {
+			if msg := model.UserMessage(err); msg == "" || strings.Contains(msg, "\n") {
+				t.Fatalf("ParseStream(%q): error %q, want one line", s, msg)
+			}
+			return
+		}
+		if sp.BlendText == "" || !(sp.TempK > 0) || !(sp.Rate.Value > 0) {
+			t.Fatalf("ParseStream(%q) = %+v", s, sp)
+		}
+	})
+}
+
+func FuzzParseTarget(f *testing.F) {
+	cat := model.Builtin()
+	for _, s := range []string{"O2 10ppm", "SiH4 50 ppm", "H2O 1%", "O2 0.5", "O2", "O2 2", "Xe 1ppb"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, s string) {
+		tg, err := ParseTarget(cat, s)
+		if err != nil {
+			if msg := model.UserMessage(err); msg == "" || strings.Contains(msg, "\n") {
+				t.Fatalf("ParseTarget(%q): error %q, want one line", s, msg)
+			}
+			return
+		}
+		if tg.Species == nil || !(tg.X > 0 && tg.X < 1) {
+			t.Fatalf("ParseTarget(%q) = %+v", s, tg)
+		}
+	})
+}
+
+// The smaller parsers: volume, efficiency and reference condition. Each
+// gives a value in range or one line of error.
+func FuzzParseOthers(f *testing.F) {
+	for _, s := range []string{"2.5 m3", "50 L", "12 ft3", "0.8", "80%", "normal", "15C", "25C, 1 bar", "", "-1 L", "1e400 m3", "120%"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, s string) {
+		oneLine := func(what string, err error) {
+			if msg := model.UserMessage(err); msg == "" || strings.Contains(msg, "\n") {
+				t.Fatalf("%s(%q): error %q, want one line", what, s, msg)
+			}
+		}
+		if v, err := ParseVolume(s); err != nil {
+			oneLine("ParseVolume", err)
+		} else if !(v > 0) || math.IsInf(v, 0) {
+			t.Fatalf("ParseVolume(%q) = %g", s, v)
+		}
+		if e, err := ParseEfficiency(s); err != nil {
+			oneLine("ParseEfficiency", err)
+		} else if !(e > 0 && e <= 1) {
+			t.Fatalf("ParseEfficiency(%q) = %g", s, e)
+		}
+		if r, err := ParseReference(s); err != nil {
+			oneLine("ParseReference", err)
+		} else if !(r.TempK > 0 && r.PresPa > 0) {
+			t.Fatalf("ParseReference(%q) = %+v", s, r)
+		}
+	})
+}

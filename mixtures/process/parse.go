@@ -1,0 +1,141 @@
+package process
+
+import (
+	"math"
+	"strconv"
+	"strings"
+
+	"zmix/mixtures"
+	"zmix/model"
+)
+
+// StreamSpec is one stream as written: "BLEND; T; RATE", such as
+// "N2 79%, O2 21%; 25C; 120 Nm3/h". The blend is left as text (or
+// @FILE) for the caller to resolve.
+type StreamSpec struct {
+	BlendText string
+	TempK     float64
+	Rate      Rate
+}
+
+// StreamForm says how a stream is written, for messages.
+const StreamForm = `"BLEND; T; RATE", e.g. "N2 79%, O2 21%; 25C; 120 Nm3/h"`
+
+// ParseStream reads a stream. The blend may hold semicolons of its own:
+// the last two fields are the temperature and the rate.
+func ParseStream(s string) (StreamSpec, error) {
+	if err := tooLong("a stream", s); err != nil {
+		return StreamSpec{}, err
+	}
+	parts := strings.Split(s, ";")
+	if len(parts) < 3 {
+		return StreamSpec{}, model.Errorf("process", "stream %s: want %s", model.Quote(s), StreamForm)
+	}
+	n := len(parts)
+	blend := strings.TrimSpace(strings.Join(parts[:n-2], ";"))
+	if blend == "" {
+		return StreamSpec{}, model.Errorf("process", "stream %s: the blend is missing; want %s", model.Quote(s), StreamForm)
+	}
+	t, err := mixtures.ParseTemperature(strings.TrimSpace(parts[n-2]))
+	if err != nil {
+		return StreamSpec{}, model.Errorf("process", "stream %s: %v", model.Quote(s), err)
+	}
+	r, err := ParseRate(parts[n-1])
+	if err != nil {
+		return StreamSpec{}, model.Errorf("process", "stream %s: %v", model.Quote(s), err)
+	}
+	return StreamSpec{BlendText: blend, TempK: t, Rate: r}, nil
+}
+
+// Target is a species and the mole fraction it should be brought to.
+type Target struct {
+	Species *model.Species
+	X       float64
+	Text    string // as typed
+}
+
+// TargetForm says how a target is written, for messages.
+const TargetForm = `"SPECIES LEVEL" with LEVEL a mole fraction, %, ppm or ppb above zero, e.g. "O2 10ppm"`
+
+// ParseTarget reads "SPECIES LEVEL", looking the species up in cat.
+func ParseTarget(cat *model.Catalogue, s string) (Target, error) {
+	if err := tooLong("a target", s); err != nil {
+		return Target{}, err
+	}
+	fields := strings.Fields(s)
+	if len(fields) < 2 {
+		return Target{}, model.Errorf("process", "target %s: want %s", model.Quote(s), TargetForm)
+	}
+	sp, ok := cat.Lookup(fields[0])
+	if !ok {
+		hint := "it is not in the catalogue"
+		if sug := cat.Suggest(fields[0], 3); len(sug) > 0 {
+			hint = "did you mean " + strings.Join(sug, ", ") + "?"
+		}
+		return Target{}, model.Errorf("process", "target %s: unknown species %s; %s", model.Quote(s), model.Quote(fields[0]), hint)
+	}
+	level := strings.Join(fields[1:], " ")
+	a, err := mixtures.ParseAmount(level)
+	if err != nil {
+		return Target{}, model.Errorf("process", "target %s: %v", model.Quote(s), err)
+	}
+	if a.Basis != mixtures.MoleFraction {
+		return Target{}, model.Errorf("process", "target %s: the level must be by moles; want %s", model.Quote(s), TargetForm)
+	}
+	if !(a.Value > 0 && a.Value < 1) {
+		return Target{}, model.Errorf("process", "target %s: a level of %g is never reached; want %s", model.Quote(s), a.Value, TargetForm)
+	}
+	return Target{Species: sp, X: a.Value, Text: strings.TrimSpace(s)}, nil
+}
+
+// fractionOf is the mole fraction of sp in mix, 0 when it holds none.
+func fractionOf(mix *mixtures.Mixture, sp *model.Species) float64 {
+	for _, c := range mix.Components {
+		if c.Species == sp || c.Species.Formula == sp.Formula {
+			return c.X
+		}
+	}
+	return 0
+}
+
+// trimFloat writes x with up to 6 significant figures, for messages.
+func trimFloat(x float64) string { return strconv.FormatFloat(x, 'g', 6, 64) }
+
+// VolumeUnits lists the units ParseVolume accepts.
+const VolumeUnits = "m3, L, ft3"
+
+var volumeUnits = map[string]float64{"m3": 1, "l": 1e-3, "litre": 1e-3, "liter": 1e-3, "ft3": cubicFoot, "cf": cubicFoot}
+
+// ParseVolume reads a volume with its unit ("2.5 m3", "50 L", "12 ft3")
+// and returns m³; it must be finite and above zero.
+func ParseVolume(s string) (float64, error) {
+	if err := tooLong("a volume", s); err != nil {
+		return 0, err
+	}
+	x, unit, ok := splitValue(strings.TrimSpace(s))
+	if !ok {
+		return 0, model.Errorf("process", "volume %s: want a number and a unit (%s), e.g. 2.5 m3", model.Quote(s), VolumeUnits)
+	}
+	size, ok := volumeUnits[strings.ToLower(strings.NewReplacer("³", "3", "^3", "3", " ", "").Replace(unit))]
+	if !ok {
+		return 0, model.Errorf("process", "volume %s: unknown unit %s; want %s", model.Quote(s), model.Quote(unit), VolumeUnits)
+	}
+	v := x * size
+	if !(v > 0) || math.IsInf(v, 0) {
+		return 0, model.Errorf("process", "volume %s: want a finite volume above zero", model.Quote(s))
+	}
+	return v, nil
+}
+
+// ParseEfficiency reads an efficiency as a fraction or a percentage
+// ("0.8", "80%"), in (0, 1].
+func ParseEfficiency(s string) (float64, error) {
+	if err := tooLong("an efficiency", s); err != nil {
+		return 0, err
+	}
+	a, err := mixtures.ParseAmount(s)
+	if err != nil || a.Basis != mixtures.MoleFraction || !(a.Value > 0 && a.Value <= 1) {
+		return 0, model.Errorf("process", "efficiency %s: want a fraction above 0 and at most 1, or a percentage, e.g. 0.8 or 80%%", model.Quote(s))
+	}
+	return a.Value, nil
+}
