@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"strings"
 
+	"zmix/mixtures/safety"
 	"zmix/model"
 )
 
@@ -43,6 +44,7 @@ func Cautions(m *Mixture, presPa float64) []Caution {
 			}
 		}
 	}
+	cls := safety.Classify(SafetyParts(m))
 	var out []Caution
 	add := func(title string, species []string, text string) {
 		out = append(out, Caution{Title: title, Species: species, Text: text})
@@ -51,7 +53,7 @@ func Cautions(m *Mixture, presPa float64) []Caution {
 		add("Pyrophoric", sp, "can ignite on its own on contact with air; keep systems leak-tight, purge with inert gas before opening, and vent to a treated exhaust.")
 	}
 	if sp := byClass[model.Flammable]; len(sp) > 0 {
-		add("Flammable", sp, "keep ignition sources away, purge with inert gas before and after service, and check the blend against its flammable limits.")
+		add("Flammable", sp, "keep ignition sources away, and purge with inert gas before and after service. "+flammableCite(&cls))
 	}
 	oxidizers := byClass[model.Oxidizer]
 	if xO2 > 0 && xO2 <= oxygenEnrichedX {
@@ -59,13 +61,13 @@ func Cautions(m *Mixture, presPa float64) []Caution {
 		oxidizers = without(oxidizers, "O2")
 	}
 	if len(oxidizers) > 0 {
-		add("Oxidizer", oxidizers, "feeds combustion; keep away from oils, greases and fuels, and use equipment cleaned and rated for oxidizer service.")
+		add("Oxidizer", oxidizers, "feeds combustion; keep away from oils, greases and fuels, and use equipment cleaned and rated for oxidizer service. ISO 10156 oxidizing power: "+cls.OxVerdict()+".")
 	}
 	if len(byClass[model.Flammable]) > 0 && len(oxidizers)+countIf(xO2 > 0) > 0 {
-		add("Fuel with oxidizer", nil, "the blend holds both a fuel and an oxidizer and may be within its flammable range.")
+		add("Fuel with oxidizer", nil, "the blend holds both a fuel and an oxidizer; as stored: "+cls.Stored.String()+" (limits in air, Le Chatelier).")
 	}
 	if sp := byClass[model.Toxic]; len(sp) > 0 {
-		add("Toxic", sp, "harmful at low concentrations; use gas detection, exhausted enclosures and the exposure limits on the safety data sheet.")
+		add("Toxic", sp, "harmful at low concentrations; use gas detection, exhausted enclosures and the exposure limits on the safety data sheet. GHS acute inhalation toxicity: "+cls.ToxVerdict()+".")
 	}
 	if sp := byClass[model.Corrosive]; len(sp) > 0 {
 		add("Corrosive", sp, "attacks tissue and many metals, worse with moisture; use compatible materials and keep lines dry.")
@@ -107,4 +109,33 @@ func FormatCaution(c Caution) string {
 		return c.Title + ": " + c.Text
 	}
 	return c.Title + " (" + strings.Join(c.Species, ", ") + "): " + c.Text
+}
+
+// SafetyParts are the mixture's species and fractions, as package safety
+// takes them.
+func SafetyParts(m *Mixture) []safety.Part {
+	parts := make([]safety.Part, len(m.Components))
+	for i, c := range m.Components {
+		parts[i] = safety.Part{Species: c.Species, X: c.X}
+	}
+	return parts
+}
+
+// flammableCite is the flammability figures a Flammable caution cites:
+// the blend's limits in air and its ISO 10156 result (package safety).
+func flammableCite(r *safety.Result) string {
+	var lim string
+	switch {
+	case !r.LimitsKnown:
+		lim = "Flammable limits in air: not known (no LFL/UFL for " + strings.Join(r.FlammableNoLimits, ", ") + ")"
+	case !r.ReachesLFL:
+		lim = fmt.Sprintf("Its %.3g %% fuel is below the fuel's LFL in air, %.3g %% (Le Chatelier)", r.FuelPct, r.FuelLFLPct)
+	default:
+		lim = fmt.Sprintf("Limits of the blend in air %.3g-%.3g %% (Le Chatelier)", r.LFLPct, r.UFLPct)
+	}
+	s := lim + "; ISO 10156: " + r.FlamVerdict() + "."
+	if r.Recalled {
+		s += " These rest on recalled figures: check the SDS."
+	}
+	return s
 }

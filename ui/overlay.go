@@ -55,7 +55,7 @@ func (r *root) buildOverlay() {
 	iw, ih := bx.inner()
 	r.overlayScroll.setHeight(ih)
 	if r.overlay == overlaySafety {
-		r.overlayScroll.setLines(safetyDetail(r.c, r.b.cautions, r.b.notes, iw))
+		r.overlayScroll.setLines(safetyDetail(r.c, r.b.cautions, r.b.notes, r.b.hazard, iw))
 		return
 	}
 	s := r.c.Styles

@@ -5,6 +5,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/mixtures/safety"
 )
 
 // maxSafetyClassLines bounds the strip's list of hazard classes; the full
@@ -89,7 +90,7 @@ func validityMarker(c *Common, notes []mixtures.StateNote) string {
 
 // safetyDetail is the full text of every caution, for the overlay: the
 // model's validity cautions first, then the hazard classes.
-func safetyDetail(c *Common, cautions []mixtures.Caution, notes []mixtures.StateNote, w int) []string {
+func safetyDetail(c *Common, cautions []mixtures.Caution, notes []mixtures.StateNote, hz *safety.Result, w int) []string {
 	s := c.Styles
 	var out []string
 	notes = cautionNotes(notes)
@@ -116,8 +117,35 @@ func safetyDetail(c *Common, cautions []mixtures.Caution, notes []mixtures.State
 		bullet(mixtures.FormatCaution(ca))
 	}
 	out = append(out, "")
+	out = append(out, hazardDetail(c, hz, w)...)
 	for _, l := range report.Wrap(c.Text(mixtures.DeferLine), w) {
 		out = append(out, s.Warning.Render(l))
 	}
 	return out
+}
+
+// hazardDetail is the recipe's classification (flammable limits, ISO 10156,
+// GHS) as zmix hazard prints it: label and verdict, wrapped under the
+// label when the overlay is narrow.
+func hazardDetail(c *Common, hz *safety.Result, w int) []string {
+	if hz == nil {
+		return nil
+	}
+	s := c.Styles
+	out := []string{s.Caution.Render(c.Text("Classification (zmix hazard gives the methods and sources)"))}
+	for _, row := range report.HazardLines(hz) {
+		for i, l := range report.Wrap(c.Text(row[0]+": "+row[1]), w-4) {
+			if i == 0 {
+				out = append(out, "  "+l)
+			} else {
+				out = append(out, "    "+l)
+			}
+		}
+	}
+	if hz.Recalled {
+		for _, l := range report.Wrap(c.Text("Rests on recalled figures (\"from memory\"): check them against the SDS."), w-2) {
+			out = append(out, "  "+s.Muted.Render(l))
+		}
+	}
+	return append(out, "")
 }

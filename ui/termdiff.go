@@ -26,7 +26,8 @@ import (
 // line or the screen, and a final cursor position. Anything else in a
 // frame, and any write that is not a frame, goes through unchanged; a write
 // that clears the screen or changes its size makes every row unknown, and
-// an unknown row is only ever learnt from a frame that draws it whole.
+// an unknown row is only ever learnt from a frame that draws it whole, and
+// until then the writer sends nothing for it that the renderer did not.
 type cellWriter struct {
 	mu   sync.Mutex
 	out  io.Writer
@@ -96,10 +97,10 @@ func (cw *cellWriter) Write(p []byte) (int, error) {
 		cw.w, cw.h, cw.rows = w, h, nil // a resize: the terminal rearranged its cells
 	}
 	if !bytes.HasPrefix(p, []byte(ansi.CursorHomePosition)) {
-		// Not a frame: modes, the cursor, the screen's own clears.
-		if bytes.Contains(p, []byte("\x1b[2J")) || bytes.Contains(p, []byte("\x1b[?1049")) {
-			cw.rows = nil
-		}
+		// Not a frame: modes and clears at the start and the end. What
+		// they did to the cells is not worked out; the rows are learnt
+		// again from the frames that draw them.
+		cw.rows = nil
 		return cw.pass(p)
 	}
 	next, endRow, endCol, ok := cw.apply(string(p))

@@ -8,6 +8,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/mixtures/safety"
 	"zmix/model"
 )
 
@@ -36,6 +37,7 @@ type bench struct {
 	stateErr string
 	cautions []mixtures.Caution
 	notes    []mixtures.StateNote
+	hazard   *safety.Result // the recipe's classification; nil without a state
 
 	// The text of the last valid recipe and conditions, saved with the
 	// state so that a restart with a typing slip still has a state.
@@ -428,7 +430,7 @@ func sameInputs(a, b Inputs) bool {
 // validity notes.
 func (b *bench) derive() {
 	b.stateErr = ""
-	b.cautions, b.notes = nil, nil
+	b.cautions, b.notes, b.hazard = nil, nil, nil
 	if !b.in.Valid() {
 		b.stateErr = "no valid recipe and conditions yet"
 		return
@@ -445,6 +447,8 @@ func (b *bench) derive() {
 	}
 	b.state = st
 	b.cautions = mixtures.Cautions(b.in.Mixture, b.in.PresPa)
+	hz := safety.Classify(mixtures.SafetyParts(b.in.Mixture))
+	b.hazard = &hz
 	b.notes = mixtures.Notes(&b.state, true)
 }
 

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strconv"
 	"strings"
 
 	"zmix/model"
@@ -360,6 +361,8 @@ func (r *Result) Summary() []string {
 func (r *Result) FlamVerdict() string {
 	var s string
 	switch {
+	case !r.FlamKnown && r.FlamSum == 0:
+		s = "not known: no Tci for " + strings.Join(r.NoTci, ", ")
 	case !r.FlamKnown:
 		s = fmt.Sprintf("not known: no Tci for %s (the others sum to %.3g)", strings.Join(r.NoTci, ", "), r.FlamSum)
 	case r.FlamInAir:
@@ -379,6 +382,8 @@ func (r *Result) FlamVerdict() string {
 // OxVerdict is the ISO 10156 oxidizing result in words.
 func (r *Result) OxVerdict() string {
 	switch {
+	case !r.OxKnown && r.OxSum == 0:
+		return "not known: no Ci for " + strings.Join(r.NoCi, ", ")
 	case !r.OxKnown:
 		return fmt.Sprintf("not known: no Ci for %s (the others sum to %.3g)", strings.Join(r.NoCi, ", "), r.OxSum)
 	case r.Oxidizing && !r.OxSumKnown:
@@ -394,7 +399,7 @@ func (r *Result) ToxVerdict() string {
 	if !r.LC50Known {
 		return "not known: no LC50 for " + strings.Join(r.NoLC50, ", ")
 	}
-	s := fmt.Sprintf("LC50 of the blend %.4g ppm (4 h)", r.LC50PPM)
+	s := "LC50 of the blend " + ppm(r.LC50PPM) + " ppm (4 h)"
 	if r.Category > 0 {
 		s += fmt.Sprintf(", Category %d", r.Category)
 	} else {
@@ -407,4 +412,12 @@ func (r *Result) ToxVerdict() string {
 		s += fmt.Sprintf("; %.3g %% of the blend is of unknown acute toxicity (%s)", r.UnknownToxPct, strings.Join(r.NoLC50, ", "))
 	}
 	return s
+}
+
+// ppm writes a concentration to 4 significant figures without an exponent.
+func ppm(x float64) string {
+	if x >= 1e4 {
+		return strconv.FormatFloat(math.Round(x/10)*10, 'f', 0, 64)
+	}
+	return strconv.FormatFloat(x, 'g', 4, 64)
 }

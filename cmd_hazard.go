@@ -1,0 +1,70 @@
+package main
+
+import (
+	"bytes"
+	"strings"
+
+	"zmix/mixtures"
+	"zmix/mixtures/report"
+	"zmix/mixtures/safety"
+	"zmix/model"
+)
+
+func (a *app) cmdHazard(g *globalOpts, args []string) error {
+	fs := newFlagSet("zmix hazard")
+	var blendSpec, presText string
+	var asJSON bool
+	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	fs.StringVar(&presText, "pres", "", "total pressure `P`, needed only to turn partial pressures into fractions")
+	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
+	g.register(fs, false)
+	rest, err := parseFlags(fs, args, true)
+	if err != nil {
+		return err
+	}
+	if err := noArgs("hazard", rest); err != nil {
+		return err
+	}
+	src, err := readBlend(blendSpec)
+	if err != nil {
+		return err
+	}
+	cat, err := g.catalogue()
+	if err != nil {
+		return err
+	}
+	parts, err := blendParts(cat, src, src.pick(flagsGiven(fs), "pres", presText))
+	if err != nil {
+		return err
+	}
+	rep := &report.HazardReport{Label: src.label(), Result: safety.Classify(parts)}
+	var out bytes.Buffer
+	if asJSON {
+		err = report.WriteHazardJSON(&out, rep)
+	} else {
+		err = report.WriteHazardText(page(&out, g.ascii), rep)
+	}
+	if err != nil {
+		return badInput("%s", model.UserMessage(err))
+	}
+	return a.emit(&out)
+}
+
+// blendParts resolves a blend into species and mole fractions for the
+// safety calculations. They need no pressure, unless amounts are partial
+// pressures: then the total is --pres, or their sum.
+func blendParts(cat *model.Catalogue, src *blendSource, presText string) ([]safety.Part, error) {
+	presPa := float64(mixtures.AtmospherePa)
+	if strings.TrimSpace(presText) != "" || src.blend.HasPartialPressures() {
+		p, err := totalPressure(src, presText)
+		if err != nil {
+			return nil, err
+		}
+		presPa = p.Pa
+	}
+	mix, err := src.blend.Resolve(cat, presPa)
+	if err != nil {
+		return nil, badInput("--blend: %v", model.UserMessage(err))
+	}
+	return mixtures.SafetyParts(mix), nil
+}

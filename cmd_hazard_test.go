@@ -1,0 +1,84 @@
+package main
+
+import (
+	"encoding/json"
+	"strings"
+	"testing"
+)
+
+func hazardJSONOf(t *testing.T, blend string) map[string]any {
+	t.Helper()
+	code, stdout, stderr := zmix(t, "hazard", "--blend", blend, "--json")
+	if code != 0 {
+		t.Fatalf("zmix hazard %q: exit %d, %s", blend, code, stderr)
+	}
+	var obj map[string]any
+	if err := json.Unmarshal([]byte(stdout), &obj); err != nil {
+		t.Fatalf("zmix hazard --json: %v\n%s", err, stdout)
+	}
+	return obj
+}
+
+// TestHazardJSON checks the keys issue 10 asks for, and the answers that
+// are not in doubt: 2 % H2 in N2 is not flammable in air, 10 % is; 30 %
+// O2 in N2 is more oxidizing than air, 21 % is not.
+func TestHazardJSON(t *testing.T) {
+	for _, key := range []string{"lfl_percent", "ufl_percent", "flammable_in_air", "flammability_sum", "oxidizing", "oxidizing_sum", "lc50_ppm", "ghs_inhalation_category", "sources"} {
+		if _, ok := hazardJSONOf(t, "N2 100%")[key]; !ok {
+			t.Errorf("key %q missing", key)
+		}
+	}
+	cases := []struct {
+		blend, key string
+		want       any
+	}{
+		{"H2 2%, N2 bal", "flammable_in_air", false},
+		{"H2 10%, N2 bal", "flammable_in_air", true},
+		{"O2 30%, N2 bal", "oxidizing", true},
+		{"O2 21%, N2 bal", "oxidizing", false},
+		{"N2 100%", "lfl_percent", nil}, // nothing flammable
+		{"N2 100%", "lc50_ppm", nil},    // nothing toxic
+		{"N2 100%", "ghs_inhalation_category", nil},
+		{"SiH4 1%, N2 bal", "flammable_in_air", nil}, // no Tci for SiH4: not known
+		{"PH3 1%, HCl 5%, N2 bal", "ghs_inhalation_category", 3.0},
+		{"CH4 85%, C2H6 10%, C3H8 5%", "ufl_percent", 14.28689},
+	}
+	for _, c := range cases {
+		got := hazardJSONOf(t, c.blend)[c.key]
+		if f, ok := c.want.(float64); ok {
+			g, _ := got.(float64)
+			if g < f*0.9999 || g > f*1.0001 {
+				t.Errorf("%s: %s = %v, want %v", c.blend, c.key, got, c.want)
+			}
+			continue
+		}
+		if got != c.want {
+			t.Errorf("%s: %s = %v, want %v", c.blend, c.key, got, c.want)
+		}
+	}
+}
+
+func TestHazardText(t *testing.T) {
+	code, stdout, stderr := zmix(t, "hazard", "--blend", "H2 10%, N2 bal")
+	if code != 0 {
+		t.Fatalf("exit %d: %s", code, stderr)
+	}
+	for _, want := range []string{"FLAMMABLE IN AIR, sum of A'i/Tci = 1.82 > 1", "Le Chatelier", "H2 tci_pct: ISO 10156, from memory", "do not replace the safety data sheet"} {
+		if !strings.Contains(stdout, want) {
+			t.Errorf("hazard text lacks %q:\n%s", want, stdout)
+		}
+	}
+	// Bad input: one line, exit 2.
+	for _, args := range [][]string{
+		{"hazard"},
+		{"hazard", "--blend", "Qq 5%, N2 bal"},
+		{"hazard", "--blend", "Ar 0.5bar, He 0.5bar", "--pres", "cold"},
+		{"hazard", "--blend", "N2 bal", "extra"},
+	} {
+		code, stdout, stderr := zmix(t, args...)
+		if code != 2 || stdout != "" {
+			t.Errorf("zmix %q: exit %d, stdout %q", args, code, stdout)
+		}
+		checkOneLineError(t, stderr)
+	}
+}

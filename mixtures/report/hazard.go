@@ -1,0 +1,207 @@
+package report
+
+import (
+	"encoding/json"
+	"fmt"
+	"io"
+	"math"
+	"strings"
+
+	"zmix/mixtures"
+	"zmix/mixtures/safety"
+	"zmix/model"
+)
+
+// HazardReport is a blend's safety classification as `zmix hazard` and
+// the workbench show it.
+type HazardReport struct {
+	Label  string
+	Result safety.Result
+}
+
+// ScreeningLine says what these figures are, under every hazard and
+// release readout.
+const ScreeningLine = "Screening calculations: they do not replace the safety data sheet, the applicable codes, gas-detection design or a qualified assessment."
+
+func listOrNone(l []string) string {
+	if len(l) == 0 {
+		return "none"
+	}
+	return strings.Join(l, ", ")
+}
+
+// HazardLines are the classification as label–value rows, for the text
+// readout and the workbench's safety details.
+func HazardLines(r *safety.Result) [][2]string {
+	var rows [][2]string
+	add := func(k, v string) { rows = append(rows, [2]string{k, v}) }
+	add("flammable", listOrNone(r.Flammables))
+	if len(r.Flammables) > 0 {
+		add("fuel in the blend", Sig(r.FuelPct, 4)+" %")
+		switch {
+		case !r.LimitsKnown:
+			add("flammable limits", "not known: no LFL/UFL for "+strings.Join(r.FlammableNoLimits, ", "))
+		default:
+			add("LFL-UFL of the fuel", Sig(r.FuelLFLPct, 3)+"-"+Sig(r.FuelUFLPct, 3)+" % in air (Le Chatelier)")
+			if r.ReachesLFL {
+				add("LFL-UFL of the blend", Sig(r.LFLPct, 3)+"-"+Sig(r.UFLPct, 3)+" % of blend in air (inert components not counted; see ISO 10156)")
+				add("air to reach LFL", Sig(r.AirToLFL, 3)+" volumes per volume of blend")
+			} else {
+				add("LFL of the blend", "not reached: the fuel is below its LFL even undiluted")
+			}
+		}
+		add("as stored", r.Stored.String())
+		add("ISO 10156 flammability", r.FlamVerdict())
+		if len(r.NotDiluents) > 0 {
+			add("not counted as diluents", strings.Join(r.NotDiluents, ", ")+" (no Ki: conservative)")
+		}
+	}
+	add("oxidizers", listOrNone(r.Oxidizers))
+	if len(r.Oxidizers) > 0 {
+		add("ISO 10156 oxidizing", r.OxVerdict())
+	}
+	add("toxic", listOrNone(r.Toxics))
+	if len(r.Toxics) > 0 {
+		add("GHS inhalation", r.ToxVerdict())
+	}
+	add("pyrophoric", listOrNone(r.Pyrophorics))
+	add("corrosive", listOrNone(r.Corrosives))
+	return rows
+}
+
+// WriteHazardText writes the classification as text.
+func WriteHazardText(w io.Writer, rep *HazardReport) error {
+	r := &rep.Result
+	fmt.Fprintf(w, "Blend  %s\n\n", model.Printable(rep.Label))
+	fmt.Fprintln(w, "Hazard classification")
+	t := NewTable("  ", Left, Left)
+	for _, row := range HazardLines(r) {
+		t.Row(row[0], row[1])
+	}
+	t.Write(w)
+	if r.Recalled {
+		fmt.Fprintln(w, "\n  Rests on figures recalled from the named compilations (\"from memory\"), not read from them.")
+	}
+	if len(r.Sources) > 0 {
+		fmt.Fprintln(w, "\nMethods and sources")
+		for _, s := range r.Sources {
+			for i, l := range Wrap(s, 76) {
+				if i == 0 {
+					fmt.Fprintln(w, "  "+l)
+				} else {
+					fmt.Fprintln(w, "    "+l)
+				}
+			}
+		}
+	}
+	fmt.Fprintln(w)
+	for _, l := range Wrap(ScreeningLine+" "+mixtures.DeferLine, 78) {
+		fmt.Fprintln(w, l)
+	}
+	return nil
+}
+
+// hazardJSON is the JSON of `zmix hazard`; a null is a figure that does
+// not apply or is not known, and "notes" says which.
+type hazardJSON struct {
+	Blend                  string   `json:"blend"`
+	Flammable              []string `json:"flammable"`
+	FuelPercent            float64  `json:"fuel_percent"`
+	LFLPercent             *float64 `json:"lfl_percent"`
+	UFLPercent             *float64 `json:"ufl_percent"`
+	FuelLFLPercent         *float64 `json:"fuel_lfl_percent"`
+	FuelUFLPercent         *float64 `json:"fuel_ufl_percent"`
+	AirToLFL               *float64 `json:"air_volumes_to_lfl"`
+	AsStored               string   `json:"as_stored"`
+	InsideRangeAsStored    *bool    `json:"inside_flammable_range_as_stored"`
+	FlammableInAir         *bool    `json:"flammable_in_air"`
+	FlammabilitySum        *float64 `json:"flammability_sum"`
+	FlammabilitySumPartial *float64 `json:"flammability_sum_known_part"`
+	Oxidizers              []string `json:"oxidizers"`
+	Oxidizing              *bool    `json:"oxidizing"`
+	OxidizingSum           *float64 `json:"oxidizing_sum"`
+	Toxic                  []string `json:"toxic"`
+	LC50PPM                *float64 `json:"lc50_ppm"`
+	GHSCategory            *int     `json:"ghs_inhalation_category"`
+	UnknownToxicityPercent float64  `json:"unknown_toxicity_percent"`
+	LC50HalvedFrom1h       []string `json:"lc50_converted_from_1h"`
+	Pyrophoric             []string `json:"pyrophoric"`
+	Corrosive              []string `json:"corrosive"`
+	Recalled               bool     `json:"rests_on_recalled_figures"`
+	Notes                  []string `json:"notes"`
+	Sources                []string `json:"sources"`
+	Screening              string   `json:"screening"`
+}
+
+func fptr(x float64) *float64 {
+	if math.IsNaN(x) || math.IsInf(x, 0) {
+		return nil
+	}
+	return &x
+}
+
+func bptr(b bool) *bool { return &b }
+
+func nonNil(l []string) []string {
+	if l == nil {
+		return []string{}
+	}
+	return l
+}
+
+// WriteHazardJSON writes the classification as one JSON object.
+func WriteHazardJSON(w io.Writer, rep *HazardReport) error {
+	r := &rep.Result
+	j := hazardJSON{
+		Blend:                  model.Printable(rep.Label),
+		Flammable:              nonNil(r.Flammables),
+		FuelPercent:            r.FuelPct,
+		AsStored:               r.Stored.String(),
+		Oxidizers:              nonNil(r.Oxidizers),
+		Toxic:                  nonNil(r.Toxics),
+		UnknownToxicityPercent: r.UnknownToxPct,
+		LC50HalvedFrom1h:       nonNil(r.Converted),
+		Pyrophoric:             nonNil(r.Pyrophorics),
+		Corrosive:              nonNil(r.Corrosives),
+		Recalled:               r.Recalled,
+		Notes:                  nonNil(r.Summary()),
+		Sources:                nonNil(r.Sources),
+		Screening:              ScreeningLine,
+	}
+	if r.LimitsKnown {
+		j.FuelLFLPercent, j.FuelUFLPercent = fptr(r.FuelLFLPct), fptr(r.FuelUFLPct)
+		if r.ReachesLFL {
+			j.LFLPercent, j.UFLPercent, j.AirToLFL = fptr(r.LFLPct), fptr(r.UFLPct), fptr(r.AirToLFL)
+		}
+	}
+	switch r.Stored {
+	case safety.StoredInside:
+		j.InsideRangeAsStored = bptr(true)
+	case safety.StoredNoFuel, safety.StoredNoOxidizer, safety.StoredBelow:
+		j.InsideRangeAsStored = bptr(false)
+	}
+	if r.FlamKnown {
+		j.FlammableInAir = bptr(r.FlamInAir)
+	}
+	if r.FlamSumKnown {
+		j.FlammabilitySum = fptr(r.FlamSum)
+	} else {
+		j.FlammabilitySumPartial = fptr(r.FlamSum)
+	}
+	if r.OxKnown {
+		j.Oxidizing = bptr(r.Oxidizing)
+	}
+	if r.OxSumKnown {
+		j.OxidizingSum = fptr(r.OxSum)
+	}
+	if r.LC50Known {
+		j.LC50PPM = fptr(r.LC50PPM)
+		if r.Category > 0 {
+			c := r.Category
+			j.GHSCategory = &c
+		}
+	}
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	return enc.Encode(j)
+}
