@@ -271,3 +271,18 @@ func FuzzNewBlend(f *testing.F) {
 		}
 	})
 }
+
+// BenchmarkLoadHugeBlendFile is the time to refuse a blend file of one
+// 900 KB species name, just under the file cap; goal: well under 1 s.
+func BenchmarkLoadHugeBlendFile(b *testing.B) {
+	path := filepath.Join(b.TempDir(), "huge.json")
+	text := `{"format":"zmix-blend/1","components":[{"species":"` + strings.Repeat("N", 900<<10) + `","amount":"bal"}]}`
+	if err := os.WriteFile(path, []byte(text), 0o644); err != nil {
+		b.Fatal(err)
+	}
+	for b.Loop() {
+		if _, err := LoadBlendFile(path); err == nil {
+			b.Fatal("accepted")
+		}
+	}
+}
