@@ -237,7 +237,9 @@ func TestExportReadout(t *testing.T) {
 	if err := report.WriteStateJSON(&wantJSON, rep); err != nil {
 		t.Fatal(err)
 	}
-	for _, key := range []string{`"cautions": [`, `"notes": [`, "Pyrophoric (SiH4)", "caution: NH3: "} {
+	// At the demo state no validity note reaches caution level (NH3 at
+	// 25 kPa is far below its vapour pressure), so the JSON has no notes.
+	for _, key := range []string{`"cautions": [`, "Pyrophoric (SiH4)", `"real_gas": {`} {
 		if !strings.Contains(wantJSON.String(), key) {
 			t.Fatalf("the state command's JSON lacks %q; the test no longer checks the safety text", key)
 		}

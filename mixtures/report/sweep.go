@@ -50,7 +50,7 @@ type sweepColumn struct {
 
 // sweepTextKeys are the blend figures of the text table, in order; each
 // species' μ follows them.
-var sweepTextKeys = []string{"T", "P", "rho", "Cp", "gamma", "c", "H", "S", "G"}
+var sweepTextKeys = []string{"T", "P", "rho", "Z", "Cp", "gamma", "c", "H", "S", "G"}
 
 func sweepColumns(mix *mixtures.Mixture) []sweepColumn {
 	var cols []sweepColumn
