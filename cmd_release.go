@@ -3,7 +3,6 @@ package main
 import (
 	"bytes"
 	"math"
-	"strconv"
 	"strings"
 
 	"zmix/mixtures/process"
@@ -11,10 +10,6 @@ import (
 	"zmix/mixtures/safety"
 	"zmix/model"
 )
-
-// maxACH bounds --ach: a few hundred air changes an hour is already a
-// fume cupboard's; more is a typing slip.
-const maxACH = 1000
 
 func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix release")
@@ -76,7 +71,7 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 		if err != nil {
 			return badInput("--rate: %v", err)
 		}
-		if rel.RateM3PerS, err = roomFlow(r, molarMass); err != nil {
+		if rel.RateM3PerS, err = process.RoomFlow(r, molarMass); err != nil {
 			return badInput("--rate %s: %v", model.Quote(rateText), err)
 		}
 		what = append(what, "at "+r.Text)
@@ -88,9 +83,9 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	case strings.TrimSpace(achText) != "" && strings.TrimSpace(ventText) != "":
 		return badInput("--ach and --vent both give the ventilation; give one")
 	case strings.TrimSpace(achText) != "":
-		n, err := strconv.ParseFloat(strings.TrimSpace(achText), 64)
-		if err != nil || math.IsNaN(n) || n < 0 || n > maxACH {
-			return badInput("--ach %s: want air changes per hour from 0 to %d, e.g. --ach 6", model.Quote(achText), maxACH)
+		n, err := process.ParseACH(achText)
+		if err != nil {
+			return badInput("--ach: %v", err)
 		}
 		rel.VentM3PerS = n * rel.RoomM3 / 3600
 		vent = strings.TrimSpace(achText) + " air changes per hour"
@@ -102,7 +97,7 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 		if r.Unit.Basis == process.BasisMass {
 			return badInput("--vent %s: give the ventilation as a volume or molar flow (%s)", model.Quote(ventText), process.RateUnits)
 		}
-		if rel.VentM3PerS, err = roomFlow(r, 0); err != nil {
+		if rel.VentM3PerS, err = process.RoomFlow(r, 0); err != nil {
 			return badInput("--vent %s: %v", model.Quote(ventText), err)
 		}
 		vent = r.Text
@@ -121,25 +116,4 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 		return badInput("%s", model.UserMessage(err))
 	}
 	return a.emit(&out)
-}
-
-// roomFlow converts a flow to m³/s of gas at the room's 20 °C and 1 atm,
-// as ideal gas: an actual volume is taken at the room's conditions, a
-// standard volume at its reference, a mass flow through the blend's
-// molar mass (0 refuses one).
-func roomFlow(r process.Rate, molarMassKgPerMol float64) (float64, error) {
-	v := r.Value * r.Unit.SI
-	switch r.Unit.Basis {
-	case process.BasisMolar:
-		return safety.GasM3AtRoom(v), nil
-	case process.BasisMass:
-		if molarMassKgPerMol <= 0 {
-			return 0, model.Errorf("", "want a volume or molar flow")
-		}
-		return safety.GasM3AtRoom(v / molarMassKgPerMol), nil
-	case process.BasisStandard:
-		ref := r.Reference(process.Conditions{})
-		return v * safety.RoomTempK / ref.TempK * ref.PresPa / safety.RoomPresPa, nil
-	}
-	return v, nil
 }

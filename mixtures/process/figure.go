@@ -168,7 +168,7 @@ var (
 // titles name each kind of result in headings.
 var titles = map[string]string{
 	"flow": "Flow", "compress": "Compression", "expand": "Expansion", "heat": "Heating and cooling",
-	"mix": "Mixing", "dilute": "Dilution", "purge": "Purging",
+	"mix": "Mixing", "dilute": "Dilution", "purge": "Purging", "release": "Release into a room",
 }
 
 // Title is the heading of a result of the kind.
