@@ -31,6 +31,7 @@ type StateNote struct {
 // Info-level notes are left out unless all is set.
 func Notes(s *State, all bool) []StateNote {
 	out := realGasNotes(s, all)
+	out = append(out, hotNotes(s)...)
 	for i := range s.Species {
 		t := &s.Species[i]
 		v := t.Species.Validity(s.TempK, t.PartialPresPa)
