@@ -7,6 +7,7 @@
 //	zmix state  --blend SPEC --temp T --pres P [--json | --csv]
 //	zmix sweep  --blend SPEC (--temp A..B | --pres A..B) [--steps N] [--log]
 //	zmix hazard --blend SPEC [--json]
+//	zmix release --blend SPEC (--amount Q | --rate R) --room V [--ach N | --vent FLOW]
 //	zmix catalog [FORMULA]
 //
 // main.go only parses flags into a config, runs the command and maps its
@@ -78,6 +79,7 @@ func init() {
 		{"dilute", "the diluent flow for a target level, or the level of a ratio", (*app).cmdDilute, usageDilute},
 		{"purge", "purge cycles or time to bring a species down to a target", (*app).cmdPurge, usagePurge},
 		{"hazard", "a blend's flammable limits, ISO 10156 and GHS classification", (*app).cmdHazard, usageHazard},
+		{"release", "a blend released into a room: oxygen, % LFL and ppm at the peak", (*app).cmdRelease, usageRelease},
 		{"catalog", "the species list, or one species' data, sources and table", (*app).cmdCatalog, usageCatalog},
 		{"open", "the workbench on a saved blend file", (*app).cmdOpen, usageOpen},
 		{"help", "help on zmix or on one command", (*app).cmdHelp, usageHelp},

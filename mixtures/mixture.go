@@ -3,6 +3,7 @@ package mixtures
 import (
 	"math"
 
+	"zmix/mixtures/realgas"
 	"zmix/model"
 )
 
@@ -17,6 +18,8 @@ type Mixture struct {
 	// composition only.
 	lnX          []float64
 	sMixJPerMolK float64
+	// real holds the real-gas models' constants for the composition.
+	real *realgas.Mixture
 }
 
 // prepare computes what every state of the mixture shares.
@@ -27,6 +30,20 @@ func (m *Mixture) prepare() {
 		m.lnX[i] = math.Log(c.X)
 		m.sMixJPerMolK -= model.GasConstant * c.X * m.lnX[i]
 	}
+	comps := make([]realgas.Component, len(m.Components))
+	for i, c := range m.Components {
+		comps[i] = realgas.ComponentOf(c.Species, c.X)
+	}
+	m.real = realgas.New(comps)
+}
+
+// RealGas returns the blend's real-gas models: which species they take as
+// ideal gases, and which polar species' virial terms they leave out.
+func (m *Mixture) RealGas() *realgas.Mixture {
+	if len(m.lnX) != len(m.Components) {
+		m.prepare()
+	}
+	return m.real
 }
 
 // Options are the choices a state is computed with. The zero value means
@@ -74,7 +91,31 @@ type State struct {
 	AJPerMol          float64
 	SMixJPerMolK      float64 // −R Σ xᵢ ln xᵢ
 
+	// RealGas is the real-gas correction beside the ideal-gas figures
+	// (package realgas); RealGasKnown is false when no species of the
+	// blend carries critical constants, or the models give no finite
+	// figure, and then the real-gas quantities read NaN: "not known".
+	RealGas      realgas.Result
+	RealGasKnown bool
+
 	Species []SpeciesTerm
+}
+
+// RealDensityKgPerM3 is the density from the real-gas Z, NaN when not
+// known.
+func (s *State) RealDensityKgPerM3() float64 {
+	if !s.RealGasKnown {
+		return math.NaN()
+	}
+	return s.MolarMassKgPerMol / s.RealGas.VM3PerMol
+}
+
+// Z is the compressibility factor PV/(RT), NaN when not known.
+func (s *State) Z() float64 {
+	if !s.RealGasKnown {
+		return math.NaN()
+	}
+	return s.RealGas.Z
 }
 
 // PerKg converts a molar quantity of the state to a specific one.
@@ -163,4 +204,12 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 	s.SMixJPerMolK = m.sMixJPerMolK
 	s.DensityKgPerM3 = presPa * m.MolarMassKgPerMol / rt
 	s.SoundSpeedMPerS = math.Sqrt(s.Gamma * rt / m.MolarMassKgPerMol)
+	s.RealGasKnown = false
+	if m.real.Known() {
+		rg := &s.RealGas
+		m.real.Eval(rg, tempK, presPa, cp)
+		s.RealGasKnown = finite(rg.Z) && finite(rg.VM3PerMol) && rg.VM3PerMol > 0 && finite(rg.HResJPerMol) &&
+			finite(rg.SResJPerMolK) && finite(rg.CpJPerMolK) && finite(rg.CvJPerMolK) &&
+			finite(rg.SoundSpeedMPerS) && finite(rg.JouleThomsonKPerPa)
+	}
 }

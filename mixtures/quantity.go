@@ -19,6 +19,9 @@ type Section int
 const (
 	SectionMixture    Section = iota // the blend's own figures (the zero value)
 	SectionConditions                // T, P, P°: what the state was asked at
+	// SectionRealGas: the real-gas figures beside the ideal-gas ones,
+	// shown on a line of their own with the model that gives them.
+	SectionRealGas
 )
 
 // Quantity is one figure of the blend.
@@ -42,7 +45,12 @@ type Quantity struct {
 	// SpeciesKey names the species quantity that is this figure's share
 	// per species, for plots that overlay the species ("" for none).
 	SpeciesKey string
-	Get        func(*State) float64
+	// Optional marks a figure that may be not known at a state (NaN):
+	// written as null in JSON, empty in CSV, and passed by the finite
+	// check. The real-gas figures are optional: a blend whose species
+	// carry no critical constants has none.
+	Optional bool
+	Get      func(*State) float64
 }
 
 // HasPerKg reports whether the quantity has a per-kilogram form.
@@ -92,6 +100,12 @@ var Quantities = []Quantity{
 	{Key: "rho", Label: "density ρ", Symbol: "ρ", SymbolASCII: "rho", Unit: "kg/m³", UnitASCII: "kg/m3", Scale: 1,
 		Name: "density_kg_m3", Digits: Digits{Sig: 5},
 		Get: func(s *State) float64 { return s.DensityKgPerM3 }},
+	{Key: "rho_real", Label: "real density ρ", Symbol: "ρ", SymbolASCII: "rho", Unit: "kg/m³", UnitASCII: "kg/m3", Scale: 1,
+		Name: "real_density_kg_m3", Digits: Digits{Sig: 5}, Optional: true, Section: SectionRealGas,
+		Get: (*State).RealDensityKgPerM3},
+	{Key: "Z", Label: "compressibility Z", Symbol: "Z", SymbolASCII: "Z", Scale: 1,
+		Name: "z", Digits: Digits{Sig: 5}, Optional: true, Section: SectionRealGas,
+		Get: (*State).Z},
 	{Key: "Cp", Label: "heat capacity Cp", Symbol: "Cp", SymbolASCII: "Cp", Unit: unitJPerMolK, UnitASCII: unitJPerMolKASCII, Scale: 1,
 		Name: "cp_J_molK", PerKgName: "cp_J_kgK", PerKgUnit: unitJPerKgK, PerKgUnitASCII: unitJPerKgKASCII, Digits: Digits{Sig: 5},
 		SpeciesKey: "Cp",
@@ -197,6 +211,9 @@ func FirstNonFinite(s *State) string {
 	for i := range Quantities {
 		q := &Quantities[i]
 		v := q.Get(s)
+		if q.Optional && v != v {
+			continue // not known, and written as such
+		}
 		if !finite(v) {
 			return q.Label
 		}

@@ -68,6 +68,7 @@ func TestQuantityGetters(t *testing.T) {
 		"T": s.TempK, "P": s.PresPa, "P0": s.StdPresPa, "M": s.MolarMassKgPerMol, "rho": s.DensityKgPerM3,
 		"Cp": s.CpJPerMolK, "Cv": s.CvJPerMolK, "gamma": s.Gamma, "c": s.SoundSpeedMPerS,
 		"H": s.HJPerMol, "U": s.UJPerMol, "S": s.SJPerMolK, "G": s.GJPerMol, "A": s.AJPerMol, "Smix": s.SMixJPerMolK,
+		"Z": s.RealGas.Z, "rho_real": s.MolarMassKgPerMol / s.RealGas.VM3PerMol,
 		"Wsep": s.TempK * s.SMixJPerMolK,
 	}
 	if len(want) != len(Quantities) {
@@ -112,6 +113,18 @@ func TestFirstNonFinite(t *testing.T) {
 	bad.Species[1].MuJPerMol = math.Inf(-1)
 	if got, want := FirstNonFinite(&bad), "O2 chemical potential μᵢ = μᵢ° + RT ln(xᵢP/P°)"; got != want {
 		t.Errorf("FirstNonFinite(μ −Inf) = %q, want %q", got, want)
+	}
+	// A real-gas figure that is not known is no fault; one that is known
+	// and not finite is.
+	bad = s
+	bad.RealGasKnown = false
+	if got := FirstNonFinite(&bad); got != "" {
+		t.Errorf("FirstNonFinite(real gas not known) = %q, want \"\"", got)
+	}
+	bad = s
+	bad.RealGas.Z = math.Inf(1)
+	if got, want := FirstNonFinite(&bad), "compressibility Z"; got != want {
+		t.Errorf("FirstNonFinite(Z Inf) = %q, want %q", got, want)
 	}
 	if n := testing.AllocsPerRun(100, func() { FirstNonFinite(&s) }); n != 0 {
 		t.Errorf("FirstNonFinite allocates %v times, want 0", n)

@@ -181,23 +181,17 @@ func TestSweepAllocations(t *testing.T) {
 	}
 }
 
-func TestSweepCancelAndProgress(t *testing.T) {
+// A cancelled context stops a sweep between chunks of points.
+func TestStreamCancel(t *testing.T) {
 	m := mustMixture(t, "N2 0.79, O2 0.21", 1e5)
 	sw := Sweep{Var: SweepTemperature, From: 300, To: 1500, Steps: 3 * progressEvery}
-	var calls [][2]int
-	res, err := m.RunContext(context.Background(), sw, 0, 1e5, Options{}, func(done, total int) {
-		calls = append(calls, [2]int{done, total})
-	})
-	if err != nil || len(res.Points) != sw.Steps {
-		t.Fatalf("RunContext: %v", err)
-	}
-	want := [][2]int{{progressEvery, sw.Steps}, {2 * progressEvery, sw.Steps}, {sw.Steps, sw.Steps}}
-	if !reflect.DeepEqual(calls, want) {
-		t.Errorf("progress calls %v, want %v", calls, want)
+	n := 0
+	if err := m.Stream(context.Background(), sw, 0, 1e5, Options{}, func(int, float64, *State) error { n++; return nil }); err != nil || n != sw.Steps {
+		t.Fatalf("Stream: %v after %d of %d points", err, n, sw.Steps)
 	}
 	ctx, cancel := context.WithCancel(context.Background())
 	cancel()
-	if _, err := m.RunContext(ctx, sw, 0, 1e5, Options{}, nil); !errors.Is(err, context.Canceled) {
+	if err := m.Stream(ctx, sw, 0, 1e5, Options{}, func(int, float64, *State) error { return nil }); !errors.Is(err, context.Canceled) {
 		t.Errorf("cancelled sweep: error %v, want context.Canceled", err)
 	}
 }

@@ -2,14 +2,21 @@ package mixtures
 
 import (
 	"fmt"
+	"math"
 
+	"zmix/mixtures/realgas"
 	"zmix/model"
 )
 
-// idealPressurePa is where the ideal-gas law starts to need checking: at
-// 10 bar, compressibility factors of common gases near room temperature
+// idealPressurePa is where the ideal-gas law starts to need checking when
+// no real-gas model applies (no species with critical constants): at 10
+// bar, compressibility factors of common gases near room temperature
 // differ from 1 by a percent or more (common practice).
 const idealPressurePa = 10e5
+
+// densityCautionFraction is the deviation of the ideal-gas density from
+// the real one, |Z − 1|, above which the state gets a caution.
+const densityCautionFraction = 0.01
 
 // StateNote is a validity remark about one species, or the blend as a
 // whole when Species is empty.
@@ -18,21 +25,28 @@ type StateNote struct {
 	model.Note
 }
 
-// Notes returns the validity remarks of a state: the model's notes for
-// every species at its partial pressure, and the blend-wide pressure note.
+// Notes returns the validity remarks of a state: the blend's Z, the
+// model's notes for every species at its partial pressure, and how near
+// each species is to condensing.
 // Info-level notes are left out unless all is set.
 func Notes(s *State, all bool) []StateNote {
-	var out []StateNote
-	if s.PresPa > idealPressurePa {
-		out = append(out, StateNote{Note: model.Note{Severity: model.Caution,
-			Text: fmt.Sprintf("%.4g bar: real-gas effects (compressibility) may exceed ~1 %%; the ideal-gas figures are a first estimate", s.PresPa/1e5)}})
-	}
+	out := realGasNotes(s, all)
+	out = append(out, hotNotes(s)...)
 	for i := range s.Species {
 		t := &s.Species[i]
 		v := t.Species.Validity(s.TempK, t.PartialPresPa)
-		// Condensation depends on the partial pressure, but the boiling
-		// point is at 1 atm; report it for the species present.
-		for _, n := range v.Notes(t.Species) {
+		notes := v.Notes(t.Species)
+		// The vapour pressure from IAPWS or the critical constants
+		// replaces the model's estimate from the boiling point, which
+		// it gives only when the boiling point is known.
+		if n, ok := condensationNote(t, s.TempK); ok {
+			if v.TOverBoiling > 0 {
+				v.TOverBoiling = 0
+				notes = v.Notes(t.Species)
+			}
+			notes = append(notes, n)
+		}
+		for _, n := range notes {
 			if n.Severity == model.Info && !all {
 				continue
 			}
@@ -40,4 +54,29 @@ func Notes(s *State, all bool) []StateNote {
 		}
 	}
 	return out
+}
+
+// realGasNotes says, as numbers, how far the ideal gas is from the real
+// one at the state.
+func realGasNotes(s *State, all bool) []StateNote {
+	note := func(sev model.Severity, format string, args ...any) []StateNote {
+		return []StateNote{{Note: model.Note{Severity: sev, Text: fmt.Sprintf(format, args...)}}}
+	}
+	if !s.RealGasKnown {
+		if s.PresPa > idealPressurePa {
+			return note(model.Caution, "%.4g bar: no species of the blend carries critical constants, so real-gas effects are not computed; above 10 bar they may exceed 1 %% (common practice)", s.PresPa/1e5)
+		}
+		return nil
+	}
+	rg := &s.RealGas
+	dev := math.Abs(rg.Z - 1)
+	switch {
+	case rg.Range != realgas.InRange:
+		return note(model.Invalid, "outside every model here (%s): Z from %s is %.3g, and neither it nor the ideal-gas figures can be trusted", rg.Range, rg.Model, rg.Z)
+	case dev > densityCautionFraction:
+		return note(model.Caution, "Z = %.4g (%s): the ideal-gas density is off by %.2g %%; the real-gas figures stand beside it", rg.Z, rg.Model, 100*dev)
+	case all:
+		return note(model.Info, "Z = %.5g (%s): the ideal-gas density is within %.2g %%", rg.Z, rg.Model, 100*dev)
+	}
+	return nil
 }

@@ -60,7 +60,12 @@ func colourRoot(t *testing.T, w, h int) *root {
 // titles and the key hints, not two frames; a typing slip in a recipe
 // amount redraws the recipe, not the readout beside it (issue 6 item 8).
 func TestTerminalBytes(t *testing.T) {
-	const switchGoal, typeGoal = 2000, 2500
+	// typeGoal was 2500 with the demo showing NH3's boiling-point caution
+	// beside the recipe; with vapour pressures (issue 9) NH3 at 25 kPa is
+	// far from condensing, the caution is gone and a row of figures, 56
+	// bytes dearer, stands in its place in the lines a slip redraws. What
+	// the terminal receives is the cell writer's (TestCellWriterMatchesRenderer).
+	const switchGoal, typeGoal = 2000, 2550
 	r := colourRoot(t, 120, 40)
 	if !strings.Contains(r.View(), "\x1b[") {
 		t.Fatal("no colour codes: the test would measure a plain screen")

@@ -69,6 +69,12 @@ var processKinds = []processKind{
 		{key: "volume", label: "volume", def: "", hint: "m3, L or ft3; flow purge, or gas used"},
 		{key: "rate", label: "purge flow", def: "", hint: "flow purge only"},
 	}},
+	{key: "release", name: "release", fields: []processField{
+		{key: "amount", label: "amount", def: "2 Nm3", hint: "released at once, or in all with a rate: mol, kg, lb, Nm3, SL, Sm3, scf, m3 at 20 °C"},
+		{key: "rate", label: "or rate", def: "", hint: "a continuous release: SLPM, Nm3/h, kg/h, ...; empty: all at once"},
+		{key: "room", label: "room", def: "30 m3", hint: "room volume: m3, L or ft3"},
+		{key: "ach", label: "air changes/h", def: "", hint: "ventilation; empty: none"},
+	}},
 }
 
 // processPathPoints is how finely a path is sampled for the plot.
@@ -525,6 +531,12 @@ func (p *processPane) calculate() (process.Result, string, error) {
 		}
 		res, err := pu.Solve()
 		return res, "the recipe purged with " + text2, err
+	case "release":
+		res, err := process.RoomRelease{Mixture: mix, Amount: p.value("amount"), Rate: p.value("rate"), Room: p.value("room"), ACH: p.value("ach")}.Solve()
+		if err != nil {
+			return nil, "", err
+		}
+		return res, "the recipe released into a room (well-mixed model; zmix release gives the time course and sources)", nil
 	}
 	return nil, "", errText("unknown process")
 }

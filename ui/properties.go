@@ -87,8 +87,8 @@ func (p *propertiesPane) wantHeight(avail int) int {
 	if p.b.in.Mixture != nil {
 		nSpecies = len(p.b.in.Mixture.Components) + len(cautionNotes(p.b.notes)) // a caution line each
 	}
-	// Besides its figures the readout has nine rows: the frame, the
-	// heading, the mixing-entropy line, the blank lines and the species
+	// Besides its figures the readout has ten rows: the frame, the
+	// heading, the mixing-entropy and real-gas lines, the blank lines and the species
 	// table's headings and note.
 	figures := 0
 	for i := range mixtures.Quantities {
@@ -96,7 +96,7 @@ func (p *propertiesPane) wantHeight(avail int) int {
 			figures++
 		}
 	}
-	return max(10, min(figures+9+nSpecies, avail-16))
+	return max(10, min(figures+10+nSpecies, avail-16))
 }
 
 // readoutRow is one figure of the blend, per mole and per kilogram.
@@ -200,7 +200,7 @@ func (p *propertiesPane) render() []string {
 	for _, note := range notes {
 		full = append(full, report.Wrap(t("! "+report.NoteText(note)), p.w)...)
 	}
-	if len(lines)+len(full)+1+len(rows)+1+4+n <= p.h {
+	if len(lines)+len(full)+1+len(rows)+2+4+n <= p.h {
 		for _, l := range full {
 			add(s.Caution.Render(l))
 		}
@@ -209,7 +209,7 @@ func (p *propertiesPane) render() []string {
 			add(s.Caution.Render(p.c.shorten("! "+report.NoteText(note), p.w)))
 		}
 	}
-	oneCol := len(lines) + 1 + len(rows) + 1 + 4 + n
+	oneCol := len(lines) + 1 + len(rows) + 2 + 4 + n // + the mixing and real-gas lines
 	if p.h < oneCol && p.w >= 60 {
 		p.twoColumns(rows, add)
 	} else {
@@ -234,6 +234,7 @@ func (p *propertiesPane) oneColumn(rows []readoutRow, add func(string)) {
 		}
 		add(strings.TrimRight(line, " "))
 	}
+	p.realGasLine(add)
 	p.mixingLine(lw, vw, add)
 }
 
@@ -254,6 +255,7 @@ func (p *propertiesPane) twoColumns(rows []readoutRow, add func(string)) {
 		}
 		add(strings.TrimRight(line, " "))
 	}
+	p.realGasLine(add)
 	p.mixingLine(lw+8, vw, add)
 }
 
@@ -270,6 +272,37 @@ func (p *propertiesPane) mixingLine(lw, vw int, add func(string)) {
 		return
 	}
 	add(line + s.Muted.Render(note))
+}
+
+// realGasLine gives the real-gas figures of the quantity table on one
+// line, with the model that gives them: they stand beside the ideal-gas
+// figures and do not replace them.
+func (p *propertiesPane) realGasLine(add func(string)) {
+	s := p.c.Styles
+	t := p.c.Text
+	st := &p.b.state
+	line := s.Label.Render("real gas ")
+	if !st.RealGasKnown {
+		add(line + s.Muted.Render(t(" not known: no critical constants")))
+		return
+	}
+	var items []string
+	for i := range mixtures.Quantities {
+		q := &mixtures.Quantities[i]
+		if q.Section != mixtures.SectionRealGas {
+			continue
+		}
+		item := p.symbol(q) + " " + quantityText(q, q.Get(st))
+		if u := p.unit(q.Unit, q.UnitASCII); u != "" {
+			item += " " + u
+		}
+		items = append(items, item)
+	}
+	line += s.Value.Render(t(" " + strings.Join(items, "  ")))
+	if model := "  " + st.RealGas.Model.Short(); lipgloss.Width(line)+lipgloss.Width(model) <= p.w {
+		line += s.Muted.Render(t(model))
+	}
+	add(line)
 }
 
 func (p *propertiesPane) speciesTable(add func(string)) {

@@ -3,6 +3,8 @@ package ui
 import (
 	"strings"
 	"testing"
+
+	"zmix/mixtures/process"
 )
 
 // The safety details (!) show the recipe's classification from package
@@ -25,5 +27,35 @@ func TestSafetyDetailsClassification(t *testing.T) {
 		if strings.Contains(v, "NaN") {
 			t.Errorf("%v: NaN in the safety details", size)
 		}
+	}
+}
+
+// The Process pane's release choice shows the well-mixed model of package
+// safety on the recipe: 2 Nm3 of the demo feed into 30 m3.
+func TestProcessPaneRelease(t *testing.T) {
+	p, b := testProcess(t, false, 90, 30)
+	for p.current().key != "release" {
+		p.keys(t, "right")
+	}
+	v := p.whole()
+	if p.result == nil {
+		t.Fatalf("no result: %s", p.err)
+	}
+	want, err := process.RoomRelease{Mixture: b.in.Mixture, Amount: "2 Nm3", Room: "30 m3"}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got, ok := process.Lookup(p.result, "o2"); !ok || got.SI != want.Room.O2Pct {
+		t.Errorf("pane worst O2 %v, model %g", got.SI, want.Room.O2Pct)
+	}
+	for _, s := range []string{"worst oxygen", "Peak in the room", "SiH4", "well-mixed"} {
+		if !strings.Contains(v, s) {
+			t.Errorf("release screen lacks %q:\n%s", s, v)
+		}
+	}
+	// A room typed wrong names the field.
+	p.keys(t, "down", "down", "enter", "ctrl+u", "l", "o", "t", "s", "enter")
+	if p.result != nil || !strings.Contains(p.err, "room") {
+		t.Errorf("bad room: result %v, error %q", p.result != nil, p.err)
 	}
 }

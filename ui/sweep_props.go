@@ -19,6 +19,7 @@ type sweepProp struct {
 // chemical potential, whose mole-fraction sum is the blend's G.
 var sweepPlots = []struct{ key, blend, species string }{
 	{"S", "S", "S"}, {"Cp", "Cp", "Cp"}, {"mu", "G", "mu"}, {"H", "H", "H"}, {"G", "G", ""}, {"gamma", "gamma", ""},
+	{"Z", "Z", ""},
 }
 
 // sweepProps lists the plottable properties in the order p cycles them.

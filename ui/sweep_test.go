@@ -123,7 +123,7 @@ func TestSweepKeysChangeSettings(t *testing.T) {
 		{"no linear grid for P", []string{"v", "g"}, with(func(s *SweepSettings) { s.Var, s.From, s.To = mixtures.SweepPressure, "1 bar", "100 bar" }), true},
 		{"next property", []string{"p"}, with(func(s *SweepSettings) { s.Property = "mu" }), false},
 		{"previous property", []string{"P"}, with(func(s *SweepSettings) { s.Property = "S" }), false},
-		{"property wraps", []string{"p", "p", "p", "p", "p"}, with(func(s *SweepSettings) { s.Property = "S" }), false},
+		{"property wraps", []string{"p", "p", "p", "p", "p", "p"}, with(func(s *SweepSettings) { s.Property = "S" }), false},
 		{"next species", []string{"s"}, with(func(s *SweepSettings) { s.Species = "SiH4" }), false},
 		{"previous species wraps", []string{"S"}, with(func(s *SweepSettings) { s.Species = "N2" }), false},
 		{"species back to blend", []string{"s", "s", "s", "s", "s"}, def, false},

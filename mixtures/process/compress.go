@@ -2,6 +2,7 @@ package process
 
 import (
 	"math"
+	"sync"
 
 	"zmix/mixtures"
 	"zmix/model"
@@ -138,7 +139,8 @@ func (c Compression) Solve() (*CompressionResult, error) {
 	ratio := math.Pow(p2/p1, 1/float64(n))
 
 	r := &CompressionResult{Expansion: expansion, MolarMassKgPerMol: c.Mixture.MolarMassKgPerMol, Efficiency: eta, gas: g}
-	var w stateWork
+	w := workPool.Get().(*stateWork)
+	defer workPool.Put(w)
 	tIn, pIn := c.InletTempK, p1
 	for i := range n {
 		pOut := pIn * ratio
@@ -220,8 +222,9 @@ func (c Compression) Solve() (*CompressionResult, error) {
 		r.note("the work is negative: the gas does work on the expander")
 	}
 	// The hottest point is a stage outlet; an expander's coldest is its outlet.
-	r.caution(temperatureCautions(c.Mixture, r.MaxTempK, "outlet")...)
-	r.caution(mixtures.Cautions(c.Mixture, max(p1, p2))...)
+	r.laterCautions = func() []mixtures.Caution {
+		return append(temperatureCautions(c.Mixture, r.MaxTempK, "outlet"), mixtures.Cautions(c.Mixture, max(p1, p2))...)
+	}
 	return r, nil
 }
 
@@ -234,6 +237,11 @@ type stateWork struct {
 	// The last state evaluated by a balance: T, H, S and Cp.
 	tLast, hLast, sLast, cpLast float64
 }
+
+// workPool keeps stateWorks between solves: a state of a ten-species
+// blend holds kilobytes of species terms, which a solve would otherwise
+// allocate each time.
+var workPool = sync.Pool{New: func() any { return new(stateWork) }}
 
 // enthalpy is H(T, P) of g.
 func (w *stateWork) enthalpy(g Gas, tempK, presPa float64) (float64, error) {

@@ -89,16 +89,26 @@ type base struct {
 	outlet            *mixtures.State
 	notes             []string
 	cautions          []mixtures.Caution
+	// laterCautions, when set, adds cautions the first time they are
+	// asked for: they are words for a reader, which a solve inside a
+	// loop (a benchmark, a path) never needs.
+	laterCautions func() []mixtures.Caution
 }
 
-func (b *base) Kind() string                  { return b.kind }
-func (b *base) Assumptions() string           { return b.assumptions }
-func (b *base) Inputs() []Value               { return b.inputs }
-func (b *base) Outputs() []Value              { return b.outputs }
-func (b *base) Tables() []Table               { return b.tables }
-func (b *base) Outlet() *mixtures.State       { return b.outlet }
-func (b *base) Notes() []string               { return b.notes }
-func (b *base) Cautions() []mixtures.Caution  { return b.cautions }
+func (b *base) Kind() string            { return b.kind }
+func (b *base) Assumptions() string     { return b.assumptions }
+func (b *base) Inputs() []Value         { return b.inputs }
+func (b *base) Outputs() []Value        { return b.outputs }
+func (b *base) Tables() []Table         { return b.tables }
+func (b *base) Outlet() *mixtures.State { return b.outlet }
+func (b *base) Notes() []string         { return b.notes }
+func (b *base) Cautions() []mixtures.Caution {
+	if f := b.laterCautions; f != nil {
+		b.laterCautions = nil
+		b.cautions = append(b.cautions, f()...)
+	}
+	return b.cautions
+}
 func (b *base) note(line string)              { b.notes = append(b.notes, line) }
 func (b *base) caution(c ...mixtures.Caution) { b.cautions = append(b.cautions, c...) }
 
@@ -158,7 +168,7 @@ var (
 // titles name each kind of result in headings.
 var titles = map[string]string{
 	"flow": "Flow", "compress": "Compression", "expand": "Expansion", "heat": "Heating and cooling",
-	"mix": "Mixing", "dilute": "Dilution", "purge": "Purging",
+	"mix": "Mixing", "dilute": "Dilution", "purge": "Purging", "release": "Release into a room",
 }
 
 // Title is the heading of a result of the kind.

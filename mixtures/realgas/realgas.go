@@ -38,6 +38,14 @@ func (m Model) String() string {
 	return "virial (Tsonopoulos B)"
 }
 
+// Short is the model's name where a line has little room.
+func (m Model) Short() string {
+	if m == PengRobinson {
+		return "Peng-Robinson"
+	}
+	return "virial"
+}
+
 // Range says whether a state lies where the models hold.
 type Range int
 
@@ -147,6 +155,10 @@ const (
 
 // polar lists species whose dipole makes Tsonopoulos' polar term matter.
 var polar = map[string]bool{"H2O": true, "NH3": true, "HF": true, "HCl": true, "SO2": true, "H2S": true, "NO2": true}
+
+// PolarLeftOut reports whether the species is one whose polar terms of
+// Tsonopoulos' correlation are left out.
+func PolarLeftOut(formula string) bool { return polar[formula] }
 
 // New builds the models' constants for a blend.
 func New(comps []Component) *Mixture {

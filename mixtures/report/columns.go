@@ -61,7 +61,15 @@ func CSVRow(row []string, s *mixtures.State, gauge bool) []string {
 	return row
 }
 
-func csvFloat(x float64) string { return strconv.FormatFloat(x, 'g', -1, 64) }
+// csvFloat writes x with every digit; NaN, which only an optional
+// quantity that is not known can hold once the finite check has passed,
+// is an empty cell.
+func csvFloat(x float64) string {
+	if x != x {
+		return ""
+	}
+	return strconv.FormatFloat(x, 'g', -1, 64)
+}
 
 // appendCSVRow appends the CSV line of s, the same cells as CSVRow, with
 // no string per cell: a number never needs CSV quoting.
@@ -71,7 +79,9 @@ func appendCSVRow(b []byte, s *mixtures.State, gauge bool) []byte {
 		if i > 0 {
 			b = append(b, ',')
 		}
-		b = strconv.AppendFloat(b, q.Get(s), 'g', -1, 64)
+		if v := q.Get(s); v == v {
+			b = strconv.AppendFloat(b, v, 'g', -1, 64)
+		}
 		if q.Key == "P" {
 			b = append(b, ',')
 			b = strconv.AppendBool(b, gauge)
@@ -213,7 +223,13 @@ func (j *jsonWriter) strings(indent, name string, list []string) {
 // appendJSONFloat writes x the way encoding/json does for a float64: the
 // shortest form that reads back exactly, in exponent form below 1e-6 and
 // from 1e21, with a two-digit exponent cleaned to one ("1e-07" → "1e-7").
+//
+// NaN, which only an optional quantity that is not known can hold once
+// the finite check has passed, is null.
 func appendJSONFloat(b []byte, x float64) []byte {
+	if x != x {
+		return append(b, "null"...)
+	}
 	abs := x
 	if abs < 0 {
 		abs = -abs

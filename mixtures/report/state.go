@@ -108,6 +108,7 @@ func WriteStateText(w io.Writer, r *StateReport) error {
 	if smix != nil {
 		fmt.Fprintf(w, "  %s  %s %s  (−R Σ xᵢ ln xᵢ, included in S)\n\n", smix.Label, Number(smix.Get(st)*smix.Scale, smix.Digits), smix.Unit)
 	}
+	writeRealGasText(w, st)
 
 	fmt.Fprintln(w, "Species, each at its partial pressure")
 	var cols []*mixtures.SpeciesQuantity
@@ -184,6 +185,8 @@ func WriteStateJSON(w io.Writer, r *StateReport) error {
 	var j jsonWriter
 	j.buf = append(j.buf, "{\n"...)
 	j.stateFields(r.State, r.Gauge, "  ")
+	j.buf = append(j.buf, ",\n"...)
+	j.realGas(r.State, "  ")
 	// The lists are left out when empty, as a reader of the file expects
 	// of an optional section.
 	if lines := CautionLines(r.Cautions); len(lines) > 0 {

@@ -1,16 +1,17 @@
-package mixtures
+package report
 
 import (
 	"bytes"
+	"context"
 	"encoding/csv"
 	"encoding/json"
 	"math"
-	"math/rand/v2"
 	"slices"
 	"strconv"
 	"strings"
 	"testing"
 
+	"zmix/mixtures"
 	"zmix/model"
 )
 
@@ -24,11 +25,27 @@ var (
 	requiredSpeciesKeys = []string{"name", "x", "partial_pressure_Pa", "mu_J_mol", "s_J_molK", "cp_J_molK"}
 )
 
-func TestWriteJSON(t *testing.T) {
-	m := mustMixture(t, "SiH4 2%, H2 500ppm, N2 bal", 1e5)
-	s := mustState(t, m, 295.15, 1.4e5)
+func mustMixture(t *testing.T, text string, presPa float64) *mixtures.Mixture {
+	t.Helper()
+	b, err := mixtures.ParseBlend(text)
+	if err != nil {
+		t.Fatal(err)
+	}
+	m, err := b.Resolve(model.Builtin(), presPa)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return m
+}
+
+func TestWriteStateJSONKeys(t *testing.T) {
+	m := mustMixture(t, "SiH4 2%, H2 500ppm, N2 bal", 1.4e5)
+	s, err := m.State(295.15, 1.4e5, mixtures.Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
 	var buf bytes.Buffer
-	if err := WriteJSON(&buf, &s, true); err != nil {
+	if err := WriteStateJSON(&buf, &StateReport{State: &s, Gauge: true}); err != nil {
 		t.Fatal(err)
 	}
 	var obj map[string]any
@@ -69,14 +86,12 @@ func TestWriteJSON(t *testing.T) {
 	}
 }
 
-func TestWriteCSVAndSweepJSON(t *testing.T) {
-	m := mustMixture(t, dryAir, 1e5)
-	res, err := m.Run(Sweep{Var: SweepTemperature, From: 300, To: 1500, Steps: 7}, 0, 1e5, Options{})
-	if err != nil {
-		t.Fatal(err)
-	}
+func TestWriteSweepCSVAndJSON(t *testing.T) {
+	m := mustMixture(t, "N2 78.08%, O2 20.95%, Ar 0.93%, CO2 0.04%", 1e5)
+	sw := mixtures.Sweep{Var: mixtures.SweepTemperature, From: 300, To: 1500, Steps: 7}
+	points := &SweepSource{Mix: m, Sweep: sw, FixedPresPa: 1e5}
 	var buf bytes.Buffer
-	if err := WriteCSV(&buf, res.Points, false); err != nil {
+	if err := WriteSweepCSV(&buf, false, points); err != nil {
 		t.Fatal(err)
 	}
 	rows, err := csv.NewReader(&buf).ReadAll()
@@ -107,7 +122,7 @@ func TestWriteCSVAndSweepJSON(t *testing.T) {
 	// column, and every species key is a FORMULA.key column.
 	var recs []map[string]any
 	buf.Reset()
-	if err := WriteSweepJSON(&buf, res, false); err != nil {
+	if err := WriteSweepJSON(&buf, false, points); err != nil {
 		t.Fatal(err)
 	}
 	if err := json.Unmarshal(buf.Bytes(), &recs); err != nil || len(recs) != 7 {
@@ -156,45 +171,44 @@ func TestWriteCSVAndSweepJSON(t *testing.T) {
 	if rows[1][slices.Index(header, "temperature_K")] != "300" || rows[7][slices.Index(header, "temperature_K")] != "1500" {
 		t.Errorf("sweep ends in CSV: %q and %q, want 300 and 1500", rows[1][1], rows[7][1])
 	}
+}
 
-	buf.Reset()
-	if err := WriteCSV(&buf, nil, false); err != nil || buf.Len() != 0 {
-		t.Errorf("WriteCSV of no states: %v, %q", err, buf.String())
+// Chunks formatted on several cores come out in grid order, exactly as a
+// one-core pass writes them.
+func TestSweepChunksInOrder(t *testing.T) {
+	m := mustMixture(t, "N2 78.08%, O2 20.95%, Ar 0.93%, CO2 0.04%", 1e5)
+	src := &SweepSource{Mix: m, Sweep: mixtures.Sweep{Var: mixtures.SweepTemperature, From: 200, To: 2500, Steps: 3*chunkPoints + 5}, FixedPresPa: 1e5}
+	var got bytes.Buffer
+	if err := WriteSweepCSV(&got, false, src); err != nil {
+		t.Fatal(err)
+	}
+	var want []byte
+	err := src.Each(context.Background(), func(i int, s *mixtures.State) error {
+		if i == 0 {
+			var hb bytes.Buffer
+			cw := csv.NewWriter(&hb)
+			cw.Write(CSVHeader(nil, s))
+			cw.Flush()
+			want = append(want, hb.Bytes()...)
+		}
+		want = appendCSVRow(want, s, false)
+		return nil
+	})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !bytes.Equal(got.Bytes(), want) {
+		t.Errorf("chunked CSV (%d bytes) differs from the one-core pass (%d bytes)", got.Len(), len(want))
 	}
 }
 
-// No NaN or infinity anywhere in the export, for any state the mixture
-// accepts: random blends with fractions down to 1e-20, over the model's
-// whole temperature range and pressures from 1e-320 Pa (where partial
-// pressures underflow to 0) to 1e120 Pa. JSON encoding fails on NaN and
-// ±Inf, so a successful encode is the check.
-func TestExportFinite(t *testing.T) {
-	rng := rand.New(rand.NewPCG(1, 1))
-	all := model.Builtin().All()
-	accepted := 0
-	for n := 0; n < 500; n++ {
-		k := 1 + rng.IntN(8)
-		comps := make([]Component, k)
-		for i, j := range rng.Perm(len(all))[:k] {
-			comps[i] = Component{Species: all[j], X: math.Pow(10, -20*rng.Float64())}
-		}
-		m, err := NewMixture(comps)
-		if err != nil {
-			t.Fatal(err)
-		}
-		tempK := model.MinTempK * math.Pow(model.MaxTempK/model.MinTempK, rng.Float64())
-		presPa := math.Pow(10, -320+440*rng.Float64())
-		s, err := m.State(tempK, presPa, Options{})
-		if err != nil {
-			continue // refused states are checked in TestStateErrors
-		}
-		accepted++
-		rec := s.Record(false)
-		if _, err := json.Marshal(rec); err != nil {
-			t.Errorf("%s at %g K, %g Pa: %v", blendName(m), tempK, presPa, err)
-		}
-	}
-	if accepted < 400 {
-		t.Errorf("only %d of 500 random states accepted; the check covers too little", accepted)
+// A sweep the model cannot compute at some point is refused before a
+// byte is written.
+func TestSweepRefusedUpFront(t *testing.T) {
+	m := mustMixture(t, "N2 1", 1e5)
+	src := &SweepSource{Mix: m, Sweep: mixtures.Sweep{Var: mixtures.SweepTemperature, From: 300, To: 2e6, Steps: 2000}, FixedPresPa: 1e5}
+	var b bytes.Buffer
+	if err := WriteSweepJSON(&b, false, src); err == nil || b.Len() != 0 {
+		t.Errorf("err %v after %d bytes, want an error and nothing written", err, b.Len())
 	}
 }
