@@ -4,11 +4,14 @@ import "strconv"
 
 // ParseFormula splits a molecular formula such as "SiH4" or "C2H6" into
 // element counts. Elements are an upper-case letter and an optional
-// lower-case one, each followed by an optional count.
+// lower-case one, each followed by an optional count. A spin
+// modification's prefix (eH2, pH2, eD2, oD2; see SpinModifications) is
+// accepted and left out of the counts.
 func ParseFormula(formula string) (map[string]int, error) {
 	if formula == "" {
 		return nil, Errorf("model", "empty formula")
 	}
+	_, formula = splitSpinPrefix(formula)
 	counts := make(map[string]int)
 	i := 0
 	for i < len(formula) {
