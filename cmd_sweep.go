@@ -1,7 +1,6 @@
 package main
 
 import (
-	"context"
 	"fmt"
 	"io"
 	"strings"
@@ -152,23 +151,20 @@ func (a *app) printSweep(cat *model.Catalogue, cfg sweepConfig) error {
 		FixedTempK: cfg.fixedTemp.kelvin, FixedPresText: cfg.fixedPres.text, FixedGauge: cfg.fixedPres.Gauge,
 		FixedPresPa: cfg.fixedPres.Pa, StdPresPa: cfg.std.Pa(), Cautions: mixtures.Cautions(mix, highPa),
 	}
-	points := func(yield func(i int, s *mixtures.State) error) error {
-		return mix.Stream(context.Background(), cfg.sweep, cfg.fixedTemp.kelvin, cfg.fixedPres.Pa, opts,
-			func(i int, _ float64, s *mixtures.State) error { return yield(i, s) })
-	}
+	src := &report.SweepSource{Mix: mix, Sweep: cfg.sweep, FixedTempK: cfg.fixedTemp.kelvin, FixedPresPa: cfg.fixedPres.Pa, Opts: opts}
 	// Rows go out as they are computed: a buffered writer over stdout.
 	w := &errWriter{w: a.stdout}
 	switch cfg.format {
 	case formatJSON:
-		err = report.WriteSweepJSON(w, rep.Gauge(), points)
+		err = report.WriteSweepJSON(w, rep.Gauge(), src)
 	case formatCSV:
-		err = report.WriteSweepCSV(w, rep.Gauge(), points)
+		err = report.WriteSweepCSV(w, rep.Gauge(), src)
 	default:
 		var out io.Writer = w
 		if cfg.ascii {
 			out = &report.ASCIIWriter{W: w}
 		}
-		err = report.WriteSweepText(out, rep, points)
+		err = report.WriteSweepText(out, rep, src)
 	}
 	if w.err != nil {
 		return ioFailure(fmt.Errorf("writing the output: %v", w.err))

@@ -2,7 +2,6 @@ package ui
 
 import (
 	"bytes"
-	"context"
 	"encoding/json"
 	"os"
 	"os/signal"
@@ -283,10 +282,7 @@ func TestExportSweep(t *testing.T) {
 	// What zmix sweep writes for the same sweep.
 	k := r.panes[paneSweep].(*sweepPane).resultKey
 	var want bytes.Buffer
-	report.WriteSweepJSON(&want, false, func(yield func(i int, s *mixtures.State) error) error {
-		return k.mix.Stream(context.Background(), res.Sweep, k.fixedTempK, k.fixedPresPa, k.opts,
-			func(i int, _ float64, s *mixtures.State) error { return yield(i, s) })
-	})
+	report.WriteSweepJSON(&want, false, &report.SweepSource{Mix: k.mix, Sweep: res.Sweep, FixedTempK: k.fixedTempK, FixedPresPa: k.fixedPresPa, Opts: k.opts})
 	if !bytes.Equal(got, want.Bytes()) {
 		t.Errorf("sweep export differs from the sweep command's output")
 	}

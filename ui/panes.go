@@ -52,7 +52,7 @@ type (
 	// sweepSource has a sweep to export instead of the readout.
 	sweepSource interface {
 		Result() *mixtures.SweepTable
-		StreamResult(yield func(i int, s *mixtures.State) error) error
+		ResultSource() *report.SweepSource
 	}
 	// processSource has a process result to export instead of the
 	// readout; nil when it has none.

@@ -323,9 +323,9 @@ func (r *root) export(path string) {
 		src := r.exportSrc
 		write = func(w io.Writer) error {
 			if asJSON {
-				return report.WriteSweepJSON(w, gauge, src.StreamResult)
+				return report.WriteSweepJSON(w, gauge, src.ResultSource())
 			}
-			return report.WriteSweepCSV(w, gauge, src.StreamResult)
+			return report.WriteSweepCSV(w, gauge, src.ResultSource())
 		}
 	} else {
 		if r.b.stateErr != "" {

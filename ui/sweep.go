@@ -765,9 +765,7 @@ func (p *sweepPane) Result() *mixtures.SweepTable { return p.result }
 // StreamResult computes the shown sweep again, point by point, with every
 // figure of every point, for an export; the pane keeps only what it
 // plots.
-func (p *sweepPane) StreamResult(yield func(i int, s *mixtures.State) error) error {
-	return p.resultKey.stream(yield)
-}
+func (p *sweepPane) ResultSource() *report.SweepSource { return p.resultKey.source() }
 
 // ShortHelp is the first few bindings, the most used.
 func (p *sweepPane) ShortHelp() []key.Binding {

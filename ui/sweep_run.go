@@ -7,6 +7,7 @@ import (
 	tea "github.com/charmbracelet/bubbletea"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 )
 
 // A sweep is computed by a chain of commands, one chunk of grid points
@@ -98,9 +99,8 @@ func (j *sweepJob) compute(gen uint64, from int) sweepProgressMsg {
 	return sweepProgressMsg{gen: gen, job: j, done: to, total: n}
 }
 
-// stream computes the sweep of the key again, point by point, for an
-// export that writes every figure of every point without keeping them.
-func (k *sweepKey) stream(yield func(i int, s *mixtures.State) error) error {
-	return k.mix.Stream(context.Background(), k.sweep, k.fixedTempK, k.fixedPresPa, k.opts,
-		func(i int, _ float64, s *mixtures.State) error { return yield(i, s) })
+// source is the sweep of the key, for an export that computes it again
+// and writes every figure of every point without keeping them.
+func (k *sweepKey) source() *report.SweepSource {
+	return &report.SweepSource{Mix: k.mix, Sweep: k.sweep, FixedTempK: k.fixedTempK, FixedPresPa: k.fixedPresPa, Opts: k.opts}
 }

@@ -1,7 +1,6 @@
 package report
 
 import (
-	"context"
 	"io"
 	"testing"
 
@@ -12,7 +11,7 @@ import (
 // blend10 is the 10-species blend of mixtures' BenchmarkBlendState10.
 const blend10 = "N2 bal, O2 10%, Ar 5%, CO2 4%, H2 3%, He 2%, CO 1%, CH4 1%, H2O 2%, NH3 500ppm"
 
-func benchSweep(b *testing.B, steps int) (*mixtures.Mixture, mixtures.Sweep, Points) {
+func benchSweep(b *testing.B, steps int) (*mixtures.Mixture, mixtures.Sweep, *SweepSource) {
 	b.Helper()
 	bl, err := mixtures.ParseBlend(blend10)
 	if err != nil {
@@ -23,10 +22,7 @@ func benchSweep(b *testing.B, steps int) (*mixtures.Mixture, mixtures.Sweep, Poi
 		b.Fatal(err)
 	}
 	sw := mixtures.Sweep{Var: mixtures.SweepTemperature, From: 20, To: 3000, Steps: steps}
-	points := func(yield func(i int, s *mixtures.State) error) error {
-		return mix.Stream(context.Background(), sw, 0, 1e5, mixtures.Options{}, func(i int, _ float64, s *mixtures.State) error { return yield(i, s) })
-	}
-	return mix, sw, points
+	return mix, sw, &SweepSource{Mix: mix, Sweep: sw, FixedPresPa: 1e5}
 }
 
 // The goal for `zmix sweep` of 200 000 points of this blend, 20–3000 K, is

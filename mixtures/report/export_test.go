@@ -89,9 +89,7 @@ func TestWriteStateJSONKeys(t *testing.T) {
 func TestWriteSweepCSVAndJSON(t *testing.T) {
 	m := mustMixture(t, "N2 78.08%, O2 20.95%, Ar 0.93%, CO2 0.04%", 1e5)
 	sw := mixtures.Sweep{Var: mixtures.SweepTemperature, From: 300, To: 1500, Steps: 7}
-	points := func(yield func(i int, s *mixtures.State) error) error {
-		return m.Stream(context.Background(), sw, 0, 1e5, mixtures.Options{}, func(i int, _ float64, s *mixtures.State) error { return yield(i, s) })
-	}
+	points := &SweepSource{Mix: m, Sweep: sw, FixedPresPa: 1e5}
 	var buf bytes.Buffer
 	if err := WriteSweepCSV(&buf, false, points); err != nil {
 		t.Fatal(err)
@@ -172,5 +170,45 @@ func TestWriteSweepCSVAndJSON(t *testing.T) {
 	}
 	if rows[1][slices.Index(header, "temperature_K")] != "300" || rows[7][slices.Index(header, "temperature_K")] != "1500" {
 		t.Errorf("sweep ends in CSV: %q and %q, want 300 and 1500", rows[1][1], rows[7][1])
+	}
+}
+
+// Chunks formatted on several cores come out in grid order, exactly as a
+// one-core pass writes them.
+func TestSweepChunksInOrder(t *testing.T) {
+	m := mustMixture(t, "N2 78.08%, O2 20.95%, Ar 0.93%, CO2 0.04%", 1e5)
+	src := &SweepSource{Mix: m, Sweep: mixtures.Sweep{Var: mixtures.SweepTemperature, From: 200, To: 2500, Steps: 3*chunkPoints + 5}, FixedPresPa: 1e5}
+	var got bytes.Buffer
+	if err := WriteSweepCSV(&got, false, src); err != nil {
+		t.Fatal(err)
+	}
+	var want []byte
+	err := src.Each(context.Background(), func(i int, s *mixtures.State) error {
+		if i == 0 {
+			var hb bytes.Buffer
+			cw := csv.NewWriter(&hb)
+			cw.Write(CSVHeader(nil, s))
+			cw.Flush()
+			want = append(want, hb.Bytes()...)
+		}
+		want = appendCSVRow(want, s, false)
+		return nil
+	})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !bytes.Equal(got.Bytes(), want) {
+		t.Errorf("chunked CSV (%d bytes) differs from the one-core pass (%d bytes)", got.Len(), len(want))
+	}
+}
+
+// A sweep the model cannot compute at some point is refused before a
+// byte is written.
+func TestSweepRefusedUpFront(t *testing.T) {
+	m := mustMixture(t, "N2 1", 1e5)
+	src := &SweepSource{Mix: m, Sweep: mixtures.Sweep{Var: mixtures.SweepTemperature, From: 300, To: 2e6, Steps: 2000}, FixedPresPa: 1e5}
+	var b bytes.Buffer
+	if err := WriteSweepJSON(&b, false, src); err == nil || b.Len() != 0 {
+		t.Errorf("err %v after %d bytes, want an error and nothing written", err, b.Len())
 	}
 }

@@ -2,6 +2,8 @@ package report
 
 import (
 	"bufio"
+	"bytes"
+	"context"
 	"encoding/csv"
 	"fmt"
 	"io"
@@ -10,12 +12,6 @@ import (
 	"zmix/mixtures"
 	"zmix/model"
 )
-
-// Points runs a sweep and hands each point to yield in grid order. The
-// state is reused between calls: yield must copy what it keeps. A sweep's
-// writers take one, so that rows are written as they are computed and
-// memory stays flat however many points there are.
-type Points func(yield func(i int, s *mixtures.State) error) error
 
 // SweepReport describes a sweep for its text header and footer.
 type SweepReport struct {
@@ -74,68 +70,75 @@ func sweepColumns(mix *mixtures.Mixture) []sweepColumn {
 	return cols
 }
 
-// copyState copies s into dst with its own species terms.
-func copyState(dst, s *mixtures.State) {
-	species := append(dst.Species[:0], s.Species...)
-	*dst = *s
-	dst.Species = species
-}
-
 // WriteSweepText writes the sweep as an aligned table with its header,
-// the validity notes at the two end points and the cautions. It runs the
-// sweep twice: once to measure the columns, once to write them, so that
-// memory does not grow with the number of points.
-func WriteSweepText(w io.Writer, r *SweepReport, points Points) error {
+// the validity notes at the two end points and the cautions. It computes
+// the sweep twice: once to measure the columns, once to write them, so
+// that memory does not grow with the number of points.
+func WriteSweepText(w io.Writer, r *SweepReport, src *SweepSource) error {
+	ctx := context.Background()
 	cols := sweepColumns(r.Mix)
 	widths := make([]int, len(cols))
 	for k, c := range cols {
 		widths[k] = max(Width(ForWriter(w, c.name)), Width(ForWriter(w, c.unit)))
 	}
-	var first, last mixtures.State
-	n := 0
-	err := points(func(i int, s *mixtures.State) error {
-		if err := CheckFinite(s); err != nil {
-			return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
+	err := inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]int, error) {
+		wd := make([]int, len(cols))
+		err := src.span(ctx, from, to, s, func(i int, s *mixtures.State) error {
+			if err := CheckFinite(s); err != nil {
+				return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
+			}
+			for k, c := range cols {
+				wd[k] = max(wd[k], len(c.cell(s)))
+			}
+			return nil
+		})
+		return wd, err
+	}, func(wd []int) error {
+		for k := range widths {
+			widths[k] = max(widths[k], wd[k])
 		}
-		for k, c := range cols {
-			widths[k] = max(widths[k], len(c.cell(s)))
-		}
-		if i == 0 {
-			copyState(&first, s)
-		}
-		copyState(&last, s)
-		n++
 		return nil
 	})
 	if err != nil {
 		return err
 	}
 
-	bw := bufio.NewWriter(w)
+	bw := bufio.NewWriterSize(w, 64<<10)
 	out := io.Writer(bw)
 	if IsASCIIWriter(w) {
 		out = &ASCIIWriter{W: bw}
 	}
 	writeSweepHeader(out, r)
-	var line strings.Builder
-	row := func(cells func(k int) string) {
-		line.Reset()
-		line.WriteString("  ")
+	row := func(b []byte, cells func(k int) string) []byte {
+		b = append(b, "  "...)
+		start := len(b)
 		for k := range cols {
 			if k > 0 {
-				line.WriteString("  ")
+				b = append(b, "  "...)
 			}
 			c := ForWriter(out, cells(k))
-			line.WriteString(strings.Repeat(" ", max(widths[k]-Width(c), 0)))
-			line.WriteString(c)
+			for range max(widths[k]-Width(c), 0) {
+				b = append(b, ' ')
+			}
+			b = append(b, c...)
 		}
-		fmt.Fprintln(out, strings.TrimRight(line.String(), " "))
+		for len(b) > start && b[len(b)-1] == ' ' {
+			b = b[:len(b)-1]
+		}
+		return append(b, '\n')
 	}
-	row(func(k int) string { return cols[k].name })
-	row(func(k int) string { return cols[k].unit })
-	err = points(func(i int, s *mixtures.State) error {
-		row(func(k int) string { return cols[k].cell(s) })
-		return nil
+	out.Write(row(nil, func(k int) string { return cols[k].name }))
+	out.Write(row(nil, func(k int) string { return cols[k].unit }))
+	err = inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]byte, error) {
+		var b []byte
+		err := src.span(ctx, from, to, s, func(i int, s *mixtures.State) error {
+			b = row(b, func(k int) string { return cols[k].cell(s) })
+			return nil
+		})
+		return b, err
+	}, func(b []byte) error {
+		_, err := out.Write(b)
+		return err
 	})
 	if err != nil {
 		return err
@@ -145,12 +148,12 @@ func WriteSweepText(w io.Writer, r *SweepReport, points Points) error {
 	// Validity is worst at one end or the other of a monotone sweep.
 	fmt.Fprintln(out, "Validity at the end points")
 	noted := false
-	ends := []*mixtures.State{&first, &last}
-	if n < 2 {
-		ends = ends[:1]
-	}
-	for _, end := range ends {
-		for _, note := range mixtures.Notes(end, false) {
+	var end mixtures.State
+	for _, i := range []int{0, src.Sweep.Steps - 1} {
+		if err := src.span(ctx, i, i+1, &end, func(int, *mixtures.State) error { return nil }); err != nil {
+			return err
+		}
+		for _, note := range mixtures.Notes(&end, false) {
 			WriteWrapped(out, "  ", "    ", fmt.Sprintf("at %s K, %s bar: %s", Short(end.TempK, 6), Short(end.PresPa/1e5, 6), NoteText(note)))
 			noted = true
 		}
@@ -189,24 +192,31 @@ func writeSweepHeader(w io.Writer, r *SweepReport) {
 }
 
 // WriteSweepCSV streams the sweep as CSV: one header row, then a row per
-// point as it is computed, with the same columns as a state's CSV.
-func WriteSweepCSV(w io.Writer, gauge bool, points Points) error {
+// point, with the same columns as a state's CSV. Rows are formatted on
+// every core and written in grid order as they are done.
+func WriteSweepCSV(w io.Writer, gauge bool, src *SweepSource) error {
+	ctx := context.Background()
 	bw := bufio.NewWriterSize(w, 64<<10)
-	var line []byte
-	err := points(func(i int, s *mixtures.State) error {
-		if err := CheckFinite(s); err != nil {
-			return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
-		}
-		if i == 0 {
-			// The header may need quoting (a user's species name).
-			cw := csv.NewWriter(bw)
-			if err := cw.Write(CSVHeader(nil, s)); err != nil {
-				return err
+	err := inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]byte, error) {
+		var b []byte
+		err := src.span(ctx, from, to, s, func(i int, s *mixtures.State) error {
+			if err := CheckFinite(s); err != nil {
+				return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
 			}
-			cw.Flush()
-		}
-		line = appendCSVRow(line[:0], s, gauge)
-		_, err := bw.Write(line)
+			if i == 0 {
+				// The header may need quoting (a user's species name).
+				var hb bytes.Buffer
+				cw := csv.NewWriter(&hb)
+				cw.Write(CSVHeader(nil, s))
+				cw.Flush()
+				b = append(b, hb.Bytes()...)
+			}
+			b = appendCSVRow(b, s, gauge)
+			return nil
+		})
+		return b, err
+	}, func(b []byte) error {
+		_, err := bw.Write(b)
 		return err
 	})
 	if err != nil {
@@ -216,23 +226,28 @@ func WriteSweepCSV(w io.Writer, gauge bool, points Points) error {
 }
 
 // WriteSweepJSON streams the sweep as a JSON list of state objects, one
-// per point as it is computed.
-func WriteSweepJSON(w io.Writer, gauge bool, points Points) error {
+// per point, formatted on every core and written in grid order.
+func WriteSweepJSON(w io.Writer, gauge bool, src *SweepSource) error {
+	ctx := context.Background()
 	bw := bufio.NewWriterSize(w, 64<<10)
-	var j jsonWriter
 	bw.WriteString("[")
-	err := points(func(i int, s *mixtures.State) error {
-		if err := CheckFinite(s); err != nil {
-			return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
-		}
-		j.buf = j.buf[:0]
-		if i > 0 {
-			j.buf = append(j.buf, ',')
-		}
-		j.buf = append(j.buf, "\n  {\n"...)
-		j.stateFields(s, gauge, "    ")
-		j.buf = append(j.buf, "\n  }"...)
-		_, err := bw.Write(j.buf)
+	err := inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]byte, error) {
+		var j jsonWriter
+		err := src.span(ctx, from, to, s, func(i int, s *mixtures.State) error {
+			if err := CheckFinite(s); err != nil {
+				return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
+			}
+			if i > 0 {
+				j.buf = append(j.buf, ',')
+			}
+			j.buf = append(j.buf, "\n  {\n"...)
+			j.stateFields(s, gauge, "    ")
+			j.buf = append(j.buf, "\n  }"...)
+			return nil
+		})
+		return j.buf, err
+	}, func(b []byte) error {
+		_, err := bw.Write(b)
 		return err
 	})
 	if err != nil {
