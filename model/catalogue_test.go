@@ -128,6 +128,8 @@ func TestBuiltinHazards(t *testing.T) {
 		"F2": Oxidizer | Toxic | Corrosive, "Cl2": Oxidizer | Toxic | Corrosive,
 		"SO2": Toxic | Corrosive, "HF": Toxic | Corrosive, "HCl": Toxic | Corrosive,
 		"SiH4": Pyrophoric | Flammable, "PH3": Toxic | Pyrophoric | Flammable,
+		"HBr": Toxic | Corrosive, "CHF3": Asphyxiant, "BF3": Toxic | Corrosive, "BCl3": Toxic | Corrosive,
+		"AsH3": Toxic | Flammable, "ClF3": Oxidizer | Toxic | Corrosive,
 		"H": 0, "O": 0, "N": 0, "OH": 0, "H2O": 0,
 	}
 	for _, sp := range Builtin().All() {
@@ -208,12 +210,12 @@ dHf0_kJ = 0       | test fixture
 boil_K  = 77.0    | test fixture
 hazards = asphyxiant
 
-[HBr]
-name    = hydrogen bromide
+[ClF]
+name    = chlorine monofluoride
 rotor   = linear
-rot_cm  = 8.35    | test fixture
-vib_cm  = 2559    | test fixture
-dHf0_kJ = -28.4   | test fixture
+rot_cm  = 0.516   | test fixture
+vib_cm  = 773     | test fixture
+dHf0_kJ = -50     | test fixture
 hazards = toxic, corrosive
 `
 
@@ -239,8 +241,8 @@ func TestCatalogueWithFile(t *testing.T) {
 			t.Errorf("overridden N2 moved from position %d", i)
 		}
 	}
-	if last := c.All()[len(c.All())-1]; last.Formula != "HBr" || last.Hazards != Toxic|Corrosive {
-		t.Errorf("added species: last is %s (%v), want HBr (toxic, corrosive)", last.Formula, last.Hazards)
+	if last := c.All()[len(c.All())-1]; last.Formula != "ClF" || last.Hazards != Toxic|Corrosive {
+		t.Errorf("added species: last is %s (%v), want ClF (toxic, corrosive)", last.Formula, last.Hazards)
 	}
 	if orig, _ := base.Lookup("N2"); orig.BoilingK != 77.355 {
 		t.Errorf("WithFile changed the built-in N2: boiling %g K", orig.BoilingK)
