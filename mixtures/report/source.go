@@ -107,3 +107,12 @@ func (src *SweepSource) span(ctx context.Context, from, to int, s *mixtures.Stat
 	return src.Mix.StreamSpan(ctx, src.Sweep, from, to, src.FixedTempK, src.FixedPresPa, src.Opts, s,
 		func(i int, _ float64, s *mixtures.State) error { return fn(i, s) })
 }
+
+// chunkBufs recycles the byte buffers of formatted chunks: a chunk's rows
+// are a few hundred kilobytes, and growing a fresh buffer for each chunk
+// was a fifth of a sweep's time.
+var chunkBufs = sync.Pool{New: func() any { return new([]byte) }}
+
+func getChunkBuf() []byte { return (*chunkBufs.Get().(*[]byte))[:0] }
+
+func putChunkBuf(b []byte) { chunkBufs.Put(&b) }

@@ -130,7 +130,7 @@ func WriteSweepText(w io.Writer, r *SweepReport, src *SweepSource) error {
 	out.Write(row(nil, func(k int) string { return cols[k].name }))
 	out.Write(row(nil, func(k int) string { return cols[k].unit }))
 	err = inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]byte, error) {
-		var b []byte
+		b := getChunkBuf()
 		err := src.span(ctx, from, to, s, func(i int, s *mixtures.State) error {
 			b = row(b, func(k int) string { return cols[k].cell(s) })
 			return nil
@@ -138,6 +138,7 @@ func WriteSweepText(w io.Writer, r *SweepReport, src *SweepSource) error {
 		return b, err
 	}, func(b []byte) error {
 		_, err := out.Write(b)
+		putChunkBuf(b)
 		return err
 	})
 	if err != nil {
@@ -198,7 +199,7 @@ func WriteSweepCSV(w io.Writer, gauge bool, src *SweepSource) error {
 	ctx := context.Background()
 	bw := bufio.NewWriterSize(w, 64<<10)
 	err := inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]byte, error) {
-		var b []byte
+		b := getChunkBuf()
 		err := src.span(ctx, from, to, s, func(i int, s *mixtures.State) error {
 			if err := CheckFinite(s); err != nil {
 				return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
@@ -217,6 +218,7 @@ func WriteSweepCSV(w io.Writer, gauge bool, src *SweepSource) error {
 		return b, err
 	}, func(b []byte) error {
 		_, err := bw.Write(b)
+		putChunkBuf(b)
 		return err
 	})
 	if err != nil {
@@ -232,7 +234,7 @@ func WriteSweepJSON(w io.Writer, gauge bool, src *SweepSource) error {
 	bw := bufio.NewWriterSize(w, 64<<10)
 	bw.WriteString("[")
 	err := inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]byte, error) {
-		var j jsonWriter
+		j := jsonWriter{buf: getChunkBuf()}
 		err := src.span(ctx, from, to, s, func(i int, s *mixtures.State) error {
 			if err := CheckFinite(s); err != nil {
 				return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
@@ -248,6 +250,7 @@ func WriteSweepJSON(w io.Writer, gauge bool, src *SweepSource) error {
 		return j.buf, err
 	}, func(b []byte) error {
 		_, err := bw.Write(b)
+		putChunkBuf(b)
 		return err
 	})
 	if err != nil {
