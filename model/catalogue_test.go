@@ -130,6 +130,7 @@ func TestBuiltinHazards(t *testing.T) {
 		"SiH4": Pyrophoric | Flammable, "PH3": Toxic | Pyrophoric | Flammable,
 		"HBr": Toxic | Corrosive, "CHF3": Asphyxiant, "BF3": Toxic | Corrosive, "BCl3": Toxic | Corrosive,
 		"AsH3": Toxic | Flammable, "ClF3": Oxidizer | Toxic | Corrosive,
+		"C3H6": Flammable | Asphyxiant, "C2F6": Asphyxiant,
 		"H": 0, "O": 0, "N": 0, "OH": 0, "H2O": 0,
 	}
 	for _, sp := range Builtin().All() {

@@ -49,6 +49,9 @@ func TestRecalledStandardValues(t *testing.T) {
 		// Harmonic torsion: about 0.8 and 1.3 J/(mol·K) low in S.
 		{"C2H6", 229.2, 52.49, 1.5, 0.04, "NBS tables 1982, C2H6, from memory"},
 		{"C3H8", 270.3, 73.6, 2.0, 0.05, "NBS tables 1982, C3H8, from memory"},
+		// Harmonic torsions too: propylene's methyl, hexafluoroethane's CF3.
+		{"C3H6", 266.6, 64.32, 1.5, 0.03, "NBS tables 1982, C3H6, from memory"},
+		{"C2F6", 332.27, 106.7, 1.5, 0.03, "NIST-JANAF, C2F6, from memory"},
 	}
 	for _, tt := range tests {
 		sp := mustSpecies(t, tt.formula)
