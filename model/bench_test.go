@@ -101,3 +101,36 @@ func stateFloor(sp *Species, tempK, presPa float64) float64 {
 	}
 	return acc
 }
+
+// BenchmarkSpeciesStateTreatments times the diatomics with Dunham
+// constants under both treatments side by side: the summed levels (read
+// from the table built once, or summed directly below it) and the rigid
+// rotor with harmonic vibration. Goal: N2 with the summed levels ≤ 1 µs.
+func BenchmarkSpeciesStateTreatments(b *testing.B) {
+	cases := []struct {
+		name          string
+		formula       string
+		tempK, presPa float64
+	}{
+		{"N2", "N2", 812.5, 2.5e5},
+		{"O2", "O2", 812.5, 2.5e5},
+		{"N2_60K", "N2", 60, 1e5},
+		{"N2_10K", "N2", 10, 1e5}, // below the table: the direct sum
+	}
+	for _, bc := range cases {
+		sp := mustSpecies(b, bc.formula)
+		for _, tr := range []struct {
+			name string
+			tr   Treatment
+		}{{"summed", Treatment{Levels: LevelsSummed}}, {"rigid", Treatment{Levels: LevelsRigidHarmonic}}} {
+			sp.Fill(new(State), bc.tempK, bc.presPa, tr.tr) // the table is built once, not timed
+			b.Run(bc.name+"/"+tr.name, func(b *testing.B) {
+				var s State
+				for b.Loop() {
+					sp.Fill(&s, bc.tempK, bc.presPa, tr.tr)
+				}
+				benchState = s
+			})
+		}
+	}
+}

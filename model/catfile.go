@@ -263,7 +263,7 @@ func (p *catParser) line(raw string) error {
 	key = strings.TrimSpace(key)
 	value, source, _ := strings.Cut(value, "|")
 	value, source = strings.TrimSpace(value), strings.TrimSpace(source)
-	if !knownField(key) {
+	if !knownField(key) && !isDunhamField(key) {
 		return p.errf(p.lineNo, key, "unknown field (known: %s)", knownFieldList())
 	}
 	if at, seen := p.fieldAt[key]; seen {
@@ -305,6 +305,13 @@ func (p *catParser) finish() error {
 	}
 	if _, ok := p.fieldAt["rot_cm"]; sp.Rotor != Atom && !ok {
 		return p.errf(p.curLine, "rot_cm", "missing for a %s rotor", sp.Rotor)
+	}
+	if sp.Dunham != nil {
+		for _, need := range requiredDunhamFields {
+			if _, ok := p.fieldAt[need]; !ok {
+				return p.errf(p.curLine, need, "missing: Dunham constants need %s", strings.Join(requiredDunhamFields, ", "))
+			}
+		}
 	}
 	if err := sp.Safety.check(); err != nil {
 		return p.errf(p.curLine, "", "%s", UserMessage(err))
@@ -412,11 +419,18 @@ func knownFieldList() string {
 		keys = append(keys, k)
 	}
 	keys = append(keys, SafetyFieldNames()...)
+	for k := range dunhamFields {
+		keys = append(keys, k)
+	}
+	keys = append(keys, "state_LABEL")
 	sort.Strings(keys)
 	return strings.Join(keys, ", ")
 }
 
 func setField(sp *Species, key, value string) error {
+	if isDunhamField(key) {
+		return setDunhamField(sp, key, value)
+	}
 	if _, ok := safetyFields[key]; ok {
 		return setSafetyField(&sp.Safety, key, value)
 	}

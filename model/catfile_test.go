@@ -280,7 +280,9 @@ func TestEveryStateIsPhysical(t *testing.T) {
 	for _, rot := range []RotationTreatment{RotationAuto, RotationSummed, RotationClassical} {
 		for _, vib := range []VibrationTreatment{VibrationHarmonic, VibrationFrozen} {
 			for _, el := range []ElectronicTreatment{ElectronicLevels, ElectronicGroundOnly} {
-				treatments = append(treatments, Treatment{rot, vib, el})
+				for _, lev := range []LevelTreatment{LevelsDefault, LevelsSummed, LevelsRigidHarmonic} {
+					treatments = append(treatments, Treatment{Rotation: rot, Vibration: vib, Electronic: el, Levels: lev})
+				}
 			}
 		}
 	}

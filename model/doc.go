@@ -43,6 +43,54 @@
 //     energy is inside E0).
 //   - Electronic: a sum over the listed levels, ground level at zero.
 //
+// # Diatomics by their levels
+//
+// A diatomic molecule with Dunham constants (see DunhamConstants and the
+// catalogue fields term, we_cm … D0_cm, state_LABEL) can instead be summed
+// over its rovibronic levels, Treatment.Levels = LevelsSummed:
+//
+//	E(v,N) = Te + ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³ + B_v K − D_v K²
+//	B_v = Be − αe(v+½) + γe(v+½)²,  D_v = De + βe(v+½),  K = N(N+1) − Λ²
+//
+// for each electronic state, with a ²Π state's two spin components from
+// the Hill–Van Vleck formula (intermediate between Hund's cases a and b;
+// J ≥ ½ and J ≥ 3/2, each level Λ-doubled), a Σ state's spin multiplicity
+// as a weight (its few-cm⁻¹ splitting left out), and a Λ > 0 state's
+// levels from N = Λ, Λ-doubled. Nuclear-spin weights go to the levels
+// symmetric and antisymmetric under exchange of the nuclei, which for a
+// Σ state are the even or the odd N according to its g/u and ± labels.
+//
+// Cut-off: a level counts if it lies at or below the lowest dissociation
+// limit, D0 above the lowest level; the quasi-bound levels above it are
+// left out, as are the levels past the v at which G(v) stops rising and
+// past the N at which E(v,N) stops rising, where the series no longer
+// describes the molecule.
+//
+// The energy zero is the rotationless level (v = 0, N = 0) of a Σ ground
+// state, even where the nuclear spins forbid it (¹⁶O2), as in the
+// published tables; for other ground states it is the lowest level.
+//
+// The factors split as: rotation is the v = 0 ladder of the ground state;
+// vibration is what the ground state's other levels add (with the
+// vibration–rotation coupling); electronic is the ground state's
+// multiplicity and what the excited states add. VibrationFrozen keeps the
+// v = 0 ladder, ElectronicGroundOnly the ground state, and
+// RotationSummed or RotationClassical select the rigid rotor.
+//
+// Speed: the level list is built when the species is prepared; the sums
+// are tabulated once, on first use, at steps of 0.02 in ln T up to
+// MaxTempK, and read by quintic Hermite interpolation in ln T from ln q
+// and its first two derivatives at the nodes. ln q, U and Cv then come
+// from one polynomial, so the identities hold to rounding, and the table
+// agrees with the sum itself within 1e-10 in ln q and U and 1e-8 in Cv/R
+// (see TestLevelTableMatchesDirectSum).
+// Below the table's first node (where the 8th level is 40 kT up) the sum
+// is taken level by level.
+//
+// The rigid rotor with harmonic vibration stays the default
+// (LevelsDefault) until the worked examples that quote its figures are
+// refreshed; see summedByDefault.
+//
 // # Nuclear spin of homonuclear molecules
 //
 // Homonuclear linear molecules whose rotor levels are summed (H2, D2, O2,

@@ -99,7 +99,45 @@ func (sp *Species) Prepare() error {
 	if !dHf0Range.contains(sp.EnergyZeroJPerMol / 1000) {
 		return Errorf("model", "%s: ΔfH°(0 K) %g kJ/mol; want %s", sp.Formula, sp.EnergyZeroJPerMol/1000, dHf0Range)
 	}
-	return nil
+	return sp.prepareLevels()
+}
+
+// prepareLevels checks a diatomic's Dunham constants and builds its level
+// list; a species without them has none.
+func (sp *Species) prepareLevels() error {
+	sp.levels, sp.lnElecG0Levels = nil, 0
+	if sp.Dunham == nil {
+		if len(sp.States) > 0 {
+			return Errorf("model", "%s: electronic states with constants need the ground state's Dunham constants", sp.Formula)
+		}
+		return nil
+	}
+	counts, err := ParseFormula(sp.Formula)
+	if err != nil {
+		return err
+	}
+	atoms := 0
+	for _, n := range counts {
+		atoms += n
+	}
+	if atoms != 2 || sp.Rotor != Linear {
+		return Errorf("model", "%s: Dunham constants apply to diatomic molecules only", sp.Formula)
+	}
+	if !dissocRange.contains(sp.DissociationCm) {
+		return Errorf("model", "%s: dissociation energy D0 %g cm⁻¹; want %s", sp.Formula, sp.DissociationCm, dissocRange)
+	}
+	if err := sp.Dunham.check(sp.Formula, "ground state", true); err != nil {
+		return err
+	}
+	if len(sp.States) > maxElecStates {
+		return Errorf("model", "%s: %d electronic states; want at most %d", sp.Formula, len(sp.States), maxElecStates)
+	}
+	for _, st := range sp.States {
+		if err := st.check(sp.Formula, "state "+Quote(st.Name), false); err != nil {
+			return err
+		}
+	}
+	return sp.buildLevels()
 }
 
 // addVibTerm appends a mode to the packed list, or adds its degeneracy to

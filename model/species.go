@@ -111,6 +111,19 @@ type Species struct {
 	Vib  []VibMode
 	Elec []ElecLevel // ground level first, at 0 cm⁻¹
 
+	// Dunham holds the ground state's spectroscopic constants of a
+	// diatomic molecule, nil if it has none; with them, the default
+	// treatment sums its rovibrational levels (see levels.go) and Rot,
+	// Vib and Elec above serve the rigid-rotor / harmonic treatment.
+	Dunham *DunhamConstants
+	// States are excited electronic states with their own constants,
+	// summed with the ground state's levels; they replace Elec's excited
+	// levels in the level sum.
+	States []ElecState
+	// DissociationCm is D0, the dissociation energy from the lowest
+	// level, in cm⁻¹: the level sums stop there.
+	DissociationCm float64
+
 	// EnergyZeroJPerMol is ΔfH°(0 K): it puts all species on the scale of
 	// the elements in their reference states.
 	EnergyZeroJPerMol float64
@@ -143,7 +156,11 @@ type Species struct {
 	elecThetaK []float64
 	elecDeg    []float64
 	lnElecG0   float64 // ln of the ground level's degeneracy
-	massKg     float64
+	levels     *rovibLevels
+	// lnElecG0Levels is ln of the ground state's multiplicity in the
+	// level sum (0 for ²Π, whose spin components are levels of their own).
+	lnElecG0Levels float64
+	massKg         float64
 	// lnNQ0 is ln[(2π m k/h²)^{3/2}]: ln nQ = lnNQ0 + 1.5 ln T.
 	lnNQ0 float64
 	// lnRotClassical is ln(√π/σ / √(ΘAΘBΘC)) or ln(1/(σΘ)).

@@ -1,0 +1,412 @@
+package model
+
+import (
+	"math"
+	"sort"
+	"sync"
+)
+
+// DunhamConstants are the spectroscopic constants of one electronic state
+// of a diatomic molecule, in cm⁻¹. The state's levels are
+//
+//	G(v)   = ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³
+//	B_v    = Be − αe(v+½) + γe(v+½)²
+//	D_v    = De + βe(v+½)
+//	E(v,N) = Te + G(v) + B_v·K − D_v·K²,  K = N(N+1) − Λ²
+//
+// with K from the Hill–Van Vleck formula for a ²Π state instead (see
+// levelsOfState).
+type DunhamConstants struct {
+	TeCm                     float64 // electronic term value Te (0 for the ground state)
+	WeCm, WeXeCm, WeYeCm     float64 // ωe, ωexe, ωeye
+	BeCm, AlphaeCm, GammaeCm float64 // Be, αe, γe
+	DeCm, BetaeCm            float64 // centrifugal distortion De, βe
+	SpinOrbitCm              float64 // A, for a ²Π state; 0 otherwise
+	Term                     TermSymbol
+}
+
+// TermSymbol is what the level sum needs of a state's term symbol
+// ^{2S+1}Λ^{±}_{g/u}.
+type TermSymbol struct {
+	Multiplicity int  // 2S+1
+	Lambda       int  // 0 Σ, 1 Π, 2 Δ
+	Minus        bool // Σ⁻ (Σ states only)
+	Ungerade     bool // u (homonuclear molecules only)
+}
+
+// evenNSymmetric reports whether, in a homonuclear molecule, the levels of
+// even N of a Σ state are symmetric under exchange of the nuclei: so for
+// Σg⁺ and Σu⁻, not for Σg⁻ and Σu⁺.
+func (t TermSymbol) evenNSymmetric() bool { return t.Minus == t.Ungerade }
+
+// doubletPi reports a ²Π state, whose spin components are summed level by
+// level (Hill–Van Vleck) rather than counted as a multiplicity.
+func (t TermSymbol) doubletPi() bool { return t.Lambda == 1 && t.Multiplicity == 2 }
+
+// ElecState is an excited electronic state of a diatomic molecule with its
+// own constants; its levels are summed as the ground state's are.
+type ElecState struct {
+	Name string // e.g. "a1Δg"
+	DunhamConstants
+}
+
+// Quasi-bound levels and the reach of the level sums.
+//
+// Levels are summed up to the molecule's lowest dissociation limit, D0
+// above the lowest level: a level above it, held only behind the
+// centrifugal barrier, is quasi-bound and left out, as are the levels of
+// a vibrational ladder past the v at which G(v) stops rising and the
+// rotational levels past the N at which E(v,N) stops rising (the Dunham
+// series is no longer meaningful there).
+const (
+	maxRotN   = 2000  // a safety bound; no diatomic has bound N near it
+	maxLevels = 50000 // each costs an exp at every node of the table
+)
+
+// levelClass says which partial sums a level belongs to.
+const (
+	classRot0   = iota // ground state, v = 0: the rotational ladder
+	classGround        // ground state, v > 0
+	classExcited
+)
+
+// rovibLevels is the level list of a diatomic molecule, sorted by energy
+// from its lowest level, and the cached table of its sums over T.
+type rovibLevels struct {
+	thetaK []float64 // energy above the lowest level, in K
+	weight []float64 // statistical weight over the ground state's multiplicity
+	class  []uint8
+	lnNorm float64 // ln(σ), or ln of the total spin weight
+	// zeroShiftK is the lowest level's height above the energy zero; the
+	// levels are listed from the lowest, so that no sum underflows.
+	zeroShiftK float64
+
+	// Below tableMinK the sums are taken level by level (few levels
+	// count); above it they are read from the table, built once.
+	tableMinK float64
+	once      sync.Once
+	table     levelTable
+}
+
+// addState appends the levels of one electronic state. limitCm is the
+// dissociation limit above the state's own reference (the ground state's
+// lowest level), or +Inf while the ground state itself is being built.
+func (lv *rovibLevels) addLevels(st DunhamConstants, class0 uint8, gRel float64, sEven, sOdd, wS, wA float64, offsetCm, limitCm float64) {
+	gv := func(v float64) float64 {
+		h := v + 0.5
+		return st.TeCm + h*(st.WeCm-h*(st.WeXeCm-h*st.WeYeCm))
+	}
+	lambda := float64(st.Term.Lambda)
+	doubletPi := st.Term.doubletPi()
+	prevG := math.Inf(-1)
+	for v := 0; len(lv.thetaK) <= maxLevels; v++ {
+		g := gv(float64(v))
+		if g <= prevG || g-offsetCm > limitCm {
+			break
+		}
+		prevG = g
+		h := float64(v) + 0.5
+		bv := st.BeCm - h*(st.AlphaeCm-h*st.GammaeCm)
+		dv := st.DeCm + h*st.BetaeCm
+		if bv <= 0 {
+			break
+		}
+		class := class0
+		if class0 == classRot0 && v > 0 {
+			class = classGround
+		}
+		add := func(eCm, w float64) {
+			if w == 0 {
+				return // forbidden by the nuclear spins
+			}
+			lv.thetaK = append(lv.thetaK, WavenumberToKelvin(eCm-offsetCm))
+			lv.weight = append(lv.weight, gRel*w)
+			lv.class = append(lv.class, class)
+		}
+		switch {
+		case doubletPi:
+			// Hill–Van Vleck: F1,2 = B[(J+½)² − Λ² ∓ ½X], X = √(4(J+½)²
+			// + Y(Y−4)Λ²), Y = A/B_v; J ≥ ½ for F2, J ≥ 3/2 for F1. Each
+			// J is Λ-doubled; the stretching term is −D_v[(J+½)² − Λ²]².
+			y := st.SpinOrbitCm / bv
+			for comp := 0; comp < 2; comp++ {
+				sign := -1.0
+				j0 := 1.5
+				if comp == 1 {
+					sign, j0 = 1, 0.5
+				}
+				prev := math.Inf(-1)
+				for j := j0; j < maxRotN; j++ {
+					k := (j+0.5)*(j+0.5) - lambda*lambda
+					x := math.Sqrt(4*(j+0.5)*(j+0.5) + y*(y-4)*lambda*lambda)
+					e := g + bv*(k+sign*0.5*x) - dv*k*k
+					if e <= prev || e-offsetCm > limitCm {
+						break
+					}
+					prev = e
+					add(e, (wS+wA)*(2*j+1))
+				}
+			}
+		default:
+			// N ≥ Λ; a Σ state's multiplicity is a weight (its spin
+			// splitting, a few cm⁻¹, is left out).
+			mult := float64(st.Term.Multiplicity)
+			prev := math.Inf(-1)
+			for n := st.Term.Lambda; n < maxRotN; n++ {
+				fn := float64(n)
+				k := fn*(fn+1) - lambda*lambda
+				e := g + bv*k - dv*k*k
+				if e <= prev || e-offsetCm > limitCm {
+					break
+				}
+				prev = e
+				w := wS + wA // a Λ-doubled level: one component of each symmetry
+				if st.Term.Lambda == 0 {
+					w = sOdd
+					if n%2 == 0 {
+						w = sEven
+					}
+				}
+				add(e, w*mult*(2*fn+1))
+			}
+		}
+	}
+}
+
+// buildLevels makes the level list of a diatomic species with Dunham
+// constants. It returns an error when the constants give no bound level.
+func (sp *Species) buildLevels() error {
+	gs := *sp.Dunham
+	// Spin weights of the levels symmetric (wS) and antisymmetric (wA)
+	// under exchange of the nuclei; the species' spin field gives them for
+	// even and odd N of the ground state.
+	wS, wA := 1.0, 1.0
+	norm := float64(sp.Symmetry)
+	homo := sp.Homonuclear()
+	if homo {
+		norm = sp.SpinWeights[0] + sp.SpinWeights[1]
+		if gs.Term.evenNSymmetric() {
+			wS, wA = sp.SpinWeights[0], sp.SpinWeights[1]
+		} else {
+			wS, wA = sp.SpinWeights[1], sp.SpinWeights[0]
+		}
+	}
+	parity := func(t TermSymbol) (even, odd float64) {
+		if !homo {
+			return 1, 1
+		}
+		if t.evenNSymmetric() {
+			return wS, wA
+		}
+		return wA, wS
+	}
+	// For a ²Π ground state the levels hold the spin components
+	// themselves; the weight is per level, the multiplicity inside.
+	g0 := float64(gs.Term.Multiplicity)
+	if gs.Term.doubletPi() {
+		g0 = 1
+	}
+	lv := &rovibLevels{lnNorm: math.Log(norm)}
+	ev, od := parity(gs.Term)
+	// First pass: the lowest levels of the ground state, to find the
+	// lowest of all.
+	g00 := gs.TeCm + 0.5*gs.WeCm - 0.25*gs.WeXeCm + 0.125*gs.WeYeCm
+	lv.addLevels(gs, classRot0, 1/g0, ev, od, wS, wA, 0, g00+math.Abs(gs.SpinOrbitCm)+10*gs.BeCm)
+	if len(lv.thetaK) == 0 {
+		return Errorf("model", "%s: the Dunham constants give no bound level", sp.Formula)
+	}
+	lowK := lv.thetaK[0]
+	for _, e := range lv.thetaK {
+		lowK = min(lowK, e)
+	}
+	lowCm := lowK / WavenumberToKelvin(1)
+	// The energy zero is the rotationless level v = 0, N = 0 of a Σ ground
+	// state even where the nuclear spins forbid it (¹⁶O2), as in the
+	// published tables; it is the lowest level itself for the others.
+	if gs.Term.Lambda == 0 {
+		lv.zeroShiftK = lowK - WavenumberToKelvin(g00)
+	}
+	// Second pass, from the lowest level and up to the dissociation limit.
+	lv.thetaK, lv.weight, lv.class = lv.thetaK[:0], lv.weight[:0], lv.class[:0]
+	lv.addLevels(gs, classRot0, 1/g0, ev, od, wS, wA, lowCm, sp.DissociationCm)
+	for _, st := range sp.States {
+		ev, od := parity(st.Term)
+		lv.addLevels(st.DunhamConstants, classExcited, 1/g0, ev, od, wS, wA, lowCm, sp.DissociationCm)
+	}
+	if len(lv.thetaK) > maxLevels {
+		return Errorf("model", "%s: the constants give %d levels below the dissociation limit; want at most %d", sp.Formula, len(lv.thetaK), maxLevels)
+	}
+	sort.Sort(byEnergy{lv})
+	lv.thetaK[0] = 0 // exactly, for the lowest level (rounding of lowCm)
+	sp.lnElecG0Levels = math.Log(g0)
+	// The table starts where the 8th level lies 40 kT up: below it the
+	// direct sum touches at most 8 levels.
+	i := min(7, len(lv.thetaK)-1)
+	lv.tableMinK = max(lv.thetaK[i]/40, MinTempK)
+	sp.levels = lv
+	return nil
+}
+
+type byEnergy struct{ lv *rovibLevels }
+
+func (b byEnergy) Len() int           { return len(b.lv.thetaK) }
+func (b byEnergy) Less(i, j int) bool { return b.lv.thetaK[i] < b.lv.thetaK[j] }
+func (b byEnergy) Swap(i, j int) {
+	l := b.lv
+	l.thetaK[i], l.thetaK[j] = l.thetaK[j], l.thetaK[i]
+	l.weight[i], l.weight[j] = l.weight[j], l.weight[i]
+	l.class[i], l.class[j] = l.class[j], l.class[i]
+}
+
+// levelMoments are Σw e^{−x}, Σw x e^{−x}, Σw x² e^{−x} of one partial sum,
+// x = E/kT.
+type levelMoments struct{ z, m1, m2 float64 }
+
+func (m *levelMoments) add(w, x, ex float64) {
+	t := w * ex
+	m.z += t
+	m.m1 += t * x
+	m.m2 += t * x * x
+}
+
+// terms returns ln z, U and Cv of the sum.
+func (m levelMoments) terms() Terms {
+	u := m.m1 / m.z
+	return Terms{LnQ: math.Log(m.z), U: u, Cv: m.m2/m.z - u*u}
+}
+
+// sums returns the three nested partial sums at tempK: the ground state's
+// v = 0 ladder, the whole ground state, and every state.
+func (lv *rovibLevels) sums(tempK float64) (rot0, ground, all levelMoments) {
+	invT := 1 / tempK
+	for i, th := range lv.thetaK {
+		x := th * invT
+		if x > 40 {
+			break // e^{−40} ≈ 4e-18 of the lowest level: sorted, so none after counts
+		}
+		ex := math.Exp(-x)
+		w := lv.weight[i]
+		switch lv.class[i] {
+		case classRot0:
+			rot0.add(w, x, ex)
+			fallthrough
+		case classGround:
+			ground.add(w, x, ex)
+			fallthrough
+		default:
+			all.add(w, x, ex)
+		}
+	}
+	return
+}
+
+// direct returns the rotational, vibrational and electronic terms by the
+// level sum itself: rotation is the v = 0 ladder of the ground state (its
+// nuclear-spin and symmetry division included), vibration what the other
+// levels of the ground state add to it (vibration–rotation coupling
+// included), and electronic what the other states add (the ground state's
+// multiplicity included by the caller).
+func (lv *rovibLevels) direct(tempK float64) (rot, vib, el Terms) {
+	a, b, c := lv.sums(tempK)
+	ta, tb, tc := a.terms(), b.terms(), c.terms()
+	rot = ta
+	x0 := lv.zeroShiftK / tempK
+	rot.LnQ -= lv.lnNorm + x0
+	rot.U += x0
+	vib = Terms{tb.LnQ - ta.LnQ, tb.U - ta.U, tb.Cv - ta.Cv}
+	el = Terms{tc.LnQ - tb.LnQ, tc.U - tb.U, tc.Cv - tb.Cv}
+	return
+}
+
+// levelTable is the level sums tabulated against x = ln T, interpolated by
+// quintic Hermite polynomials in x from ln q and its first two
+// derivatives (dlnq/dx = U, d²lnq/dx² = Cv − U) at the nodes. ln q, U and
+// Cv at any T then come from one polynomial, so Cv = ∂U/∂T and S = −∂A/∂T
+// hold to rounding, and the interpolation error is of order h⁶ in ln q
+// and h⁴ in Cv (below 1e-8 in Cv/R for the step used, see the tests).
+type levelTable struct {
+	x0, invH float64
+	n        int           // intervals
+	coef     [][18]float64 // per interval: 6 coefficients × rot, vib, el
+}
+
+// tableStepLnT is the table's step in ln T.
+const tableStepLnT = 0.02
+
+func (lv *rovibLevels) build() {
+	x0 := math.Log(lv.tableMinK)
+	x1 := math.Log(MaxTempK) + tableStepLnT
+	n := int(math.Ceil((x1 - x0) / tableStepLnT))
+	h := tableStepLnT
+	type node [3][3]float64 // [factor][f, f', f'']
+	nodes := make([]node, n+1)
+	for i := range nodes {
+		rot, vib, el := lv.direct(math.Exp(x0 + float64(i)*h))
+		for k, t := range [3]Terms{rot, vib, el} {
+			nodes[i][k] = [3]float64{t.LnQ, t.U, t.Cv - t.U}
+		}
+	}
+	lv.table = levelTable{x0: x0, invH: 1 / h, n: n, coef: make([][18]float64, n)}
+	for i := 0; i < n; i++ {
+		for k := 0; k < 3; k++ {
+			f0, d0, s0 := nodes[i][k][0], h*nodes[i][k][1], h*h*nodes[i][k][2]
+			f1, d1, s1 := nodes[i+1][k][0], h*nodes[i+1][k][1], h*h*nodes[i+1][k][2]
+			c := lv.table.coef[i][6*k : 6*k+6]
+			c[0] = f0
+			c[1] = d0
+			c[2] = s0 / 2
+			c[3] = -10*f0 - 6*d0 - 1.5*s0 + 0.5*s1 - 4*d1 + 10*f1
+			c[4] = 15*f0 + 8*d0 + 1.5*s0 - s1 + 7*d1 - 15*f1
+			c[5] = -6*f0 - 3*d0 - 0.5*s0 + 0.5*s1 - 3*d1 + 6*f1
+		}
+	}
+}
+
+// at returns the three factors' terms at ln T = lnT (≥ ln tableMinK).
+func (t *levelTable) at(lnT float64) (rot, vib, el Terms) {
+	u := (lnT - t.x0) * t.invH
+	i := int(u)
+	if i >= t.n {
+		i = t.n - 1
+	}
+	s := u - float64(i)
+	c := &t.coef[i]
+	return hermite(c[0:6], s, t.invH), hermite(c[6:12], s, t.invH), hermite(c[12:18], s, t.invH)
+}
+
+// hermite evaluates one quintic at s ∈ [0, 1] and returns ln q, U and Cv;
+// invH converts derivatives in s to derivatives in ln T.
+func hermite(c []float64, s, invH float64) Terms {
+	_ = c[5]
+	f := c[0] + s*(c[1]+s*(c[2]+s*(c[3]+s*(c[4]+s*c[5]))))
+	d := c[1] + s*(2*c[2]+s*(3*c[3]+s*(4*c[4]+s*5*c[5])))
+	dd := 2*c[2] + s*(6*c[3]+s*(12*c[4]+s*20*c[5]))
+	u := d * invH
+	return Terms{LnQ: f, U: u, Cv: u + dd*invH*invH}
+}
+
+// rovib returns the rotational, vibrational and electronic terms of a
+// species with a level list.
+func (sp *Species) rovib(tempK, lnT float64) (rot, vib, el Terms) {
+	lv := sp.levels
+	if tempK < lv.tableMinK {
+		rot, vib, el = lv.direct(tempK)
+	} else {
+		lv.once.Do(lv.build)
+		rot, vib, el = lv.table.at(lnT)
+	}
+	el.LnQ += sp.lnElecG0Levels
+	return
+}
+
+// HasLevels reports whether the species' rotation and vibration (and
+// electronic states) can be summed level by level from Dunham constants.
+func (sp *Species) HasLevels() bool { return sp.levels != nil }
+
+// LevelCount returns the number of rovibronic levels summed, 0 if none.
+func (sp *Species) LevelCount() int {
+	if sp.levels == nil {
+		return 0
+	}
+	return len(sp.levels.thetaK)
+}
