@@ -169,6 +169,7 @@ var (
 var titles = map[string]string{
 	"flow": "Flow", "compress": "Compression", "expand": "Expansion", "heat": "Heating and cooling",
 	"mix": "Mixing", "dilute": "Dilution", "purge": "Purging", "release": "Release into a room",
+	"cylinder": "Cylinder contents",
 }
 
 // Title is the heading of a result of the kind.

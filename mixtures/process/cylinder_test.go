@@ -1,0 +1,121 @@
+package process
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"zmix/model"
+)
+
+// Contents from the pressure and back: the amount found at P gives P
+// again, and the mass and ideal-gas figures follow from it.
+func TestCylinderRoundTrip(t *testing.T) {
+	mix := mixOf(t, "H2 100%")
+	c := Cylinder{Mixture: mix, VolumeM3: 0.05, TempK: 288.15, PresPa: 200e5}
+	r, err := c.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	// H2 at 15 °C and 200 bar: Z ≈ 1.12 (NIST WebBook, from memory).
+	if math.Abs(r.Z/1.12-1) > 0.03 {
+		t.Errorf("Z(H2, 288 K, 200 bar) = %.4f, want 1.12 ± 3 %%", r.Z)
+	}
+	if want := 200e5 * 0.05 / (model.GasConstant * 288.15); math.Abs(r.IdealAmountMol/want-1) > 1e-12 || math.Abs(r.AmountMol*r.Z/want-1) > 1e-12 {
+		t.Errorf("amount %g mol, ideal %g, Z %g: PV = nZRT broken", r.AmountMol, r.IdealAmountMol, r.Z)
+	}
+	for _, back := range []Cylinder{
+		{Mixture: mix, VolumeM3: 0.05, TempK: 288.15, AmountMol: r.AmountMol},
+		{Mixture: mix, VolumeM3: 0.05, TempK: 288.15, MassKg: r.MassKg},
+	} {
+		b, err := back.Solve()
+		if err != nil {
+			t.Fatal(err)
+		}
+		if math.Abs(b.PresPa/200e5-1) > 1e-9 {
+			t.Errorf("pressure from %+v = %g Pa, want 200 bar", back, b.PresPa)
+		}
+	}
+}
+
+// Warming a nearly ideal gas at fixed amount raises P in proportion to T.
+func TestCylinderWarming(t *testing.T) {
+	r, err := Cylinder{Mixture: mixOf(t, "He 100%"), VolumeM3: 0.05, TempK: 288.15, PresPa: 1e5, ToTempK: 323.15}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want := 1e5 * 323.15 / 288.15; math.Abs(r.ToPresPa/want-1) > 1e-3 {
+		t.Errorf("He warmed to 50 °C: %g Pa, want about %g", r.ToPresPa, want)
+	}
+}
+
+// The partial-pressure recipe adds up: the last step reaches the fill
+// pressure, the amounts sum to the contents, the minor gas goes first.
+func TestCylinderRecipe(t *testing.T) {
+	r, err := Cylinder{Mixture: mixOf(t, "CH4 2.5%, CO2 5%, N2 bal"), VolumeM3: 0.01, TempK: 293.15, PresPa: 150e5, Recipe: "pressure"}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(r.Steps) != 3 || r.Steps[0].Species != "CH4" || r.Steps[2].Species != "N2" {
+		t.Fatalf("steps %+v", r.Steps)
+	}
+	sum := 0.0
+	for i, s := range r.Steps {
+		sum += s.AddedMol
+		if i > 0 && s.PresPa <= r.Steps[i-1].PresPa {
+			t.Errorf("step %d: pressure falls", i)
+		}
+		if math.Abs(s.GaugePa-(s.PresPa-101325)) > 1e-6 {
+			t.Errorf("step %d: gauge %g", i, s.GaugePa)
+		}
+	}
+	if math.Abs(sum/r.AmountMol-1) > 1e-12 || math.Abs(r.Steps[2].PresPa/150e5-1) > 1e-9 {
+		t.Errorf("amounts sum to %g of %g; last step at %g Pa", sum, r.AmountMol, r.Steps[2].PresPa)
+	}
+	w, err := Cylinder{Mixture: mixOf(t, "CH4 2.5%, CO2 5%, N2 bal"), VolumeM3: 0.01, TempK: 293.15, PresPa: 150e5, Recipe: "weight"}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if last := w.Steps[len(w.Steps)-1]; math.Abs(last.CumulativeKg/w.MassKg-1) > 1e-12 {
+		t.Errorf("weights sum to %g kg, contents %g kg", last.CumulativeKg, w.MassKg)
+	}
+}
+
+// Refusals: CO2 at 20 °C and 60 bar is above its vapour pressure (57 bar,
+// NIST WebBook, from memory); a fill above the rating given.
+func TestCylinderRefusals(t *testing.T) {
+	for _, tt := range []struct {
+		name string
+		c    Cylinder
+		msg  string
+	}{
+		{"condenses", Cylinder{Mixture: mixOf(t, "CO2 100%"), VolumeM3: 0.05, TempK: 293.15, PresPa: 60e5}, "condense"},
+		{"over the rating", Cylinder{Mixture: mixOf(t, "N2 100%"), VolumeM3: 0.05, TempK: 293.15, PresPa: 300e5, RatedPresPa: 200e5}, "exceeds the rating"},
+		{"two of pressure, mass, amount", Cylinder{Mixture: mixOf(t, "N2 100%"), VolumeM3: 0.05, TempK: 293.15, PresPa: 1e5, MassKg: 1}, "exactly one"},
+		{"no volume", Cylinder{Mixture: mixOf(t, "N2 100%"), TempK: 293.15, PresPa: 1e5}, "water volume"},
+	} {
+		_, err := tt.c.Solve()
+		if err == nil || !strings.Contains(err.Error(), tt.msg) {
+			t.Errorf("%s: error %v, want %q", tt.name, err, tt.msg)
+		}
+	}
+}
+
+func TestParseCylinderQuantity(t *testing.T) {
+	for _, tt := range []struct {
+		kind, text string
+		want       float64
+	}{
+		{"volume", "50L", 0.05}, {"volume", "0.05 m3", 0.05}, {"mass", "500 g", 0.5}, {"amount", "2kmol", 2000},
+	} {
+		got, err := ParseCylinderQuantity(tt.kind, tt.text)
+		if err != nil || math.Abs(got/tt.want-1) > 1e-12 {
+			t.Errorf("%s %q = %g, %v; want %g", tt.kind, tt.text, got, err, tt.want)
+		}
+	}
+	for _, bad := range []string{"", "50", "50 kg", "-3 L", "x L"} {
+		if _, err := ParseCylinderQuantity("volume", bad); err == nil {
+			t.Errorf("volume %q accepted", bad)
+		}
+	}
+}
