@@ -1,5 +1,7 @@
 package mixtures
 
+import "slices"
+
 // One table describes every figure of a mixture state: its names, unit,
 // digits and getter. The commands' text, JSON and CSV, the workbench's
 // Properties and Sweep panes, the exports and the finite check all read
@@ -185,22 +187,20 @@ var SpeciesQuantities = []SpeciesQuantity{
 // QuantityByKey returns the blend quantity with the key, and false for
 // an unknown key.
 func QuantityByKey(key string) (*Quantity, bool) {
-	for i := range Quantities {
-		if Quantities[i].Key == key {
-			return &Quantities[i], true
-		}
+	i := slices.IndexFunc(Quantities, func(q Quantity) bool { return q.Key == key })
+	if i < 0 {
+		return nil, false
 	}
-	return nil, false
+	return &Quantities[i], true
 }
 
 // SpeciesQuantityByKey returns the species quantity with the key.
 func SpeciesQuantityByKey(key string) (*SpeciesQuantity, bool) {
-	for i := range SpeciesQuantities {
-		if SpeciesQuantities[i].Key == key {
-			return &SpeciesQuantities[i], true
-		}
+	i := slices.IndexFunc(SpeciesQuantities, func(q SpeciesQuantity) bool { return q.Key == key })
+	if i < 0 {
+		return nil, false
 	}
-	return nil, false
+	return &SpeciesQuantities[i], true
 }
 
 // FirstNonFinite returns the name of the first figure of s that is NaN or

@@ -182,23 +182,11 @@ func ParseRate(s string) (Rate, error) {
 	return Rate{Value: x, Unit: u, Text: text}, nil
 }
 
-// splitValue splits "120 Nm3/h" into 120 and "Nm3/h".
+// splitValue splits "120 Nm3/h" into 120 and "Nm3/h", with the engine's
+// one reader of a number and its unit.
 func splitValue(s string) (float64, string, bool) {
-	end := 0
-	for end < len(s) {
-		c := s[end]
-		if (c >= '0' && c <= '9') || c == '.' || c == '-' || c == '+' ||
-			((c == 'e' || c == 'E') && end > 0 && end+1 < len(s) && (s[end+1] == '-' || s[end+1] == '+' || (s[end+1] >= '0' && s[end+1] <= '9'))) {
-			end++
-			continue
-		}
-		break
-	}
-	x, err := strconv.ParseFloat(s[:end], 64)
-	if end == 0 || err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
-		return 0, "", false
-	}
-	return x, strings.TrimSpace(s[end:]), true
+	x, unit, err := mixtures.SplitNumber(s)
+	return x, unit, err == nil
 }
 
 // Conditions say where a flow is measured: the line's T and P, when known

@@ -129,17 +129,8 @@ func WriteSweepText(w io.Writer, r *SweepReport, src *SweepSource) error {
 	}
 	out.Write(row(nil, func(k int) string { return cols[k].name }))
 	out.Write(row(nil, func(k int) string { return cols[k].unit }))
-	err = inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]byte, error) {
-		b := getChunkBuf()
-		err := src.span(ctx, from, to, s, func(i int, s *mixtures.State) error {
-			b = row(b, func(k int) string { return cols[k].cell(s) })
-			return nil
-		})
-		return b, err
-	}, func(b []byte) error {
-		_, err := out.Write(b)
-		putChunkBuf(b)
-		return err
+	err = writeRows(ctx, out, src, func(b []byte, _ int, s *mixtures.State) []byte {
+		return row(b, func(k int) string { return cols[k].cell(s) })
 	})
 	if err != nil {
 		return err
@@ -192,34 +183,42 @@ func writeSweepHeader(w io.Writer, r *SweepReport) {
 	fmt.Fprintf(w, "       P° = %s; μ = μ°(T) + RT ln(xP/P°), on the scale of the elements at 0 K\n\n", StdPressure(r.StdPresPa))
 }
 
-// WriteSweepCSV streams the sweep as CSV: one header row, then a row per
-// point, with the same columns as a state's CSV. Rows are formatted on
-// every core and written in grid order as they are done.
-func WriteSweepCSV(w io.Writer, gauge bool, src *SweepSource) error {
-	ctx := context.Background()
-	bw := bufio.NewWriterSize(w, 64<<10)
-	err := inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]byte, error) {
+// writeRows computes the sweep in chunks on every core, appends each
+// point's row with appendRow, and writes the chunks to w in grid order.
+// A non-finite figure stops the sweep with an error naming the point.
+func writeRows(ctx context.Context, w io.Writer, src *SweepSource, appendRow func(b []byte, i int, s *mixtures.State) []byte) error {
+	return inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]byte, error) {
 		b := getChunkBuf()
 		err := src.span(ctx, from, to, s, func(i int, s *mixtures.State) error {
 			if err := CheckFinite(s); err != nil {
 				return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
 			}
-			if i == 0 {
-				// The header may need quoting (a user's species name).
-				var hb bytes.Buffer
-				cw := csv.NewWriter(&hb)
-				cw.Write(CSVHeader(nil, s))
-				cw.Flush()
-				b = append(b, hb.Bytes()...)
-			}
-			b = appendCSVRow(b, s, gauge)
+			b = appendRow(b, i, s)
 			return nil
 		})
 		return b, err
 	}, func(b []byte) error {
-		_, err := bw.Write(b)
+		_, err := w.Write(b)
 		putChunkBuf(b)
 		return err
+	})
+}
+
+// WriteSweepCSV streams the sweep as CSV: one header row, then a row per
+// point, with the same columns as a state's CSV. Rows are formatted on
+// every core and written in grid order as they are done.
+func WriteSweepCSV(w io.Writer, gauge bool, src *SweepSource) error {
+	bw := bufio.NewWriterSize(w, 64<<10)
+	err := writeRows(context.Background(), bw, src, func(b []byte, i int, s *mixtures.State) []byte {
+		if i == 0 {
+			// The header may need quoting (a user's species name).
+			var hb bytes.Buffer
+			cw := csv.NewWriter(&hb)
+			cw.Write(CSVHeader(nil, s))
+			cw.Flush()
+			b = append(b, hb.Bytes()...)
+		}
+		return appendCSVRow(b, s, gauge)
 	})
 	if err != nil {
 		return err
@@ -230,28 +229,17 @@ func WriteSweepCSV(w io.Writer, gauge bool, src *SweepSource) error {
 // WriteSweepJSON streams the sweep as a JSON list of state objects, one
 // per point, formatted on every core and written in grid order.
 func WriteSweepJSON(w io.Writer, gauge bool, src *SweepSource) error {
-	ctx := context.Background()
 	bw := bufio.NewWriterSize(w, 64<<10)
 	bw.WriteString("[")
-	err := inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]byte, error) {
-		j := jsonWriter{buf: getChunkBuf()}
-		err := src.span(ctx, from, to, s, func(i int, s *mixtures.State) error {
-			if err := CheckFinite(s); err != nil {
-				return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
-			}
-			if i > 0 {
-				j.buf = append(j.buf, ',')
-			}
-			j.buf = append(j.buf, "\n  {\n"...)
-			j.stateFields(s, gauge, "    ")
-			j.buf = append(j.buf, "\n  }"...)
-			return nil
-		})
-		return j.buf, err
-	}, func(b []byte) error {
-		_, err := bw.Write(b)
-		putChunkBuf(b)
-		return err
+	err := writeRows(context.Background(), bw, src, func(b []byte, i int, s *mixtures.State) []byte {
+		j := jsonWriter{buf: b}
+		if i > 0 {
+			j.buf = append(j.buf, ',')
+		}
+		j.buf = append(j.buf, "\n  {\n"...)
+		j.stateFields(s, gauge, "    ")
+		j.buf = append(j.buf, "\n  }"...)
+		return j.buf
 	})
 	if err != nil {
 		return err
