@@ -4,9 +4,15 @@ import "strconv"
 
 // ParseFormula splits a molecular formula such as "SiH4" or "C2H6" into
 // element counts. Elements are an upper-case letter and an optional
-// lower-case one, each followed by an optional count.
+// lower-case one, each followed by an optional count. An isomer prefix
+// (n-C4H10, i-C4H10, c-C4F8; see isomer.go) is set aside.
 func ParseFormula(formula string) (map[string]int, error) {
+	whole := formula
+	_, formula = splitIsomer(formula)
 	if formula == "" {
+		if whole != "" {
+			return nil, Errorf("model", "formula %s: nothing after the isomer prefix", Quote(whole))
+		}
 		return nil, Errorf("model", "empty formula")
 	}
 	counts := make(map[string]int)
