@@ -39,6 +39,7 @@ func Builtin() *Catalogue {
 }
 
 func newCatalogue(list []*Species) *Catalogue {
+	list, variants := withSpinVariants(list)
 	c := &Catalogue{byFormula: make(map[string]*Species, len(list))}
 	for _, sp := range list {
 		if _, dup := c.byFormula[sp.Formula]; !dup {
@@ -51,6 +52,13 @@ func newCatalogue(list []*Species) *Catalogue {
 			}
 		}
 		c.byFormula[sp.Formula] = sp
+	}
+	// The spin modifications are names, not entries of the list: they
+	// share everything but their rotor with the species they derive from.
+	for _, sp := range variants {
+		if _, taken := c.byFormula[sp.Formula]; !taken {
+			c.byFormula[sp.Formula] = sp
+		}
 	}
 	return c
 }

@@ -102,6 +102,16 @@
 // nuclear-spin entropy is left out, as in the published tables. At high T
 // this reduces to q = T/(2Θ).
 //
+// The catalogue also answers to the spin modifications by name: eH2
+// (equilibrium), nH2 (normal: 3:1 ortho:para, frozen) and pH2 (para);
+// eD2, nD2 (2:1, frozen) and oD2 (ortho). A frozen modification is the
+// ideal mixture of the even-J and odd-J gases at fixed fractions x_i,
+// ln q_rot = Σ x_i ln(g_i q_i/(g_tot x_i)); see spinmod.go. They are
+// names for Lookup, not entries of All. "H2" and "D2" stay the
+// equilibrium gases until normalByDefault is set (with the README's
+// examples refreshed); then they name the normal gases, as a cylinder
+// holds them.
+//
 // # Conventions
 //
 // The energy zero E0 of each species is its enthalpy of formation at 0 K,

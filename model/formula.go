@@ -5,7 +5,8 @@ import "strconv"
 // ParseFormula splits a molecular formula such as "SiH4" or "C2H6" into
 // element counts. Elements are an upper-case letter and an optional
 // lower-case one, each followed by an optional count. An isomer prefix
-// (n-C4H10, i-C4H10, c-C4F8; see isomer.go) is set aside.
+// (n-C4H10, i-C4H10, c-C4F8; see isomer.go) is set aside, and so is a
+// spin modification's (eH2, nH2, pH2, eD2, nD2, oD2; see spinmod.go).
 func ParseFormula(formula string) (map[string]int, error) {
 	whole := formula
 	_, formula = splitIsomer(formula)
@@ -15,6 +16,7 @@ func ParseFormula(formula string) (map[string]int, error) {
 		}
 		return nil, Errorf("model", "empty formula")
 	}
+	_, formula = splitSpinPrefix(formula)
 	counts := make(map[string]int)
 	i := 0
 	for i < len(formula) {

@@ -370,6 +370,9 @@ func TestRotorRecurrenceMatchesDirectSum(t *testing.T) {
 // the spin weights of a homonuclear molecule or 1/σ, and takes the moments
 // of the energy for U and Cv. Levels up to 200 kT are summed.
 func directRotorSum(sp *Species, tempK float64) Terms {
+	if sp.SpinMod.Frozen {
+		return directFrozenRotorSum(sp, tempK)
+	}
 	theta := sp.RotThetaK()[0]
 	weight := func(j int) float64 { return 1 / float64(sp.Symmetry) }
 	if sp.Homonuclear() {
@@ -397,6 +400,42 @@ func directRotorSum(sp *Species, tempK float64) Terms {
 	}
 	mean := m1 / z
 	return Terms{LnQ: math.Log(z) - shift, U: mean, Cv: m2/z - mean*mean}
+}
+
+// directFrozenRotorSum is the rotor of a frozen mixture of spin
+// modifications, the ideal mixture of the even-J and odd-J gases with
+// mole fractions x_i and spin weights g_i, written out level by level:
+// ln q = Σ x_i ln(g_i q_i/(g_tot x_i)), U = Σ x_i U_i, Cv = Σ x_i Cv_i.
+func directFrozenRotorSum(sp *Species, tempK float64) Terms {
+	theta := sp.RotThetaK()[0]
+	gTot := sp.SpinWeights[0] + sp.SpinWeights[1]
+	var out Terms
+	for parity := 0; parity < 2; parity++ {
+		x := sp.SpinMod.EvenFraction
+		if parity == 1 {
+			x = 1 - x
+		}
+		if x == 0 {
+			continue
+		}
+		shift := float64(parity*(parity+1)) * theta / tempK
+		var z, m1, m2 float64
+		for j := parity; ; j += 2 {
+			e := float64(j*(j+1)) * theta / tempK
+			if e-shift > 200 {
+				break
+			}
+			tm := float64(2*j+1) * math.Exp(-(e - shift))
+			z += tm
+			m1 += tm * e
+			m2 += tm * e * e
+		}
+		mean := m1 / z
+		out.LnQ += x * (math.Log(z) - shift + math.Log(sp.SpinWeights[parity]/(gTot*x)))
+		out.U += x * mean
+		out.Cv += x * (m2/z - mean*mean)
+	}
+	return out
 }
 
 // TestRotorSeriesIsLnF checks the Taylor coefficients of linearRotorSeries

@@ -167,9 +167,11 @@ func levelTolerance(formula string, tempK float64) (cpRel, sAbs float64) {
 		// (from memory) or the spin splitting left out.
 		return 0.005, 0.1
 	case formula == "O2":
-		// The Herzberg states (c1Σu−, A'3Δu, A3Σu+, 33 000–36 000 cm⁻¹)
-		// are not summed yet; the table's Cp° rises on them above
-		// 4500 K, to 4.3 % above the model at 6000 K.
+		// Above 4500 K the table's Cp° rises faster than the model's,
+		// to 3.2 % above it at 6000 K, with the Herzberg states (c1Σu−,
+		// A'3Δu, A3Σu+) summed from constants recalled from memory. The
+		// rest is not yet explained: the quasi-bound levels this model
+		// leaves out, or states above them, are candidates.
 		return 0.05, 0.2
 	case tempK <= 3000:
 		return 0.003, 0.05

@@ -107,6 +107,9 @@ type Species struct {
 	// SpinWeights are the nuclear-spin statistical weights of even and odd
 	// J for a homonuclear linear molecule; zero for heteronuclear ones.
 	SpinWeights [2]float64
+	// SpinMod says whether the spin modifications are in equilibrium (the
+	// zero value) or frozen at a fixed ratio (see spinmod.go).
+	SpinMod SpinModification
 
 	Vib  []VibMode
 	Elec []ElecLevel // ground level first, at 0 cm⁻¹

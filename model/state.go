@@ -76,7 +76,7 @@ type Treatment struct {
 // summed levels.
 func (sp *Species) usesLevels(tr Treatment) bool {
 	summed := tr.Levels == LevelsSummed || tr.Levels == LevelsDefault && summedByDefault
-	return sp.levels != nil && summed && tr.Rotation == RotationAuto
+	return sp.levels != nil && summed && tr.Rotation == RotationAuto && !sp.SpinMod.Frozen
 }
 
 // State is one species at one (T, P): the terms of each factor and the

@@ -43,10 +43,12 @@ func (sp *Species) rigidBodyRotor(lnT float64) Terms {
 // linearRotor returns the terms of a linear rigid rotor; invT is 1/T.
 func (sp *Species) linearRotor(tempK, invT, lnT float64, how RotationTreatment) Terms {
 	theta := sp.rotThetaK[0]
-	switch how {
-	case RotationClassical:
+	switch {
+	case how == RotationClassical:
 		return Terms{LnQ: sp.lnRotClassical + lnT, U: 1, Cv: 1}
-	case RotationSummed:
+	case sp.SpinMod.Frozen:
+		return sp.frozenRotorSum(invT)
+	case how == RotationSummed:
 		return sp.linearRotorSum(invT)
 	}
 	if tempK < rotorSumLimit*theta {
