@@ -119,3 +119,25 @@ func TestParseCylinderQuantity(t *testing.T) {
 		}
 	}
 }
+
+// The throttle of an ideal gas is isothermal; N2 from 200 bar at 20 °C
+// cools by roughly 25–35 K to 1 bar (Perry's Joule–Thomson data for
+// nitrogen, from memory: about 0.15–0.2 K/bar over that range); H2 warms.
+func TestThrottle(t *testing.T) {
+	n2 := mixOf(t, "N2 100%")
+	r, err := Throttle{Mixture: n2, InletTempK: 293.15, InletPresPa: 200e5, OutletPresPa: 1e5, Model: Ideal{}}.Solve()
+	if err != nil || math.Abs(r.DeltaTK) > 1e-6 {
+		t.Errorf("ideal throttle: ΔT = %v, %v; want 0", r, err)
+	}
+	r, err = Throttle{Mixture: n2, InletTempK: 293.15, InletPresPa: 200e5, OutletPresPa: 1e5}.Solve()
+	if err != nil || r.DeltaTK > -20 || r.DeltaTK < -45 {
+		t.Errorf("N2 200 → 1 bar at 20 °C: %+v, %v; want cooling by 25–35 K", r, err)
+	}
+	r, err = Throttle{Mixture: mixOf(t, "H2 100%"), InletTempK: 293.15, InletPresPa: 200e5, OutletPresPa: 1e5}.Solve()
+	if err != nil || r.DeltaTK <= 0 {
+		t.Errorf("H2 throttled at 20 °C: %+v, %v; want warming", r, err)
+	}
+	if _, err := (Throttle{Mixture: n2, InletTempK: 293.15, InletPresPa: 1e5, OutletPresPa: 2e5}).Solve(); err == nil {
+		t.Error("a throttle that raises the pressure is accepted")
+	}
+}

@@ -169,7 +169,7 @@ var (
 var titles = map[string]string{
 	"flow": "Flow", "compress": "Compression", "expand": "Expansion", "heat": "Heating and cooling",
 	"mix": "Mixing", "dilute": "Dilution", "purge": "Purging", "release": "Release into a room",
-	"cylinder": "Cylinder contents",
+	"cylinder": "Cylinder contents", "throttle": "Throttle across a valve",
 }
 
 // Title is the heading of a result of the kind.
