@@ -75,6 +75,15 @@ var processKinds = []processKind{
 		{key: "room", label: "room", def: "30 m3", hint: "room volume: m3, L or ft3"},
 		{key: "ach", label: "air changes/h", def: "", hint: "ventilation; empty: none"},
 	}},
+	{key: "throttle", name: "throttle", fields: []processField{
+		{key: "to", label: "to pressure", def: "1 atm", hint: "outlet pressure of the valve, at most the setpoint's (real gas: enthalpy kept)"},
+	}},
+	{key: "cylinder", name: "cylinder", fields: []processField{
+		{key: "volume", label: "water volume", def: "50 L", hint: "L, m3 or ft3; the setpoint gives the fill T and P"},
+		{key: "to", label: "later T", def: "", hint: "the pressure after warming or cooling to it; empty: none"},
+		{key: "recipe", label: "recipe", def: "pressure", hint: "enter switches", choices: []string{"pressure", "weight", "none"}},
+		{key: "rated", label: "rated P", def: "", hint: "the cylinder's rating: a fill above it is refused; empty: none"},
+	}},
 }
 
 // processPathPoints is how finely a path is sampled for the plot.
@@ -531,6 +540,37 @@ func (p *processPane) calculate() (process.Result, string, error) {
 		}
 		res, err := pu.Solve()
 		return res, "the recipe purged with " + text2, err
+	case "throttle":
+		to, err := mixtures.ParsePressure(p.value("to"))
+		if err != nil {
+			return nil, "", fieldError("to pressure", err)
+		}
+		res, err := process.Throttle{Mixture: mix, InletTempK: t, InletPresPa: pres, OutletPresPa: to.Pa,
+			Model: process.RealGas{Options: in.Opts}}.Solve()
+		return res, recipe + " through a valve", err
+	case "cylinder":
+		c := process.Cylinder{Mixture: mix, TempK: t, PresPa: pres}
+		var err error
+		if c.VolumeM3, err = process.ParseCylinderQuantity("volume", p.value("volume")); err != nil {
+			return nil, "", fieldError("water volume", err)
+		}
+		if v := p.value("to"); v != "" {
+			if c.ToTempK, err = temp("to", "later T"); err != nil {
+				return nil, "", err
+			}
+		}
+		if r := p.value("recipe"); r != "none" {
+			c.Recipe = r
+		}
+		if v := p.value("rated"); v != "" {
+			rp, err := mixtures.ParsePressure(v)
+			if err != nil {
+				return nil, "", fieldError("rated P", err)
+			}
+			c.RatedPresPa = rp.Pa
+		}
+		res, err := c.Solve()
+		return res, recipe + " in a cylinder", err
 	case "release":
 		res, err := process.RoomRelease{Mixture: mix, Amount: p.value("amount"), Rate: p.value("rate"), Room: p.value("room"), ACH: p.value("ach")}.Solve()
 		if err != nil {
