@@ -125,15 +125,20 @@ func (lv *rovibLevels) addLevels(st DunhamConstants, class0 uint8, gRel float64,
 		}
 		switch {
 		case doubletPi:
-			// Hill–Van Vleck: F1,2 = B[(J+½)² − Λ² ∓ ½X], X = √(4(J+½)²
-			// + Y(Y−4)Λ²), Y = A/B_v; J ≥ ½ for F2, J ≥ 3/2 for F1. Each
-			// J is Λ-doubled; the stretching term is −D_v[(J+½)² − Λ²]².
+			// Hill–Van Vleck: E = B[(J+½)² − Λ² ∓ ½X], X = √(4(J+½)²
+			// + Y(Y−4)Λ²), Y = A/B_v. The lower root is Ω = 3/2 for an
+			// inverted state (A < 0, J ≥ 3/2) and Ω = 1/2 for a regular
+			// one (J ≥ ½); the upper root the other. Each J is
+			// Λ-doubled; the stretching term is −D_v[(J+½)² − Λ²]².
 			y := st.SpinOrbitCm / bv
 			for comp := 0; comp < 2; comp++ {
 				sign := -1.0
-				j0 := 1.5
+				j0 := 1.5 // lower root, inverted: Ω = 3/2
+				if st.SpinOrbitCm > 0 {
+					j0 = 0.5
+				}
 				if comp == 1 {
-					sign, j0 = 1, 0.5
+					sign, j0 = 1, 2-j0
 				}
 				prev := math.Inf(-1)
 				for j := j0; j < maxRotN; j++ {
