@@ -82,3 +82,18 @@ func TestHazardText(t *testing.T) {
 		checkOneLineError(t, stderr)
 	}
 }
+
+// zmix catalog shows a species' safety figures with their sources, and
+// says "not known" for a figure its classes call for.
+func TestCatalogSafetyFigures(t *testing.T) {
+	_, stdout, _ := zmix(t, "catalog", "CO")
+	for _, want := range []string{"Safety figures", "12.5-74 % by volume  [BuM627, from memory]", "3760 ppm (1 h)  [ISO 10298, from memory]"} {
+		if !strings.Contains(stdout, want) {
+			t.Errorf("catalog CO lacks %q:\n%s", want, stdout)
+		}
+	}
+	_, stdout, _ = zmix(t, "catalog", "SiH4")
+	if !strings.Contains(stdout, "ISO 10156 Tci            not known") {
+		t.Errorf("catalog SiH4 does not say its Tci is not known:\n%s", stdout)
+	}
+}

@@ -149,6 +149,8 @@ func WriteSpecies(w io.Writer, sp *model.Species, builtin bool, stdPa float64, t
 		WriteWrapped(w, "  note                  ", "                        ", model.Printable(sp.Notes))
 	}
 
+	writeSpeciesSafety(w, sp)
+
 	fmt.Fprintln(w, "\nSources")
 	fmt.Fprintln(w, "  molar mass: IUPAC standard atomic weights, summed over the formula")
 	for _, f := range catalogueFieldLabels {

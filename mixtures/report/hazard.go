@@ -205,3 +205,47 @@ func WriteHazardJSON(w io.Writer, rep *HazardReport) error {
 	enc.SetIndent("", "  ")
 	return enc.Encode(j)
 }
+
+// writeSpeciesSafety writes a species' safety figures with their sources
+// for `zmix catalog FORMULA`: the figures its classes call for say "not
+// known" when the catalogue has none.
+func writeSpeciesSafety(w io.Writer, sp *model.Species) {
+	sd := sp.Safety
+	h := sp.Hazards
+	type row struct {
+		label, field  string
+		known, wanted bool
+		value         string
+	}
+	rows := []row{
+		{"flammable limits in air", "lfl_pct", sd.LFLPct > 0, h&model.Flammable != 0, Short(sd.LFLPct, 4) + "-" + Short(sd.UFLPct, 4) + " % by volume"},
+		{"autoignition", "autoign_K", sd.AutoIgnitionK > 0, false, Short(sd.AutoIgnitionK, 5) + " K"},
+		{"ISO 10156 Tci", "tci_pct", sd.TciPct > 0, h&model.Flammable != 0, Short(sd.TciPct, 4) + " % in N2"},
+		{"ISO 10156 Ki", "ki", sd.Ki > 0, false, Short(sd.Ki, 4)},
+		{"ISO 10156 Ci", "ci", sd.Ci > 0, h&model.Oxidizer != 0, Short(sd.Ci, 4)},
+		{"LC50, rat", "lc50_ppm", sd.LC50.Known(), h&model.Toxic != 0, sd.LC50.String()},
+		{"exposure limit", "oel_ppm", sd.Exposure.Known(), false, sd.Exposure.String()},
+	}
+	shown := false
+	for _, r := range rows {
+		shown = shown || r.known || r.wanted
+	}
+	if !shown {
+		return
+	}
+	fmt.Fprintln(w, "\nSafety figures (zmix hazard and zmix release use them)")
+	t := NewTable("  ", Left, Left)
+	for _, r := range rows {
+		switch {
+		case r.known:
+			v := r.value
+			if src := sp.Sources[r.field]; src != "" {
+				v += "  [" + model.Printable(src) + "]"
+			}
+			t.Row(r.label, v)
+		case r.wanted:
+			t.Row(r.label, "not known")
+		}
+	}
+	t.Write(w)
+}

@@ -38,7 +38,7 @@ func near(got, want, tol float64) bool { return math.Abs(got-want) <= tol*math.A
 // TestLeChatelier checks the rule against worked examples.
 func TestLeChatelier(t *testing.T) {
 	// D. A. Crowl, J. F. Louvar, Chemical Process Safety (2nd ed., 2002),
-	// example 6-? on Le Chatelier's rule (from memory): 0.8 % hexane,
+	// worked example of Le Chatelier's rule (from memory): 0.8 % hexane,
 	// 2.0 % methane and 0.5 % ethylene in air, with limits 1.2-7.5,
 	// 5.3-15 and 3.1-32 %: LFL 2.75 %, UFL 12.9 % of the fuel part.
 	hexane := fixture("C6H14", model.Flammable, model.SafetyData{LFLPct: 1.2, UFLPct: 7.5})
