@@ -102,8 +102,8 @@ func stateFloor(sp *Species, tempK, presPa float64) float64 {
 	return acc
 }
 
-// BenchmarkSpeciesStateTreatments times the diatomics with Dunham
-// constants under both treatments side by side: the summed levels (read
+// BenchmarkSpeciesStateTreatments times the species with Dunham constants
+// or torsions under both treatments side by side: the summed levels (read
 // from the table built once, or summed directly below it) and the rigid
 // rotor with harmonic vibration. Goal: N2 with the summed levels ≤ 1 µs.
 func BenchmarkSpeciesStateTreatments(b *testing.B) {
@@ -115,7 +115,8 @@ func BenchmarkSpeciesStateTreatments(b *testing.B) {
 		{"N2", "N2", 812.5, 2.5e5},
 		{"O2", "O2", 812.5, 2.5e5},
 		{"N2_60K", "N2", 60, 1e5},
-		{"N2_10K", "N2", 10, 1e5}, // below the table: the direct sum
+		{"N2_10K", "N2", 10, 1e5},
+		{"C2H6", "C2H6", 812.5, 2.5e5}, // a hindered torsion
 	}
 	for _, bc := range cases {
 		sp := mustSpecies(b, bc.formula)

@@ -87,6 +87,17 @@
 // Below the table's first node (where the 8th level is 40 kT up) the sum
 // is taken level by level.
 //
+// # Hindered internal rotation
+//
+// A torsion listed in torsion_cm (see Torsion) replaces its fundamental
+// in the summed levels: a rotor with internal constant F in
+// V(φ) = (V0/2)(1 − cos nφ), whose levels are the eigenvalues of
+// F m² + V(φ) in the basis e^{imφ}, |m| ≤ 120 (gonum's EigenSym), free
+// rotor levels F m² + V0/2 above those that converge, divided by the
+// torsion's symmetry σ_int, energy zero at its lowest level. It is
+// tabulated like the diatomics' sums and booked with vibration.
+// C2H6's threefold methyl torsion is the one listed so far.
+//
 // The rigid rotor with harmonic vibration stays the default
 // (LevelsDefault) until the worked examples that quote its figures are
 // refreshed; see summedByDefault.

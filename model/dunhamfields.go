@@ -11,17 +11,18 @@ import (
 // default to 0. Excited states come as "state_LABEL = TERM Te we wexe weye
 // Be alphae De [A]", one line a state, LABEL a short name such as a or b.
 var dunhamFields = map[string]string{
-	"term":      "ground-state term symbol: multiplicity, Sigma, Pi or Delta, then + or - (Sigma), then g or u (homonuclear), e.g. 3Sigma-g, 2Pi",
-	"we_cm":     "harmonic wavenumber ωe in cm⁻¹",
-	"wexe_cm":   "anharmonicity ωexe in cm⁻¹",
-	"weye_cm":   "anharmonicity ωeye in cm⁻¹",
-	"Be_cm":     "equilibrium rotational constant Be in cm⁻¹",
-	"alphae_cm": "vibration–rotation constant αe in cm⁻¹",
-	"gammae_cm": "vibration–rotation constant γe in cm⁻¹",
-	"De_cm":     "centrifugal distortion De in cm⁻¹",
-	"betae_cm":  "centrifugal distortion βe in cm⁻¹",
-	"A_cm":      "spin–orbit constant A of a 2Pi ground state in cm⁻¹",
-	"D0_cm":     "dissociation energy D0 from the lowest level in cm⁻¹ (the level sums stop there)",
+	"term":       "ground-state term symbol: multiplicity, Sigma, Pi or Delta, then + or - (Sigma), then g or u (homonuclear), e.g. 3Sigma-g, 2Pi",
+	"we_cm":      "harmonic wavenumber ωe in cm⁻¹",
+	"wexe_cm":    "anharmonicity ωexe in cm⁻¹",
+	"weye_cm":    "anharmonicity ωeye in cm⁻¹",
+	"Be_cm":      "equilibrium rotational constant Be in cm⁻¹",
+	"alphae_cm":  "vibration–rotation constant αe in cm⁻¹",
+	"gammae_cm":  "vibration–rotation constant γe in cm⁻¹",
+	"De_cm":      "centrifugal distortion De in cm⁻¹",
+	"betae_cm":   "centrifugal distortion βe in cm⁻¹",
+	"A_cm":       "spin–orbit constant A of a 2Pi ground state in cm⁻¹",
+	"D0_cm":      "dissociation energy D0 from the lowest level in cm⁻¹ (the level sums stop there)",
+	"torsion_cm": "hindered internal rotations, each \"fundamental V0 F n σ\" (cm⁻¹, cm⁻¹, cm⁻¹, fold, symmetry), separated by ;",
 }
 
 // requiredDunhamFields must all come with any Dunham field.
@@ -68,6 +69,9 @@ func isDunhamField(key string) bool {
 }
 
 func setDunhamField(sp *Species, key, value string) error {
+	if key == "torsion_cm" {
+		return setTorsions(sp, value)
+	}
 	if sp.Dunham == nil {
 		sp.Dunham = &DunhamConstants{Term: TermSymbol{Multiplicity: 1}}
 	}
@@ -206,6 +210,31 @@ func (d *DunhamConstants) check(formula, what string, ground bool) error {
 	}
 	if d.BeCm-0.5*d.AlphaeCm <= 0 {
 		return Errorf("model", "%s %s: Be %g and αe %g give B0 ≤ 0", formula, what, d.BeCm, d.AlphaeCm)
+	}
+	return nil
+}
+
+// setTorsions reads "289 1012 10.68 3 3; …": for each hindered rotor the
+// vib_cm fundamental it replaces, V0, F, the fold n and the symmetry σ.
+func setTorsions(sp *Species, value string) error {
+	const want = "fundamental V0 F n σ, e.g. 289 1012 10.68 3 3"
+	for _, group := range strings.Split(value, ";") {
+		f := strings.Fields(group)
+		if len(f) != 5 {
+			return Errorf("model", "torsion %s: %d items; want %s", Quote(strings.TrimSpace(group)), len(f), want)
+		}
+		var nums [5]float64
+		for i, r := range []numRange{vibRange, barrierRange, torsionFRange, foldRange, sigmaRange} {
+			x, err := r.parse(f[i])
+			if err != nil {
+				return Errorf("model", "torsion %s: %v", Quote(strings.TrimSpace(group)), err)
+			}
+			nums[i] = x
+		}
+		if len(sp.Torsions) == maxTorsions {
+			return Errorf("model", "more than %d torsions", maxTorsions)
+		}
+		sp.Torsions = append(sp.Torsions, Torsion{nums[0], nums[1], nums[2], int(nums[3]), int(nums[4])})
 	}
 	return nil
 }

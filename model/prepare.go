@@ -99,6 +99,9 @@ func (sp *Species) Prepare() error {
 	if !dHf0Range.contains(sp.EnergyZeroJPerMol / 1000) {
 		return Errorf("model", "%s: ΔfH°(0 K) %g kJ/mol; want %s", sp.Formula, sp.EnergyZeroJPerMol/1000, dHf0Range)
 	}
+	if err := sp.prepareTorsions(); err != nil {
+		return err
+	}
 	return sp.prepareLevels()
 }
 

@@ -123,6 +123,9 @@ type Species struct {
 	// summed with the ground state's levels; they replace Elec's excited
 	// levels in the level sum.
 	States []ElecState
+	// Torsions are hindered internal rotations that replace vibrational
+	// modes when the levels are summed (see torsion.go).
+	Torsions []Torsion
 	// DissociationCm is D0, the dissociation energy from the lowest
 	// level, in cm⁻¹: the level sums stop there.
 	DissociationCm float64
@@ -160,6 +163,11 @@ type Species struct {
 	elecDeg    []float64
 	lnElecG0   float64 // ln of the ground level's degeneracy
 	levels     *rovibLevels
+	// torsionLevels and vibModesHindered serve the summed levels of a
+	// molecule with torsions: one level list per torsion, and the modes
+	// left harmonic beside them.
+	torsionLevels    []*rovibLevels
+	vibModesHindered []vibTerm
 	// lnElecG0Levels is ln of the ground state's multiplicity in the
 	// level sum (0 for ²Π, whose spin components are levels of their own).
 	lnElecG0Levels float64

@@ -75,8 +75,13 @@ type Treatment struct {
 // usesLevels reports whether the state of sp under tr comes from its
 // summed levels.
 func (sp *Species) usesLevels(tr Treatment) bool {
-	summed := tr.Levels == LevelsSummed || tr.Levels == LevelsDefault && summedByDefault
-	return sp.levels != nil && summed && tr.Rotation == RotationAuto && !sp.SpinMod.Frozen
+	return sp.levels != nil && sp.summedLevels(tr) && tr.Rotation == RotationAuto && !sp.SpinMod.Frozen
+}
+
+// summedLevels reports whether tr asks for summed levels where a species
+// has the constants for them.
+func (sp *Species) summedLevels(tr Treatment) bool {
+	return tr.Levels == LevelsSummed || tr.Levels == LevelsDefault && summedByDefault
 }
 
 // State is one species at one (T, P): the terms of each factor and the
@@ -172,7 +177,11 @@ func (sp *Species) fill(s *State, tempK, presPa float64, tr Treatment) {
 			s.Rot = sp.rigidBodyRotor(lnT) // inlined: no call for most species
 		}
 		s.Vib = Terms{}
-		if tr.Vibration == VibrationHarmonic && len(sp.vibModes) > 0 {
+		switch {
+		case tr.Vibration != VibrationHarmonic:
+		case sp.torsionLevels != nil && sp.summedLevels(tr):
+			s.Vib = sp.hinderedVibration(tempK, invT, lnT)
+		case len(sp.vibModes) > 0:
 			s.Vib = sp.vibration(invT)
 		}
 		s.Elec = sp.electronic(invT, tr.Electronic)

@@ -141,10 +141,13 @@ func (sp *Species) linearRotorSum(invT float64) Terms {
 // vibration returns the harmonic-oscillator terms, energy zero at v = 0.
 // ln q = −Σ g ln(1 − e^{−x}) is taken as the log of one product, so that a
 // mode costs a single exponential.
-func (sp *Species) vibration(invT float64) Terms {
+func (sp *Species) vibration(invT float64) Terms { return vibrationOf(sp.vibModes, invT) }
+
+// vibrationOf returns the harmonic-oscillator terms of a list of modes.
+func vibrationOf(modes []vibTerm, invT float64) Terms {
 	var lnQ, u, cv float64
 	prod := 1.0 // Π (1 − e^{−x})^g not yet logged
-	for _, m := range sp.vibModes {
+	for _, m := range modes {
 		x := m.thetaK * invT
 		if x > 700 {
 			continue // e^{−x} underflows: the mode is frozen

@@ -1,0 +1,144 @@
+package model
+
+import (
+	"math"
+
+	"gonum.org/v1/gonum/mat"
+)
+
+// Torsion is a hindered internal rotation that replaces one vibrational
+// mode when the levels are summed: a rotor with internal rotational
+// constant F in the potential V(φ) = (V0/2)(1 − cos nφ). Its levels are
+// the eigenvalues of F·(−i d/dφ)² + V(φ) in the basis e^{imφ}; they run
+// from a harmonic ladder at the bottom of the wells to free rotation far
+// above the barrier, which is the whole point of summing them.
+type Torsion struct {
+	ReplacesCm float64 // the fundamental in Vib that this rotor stands for
+	BarrierCm  float64 // V0
+	FCm        float64 // F = h/(8π²c I_red)
+	Fold       int     // n: minima per turn
+	Symmetry   int     // σ_int: indistinguishable positions per turn
+}
+
+// Limits of the torsion fields (values from memory): methyl barriers lie
+// near 1000 cm⁻¹, and the lightest top (CH3, F ≈ 5.3 cm⁻¹ alone) has F
+// below 30 cm⁻¹ for any reduced moment; folds beyond 6 do not occur in
+// gas-mixture molecules.
+var (
+	barrierRange  = numRange{"torsional barrier V0", 1, 20000, "cm⁻¹", false}
+	torsionFRange = numRange{"internal rotational constant F", 0.01, 100, "cm⁻¹", false}
+	foldRange     = numRange{"torsional fold n", 1, 6, "", true}
+	maxTorsions   = 6
+)
+
+// torsionBasisM is the largest |m| of the basis: eigenvalues well below
+// F·M² are converged; above them the levels are taken as the free
+// rotor's, F m² + V0/2, which they approach once E ≫ V0.
+const torsionBasisM = 120
+
+// torsionLevels builds the level list of one torsion, energies from its
+// lowest level, up to the energy a sum at MaxTempK needs.
+func (tor Torsion) levels() *rovibLevels {
+	n := 2*torsionBasisM + 1
+	h := mat.NewSymDense(n, nil)
+	for i := 0; i < n; i++ {
+		m := float64(i - torsionBasisM)
+		h.SetSym(i, i, tor.FCm*m*m+tor.BarrierCm/2)
+		if j := i + tor.Fold; j < n {
+			h.SetSym(i, j, -tor.BarrierCm/4)
+		}
+	}
+	var eig mat.EigenSym
+	eig.Factorize(h, false)
+	vals := eig.Values(nil) // ascending
+	// Converged below the free-rotor energy of |m| = M − 10; free rotor
+	// levels (each ±m, so twice) from there on.
+	mCut := torsionBasisM - 10
+	eCut := tor.FCm*float64(mCut*mCut) + tor.BarrierCm/2
+	lv := &rovibLevels{lnNorm: math.Log(float64(tor.Symmetry))}
+	e0 := vals[0]
+	for _, e := range vals {
+		if e >= eCut {
+			break
+		}
+		lv.thetaK = append(lv.thetaK, WavenumberToKelvin(e-e0))
+		lv.weight = append(lv.weight, 1)
+		lv.class = append(lv.class, classRot0)
+	}
+	topK := 45 * MaxTempK
+	for m := mCut; ; m++ {
+		e := tor.FCm*float64(m*m) + tor.BarrierCm/2
+		if e < eCut {
+			continue
+		}
+		th := WavenumberToKelvin(e - e0)
+		if th > topK {
+			break
+		}
+		lv.thetaK = append(lv.thetaK, th)
+		lv.weight = append(lv.weight, 2)
+		lv.class = append(lv.class, classRot0)
+	}
+	lv.thetaK[0] = 0
+	i := min(7, len(lv.thetaK)-1)
+	lv.tableMinK = max(lv.thetaK[i]/40, MinTempK)
+	return lv
+}
+
+// torsionTerms returns one torsion's terms at T.
+func (lv *rovibLevels) torsionTerms(tempK, lnT float64) Terms {
+	if tempK < lv.tableMinK {
+		t, _, _ := lv.direct(tempK)
+		return t
+	}
+	lv.once.Do(lv.build)
+	t, _, _ := lv.table.at(lnT)
+	return t
+}
+
+// prepareTorsions checks the torsions and builds their levels, and the
+// list of vibrational modes that remain harmonic beside them.
+func (sp *Species) prepareTorsions() error {
+	sp.torsionLevels, sp.vibModesHindered = nil, nil
+	if len(sp.Torsions) == 0 {
+		return nil
+	}
+	if len(sp.Torsions) > maxTorsions {
+		return Errorf("model", "%s: %d torsions; want at most %d", sp.Formula, len(sp.Torsions), maxTorsions)
+	}
+	if sp.Rotor != Nonlinear {
+		return Errorf("model", "%s: hindered internal rotations need a nonlinear molecule", sp.Formula)
+	}
+	left := append([]VibMode(nil), sp.Vib...)
+	for _, tor := range sp.Torsions {
+		if !barrierRange.contains(tor.BarrierCm) || !torsionFRange.contains(tor.FCm) || !foldRange.contains(float64(tor.Fold)) || !sigmaRange.contains(float64(tor.Symmetry)) || tor.Symmetry > tor.Fold {
+			return Errorf("model", "%s: torsion V0 %g cm⁻¹, F %g cm⁻¹, n %d, σ %d: want %s, %s, %s, and σ from 1 to n", sp.Formula, tor.BarrierCm, tor.FCm, tor.Fold, tor.Symmetry, barrierRange, torsionFRange, foldRange)
+		}
+		found := false
+		for i, v := range left {
+			if v.WavenumberPerCm == tor.ReplacesCm && v.Degeneracy == 1 {
+				left = append(left[:i], left[i+1:]...)
+				found = true
+				break
+			}
+		}
+		if !found {
+			return Errorf("model", "%s: torsion replaces %g cm⁻¹, which vib_cm does not list as a single mode", sp.Formula, tor.ReplacesCm)
+		}
+		sp.torsionLevels = append(sp.torsionLevels, tor.levels())
+	}
+	for _, v := range left {
+		sp.vibModesHindered = addVibTerm(sp.vibModesHindered, WavenumberToKelvin(v.WavenumberPerCm), v.Degeneracy)
+	}
+	return nil
+}
+
+// hinderedVibration returns the vibrational terms with the torsions as
+// hindered rotors and the other modes harmonic.
+func (sp *Species) hinderedVibration(tempK, invT, lnT float64) Terms {
+	t := vibrationOf(sp.vibModesHindered, invT)
+	for _, lv := range sp.torsionLevels {
+		t = t.add(lv.torsionTerms(tempK, lnT))
+	}
+	return t
+}
