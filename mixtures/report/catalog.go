@@ -61,6 +61,9 @@ var catalogueFieldLabels = []struct{ field, label string }{
 	{"elec_cm", "electronic levels"},
 	{"dHf0_kJ", "ΔfH°(0 K)"},
 	{"boil_K", "boiling point"},
+	{"Tc_K", "critical temperature"},
+	{"Pc_bar", "critical pressure"},
+	{"omega", "acentric factor"},
 	{"hazards", "hazards"},
 	{"note", "note"},
 }
@@ -126,6 +129,15 @@ func WriteSpecies(w io.Writer, sp *model.Species, builtin bool, stdPa float64, t
 		d.Row("normal boiling point", Short(sp.BoilingK, 6)+" K")
 	} else {
 		d.Row("normal boiling point", "not recorded")
+	}
+	switch {
+	case sp.QuantumGas:
+		d.Row("critical constants", "Tc⁰ "+Short(sp.CriticalK, 6)+" K, Pc⁰ "+Short(sp.CriticalPa/1e5, 6)+" bar, ω "+Short(sp.Acentric, 4)+
+			"  (quantum gas: classical limits of effective constants, applied per temperature)")
+	case sp.HasCritical():
+		d.Row("critical constants", "Tc "+Short(sp.CriticalK, 6)+" K, Pc "+Short(sp.CriticalPa/1e5, 6)+" bar, ω "+Short(sp.Acentric, 4)+"  (for the real-gas models)")
+	default:
+		d.Row("critical constants", "not recorded: taken as an ideal gas in the real-gas models")
 	}
 	hazards := sp.Hazards.String()
 	if hazards == "" {
@@ -235,12 +247,21 @@ func WriteSpeciesJSON(w io.Writer, sp *model.Species, builtin bool, stdPa float6
 		RotConstPerCm []float64         `json:"rot_cm,omitempty"`
 		Symmetry      int               `json:"symmetry_number,omitempty"`
 		BoilingK      float64           `json:"boiling_K,omitempty"`
+		CriticalK     float64           `json:"critical_temperature_K,omitempty"`
+		CriticalPa    float64           `json:"critical_pressure_Pa,omitempty"`
+		Acentric      *float64          `json:"acentric_factor,omitempty"`
+		QuantumGas    bool              `json:"quantum_gas,omitempty"`
 		EnergyZero    float64           `json:"dHf0_J_mol"`
 		Sources       map[string]string `json:"sources"`
 		Table         tableDoc          `json:"table"`
 	}{catalogEntry: newCatalogEntry(sp, builtin), RotConstPerCm: sp.RotConstPerCm, Symmetry: sp.Symmetry,
 		BoilingK: sp.BoilingK, EnergyZero: sp.EnergyZeroJPerMol, Sources: sp.Sources,
+		CriticalK: sp.CriticalK, CriticalPa: sp.CriticalPa, QuantumGas: sp.QuantumGas,
 		Table: tableDoc{StdPresPa: stdPa, Rows: []map[string]float64{}}}
+	if sp.HasCritical() {
+		omega := sp.Acentric
+		doc.Acentric = &omega
+	}
 	for _, tempK := range tempsK {
 		row, err := sp.Table(tempK, stdPa, model.Treatment{})
 		if err != nil {
