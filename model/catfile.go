@@ -306,6 +306,9 @@ func (p *catParser) finish() error {
 	if _, ok := p.fieldAt["rot_cm"]; sp.Rotor != Atom && !ok {
 		return p.errf(p.curLine, "rot_cm", "missing for a %s rotor", sp.Rotor)
 	}
+	if n := p.count("harm_cm", "xij_cm", "D0_cm"); sp.Anharmonic != nil && n != 3 {
+		return p.errf(p.curLine, "", "harm_cm, xij_cm and D0_cm come together")
+	}
 	if sp.Dunham != nil {
 		for _, need := range requiredDunhamFields {
 			if _, ok := p.fieldAt[need]; !ok {

@@ -98,6 +98,16 @@
 // tabulated like the diatomics' sums and booked with vibration.
 // C2H6's threefold methyl torsion is the one listed so far.
 //
+// # Anharmonic vibration of polyatomics
+//
+// A polyatomic with nondegenerate modes may list harmonic wavenumbers ωi
+// (harm_cm), anharmonicity constants xij (xij_cm) and D0 (D0_cm); its
+// vibrational levels G(v) = Σ ωi(vi+½) + Σ_{i≤j} xij(vi+½)(vj+½) are then
+// summed up to D0, each mode only while G rises, and tabulated like the
+// others (see anharmonic.go). This is the second-order term expansion,
+// without resonances or vibration–rotation coupling; H2O is the species
+// so far, whose Cp° it brings within 0.6 % of the tables to 3000 K.
+//
 // The rigid rotor with harmonic vibration stays the default
 // (LevelsDefault) until the worked examples that quote its figures are
 // refreshed; see summedByDefault.

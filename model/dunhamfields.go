@@ -22,6 +22,8 @@ var dunhamFields = map[string]string{
 	"betae_cm":   "centrifugal distortion βe in cm⁻¹",
 	"A_cm":       "spin–orbit constant A of a 2Pi ground state in cm⁻¹",
 	"D0_cm":      "dissociation energy D0 from the lowest level in cm⁻¹ (the level sums stop there)",
+	"harm_cm":    "harmonic wavenumbers ωi of a polyatomic's nondegenerate modes in cm⁻¹, in vib_cm's order",
+	"xij_cm":     "anharmonicity constants xij in cm⁻¹, the upper triangle row by row (x11 x12 x13 x22 x23 x33)",
 	"torsion_cm": "hindered internal rotations, each \"fundamental V0 F n σ\" (cm⁻¹, cm⁻¹, cm⁻¹, fold, symmetry), separated by ;",
 }
 
@@ -69,8 +71,15 @@ func isDunhamField(key string) bool {
 }
 
 func setDunhamField(sp *Species, key, value string) error {
-	if key == "torsion_cm" {
+	switch key {
+	case "torsion_cm":
 		return setTorsions(sp, value)
+	case "harm_cm", "xij_cm":
+		return setAnharmonic(sp, key, value)
+	case "D0_cm":
+		x, err := dissocRange.parse(value)
+		sp.DissociationCm = x
+		return err
 	}
 	if sp.Dunham == nil {
 		sp.Dunham = &DunhamConstants{Term: TermSymbol{Multiplicity: 1}}
@@ -235,6 +244,45 @@ func setTorsions(sp *Species, value string) error {
 			return Errorf("model", "more than %d torsions", maxTorsions)
 		}
 		sp.Torsions = append(sp.Torsions, Torsion{nums[0], nums[1], nums[2], int(nums[3]), int(nums[4])})
+	}
+	return nil
+}
+
+// setAnharmonic reads harm_cm ("3832.2 1648.5 3942.5") or xij_cm (the
+// upper triangle, "x11 x12 x13 x22 x23 x33"); the shapes are checked
+// together when the block is prepared.
+func setAnharmonic(sp *Species, key, value string) error {
+	if sp.Anharmonic == nil {
+		sp.Anharmonic = &Anharmonic{}
+	}
+	a := sp.Anharmonic
+	if key == "harm_cm" {
+		xs, err := parseNumbers(value, vibRange, maxAnharmonicModes)
+		if err != nil {
+			return err
+		}
+		a.HarmonicCm = xs
+		return nil
+	}
+	xs, err := parseNumbers(value, xijRange, maxAnharmonicModes*(maxAnharmonicModes+1)/2)
+	if err != nil {
+		return err
+	}
+	n := 0
+	for n*(n+1)/2 < len(xs) {
+		n++
+	}
+	if n*(n+1)/2 != len(xs) {
+		return Errorf("model", "%s: %d numbers; want the upper triangle, n(n+1)/2 of them (6 for 3 modes)", Quote(value), len(xs))
+	}
+	a.XCm = make([][]float64, n)
+	k := 0
+	for i := 0; i < n; i++ {
+		a.XCm[i] = make([]float64, n)
+		for j := i; j < n; j++ {
+			a.XCm[i][j] = xs[k]
+			k++
+		}
 	}
 	return nil
 }

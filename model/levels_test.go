@@ -233,8 +233,8 @@ func TestLevelSumsAgainstJANAF(t *testing.T) {
 
 var summed = Treatment{Levels: LevelsSummed}
 
-// TestLevelSumIdentities checks, for every species with Dunham constants
-// or torsions at seeded random states, that the tabulated level sums keep the
+// TestLevelSumIdentities checks, for every species with Dunham constants,
+// torsions or anharmonic constants at seeded random states, that the tabulated level sums keep the
 // thermodynamic identities: Cv = ∂U/∂T, S = −(∂G/∂T)_P and S = −(∂A/∂T)_V
 // by central differences, with the tolerances of
 // TestThermodynamicIdentities, across the table and the direct sum below
@@ -242,7 +242,7 @@ var summed = Treatment{Levels: LevelsSummed}
 func TestLevelSumIdentities(t *testing.T) {
 	rng := rand.New(rand.NewPCG(1, 1))
 	for _, sp := range Builtin().All() {
-		if !sp.HasLevels() && len(sp.Torsions) == 0 {
+		if !sp.HasLevels() && len(sp.Torsions) == 0 && sp.Anharmonic == nil {
 			continue
 		}
 		for _, tr := range []Treatment{summed, {Levels: LevelsSummed, Vibration: VibrationFrozen}, {Levels: LevelsSummed, Electronic: ElectronicGroundOnly}} {

@@ -102,6 +102,9 @@ func (sp *Species) Prepare() error {
 	if err := sp.prepareTorsions(); err != nil {
 		return err
 	}
+	if err := sp.prepareAnharmonic(); err != nil {
+		return err
+	}
 	return sp.prepareLevels()
 }
 

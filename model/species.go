@@ -126,6 +126,9 @@ type Species struct {
 	// Torsions are hindered internal rotations that replace vibrational
 	// modes when the levels are summed (see torsion.go).
 	Torsions []Torsion
+	// Anharmonic holds a polyatomic's harmonic wavenumbers and xij, nil
+	// if none (see anharmonic.go).
+	Anharmonic *Anharmonic
 	// DissociationCm is D0, the dissociation energy from the lowest
 	// level, in cm⁻¹: the level sums stop there.
 	DissociationCm float64
@@ -167,6 +170,7 @@ type Species struct {
 	// molecule with torsions: one level list per torsion, and the modes
 	// left harmonic beside them.
 	torsionLevels    []*rovibLevels
+	anharmonicVib    *rovibLevels // the anharmonic vibrational levels
 	vibModesHindered []vibTerm
 	// lnElecG0Levels is ln of the ground state's multiplicity in the
 	// level sum (0 for ²Π, whose spin components are levels of their own).

@@ -181,6 +181,8 @@ func (sp *Species) fill(s *State, tempK, presPa float64, tr Treatment) {
 		case tr.Vibration != VibrationHarmonic:
 		case sp.torsionLevels != nil && sp.summedLevels(tr):
 			s.Vib = sp.hinderedVibration(tempK, invT, lnT)
+		case sp.anharmonicVib != nil && sp.summedLevels(tr):
+			s.Vib = sp.anharmonicVib.torsionTerms(tempK, lnT)
 		case len(sp.vibModes) > 0:
 			s.Vib = sp.vibration(invT)
 		}

@@ -1,0 +1,145 @@
+package model
+
+import (
+	"math"
+	"sort"
+)
+
+// Anharmonic vibration of a polyatomic molecule with nondegenerate modes:
+// its vibrational levels from harmonic wavenumbers ωi and anharmonicity
+// constants xij,
+//
+//	G(v) = Σ ωi (vi + ½) + Σ_{i≤j} xij (vi + ½)(vj + ½),
+//
+// summed over every v whose G lies at or below the lowest dissociation
+// limit D0 above G(0), along each mode only while G still rises. The sum
+// is the second-order (Dunham-type) expansion of the vibrational term,
+// exact to first order in the xij; it neglects Fermi and Darling–Dennison
+// resonances and the vibration–rotation coupling, so it is stated for
+// molecules without strong resonances (H2O) and for T up to where the
+// levels near D0 start to count (a few thousand K).
+type Anharmonic struct {
+	HarmonicCm []float64   // ωi, one per nondegenerate mode, in vib_cm's order
+	XCm        [][]float64 // xij, i ≤ j, as xij_cm lists the upper triangle row by row
+}
+
+// Limits of the anharmonic fields (values from memory): |xij| stays below
+// some 200 cm⁻¹ (H2O's x13 is −166), and a molecule with more modes than
+// maxAnharmonicModes has too many levels to list.
+var xijRange = numRange{"anharmonicity constant xij", -500, 500, "cm⁻¹", false}
+
+const (
+	maxAnharmonicModes  = 6
+	maxAnharmonicLevels = 200000
+)
+
+// anharmonicLevels lists the vibrational levels from G(0), sorted.
+func (sp *Species) anharmonicLevels() (*rovibLevels, error) {
+	a := sp.Anharmonic
+	n := len(a.HarmonicCm)
+	g := func(v []int) float64 {
+		e := 0.0
+		for i := 0; i < n; i++ {
+			hi := float64(v[i]) + 0.5
+			e += a.HarmonicCm[i] * hi
+			for j := i; j < n; j++ {
+				e += a.XCm[i][j] * hi * (float64(v[j]) + 0.5)
+			}
+		}
+		return e
+	}
+	v := make([]int, n)
+	g0 := g(v)
+	var es []float64
+	// Odometer over v: raise the first mode while G rises and stays
+	// below the limit; otherwise reset it and carry to the next.
+	var walk func(k int) error
+	walk = func(k int) error {
+		if k < 0 {
+			es = append(es, g(v)-g0)
+			if len(es) > maxAnharmonicLevels {
+				return Errorf("model", "%s: the anharmonic constants give over %d levels below D0", sp.Formula, maxAnharmonicLevels)
+			}
+			return nil
+		}
+		prev := math.Inf(-1)
+		for v[k] = 0; ; v[k]++ {
+			e := g(v) - g0
+			if e > sp.DissociationCm || e <= prev {
+				break
+			}
+			prev = e
+			if err := walk(k - 1); err != nil {
+				return err
+			}
+		}
+		v[k] = 0
+		return nil
+	}
+	if err := walk(n - 1); err != nil {
+		return nil, err
+	}
+	sort.Float64s(es)
+	lv := &rovibLevels{}
+	for _, e := range es {
+		lv.thetaK = append(lv.thetaK, WavenumberToKelvin(e))
+		lv.weight = append(lv.weight, 1)
+		lv.class = append(lv.class, classRot0)
+	}
+	i := min(7, len(lv.thetaK)-1)
+	lv.tableMinK = max(lv.thetaK[i]/40, MinTempK)
+	return lv, nil
+}
+
+// prepareAnharmonic checks the constants against the modes and builds
+// the level list.
+func (sp *Species) prepareAnharmonic() error {
+	sp.anharmonicVib = nil
+	a := sp.Anharmonic
+	if a == nil {
+		return nil
+	}
+	n := len(a.HarmonicCm)
+	if n != len(sp.Vib) || n > maxAnharmonicModes || len(sp.Torsions) > 0 {
+		return Errorf("model", "%s: harm_cm gives %d harmonic wavenumbers for %d modes; want one per vib_cm mode, at most %d, and no torsions", sp.Formula, n, len(sp.Vib), maxAnharmonicModes)
+	}
+	for _, m := range sp.Vib {
+		if m.Degeneracy != 1 {
+			return Errorf("model", "%s: anharmonic constants take nondegenerate modes only", sp.Formula)
+		}
+	}
+	if len(a.XCm) != n {
+		return Errorf("model", "%s: xij_cm gives %d rows; want the upper triangle of %d modes", sp.Formula, len(a.XCm), n)
+	}
+	for i, w := range a.HarmonicCm {
+		if !vibRange.contains(w) || len(a.XCm[i]) != n {
+			return Errorf("model", "%s: harmonic wavenumber %g cm⁻¹; want %s", sp.Formula, w, vibRange)
+		}
+		for j := i; j < n; j++ {
+			if !xijRange.contains(a.XCm[i][j]) {
+				return Errorf("model", "%s: x%d%d %g cm⁻¹; want %s", sp.Formula, i+1, j+1, a.XCm[i][j], xijRange)
+			}
+		}
+		// The fundamental must rise: ωi + 2xii + ½Σ_{j≠i} xij > 0.
+		f := w + 2*a.XCm[i][i]
+		for j := 0; j < n; j++ {
+			if j < i {
+				f += a.XCm[j][i] / 2
+			} else if j > i {
+				f += a.XCm[i][j] / 2
+			}
+		}
+		if f <= 0 {
+			return Errorf("model", "%s: mode %d has no rising ladder (fundamental %g cm⁻¹)", sp.Formula, i+1, f)
+		}
+	}
+	if !dissocRange.contains(sp.DissociationCm) {
+		return Errorf("model", "%s: anharmonic levels need D0_cm, %s", sp.Formula, dissocRange)
+	}
+	lv, err := sp.anharmonicLevels()
+	if err != nil {
+		return err
+	}
+	sp.anharmonicVib = lv
+	return nil
+}
