@@ -212,3 +212,48 @@ func TestSweepRefusedUpFront(t *testing.T) {
 		t.Errorf("err %v after %d bytes, want an error and nothing written", err, b.Len())
 	}
 }
+
+// The text table's widths come from each column's extremes, not from
+// every cell: over a wide sweep, where figures change sign and magnitude,
+// every row still lines up, and no column is wider than its widest cell.
+func TestSweepTextAligned(t *testing.T) {
+	m := mustMixture(t, "N2 bal, O2 10%, H2O 2%, NH3 500ppm, CO2 4%", 1e5)
+	for _, sw := range []mixtures.Sweep{
+		{Var: mixtures.SweepTemperature, From: 20, To: 3000, Steps: 1537, Log: true},
+		{Var: mixtures.SweepPressure, From: 1e-3, To: 1e8, Steps: 1201},
+	} {
+		src := &SweepSource{Mix: m, Sweep: sw, FixedTempK: 300, FixedPresPa: 1e5}
+		rep := &SweepReport{Label: "test", Mix: m, Sweep: sw, FixedTempK: 300, FixedPresPa: 1e5}
+		var b bytes.Buffer
+		if err := WriteSweepText(&b, rep, src); err != nil {
+			t.Fatal(err)
+		}
+		lines := strings.Split(b.String(), "\n")
+		var table []string
+		for _, l := range lines[5:] {
+			if l == "" {
+				break
+			}
+			table = append(table, l)
+		}
+		if len(table) != sw.Steps+2 {
+			t.Fatalf("%d table lines, want %d", len(table), sw.Steps+2)
+		}
+		n := Width(table[0])
+		for i, l := range table {
+			if Width(l) != n {
+				t.Fatalf("%v sweep: line %d is %d cells, the header %d:\n%s\n%s", sw.Var, i, Width(l), n, table[0], l)
+			}
+		}
+		// Some data row starts its first cell in the first column after
+		// the indent: no column is padded past its widest cell.
+		for k := 2; k < len(table); k++ {
+			if table[k][2] != ' ' {
+				break
+			}
+			if k == len(table)-1 {
+				t.Errorf("%v sweep: the first column is padded past its widest cell", sw.Var)
+			}
+		}
+	}
+}

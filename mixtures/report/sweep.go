@@ -38,11 +38,18 @@ func (r *SweepReport) Gauge() bool {
 	return r.FixedGauge
 }
 
-// sweepColumn is one column of the sweep's text table.
+// sweepColumn is one column of the sweep's text table: a figure of the
+// state and how it is written.
 type sweepColumn struct {
 	name, unit string
-	cell       func(s *mixtures.State) string
+	value      func(s *mixtures.State) float64
+	format     func(x float64) string
+	// exact columns are measured cell by cell; the others' widths grow
+	// with |x| away from 1 either way, so the extremes of |x| bound them.
+	exact bool
 }
+
+func (c *sweepColumn) cell(s *mixtures.State) string { return c.format(c.value(s)) }
 
 // sweepTextKeys are the blend figures of the text table, in order; each
 // species' μ follows them.
@@ -54,20 +61,76 @@ func sweepColumns(mix *mixtures.Mixture) []sweepColumn {
 		q, _ := mixtures.QuantityByKey(key)
 		switch key {
 		case "T": // the grid's own values, as short as they are
-			cols = append(cols, sweepColumn{q.Symbol, q.Unit, func(s *mixtures.State) string { return Short(s.TempK, 6) }})
+			cols = append(cols, sweepColumn{name: q.Symbol, unit: q.Unit, exact: true,
+				value:  func(s *mixtures.State) float64 { return s.TempK },
+				format: func(x float64) string { return Short(x, 6) }})
 		case "P": // bar reads better in a table than Pa
-			cols = append(cols, sweepColumn{q.Symbol, "bar", func(s *mixtures.State) string { return Sig(s.PresPa/1e5, 5) }})
+			cols = append(cols, sweepColumn{name: q.Symbol, unit: "bar",
+				value:  func(s *mixtures.State) float64 { return s.PresPa / 1e5 },
+				format: func(x float64) string { return Sig(x, 5) }})
 		default:
-			cols = append(cols, sweepColumn{q.Symbol, q.Unit, func(s *mixtures.State) string { return Number(q.Get(s)*q.Scale, q.Digits) }})
+			cols = append(cols, sweepColumn{name: q.Symbol, unit: q.Unit,
+				value:  func(s *mixtures.State) float64 { return q.Get(s) * q.Scale },
+				format: func(x float64) string { return Number(x, q.Digits) }})
 		}
 	}
 	mu, _ := mixtures.SpeciesQuantityByKey("mu")
 	for j, c := range mix.Components {
-		cols = append(cols, sweepColumn{mu.Label + " " + model.Printable(c.Species.Formula), mu.Unit, func(s *mixtures.State) string {
-			return Number(mu.Get(&s.Species[j])*mu.Scale, mu.Digits)
-		}})
+		cols = append(cols, sweepColumn{name: mu.Label + " " + model.Printable(c.Species.Formula), unit: mu.Unit,
+			value:  func(s *mixtures.State) float64 { return mu.Get(&s.Species[j]) * mu.Scale },
+			format: func(x float64) string { return Number(x, mu.Digits) }})
 	}
 	return cols
+}
+
+// columnRange is what the first pass keeps of a column: the smallest and
+// largest |x| among its positive and among its negative values, and the
+// widest cell of an exact column.
+type columnRange struct {
+	pos, neg [2]float64 // min and max |x|; max < 0 when none seen
+	seen     [2]bool
+	nan      bool
+	width    int
+}
+
+func (r *columnRange) add(x float64) {
+	switch {
+	case x != x:
+		r.nan = true
+		return
+	case x < 0:
+		r.neg = extend(r.neg, -x, r.seen[1])
+		r.seen[1] = true
+	default:
+		r.pos = extend(r.pos, x, r.seen[0])
+		r.seen[0] = true
+	}
+}
+
+func extend(mm [2]float64, a float64, seen bool) [2]float64 {
+	if !seen {
+		return [2]float64{a, a}
+	}
+	return [2]float64{min(mm[0], a), max(mm[1], a)}
+}
+
+// widest is the widest cell the kept extremes give.
+func (r *columnRange) widest(format func(float64) string) int {
+	w := 0
+	if r.nan {
+		w = len(NotANumber)
+	}
+	for _, a := range []float64{r.pos[0], r.pos[1]} {
+		if r.seen[0] {
+			w = max(w, len(format(a)))
+		}
+	}
+	for _, a := range []float64{r.neg[0], r.neg[1]} {
+		if r.seen[1] {
+			w = max(w, len(format(-a)))
+		}
+	}
+	return w
 }
 
 // WriteSweepText writes the sweep as an aligned table with its header,
@@ -81,21 +144,28 @@ func WriteSweepText(w io.Writer, r *SweepReport, src *SweepSource) error {
 	for k, c := range cols {
 		widths[k] = max(Width(ForWriter(w, c.name)), Width(ForWriter(w, c.unit)))
 	}
-	err := inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]int, error) {
-		wd := make([]int, len(cols))
+	// The first pass writes no cell: it keeps each column's extremes of
+	// |x|, by sign, and measures those (and the exact columns' cells).
+	err := inChunks(ctx, src, func(from, to int, s *mixtures.State) ([]columnRange, error) {
+		rs := make([]columnRange, len(cols))
 		err := src.span(ctx, from, to, s, func(i int, s *mixtures.State) error {
 			if err := CheckFinite(s); err != nil {
 				return model.Errorf("report", "at point %d of the sweep: %w", i+1, err)
 			}
-			for k, c := range cols {
-				wd[k] = max(wd[k], len(c.cell(s)))
+			for k := range cols {
+				c := &cols[k]
+				if c.exact {
+					rs[k].width = max(rs[k].width, len(c.cell(s)))
+				} else {
+					rs[k].add(c.value(s))
+				}
 			}
 			return nil
 		})
-		return wd, err
-	}, func(wd []int) error {
+		return rs, err
+	}, func(rs []columnRange) error {
 		for k := range widths {
-			widths[k] = max(widths[k], wd[k])
+			widths[k] = max(widths[k], rs[k].width, rs[k].widest(cols[k].format))
 		}
 		return nil
 	})
