@@ -524,3 +524,24 @@ func TestLevelSumsRecalled(t *testing.T) {
 		}
 	}
 }
+
+// TestFactorTreatments: the names the Anatomy pane shows follow the
+// treatment asked for.
+func TestFactorTreatments(t *testing.T) {
+	o2 := mustSpecies(t, "O2")
+	if got := o2.FactorTreatments(summed); !strings.Contains(got[1], "summed levels") || !strings.Contains(got[3], "excited states") {
+		t.Errorf("O2 summed: %q", got)
+	}
+	if got := o2.FactorTreatments(Treatment{Levels: LevelsRigidHarmonic}); got[1] != "rigid rotor, summed below 50 Θrot" || got[2] != "harmonic" {
+		t.Errorf("O2 rigid/harmonic: %q", got)
+	}
+	if got := mustSpecies(t, "C2H6").FactorTreatments(summed); !strings.Contains(got[2], "hindered") {
+		t.Errorf("C2H6 summed: %q", got)
+	}
+	if got := mustSpecies(t, "Ar").FactorTreatments(summed); got[1] != "none" || got[2] != "none" {
+		t.Errorf("Ar: %q", got)
+	}
+	if sp, _ := Builtin().Lookup("pH2"); !strings.Contains(sp.FactorTreatments(Treatment{})[1], "frozen") {
+		t.Errorf("pH2: %q", sp.FactorTreatments(Treatment{}))
+	}
+}

@@ -231,3 +231,44 @@ func (s *State) Breakdown() [4]FactorShare {
 		share("electronic", s.Elec, 0),
 	}
 }
+
+// FactorTreatments names, for the Anatomy pane and reports, the model
+// each factor of sp takes under tr, in the order of Breakdown.
+func (sp *Species) FactorTreatments(tr Treatment) [4]string {
+	out := [4]string{"particle in a box (classical)", "none", "none", "listed levels"}
+	levels := sp.usesLevels(tr)
+	switch {
+	case sp.Rotor == Atom:
+	case levels:
+		out[1] = "summed levels, v = 0 (Dunham constants)"
+	case sp.Rotor == Nonlinear:
+		out[1] = "rigid rotor, classical"
+	case tr.Rotation == RotationClassical:
+		out[1] = "rigid rotor, classical"
+	case sp.SpinMod.Frozen:
+		out[1] = "rigid rotor, summed, spin modifications frozen"
+	default:
+		out[1] = "rigid rotor, summed below 50 Θrot"
+	}
+	switch {
+	case tr.Vibration == VibrationFrozen:
+		out[2] = "frozen"
+	case levels:
+		out[2] = "summed levels (anharmonic, vibration–rotation coupling)"
+	case sp.torsionLevels != nil && sp.summedLevels(tr):
+		out[2] = "harmonic, torsions as hindered rotors"
+	case sp.anharmonicVib != nil && sp.summedLevels(tr):
+		out[2] = "summed levels (anharmonic, xij)"
+	case len(sp.vibModes) > 0:
+		out[2] = "harmonic"
+	}
+	switch {
+	case tr.Electronic == ElectronicGroundOnly:
+		out[3] = "ground level only"
+	case levels && len(sp.States) > 0:
+		out[3] = "excited states summed with their own constants"
+	case levels:
+		out[3] = "ground state only (no excited states listed)"
+	}
+	return out
+}
