@@ -105,16 +105,39 @@ func appendCSVRow(b []byte, s *mixtures.State, gauge bool) []byte {
 
 // jsonWriter appends JSON by hand, in the table's order and with no
 // reflection, so that a sweep can stream a row at a time.
-type jsonWriter struct{ buf []byte }
+type jsonWriter struct {
+	buf []byte
+	// compact writes no spaces or new lines inside an object: a sweep
+	// writes one object a line.
+	compact bool
+}
 
 func (j *jsonWriter) key(indent, name string) {
-	j.buf = append(j.buf, indent...)
+	if !j.compact {
+		j.buf = append(j.buf, indent...)
+	}
 	if q, ok := quotedNames[name]; ok {
 		j.buf = append(j.buf, q...)
 	} else {
 		j.buf = appendJSONString(j.buf, name)
 	}
-	j.buf = append(j.buf, ": "...)
+	if j.compact {
+		j.buf = append(j.buf, ':')
+	} else {
+		j.buf = append(j.buf, ": "...)
+	}
+}
+
+// nl ends a member or element: a comma when more follow, then, unless
+// compact, a new line and the indent of what comes next.
+func (j *jsonWriter) nl(comma bool, indent string) {
+	if comma {
+		j.buf = append(j.buf, ',')
+	}
+	if !j.compact {
+		j.buf = append(j.buf, '\n')
+		j.buf = append(j.buf, indent...)
+	}
 }
 
 // quotedNames holds the table's names already JSON-quoted: a sweep
@@ -144,7 +167,7 @@ func (j *jsonWriter) stateFields(s *mixtures.State, gauge bool, indent string) {
 	first := true
 	sep := func() {
 		if !first {
-			j.buf = append(j.buf, ",\n"...)
+			j.nl(true, "")
 		}
 		first = false
 	}
@@ -174,30 +197,26 @@ func (j *jsonWriter) stateFields(s *mixtures.State, gauge bool, indent string) {
 // an object of the species table's figures.
 func (j *jsonWriter) species(s *mixtures.State, indent string) {
 	j.key(indent, "species")
-	j.buf = append(j.buf, "[\n"...)
+	j.buf = append(j.buf, '[')
 	inner := indent + "  "
 	inner2 := inner + "  "
 	for k := range s.Species {
 		t := &s.Species[k]
-		if k > 0 {
-			j.buf = append(j.buf, ",\n"...)
-		}
-		j.buf = append(j.buf, inner...)
-		j.buf = append(j.buf, "{\n"...)
+		j.nl(k > 0, inner)
+		j.buf = append(j.buf, '{')
+		j.nl(false, "")
 		j.key(inner2, "name")
 		j.buf = appendJSONString(j.buf, t.Species.Formula)
 		for i := range mixtures.SpeciesQuantities {
 			q := &mixtures.SpeciesQuantities[i]
-			j.buf = append(j.buf, ",\n"...)
+			j.nl(true, "")
 			j.key(inner2, q.Name)
 			j.float(q.Get(t))
 		}
-		j.buf = append(j.buf, '\n')
-		j.buf = append(j.buf, inner...)
+		j.nl(false, inner)
 		j.buf = append(j.buf, '}')
 	}
-	j.buf = append(j.buf, '\n')
-	j.buf = append(j.buf, indent...)
+	j.nl(false, indent)
 	j.buf = append(j.buf, ']')
 }
 

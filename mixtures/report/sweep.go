@@ -297,18 +297,19 @@ func WriteSweepCSV(w io.Writer, gauge bool, src *SweepSource) error {
 }
 
 // WriteSweepJSON streams the sweep as a JSON list of state objects, one
-// per point, formatted on every core and written in grid order.
+// per point and one a line, formatted on every core and written in grid
+// order.
 func WriteSweepJSON(w io.Writer, gauge bool, src *SweepSource) error {
 	bw := bufio.NewWriterSize(w, 64<<10)
 	bw.WriteString("[")
 	err := writeRows(context.Background(), bw, src, func(b []byte, i int, s *mixtures.State) []byte {
-		j := jsonWriter{buf: b}
+		j := jsonWriter{buf: b, compact: true}
 		if i > 0 {
 			j.buf = append(j.buf, ',')
 		}
-		j.buf = append(j.buf, "\n  {\n"...)
-		j.stateFields(s, gauge, "    ")
-		j.buf = append(j.buf, "\n  }"...)
+		j.buf = append(j.buf, "\n{"...)
+		j.stateFields(s, gauge, "")
+		j.buf = append(j.buf, '}')
 		return j.buf
 	})
 	if err != nil {
