@@ -113,14 +113,15 @@ type jsonWriter struct {
 }
 
 func (j *jsonWriter) key(indent, name string) {
+	j.quotedKey(indent, string(appendJSONString(nil, name)))
+}
+
+// quotedKey is key for a name already JSON-quoted.
+func (j *jsonWriter) quotedKey(indent, quoted string) {
 	if !j.compact {
 		j.buf = append(j.buf, indent...)
 	}
-	if q, ok := quotedNames[name]; ok {
-		j.buf = append(j.buf, q...)
-	} else {
-		j.buf = appendJSONString(j.buf, name)
-	}
+	j.buf = append(j.buf, quoted...)
 	if j.compact {
 		j.buf = append(j.buf, ':')
 	} else {
@@ -140,21 +141,23 @@ func (j *jsonWriter) nl(comma bool, indent string) {
 	}
 }
 
-// quotedNames holds the table's names already JSON-quoted: a sweep
-// writes each of them once per point.
-var quotedNames = func() map[string]string {
-	m := map[string]string{gaugeName: string(appendJSONString(nil, gaugeName)), "species": `"species"`, "name": `"name"`}
-	for _, q := range mixtures.Quantities {
-		m[q.Name] = string(appendJSONString(nil, q.Name))
-		if q.HasPerKg() {
-			m[q.PerKgName] = string(appendJSONString(nil, q.PerKgName))
-		}
+// The table's names, JSON-quoted once, by row: a sweep writes each of
+// them once per point.
+var (
+	quotedQuantity, quotedPerKg, quotedSpecies = quoteNames()
+	quotedGauge                                = string(appendJSONString(nil, gaugeName))
+)
+
+func quoteNames() (q, kg, sp []string) {
+	for _, x := range mixtures.Quantities {
+		q = append(q, string(appendJSONString(nil, x.Name)))
+		kg = append(kg, string(appendJSONString(nil, x.PerKgName)))
 	}
-	for _, q := range mixtures.SpeciesQuantities {
-		m[q.Name] = string(appendJSONString(nil, q.Name))
+	for _, x := range mixtures.SpeciesQuantities {
+		sp = append(sp, string(appendJSONString(nil, x.Name)))
 	}
-	return m
-}()
+	return q, kg, sp
+}
 
 // float appends x as encoding/json would write it.
 func (j *jsonWriter) float(x float64) {
@@ -174,18 +177,18 @@ func (j *jsonWriter) stateFields(s *mixtures.State, gauge bool, indent string) {
 	for i := range mixtures.Quantities {
 		q := &mixtures.Quantities[i]
 		sep()
-		j.key(indent, q.Name)
+		j.quotedKey(indent, quotedQuantity[i])
 		j.float(q.Get(s))
 		if q.Key == "P" {
 			sep()
-			j.key(indent, gaugeName)
+			j.quotedKey(indent, quotedGauge)
 			j.buf = strconv.AppendBool(j.buf, gauge)
 		}
 	}
 	for i := range mixtures.Quantities {
 		if q := &mixtures.Quantities[i]; q.HasPerKg() {
 			sep()
-			j.key(indent, q.PerKgName)
+			j.quotedKey(indent, quotedPerKg[i])
 			j.float(q.PerKg(s))
 		}
 	}
@@ -210,7 +213,7 @@ func (j *jsonWriter) species(s *mixtures.State, indent string) {
 		for i := range mixtures.SpeciesQuantities {
 			q := &mixtures.SpeciesQuantities[i]
 			j.nl(true, "")
-			j.key(inner2, q.Name)
+			j.quotedKey(inner2, quotedSpecies[i])
 			j.float(q.Get(t))
 		}
 		j.nl(false, inner)
