@@ -5,12 +5,14 @@ import (
 	"sort"
 )
 
-// Anharmonic vibration of a polyatomic molecule with nondegenerate modes:
-// its vibrational levels from harmonic wavenumbers ωi and anharmonicity
-// constants xij,
+// Anharmonic vibration of a polyatomic molecule: its vibrational levels
+// from harmonic wavenumbers ωi and anharmonicity constants xij,
 //
-//	G(v) = Σ ωi (vi + ½) + Σ_{i≤j} xij (vi + ½)(vj + ½),
+//	G(v, l) = Σ ωi (vi + di/2) + Σ_{i≤j} xij (vi + di/2)(vj + dj/2) + Σ_t g_tt l_t²,
 //
+// di the degeneracy of mode i (1 or 2); a doubly degenerate mode t has
+// the vibrational angular momentum l_t = vt, vt − 2, … ≥ 0, each l > 0
+// twice (±l), with its constant g_tt.
 // summed over every v whose G lies at or below the lowest dissociation
 // limit D0 above G(0), along each mode only while G still rises. The sum
 // is the second-order (Dunham-type) expansion of the vibrational term,
@@ -19,8 +21,9 @@ import (
 // molecules without strong resonances (H2O) and for T up to where the
 // levels near D0 start to count (a few thousand K).
 type Anharmonic struct {
-	HarmonicCm []float64   // ωi, one per nondegenerate mode, in vib_cm's order
+	HarmonicCm []float64   // ωi, one per mode, in vib_cm's order
 	XCm        [][]float64 // xij, i ≤ j, as xij_cm lists the upper triangle row by row
+	GllCm      []float64   // g_tt, one per doubly degenerate mode, in order
 }
 
 // Limits of the anharmonic fields (values from memory): |xij| stays below
@@ -37,26 +40,50 @@ const (
 func (sp *Species) anharmonicLevels() (*rovibLevels, error) {
 	a := sp.Anharmonic
 	n := len(a.HarmonicCm)
+	deg := make([]float64, n)
+	var degenerate []int // modes with l, in order
+	for i, m := range sp.Vib {
+		deg[i] = float64(m.Degeneracy)
+		if m.Degeneracy == 2 {
+			degenerate = append(degenerate, i)
+		}
+	}
 	g := func(v []int) float64 {
 		e := 0.0
 		for i := 0; i < n; i++ {
-			hi := float64(v[i]) + 0.5
+			hi := float64(v[i]) + deg[i]/2
 			e += a.HarmonicCm[i] * hi
 			for j := i; j < n; j++ {
-				e += a.XCm[i][j] * hi * (float64(v[j]) + 0.5)
+				e += a.XCm[i][j] * hi * (float64(v[j]) + deg[j]/2)
 			}
 		}
 		return e
 	}
 	v := make([]int, n)
 	g0 := g(v)
-	var es []float64
+	var es, ws []float64
+	// leaf adds the levels of one v, over the l of its degenerate modes.
+	var leaf func(t int, e, w float64)
+	leaf = func(t int, e, w float64) {
+		if t == len(degenerate) {
+			es, ws = append(es, e), append(ws, w)
+			return
+		}
+		vt := v[degenerate[t]]
+		for l := vt; l >= 0; l -= 2 {
+			wl := 1.0
+			if l > 0 {
+				wl = 2
+			}
+			leaf(t+1, e+a.GllCm[t]*float64(l*l), w*wl)
+		}
+	}
 	// Odometer over v: raise the first mode while G rises and stays
 	// below the limit; otherwise reset it and carry to the next.
 	var walk func(k int) error
 	walk = func(k int) error {
 		if k < 0 {
-			es = append(es, g(v)-g0)
+			leaf(0, g(v)-g0, 1)
 			if len(es) > maxAnharmonicLevels {
 				return Errorf("model", "%s: the anharmonic constants give over %d levels below D0", sp.Formula, maxAnharmonicLevels)
 			}
@@ -79,13 +106,13 @@ func (sp *Species) anharmonicLevels() (*rovibLevels, error) {
 	if err := walk(n - 1); err != nil {
 		return nil, err
 	}
-	sort.Float64s(es)
 	lv := &rovibLevels{}
-	for _, e := range es {
+	for i, e := range es {
 		lv.thetaK = append(lv.thetaK, WavenumberToKelvin(e))
-		lv.weight = append(lv.weight, 1)
+		lv.weight = append(lv.weight, ws[i])
 		lv.class = append(lv.class, classRot0)
 	}
+	sort.Sort(byEnergy{lv})
 	i := min(7, len(lv.thetaK)-1)
 	lv.tableMinK = max(lv.thetaK[i]/40, MinTempK)
 	return lv, nil
@@ -103,9 +130,22 @@ func (sp *Species) prepareAnharmonic() error {
 	if n != len(sp.Vib) || n > maxAnharmonicModes || len(sp.Torsions) > 0 {
 		return Errorf("model", "%s: harm_cm gives %d harmonic wavenumbers for %d modes; want one per vib_cm mode, at most %d, and no torsions", sp.Formula, n, len(sp.Vib), maxAnharmonicModes)
 	}
+	nDeg := 0
 	for _, m := range sp.Vib {
-		if m.Degeneracy != 1 {
-			return Errorf("model", "%s: anharmonic constants take nondegenerate modes only", sp.Formula)
+		switch m.Degeneracy {
+		case 1:
+		case 2:
+			nDeg++
+		default:
+			return Errorf("model", "%s: anharmonic constants take nondegenerate and doubly degenerate modes only", sp.Formula)
+		}
+	}
+	if len(a.GllCm) != nDeg {
+		return Errorf("model", "%s: gll_cm gives %d constants for %d doubly degenerate modes; want one each", sp.Formula, len(a.GllCm), nDeg)
+	}
+	for _, x := range a.GllCm {
+		if !xijRange.contains(x) {
+			return Errorf("model", "%s: g_tt %g cm⁻¹; want %s", sp.Formula, x, xijRange)
 		}
 	}
 	if len(a.XCm) != n {
@@ -120,13 +160,16 @@ func (sp *Species) prepareAnharmonic() error {
 				return Errorf("model", "%s: x%d%d %g cm⁻¹; want %s", sp.Formula, i+1, j+1, a.XCm[i][j], xijRange)
 			}
 		}
-		// The fundamental must rise: ωi + 2xii + ½Σ_{j≠i} xij > 0.
-		f := w + 2*a.XCm[i][i]
+		// The fundamental must rise: ωi + (1 + di)xii + Σ_{j≠i} xij dj/2
+		// > 0 (the l term of a degenerate fundamental is small beside it).
+		di := float64(sp.Vib[i].Degeneracy)
+		f := w + (1+di)*a.XCm[i][i]
 		for j := 0; j < n; j++ {
+			dj := float64(sp.Vib[j].Degeneracy)
 			if j < i {
-				f += a.XCm[j][i] / 2
+				f += a.XCm[j][i] * dj / 2
 			} else if j > i {
-				f += a.XCm[i][j] / 2
+				f += a.XCm[i][j] * dj / 2
 			}
 		}
 		if f <= 0 {

@@ -22,7 +22,8 @@ var dunhamFields = map[string]string{
 	"betae_cm":   "centrifugal distortion βe in cm⁻¹",
 	"A_cm":       "spin–orbit constant A of a 2Pi ground state in cm⁻¹",
 	"D0_cm":      "dissociation energy D0 from the lowest level in cm⁻¹ (the level sums stop there)",
-	"harm_cm":    "harmonic wavenumbers ωi of a polyatomic's nondegenerate modes in cm⁻¹, in vib_cm's order",
+	"harm_cm":    "harmonic wavenumbers ωi of a polyatomic's modes in cm⁻¹, in vib_cm's order",
+	"gll_cm":     "vibrational angular momentum constants g_tt in cm⁻¹, one per doubly degenerate mode",
 	"xij_cm":     "anharmonicity constants xij in cm⁻¹, the upper triangle row by row (x11 x12 x13 x22 x23 x33)",
 	"torsion_cm": "hindered internal rotations, each \"fundamental V0 F n σ\" (cm⁻¹, cm⁻¹, cm⁻¹, fold, symmetry), separated by ;",
 }
@@ -74,7 +75,7 @@ func setDunhamField(sp *Species, key, value string) error {
 	switch key {
 	case "torsion_cm":
 		return setTorsions(sp, value)
-	case "harm_cm", "xij_cm":
+	case "harm_cm", "xij_cm", "gll_cm":
 		return setAnharmonic(sp, key, value)
 	case "D0_cm":
 		x, err := dissocRange.parse(value)
@@ -256,6 +257,14 @@ func setAnharmonic(sp *Species, key, value string) error {
 		sp.Anharmonic = &Anharmonic{}
 	}
 	a := sp.Anharmonic
+	if key == "gll_cm" {
+		xs, err := parseNumbers(value, xijRange, maxAnharmonicModes)
+		if err != nil {
+			return err
+		}
+		a.GllCm = xs
+		return nil
+	}
 	if key == "harm_cm" {
 		xs, err := parseNumbers(value, vibRange, maxAnharmonicModes)
 		if err != nil {

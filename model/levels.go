@@ -4,6 +4,7 @@ import (
 	"math"
 	"sort"
 	"sync"
+	"sync/atomic"
 )
 
 // DunhamConstants are the spectroscopic constants of one electronic state
@@ -82,7 +83,7 @@ type rovibLevels struct {
 	zeroShiftK float64
 
 	// Below tableMinK the sums are taken level by level (few levels
-	// count); above it they are read from the table, built once.
+	// count); above it they are read from the table, made as needed.
 	tableMinK float64
 	once      sync.Once
 	table     levelTable
@@ -329,10 +330,17 @@ func (lv *rovibLevels) direct(tempK float64) (rot, vib, el Terms) {
 // Cv at any T then come from one polynomial, so Cv = ∂U/∂T and S = −∂A/∂T
 // hold to rounding, and the interpolation error is of order h⁶ in ln q
 // and h⁴ in Cv (below 1e-8 in Cv/R for the step used, see the tests).
+//
+// An interval's polynomial is made the first time a state falls in it,
+// so that a species of 10⁵ levels costs a few milliseconds at its first
+// state, not the whole table. Intervals are published with atomic
+// pointers: two callers that race make the same numbers, and either
+// result stands.
 type levelTable struct {
 	x0, invH float64
-	n        int           // intervals
-	coef     [][18]float64 // per interval: 6 coefficients × rot, vib, el
+	n        int                             // intervals
+	coef     []atomic.Pointer[[18]float64]   // per interval: 6 coefficients × rot, vib, el
+	nodes    []atomic.Pointer[[3][3]float64] // per node: [factor][f, f', f'']
 }
 
 // tableStepLnT is the table's step in ln T.
@@ -342,40 +350,60 @@ func (lv *rovibLevels) build() {
 	x0 := math.Log(lv.tableMinK)
 	x1 := math.Log(MaxTempK) + tableStepLnT
 	n := int(math.Ceil((x1 - x0) / tableStepLnT))
+	lv.table = levelTable{x0: x0, invH: 1 / tableStepLnT, n: n,
+		coef: make([]atomic.Pointer[[18]float64], n), nodes: make([]atomic.Pointer[[3][3]float64], n+1)}
+}
+
+// node returns node i's values, summing the levels the first time.
+func (lv *rovibLevels) node(i int) *[3][3]float64 {
+	if p := lv.table.nodes[i].Load(); p != nil {
+		return p
+	}
+	rot, vib, el := lv.direct(math.Exp(lv.table.x0 + float64(i)*tableStepLnT))
+	var nd [3][3]float64
+	for k, t := range [3]Terms{rot, vib, el} {
+		nd[k] = [3]float64{t.LnQ, t.U, t.Cv - t.U}
+	}
+	lv.table.nodes[i].Store(&nd)
+	return &nd
+}
+
+// interval returns interval i's coefficients, making them the first time.
+func (lv *rovibLevels) interval(i int) *[18]float64 {
+	if p := lv.table.coef[i].Load(); p != nil {
+		return p
+	}
 	h := tableStepLnT
-	type node [3][3]float64 // [factor][f, f', f'']
-	nodes := make([]node, n+1)
-	for i := range nodes {
-		rot, vib, el := lv.direct(math.Exp(x0 + float64(i)*h))
-		for k, t := range [3]Terms{rot, vib, el} {
-			nodes[i][k] = [3]float64{t.LnQ, t.U, t.Cv - t.U}
-		}
+	a, b := lv.node(i), lv.node(i+1)
+	var cs [18]float64
+	for k := 0; k < 3; k++ {
+		f0, d0, s0 := a[k][0], h*a[k][1], h*h*a[k][2]
+		f1, d1, s1 := b[k][0], h*b[k][1], h*h*b[k][2]
+		c := cs[6*k : 6*k+6]
+		c[0] = f0
+		c[1] = d0
+		c[2] = s0 / 2
+		c[3] = -10*f0 - 6*d0 - 1.5*s0 + 0.5*s1 - 4*d1 + 10*f1
+		c[4] = 15*f0 + 8*d0 + 1.5*s0 - s1 + 7*d1 - 15*f1
+		c[5] = -6*f0 - 3*d0 - 0.5*s0 + 0.5*s1 - 3*d1 + 6*f1
 	}
-	lv.table = levelTable{x0: x0, invH: 1 / h, n: n, coef: make([][18]float64, n)}
-	for i := 0; i < n; i++ {
-		for k := 0; k < 3; k++ {
-			f0, d0, s0 := nodes[i][k][0], h*nodes[i][k][1], h*h*nodes[i][k][2]
-			f1, d1, s1 := nodes[i+1][k][0], h*nodes[i+1][k][1], h*h*nodes[i+1][k][2]
-			c := lv.table.coef[i][6*k : 6*k+6]
-			c[0] = f0
-			c[1] = d0
-			c[2] = s0 / 2
-			c[3] = -10*f0 - 6*d0 - 1.5*s0 + 0.5*s1 - 4*d1 + 10*f1
-			c[4] = 15*f0 + 8*d0 + 1.5*s0 - s1 + 7*d1 - 15*f1
-			c[5] = -6*f0 - 3*d0 - 0.5*s0 + 0.5*s1 - 3*d1 + 6*f1
-		}
-	}
+	lv.table.coef[i].Store(&cs)
+	return &cs
 }
 
 // at returns the three factors' terms at ln T = lnT (≥ ln tableMinK).
-func (t *levelTable) at(lnT float64) (rot, vib, el Terms) {
+func (lv *rovibLevels) at(lnT float64) (rot, vib, el Terms) {
+	t := &lv.table
 	u := (lnT - t.x0) * t.invH
 	i := int(u)
 	if i >= t.n {
 		i = t.n - 1
 	}
 	s := u - float64(i)
-	c := &t.coef[i]
+	c := t.coef[i].Load()
+	if c == nil {
+		c = lv.interval(i)
+	}
 	return hermite(c[0:6], s, t.invH), hermite(c[6:12], s, t.invH), hermite(c[12:18], s, t.invH)
 }
 
@@ -398,7 +426,7 @@ func (sp *Species) rovib(tempK, lnT float64) (rot, vib, el Terms) {
 		rot, vib, el = lv.direct(tempK)
 	} else {
 		lv.once.Do(lv.build)
-		rot, vib, el = lv.table.at(lnT)
+		rot, vib, el = lv.at(lnT)
 	}
 	el.LnQ += sp.lnElecG0Levels
 	return

@@ -290,7 +290,7 @@ func TestLevelTableMatchesDirectSum(t *testing.T) {
 		worst := 0.0
 		for x := lv.table.x0 + 0.5*tableStepLnT; x < math.Log(2e5); x += 7.5 * tableStepLnT {
 			tempK := math.Exp(x)
-			r1, v1, e1 := lv.table.at(x)
+			r1, v1, e1 := lv.at(x)
 			r2, v2, e2 := lv.direct(tempK)
 			for i, p := range [][2]Terms{{r1, r2}, {v1, v2}, {e1, e2}} {
 				for _, d := range []struct {

@@ -92,7 +92,7 @@ func (lv *rovibLevels) torsionTerms(tempK, lnT float64) Terms {
 		return t
 	}
 	lv.once.Do(lv.build)
-	t, _, _ := lv.table.at(lnT)
+	t, _, _ := lv.at(lnT)
 	return t
 }
 
