@@ -53,7 +53,7 @@ func (a *app) cmdCylinder(g *globalOpts, args []string) error {
 	if n != 1 {
 		return badInput("give exactly one of --pres, --mass and --amount (got %d)", n)
 	}
-	resolveAt := 101325.0
+	resolveAt := float64(model.StdPressureAtmPa)
 	if strings.TrimSpace(presText) != "" {
 		p, err := parsePressure("--pres", presText)
 		if err != nil {

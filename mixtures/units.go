@@ -18,7 +18,7 @@ type Pressure struct {
 }
 
 // AtmospherePa is the ambient pressure assumed for gauge readings.
-const AtmospherePa = 101325
+const AtmospherePa = model.StdPressureAtmPa
 
 // TemperatureUnits lists the accepted temperature units, for messages
 // and help.
@@ -113,8 +113,8 @@ var pressureUnitTable = []struct {
 	{"MPa", 1e6, true, true},
 	{"bar", 1e5, true, true},
 	{"mbar", 100, true, true},
-	{"atm", 101325, false, false},
-	{"Torr", 101325.0 / 760, false, false},
+	{"atm", model.StdPressureAtmPa, false, false},
+	{"Torr", model.StdPressureAtmPa / 760.0, false, false},
 	{"psi", poundPerSqInchPa, true, true},
 }
 
@@ -273,8 +273,8 @@ func ParseStdPressure(s string) (StdPressure, error) {
 	return StdBar, model.KindErrorf("mixtures", ErrValue, "standard pressure %s; want 1 bar or 1 atm", model.Quote(s))
 }
 
-// celsiusZeroK is 0 °C in kelvin, by definition of the Celsius scale.
-const celsiusZeroK = 273.15
+// celsiusZeroK is 0 °C in kelvin.
+const celsiusZeroK = model.ZeroCelsiusK
 
 // KelvinToCelsius converts a temperature for display in °C.
 func KelvinToCelsius(tempK float64) float64 { return tempK - celsiusZeroK }

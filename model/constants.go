@@ -35,6 +35,9 @@ const (
 	StdPressureAtmPa = 101325
 )
 
+// ZeroCelsiusK is 0 °C in kelvin, by definition of the Celsius scale.
+const ZeroCelsiusK = 273.15
+
 // RefTempK is the reference temperature of the published tables, 298.15 K.
 const RefTempK = 298.15
 

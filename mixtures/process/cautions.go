@@ -12,7 +12,7 @@ const (
 	// HotGasK: surfaces above about 60 °C burn on contact.
 	HotGasK = 333.15
 	// ColdGasK: below 0 °C moisture freezes and frost forms on lines.
-	ColdGasK = 273.15
+	ColdGasK = model.ZeroCelsiusK
 )
 
 // temperatureCautions are the reminders for a gas of mix that a process

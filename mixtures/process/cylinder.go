@@ -88,7 +88,7 @@ var (
 
 // atmPa is the ambient pressure a gauge reads against: 1 atm (common
 // practice; a gauge reads against the local barometer).
-const atmPa = 101325
+const atmPa = model.StdPressureAtmPa
 
 // cylinderGas fills s at (T, P) and says the state's Z, with the ideal
 // gas where no real-gas figure is known.

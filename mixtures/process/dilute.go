@@ -63,7 +63,7 @@ var (
 
 // slpmPerMolS is one mol/s in litres per minute at 0 °C and 101.325 kPa,
 // for an ideal gas: 60 s/min × 1000 L/m³ × RT₀/P₀.
-var slpmPerMolS = 60e3 * model.GasConstant * 273.15 / 101325
+var slpmPerMolS = 60e3 * model.GasConstant * model.ZeroCelsiusK / model.StdPressureAtmPa
 
 // Solve finds the ratio for the target, or the level for the ratio.
 func (d Dilution) Solve() (*DilutionResult, error) {

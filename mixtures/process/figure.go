@@ -2,6 +2,7 @@ package process
 
 import (
 	"zmix/mixtures"
+	"zmix/model"
 )
 
 // Figure describes one figure of a process result once: its names, unit,
@@ -32,7 +33,7 @@ type AltUnit struct {
 }
 
 // celsius shows a temperature in °C beside kelvin.
-var celsius = []AltUnit{{Unit: "°C", UnitASCII: "C", Scale: 1, Offset: -273.15}}
+var celsius = []AltUnit{{Unit: "°C", UnitASCII: "C", Scale: 1, Offset: -model.ZeroCelsiusK}}
 
 // Value is a figure's SI value in one result.
 type Value struct {

@@ -87,7 +87,7 @@ var (
 )
 
 // normalMolPerM3 is an ideal gas's amount per m³ at 0 °C and 101.325 kPa.
-var normalMolPerM3 = 101325 / (model.GasConstant * 273.15)
+var normalMolPerM3 = model.StdPressureAtmPa / (model.GasConstant * model.ZeroCelsiusK)
 
 // Solve counts the cycles, or the time.
 func (p Purge) Solve() (*PurgeResult, error) {

@@ -24,9 +24,9 @@ const psiPa = 0.45359237 * 9.80665 / (0.0254 * 0.0254)
 
 // The references the trade names. Their values are definitions.
 var (
-	RefNormal = Reference{Key: "normal", Label: "normal: 0 °C and 101.325 kPa", TempK: 273.15, PresPa: 101325}
-	RefISO    = Reference{Key: "15C", Label: "standard: 15 °C and 101.325 kPa (ISO 13443)", TempK: 288.15, PresPa: 101325}
-	Ref20C    = Reference{Key: "20C", Label: "standard: 20 °C and 101.325 kPa", TempK: 293.15, PresPa: 101325}
+	RefNormal = Reference{Key: "normal", Label: "normal: 0 °C and 101.325 kPa", TempK: model.ZeroCelsiusK, PresPa: model.StdPressureAtmPa}
+	RefISO    = Reference{Key: "15C", Label: "standard: 15 °C and 101.325 kPa (ISO 13443)", TempK: model.ZeroCelsiusK + 15, PresPa: model.StdPressureAtmPa}
+	Ref20C    = Reference{Key: "20C", Label: "standard: 20 °C and 101.325 kPa", TempK: model.ZeroCelsiusK + 20, PresPa: model.StdPressureAtmPa}
 	Ref60F    = Reference{Key: "60F", Label: "standard: 60 °F and 14.696 psia", TempK: (60 + 459.67) * 5 / 9, PresPa: 14.696 * psiPa}
 )
 

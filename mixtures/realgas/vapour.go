@@ -42,7 +42,7 @@ const (
 	waterTriplePa    = 611.657
 	troutonSOverR    = 10.5 // ΔSvap/R at the normal boiling point, common practice
 	sublimationMinK  = 50   // lower end of the IAPWS sublimation equation
-	standardAtmPa    = 101325
+	standardAtmPa    = model.StdPressureAtmPa
 	quantumTcBelowMT = 21.8
 	quantumPcBelowMT = 44.2
 )

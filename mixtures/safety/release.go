@@ -11,8 +11,8 @@ import (
 // 1 atm (common practice).
 const (
 	AirO2Frac     = 0.209
-	RoomTempK     = 293.15
-	RoomPresPa    = 101325
+	RoomTempK     = model.ZeroCelsiusK + 20
+	RoomPresPa    = model.StdPressureAtmPa
 	O2DeficientPc = 19.5 // % O2: the usual oxygen-deficiency alarm (common practice)
 )
 
