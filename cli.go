@@ -217,23 +217,32 @@ func readBlend(spec string) (*blendSource, error) {
 		if path == "" {
 			return nil, badInput("--blend @: the file name is missing; give %s", blendForms)
 		}
-		// The blend's items carry their file and line, so that an error
-		// found when it is resolved still names them.
-		f, b, err := mixtures.ReadBlendFile(path)
-		if err != nil {
-			var pe *fs.PathError
-			if errors.As(err, &pe) {
-				return nil, ioFailure(fmt.Errorf("--blend @%s: cannot read it: %v", path, pe.Err))
-			}
-			return nil, badInput("--blend @%s: %v", path, err)
-		}
-		return &blendSource{blend: b, file: f, path: path}, nil
+		return openBlendFile("--blend @"+path+": ", path)
 	}
 	b, err := mixtures.ParseBlend(spec)
 	if err != nil {
 		return nil, badInput("--blend: %v", err)
 	}
 	return &blendSource{blend: b}, nil
+}
+
+// openBlendFile reads a blend file for a command or the workbench; prefix
+// starts its error lines. The blend's items carry their file and line, so
+// that an error found when it is resolved still names them.
+func openBlendFile(prefix, path string) (*blendSource, error) {
+	f, b, err := mixtures.ReadBlendFile(path)
+	if err != nil {
+		var pe *fs.PathError
+		if errors.As(err, &pe) {
+			where := prefix
+			if where == "" {
+				where = model.Printable(path) + ": "
+			}
+			return nil, ioFailure(fmt.Errorf("%scannot read it: %v", where, pe.Err))
+		}
+		return nil, badInput("%s%v", prefix, err)
+	}
+	return &blendSource{blend: b, file: f, path: path}, nil
 }
 
 // label is how the blend is named in a readout.

@@ -2,10 +2,8 @@ package main
 
 import (
 	"bytes"
-	"errors"
 	"fmt"
 	"io"
-	"io/fs"
 	"strings"
 
 	"zmix/mixtures"
@@ -66,19 +64,7 @@ func workbenchBlend(path string) (*blendSource, error) {
 		}
 		return &blendSource{blend: b, file: demo, path: "built-in demo"}, nil
 	}
-	f, err := mixtures.LoadBlendFile(path)
-	if err != nil {
-		var pe *fs.PathError
-		if errors.As(err, &pe) {
-			return nil, ioFailure(fmt.Errorf("%s: cannot read it: %v", path, pe.Err))
-		}
-		return nil, badInput("%v", err)
-	}
-	b, err := f.Parse()
-	if err != nil {
-		return nil, badInput("%s: %v", path, err)
-	}
-	return &blendSource{blend: b, file: f, path: path}, nil
+	return openBlendFile("", path)
 }
 
 // printFileReadout prints what `zmix state --blend @FILE` prints.
