@@ -54,7 +54,9 @@
 //
 // for each electronic state, with a ²Π state's two spin components from
 // the Hill–Van Vleck formula (intermediate between Hund's cases a and b;
-// J ≥ ½ and J ≥ 3/2, each level Λ-doubled), a Σ state's spin multiplicity
+// Ω = ½ from J = ½, Ω = 3/2 from J = 3/2, the lower of the two roots
+// being Ω = ½ for A > 0 and Ω = 3/2 for A < 0; each level Λ-doubled), a
+// Σ state's spin multiplicity
 // as a weight (its few-cm⁻¹ splitting left out), and a Λ > 0 state's
 // levels from N = Λ, Λ-doubled. Nuclear-spin weights go to the levels
 // symmetric and antisymmetric under exchange of the nuclei, which for a
@@ -77,16 +79,18 @@
 // v = 0 ladder, ElectronicGroundOnly the ground state, and
 // RotationSummed or RotationClassical select the rigid rotor.
 //
+// The built-in species with these constants are N2, O2 (with its a, b
+// and Herzberg c, A', A states), CO and NO.
+//
 // Speed: the level list is built when the species is prepared; the sums
 // are tabulated as needed (an interval when a state first falls in it)
 // at steps of 0.02 in ln T up to MaxTempK, and read by quintic Hermite
-// interpolation in ln T from ln q
-// and its first two derivatives at the nodes. ln q, U and Cv then come
-// from one polynomial, so the identities hold to rounding, and the table
-// agrees with the sum itself within 1e-10 in ln q and U and 1e-8 in Cv/R
-// (see TestLevelTableMatchesDirectSum).
-// Below the table's first node (where the 8th level is 40 kT up) the sum
-// is taken level by level.
+// interpolation in ln T from ln q and its first two derivatives at the
+// nodes. ln q, U and Cv then come from one polynomial, so the identities
+// hold to rounding, and the table agrees with the sum itself within
+// 1e-10 in ln q and U and 1e-8 in Cv/R (see
+// TestLevelTableMatchesDirectSum). Below the table's first node (where
+// the 8th level is 40 kT up) the sum is taken level by level.
 //
 // # Hindered internal rotation
 //

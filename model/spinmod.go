@@ -51,8 +51,9 @@ type spinVariant struct {
 }
 
 // spinVariants lists the named modifications. Normal hydrogen and
-// deuterium take the base name once normalByDefault is set; until then
-// the base name stays the equilibrium gas and normal is "nH2", "nD2".
+// deuterium are "nH2" and "nD2", and take the base name too once
+// normalByDefault is set; until then the base name is the equilibrium
+// gas.
 var spinVariants = []spinVariant{
 	{"e", "H2", SpinModification{}, "equilibrium hydrogen"},
 	{"n", "H2", SpinModification{Frozen: true, EvenFraction: 0.25}, "normal hydrogen (3:1 ortho:para, frozen)"},
@@ -95,11 +96,12 @@ func withSpinVariants(list []*Species) (out, variants []*Species) {
 			if v.base != sp.Formula {
 				continue
 			}
-			if normalByDefault && v.prefix == "n" {
+			// A species already made normal (a catalogue built on
+			// another's list) stays the same value.
+			if normalByDefault && v.prefix == "n" && !sp.SpinMod.Frozen {
 				if vs := sp.variant(sp.Formula, v.mod, v.what); vs != nil {
 					base = vs
 				}
-				continue
 			}
 			if vs := sp.variant(v.prefix+v.base, v.mod, v.what); vs != nil {
 				variants = append(variants, vs)

@@ -36,6 +36,9 @@ var (
 // rotor's, F m² + V0/2, which they approach once E ≫ V0.
 const torsionBasisM = 120
 
+// tunnelMergeCm is the tunnelling splitting below which levels are merged.
+const tunnelMergeCm = 0.01
+
 // torsionLevels builds the level list of one torsion, energies from its
 // lowest level, up to the energy a sum at MaxTempK needs.
 func (tor Torsion) levels() *rovibLevels {
@@ -57,9 +60,19 @@ func (tor Torsion) levels() *rovibLevels {
 	eCut := tor.FCm*float64(mCut*mCut) + tor.BarrierCm/2
 	lv := &rovibLevels{lnNorm: math.Log(float64(tor.Symmetry))}
 	e0 := vals[0]
+	group := e0
 	for _, e := range vals {
 		if e >= eCut {
 			break
+		}
+		// Tunnelling splittings below tunnelMergeCm (ethane's ground
+		// level: 0.006 cm⁻¹) matter only below a tenth of a kelvin; the
+		// split levels are taken as one, so that a frozen torsion and a
+		// cold one agree exactly.
+		if e-group < tunnelMergeCm {
+			e = group
+		} else {
+			group = e
 		}
 		lv.thetaK = append(lv.thetaK, WavenumberToKelvin(e-e0))
 		lv.weight = append(lv.weight, 1)
