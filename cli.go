@@ -152,6 +152,16 @@ func flagsGiven(fs *flag.FlagSet) map[string]bool {
 	return set
 }
 
+// parseOnlyFlags parses the flags of a command that takes no positional
+// arguments.
+func parseOnlyFlags(fs *flag.FlagSet, cmd string, args []string) error {
+	rest, err := parseFlags(fs, args, true)
+	if err != nil {
+		return err
+	}
+	return noArgs(cmd, rest)
+}
+
 // noArgs rejects positional arguments for commands that take none.
 func noArgs(cmd string, rest []string) error {
 	if len(rest) > 0 {

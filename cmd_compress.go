@@ -22,11 +22,7 @@ func (a *app) cmdCompress(g *globalOpts, args []string) error {
 	fs.StringVar(&rateText, "rate", "", "the flow `\"VALUE UNIT\"`, for the power")
 	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
 	g.register(fs, false)
-	rest, err := parseFlags(fs, args, true)
-	if err != nil {
-		return err
-	}
-	if err := noArgs("compress", rest); err != nil {
+	if err := parseOnlyFlags(fs, "compress", args); err != nil {
 		return err
 	}
 	src, err := readBlend(blendSpec)

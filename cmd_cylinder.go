@@ -24,11 +24,7 @@ func (a *app) cmdCylinder(g *globalOpts, args []string) error {
 	fs.StringVar(&ratedText, "rated", "", "the cylinder's rated pressure `PR`: a fill above it is refused")
 	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
 	g.register(fs, false)
-	rest, err := parseFlags(fs, args, true)
-	if err != nil {
-		return err
-	}
-	if err := noArgs("cylinder", rest); err != nil {
+	if err := parseOnlyFlags(fs, "cylinder", args); err != nil {
 		return err
 	}
 	src, err := readBlend(blendSpec)

@@ -19,11 +19,7 @@ func (a *app) cmdDilute(g *globalOpts, args []string) error {
 	fs.StringVar(&rateText, "rate", "", "the parent's flow `\"VALUE UNIT\"`, for the diluent and total flows")
 	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
 	g.register(fs, false)
-	rest, err := parseFlags(fs, args, true)
-	if err != nil {
-		return err
-	}
-	if err := noArgs("dilute", rest); err != nil {
+	if err := parseOnlyFlags(fs, "dilute", args); err != nil {
 		return err
 	}
 	parentSrc, err := readBlend(blendSpec)

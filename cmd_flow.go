@@ -17,11 +17,7 @@ func (a *app) cmdFlow(g *globalOpts, args []string) error {
 	fs.StringVar(&refText, "ref", "", "the reference of standard volumes: `normal` (default), 15C, 20C, 60F, or \"T, P\"")
 	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
 	g.register(fs, false)
-	rest, err := parseFlags(fs, args, true)
-	if err != nil {
-		return err
-	}
-	if err := noArgs("flow", rest); err != nil {
+	if err := parseOnlyFlags(fs, "flow", args); err != nil {
 		return err
 	}
 	src, err := readBlend(blendSpec)

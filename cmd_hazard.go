@@ -18,11 +18,7 @@ func (a *app) cmdHazard(g *globalOpts, args []string) error {
 	fs.StringVar(&presText, "pres", "", "total pressure `P`, needed only to turn partial pressures into fractions")
 	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
 	g.register(fs, false)
-	rest, err := parseFlags(fs, args, true)
-	if err != nil {
-		return err
-	}
-	if err := noArgs("hazard", rest); err != nil {
+	if err := parseOnlyFlags(fs, "hazard", args); err != nil {
 		return err
 	}
 	src, err := readBlend(blendSpec)

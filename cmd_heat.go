@@ -16,11 +16,7 @@ func (a *app) cmdHeat(g *globalOpts, args []string) error {
 	fs.StringVar(&rateText, "rate", "", "the flow `\"VALUE UNIT\"`, for the duty as a power")
 	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
 	g.register(fs, false)
-	rest, err := parseFlags(fs, args, true)
-	if err != nil {
-		return err
-	}
-	if err := noArgs("heat", rest); err != nil {
+	if err := parseOnlyFlags(fs, "heat", args); err != nil {
 		return err
 	}
 	src, err := readBlend(blendSpec)

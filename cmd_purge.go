@@ -23,11 +23,7 @@ func (a *app) cmdPurge(g *globalOpts, args []string) error {
 	fs.StringVar(&presText, "pres", "", "the pressure `P` in the volume during a flow purge")
 	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
 	g.register(fs, false)
-	rest, err := parseFlags(fs, args, true)
-	if err != nil {
-		return err
-	}
-	if err := noArgs("purge", rest); err != nil {
+	if err := parseOnlyFlags(fs, "purge", args); err != nil {
 		return err
 	}
 	if strings.TrimSpace(startSpec) == "" || strings.TrimSpace(purgeSpec) == "" {

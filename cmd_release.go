@@ -24,11 +24,7 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	fs.StringVar(&presText, "pres", "", "total pressure `P`, only to turn partial pressures into fractions")
 	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
 	g.register(fs, false)
-	rest, err := parseFlags(fs, args, true)
-	if err != nil {
-		return err
-	}
-	if err := noArgs("release", rest); err != nil {
+	if err := parseOnlyFlags(fs, "release", args); err != nil {
 		return err
 	}
 	src, err := readBlend(blendSpec)

@@ -34,11 +34,7 @@ func (a *app) cmdState(g *globalOpts, args []string) error {
 	fs.BoolVar(&asCSV, "csv", false, "write CSV: a header row and one row")
 	fs.BoolVar(&allNotes, "all-notes", false, "list every validity figure, not only the cautions")
 	g.register(fs, false)
-	rest, err := parseFlags(fs, args, true)
-	if err != nil {
-		return err
-	}
-	if err := noArgs("state", rest); err != nil {
+	if err := parseOnlyFlags(fs, "state", args); err != nil {
 		return err
 	}
 	format, err := pickFormat(asJSON, asCSV)

@@ -41,11 +41,7 @@ func (a *app) cmdSweep(g *globalOpts, args []string) error {
 	fs.BoolVar(&asJSON, "json", false, "write a JSON list of state objects, one per point")
 	fs.BoolVar(&asCSV, "csv", false, "write CSV: a header row, then one row per point")
 	g.register(fs, false)
-	rest, err := parseFlags(fs, args, true)
-	if err != nil {
-		return err
-	}
-	if err := noArgs("sweep", rest); err != nil {
+	if err := parseOnlyFlags(fs, "sweep", args); err != nil {
 		return err
 	}
 	format, err := pickFormat(asJSON, asCSV)

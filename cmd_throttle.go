@@ -17,11 +17,7 @@ func (a *app) cmdThrottle(g *globalOpts, args []string) error {
 	fs.BoolVar(&ideal, "ideal", false, "use the ideal gas (the throttle is then isothermal)")
 	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
 	g.register(fs, false)
-	rest, err := parseFlags(fs, args, true)
-	if err != nil {
-		return err
-	}
-	if err := noArgs("throttle", rest); err != nil {
+	if err := parseOnlyFlags(fs, "throttle", args); err != nil {
 		return err
 	}
 	src, err := readBlend(blendSpec)
