@@ -19,20 +19,11 @@ func (a *app) cmdHeat(g *globalOpts, args []string) error {
 	if err := parseOnlyFlags(fs, "heat", args); err != nil {
 		return err
 	}
-	src, err := readBlend(blendSpec)
-	if err != nil {
-		return err
-	}
-	given := flagsGiven(fs)
-	t1, err := needTemperature("--temp", src.pick(given, "temp", tempText))
+	src, t1, p, err := inletConditions(fs, blendSpec, tempText, presText)
 	if err != nil {
 		return err
 	}
 	t2, err := needTemperature("--to-temp", toText)
-	if err != nil {
-		return err
-	}
-	p, err := needPressure("--pres", src.pick(given, "pres", presText))
 	if err != nil {
 		return err
 	}

@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"flag"
 	"strings"
 
 	"zmix/mixtures"
@@ -85,4 +86,24 @@ func rateMolPerSec(flagName, text string, mix *mixtures.Mixture, tempK, presPa f
 // errors describe what was asked.
 func processFailed(err error) error {
 	return badInput("%s", model.UserMessage(err))
+}
+
+// inletConditions reads the blend and the inlet temperature and pressure
+// of a process command; a blend file's own conditions are the defaults of
+// --temp and --pres.
+func inletConditions(fs *flag.FlagSet, blendSpec, tempText, presText string) (*blendSource, temperature, pressure, error) {
+	src, err := readBlend(blendSpec)
+	if err != nil {
+		return nil, temperature{}, pressure{}, err
+	}
+	given := flagsGiven(fs)
+	t, err := needTemperature("--temp", src.pick(given, "temp", tempText))
+	if err != nil {
+		return nil, temperature{}, pressure{}, err
+	}
+	p, err := needPressure("--pres", src.pick(given, "pres", presText))
+	if err != nil {
+		return nil, temperature{}, pressure{}, err
+	}
+	return src, t, p, nil
 }

@@ -20,16 +20,7 @@ func (a *app) cmdThrottle(g *globalOpts, args []string) error {
 	if err := parseOnlyFlags(fs, "throttle", args); err != nil {
 		return err
 	}
-	src, err := readBlend(blendSpec)
-	if err != nil {
-		return err
-	}
-	given := flagsGiven(fs)
-	t1, err := needTemperature("--temp", src.pick(given, "temp", tempText))
-	if err != nil {
-		return err
-	}
-	p1, err := needPressure("--pres", src.pick(given, "pres", presText))
+	src, t1, p1, err := inletConditions(fs, blendSpec, tempText, presText)
 	if err != nil {
 		return err
 	}
