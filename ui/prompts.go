@@ -295,16 +295,20 @@ func (r *root) export(path string) {
 	what := "readout"
 	var write func(w io.Writer) error
 	if r.exportProc != nil {
-		// The process commands' writers: JSON, or their text readout.
+		// The process commands' writers: JSON, CSV, or their text readout.
 		rep := r.exportProc.processReport()
 		if rep == nil {
 			r.setError("no process result to export: see the Process pane's message")
 			return
 		}
 		what = rep.Result.Kind() + " result"
+		asCSV := strings.EqualFold(filepath.Ext(path), ".csv")
 		write = func(w io.Writer) error {
 			if asJSON {
 				return report.WriteProcessJSON(w, rep)
+			}
+			if asCSV {
+				return report.WriteProcessCSV(w, rep)
 			}
 			if r.c.ASCII {
 				w = &report.ASCIIWriter{W: w}
