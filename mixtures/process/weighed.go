@@ -1,6 +1,7 @@
 package process
 
 import (
+	"fmt"
 	"math"
 	"slices"
 	"strings"
@@ -128,19 +129,19 @@ var (
 		Name: "mass_uncertainty_kg", Digits: mixtures.Digits{Sig: 3}}
 	figWPartM = &Figure{Key: "M", Label: "molar mass", Symbol: "M", SymbolASCII: "M", Unit: "g/mol", UnitASCII: "g/mol", Scale: 1e3,
 		Name: "molar_mass_kg_mol", Digits: mixtures.Digits{Sig: 7}}
-	figWX = &Figure{Key: "x", Label: "mole fraction", Symbol: "x", SymbolASCII: "x", Unit: "%", UnitASCII: "%", Scale: 100,
+	figWX = &Figure{Key: "x", Label: "mole fraction", Symbol: "x", SymbolASCII: "x", Unit: "mol/mol", UnitASCII: "mol/mol", Scale: 1,
 		Name: "x_mol_mol", Digits: mixtures.Digits{Sig: 7}}
-	figWU = &Figure{Key: "u", Label: "standard uncertainty", Symbol: "u(x)", SymbolASCII: "u(x)", Unit: "%", UnitASCII: "%", Scale: 100,
+	figWU = &Figure{Key: "u", Label: "standard uncertainty", Symbol: "u(x)", SymbolASCII: "u(x)", Unit: "mol/mol", UnitASCII: "mol/mol", Scale: 1,
 		Name: "u_mol_mol", Digits: mixtures.Digits{Sig: 2}}
-	figWUExp = &Figure{Key: "U", Label: "expanded uncertainty, k = 2", Symbol: "U (k=2)", SymbolASCII: "U (k=2)", Unit: "%", UnitASCII: "%", Scale: 100,
+	figWUExp = &Figure{Key: "U", Label: "expanded uncertainty, k = 2", Symbol: "U (k=2)", SymbolASCII: "U (k=2)", Unit: "mol/mol", UnitASCII: "mol/mol", Scale: 1,
 		Name: "U_k2_mol_mol", Digits: mixtures.Digits{Sig: 2}}
 	figWURel = &Figure{Key: "ur", Label: "relative standard uncertainty", Symbol: "u(x)/x", SymbolASCII: "u(x)/x", Unit: "%", UnitASCII: "%", Scale: 100,
 		Name: "u_relative", Digits: mixtures.Digits{Sig: 2}}
-	figWUMass = &Figure{Key: "u_m", Label: "from the masses", Symbol: "masses", SymbolASCII: "masses", Unit: "%", UnitASCII: "%", Scale: 100,
+	figWUMass = &Figure{Key: "u_m", Label: "from the masses", Symbol: "masses", SymbolASCII: "masses", Unit: "mol/mol", UnitASCII: "mol/mol", Scale: 1,
 		Name: "u_from_masses_mol_mol", Digits: mixtures.Digits{Sig: 2}}
-	figWUPur = &Figure{Key: "u_p", Label: "from the purity", Symbol: "purity", SymbolASCII: "purity", Unit: "%", UnitASCII: "%", Scale: 100,
+	figWUPur = &Figure{Key: "u_p", Label: "from the purity", Symbol: "purity", SymbolASCII: "purity", Unit: "mol/mol", UnitASCII: "mol/mol", Scale: 1,
 		Name: "u_from_purity_mol_mol", Digits: mixtures.Digits{Sig: 2}}
-	figWUMol = &Figure{Key: "u_M", Label: "from the molar masses", Symbol: "molar masses", SymbolASCII: "molar masses", Unit: "%", UnitASCII: "%", Scale: 100,
+	figWUMol = &Figure{Key: "u_M", Label: "from the molar masses", Symbol: "molar masses", SymbolASCII: "molar masses", Unit: "mol/mol", UnitASCII: "mol/mol", Scale: 1,
 		Name: "u_from_molar_masses_mol_mol", Digits: mixtures.Digits{Sig: 2}}
 )
 
@@ -450,21 +451,22 @@ func (w Weighing) Solve() (*WeighedResult, error) {
 		Table{Name: "budget", Title: "Standard uncertainty by source", RowName: "species", RowLabels: g.species, Rows: budgetRows})
 
 	var exact, limits []string
-	for _, p := range w.Parents {
+	for a, p := range w.Parents {
 		for _, pt := range p.Parts {
+			where := fmt.Sprintf("%s in parent %d", pt.Species.Formula, a+1)
 			switch {
 			case pt.Limit:
-				limits = append(limits, pt.Species.Formula+" in "+p.Gas)
+				limits = append(limits, where)
 			case !pt.Balance && !pt.Stated:
-				exact = append(exact, pt.Species.Formula+" in "+p.Gas)
+				exact = append(exact, where)
 			}
 		}
 	}
 	if len(limits) > 0 {
-		r.note("below a limit L, an amount is taken as L/2 with u = L/(2√3) (ISO 6142-1): " + strings.Join(limits, "; "))
+		r.note("below a limit L, an amount is taken as L/2 with u = L/(2√3) (ISO 6142-1): " + strings.Join(limits, ", "))
 	}
 	if len(exact) > 0 {
-		r.note("amounts given without ± are taken as exact (u = 0): " + strings.Join(exact, "; "))
+		r.note("amounts given without ± are taken as exact (u = 0): " + strings.Join(exact, ", "))
 	}
 	r.note("atomic weights: IUPAC 2021, each ± taken as the half-width of a rectangular distribution (u = U/√3); U = 2u, a coverage of about 95 % for a normal distribution")
 	r.caution(mixtures.Caution{Title: "Verification", Text: "a gravimetric composition is verified by analysis before the cylinder is used as a calibration gas (ISO 6142-1); the cylinder's rating and marking are yours to check."})
