@@ -359,8 +359,12 @@ func (w Weighing) build() (*gravimetry, []float64, []float64, error) {
 		if err != nil {
 			return nil, nil, nil, err
 		}
+		uA, ok := atomicWeightUGPerMol[e]
+		if !ok {
+			return nil, nil, nil, model.Errorf("process", "the uncertainty of the atomic weight of %s is not known here; zmix cannot give the uncertainty of a blend holding it", e)
+		}
 		q = append(q, a)
-		u = append(u, atomicWeightUGPerMol[e]*1e-3/math.Sqrt(3))
+		u = append(u, uA*1e-3/math.Sqrt(3))
 	}
 	g.nq = len(q)
 	return g, q, u, nil

@@ -91,7 +91,7 @@ func TestWeighedTwoComponents(t *testing.T) {
 // TestWeighedIdentities: over seeded random weighings the fractions sum
 // to 1 and each row of their covariance to 0 (Σxᵢ = 1 holds whatever
 // the inputs). With every input's uncertainty zero (the masses, the
-// amounts given without ±, the atomic weights' table emptied) every u is
+// amounts given without ±, the atomic weights' table zeroed) every u is
 // zero.
 func TestWeighedIdentities(t *testing.T) {
 	rng := rand.New(rand.NewPCG(1, 1))
@@ -136,6 +136,9 @@ func TestWeighedIdentities(t *testing.T) {
 	// carry ±5e-9 to ±6e-6; zero the table for this check.
 	saved := atomicWeightUGPerMol
 	atomicWeightUGPerMol = map[string]float64{}
+	for e := range saved {
+		atomicWeightUGPerMol[e] = 0
+	}
 	defer func() { atomicWeightUGPerMol = saved }()
 	w := mustParents(t, 0, "25.1 g CO2 with O2 5ppm", "500 g N2", "3.2 g CH4")
 	r, err := w.Solve()
@@ -299,4 +302,21 @@ func FuzzParseParent(f *testing.F) {
 			t.Errorf("%q: non-finite %s", s, what)
 		}
 	})
+}
+
+// Every element of the built-in catalogue has its atomic weight's
+// uncertainty.
+func TestAtomicWeightUncertaintiesCoverCatalogue(t *testing.T) {
+	for _, sp := range model.Builtin().All() {
+		c, err := model.ParseFormula(sp.Formula)
+		if err != nil {
+			t.Errorf("%s: %v", sp.Formula, err)
+			continue
+		}
+		for e := range c {
+			if _, ok := atomicWeightUGPerMol[e]; !ok {
+				t.Errorf("%s: no uncertainty for the atomic weight of %s", sp.Formula, e)
+			}
+		}
+	}
 }
