@@ -12,10 +12,10 @@ func (a *app) cmdWeighed(g *globalOpts, args []string) error {
 	fset := newFlagSet("zmix weighed")
 	var parents streamsFlag
 	var massUText string
-	var asJSON bool
+	var outFmt formatFlags
 	fset.Var(&parents, "add", "one parent gas weighed in, `\"MASS [± U] [of] GAS\"` (once per parent, in fill order)")
 	fset.StringVar(&massUText, "mass-u", "", "the standard uncertainty `U` of each weighed mass (2mg)")
-	fset.BoolVar(&asJSON, "json", false, "write one JSON object")
+	outFmt.register(fset)
 	g.register(fset, false)
 	if err := parseOnlyFlags(fset, "weighed", args); err != nil {
 		return err
@@ -48,7 +48,7 @@ func (a *app) cmdWeighed(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(strings.Join(labels, "  +  "), res, asJSON, g.ascii)
+	return a.printProcess(strings.Join(labels, "  +  "), res, outFmt, g.ascii)
 }
 
 func usageWeighed(w io.Writer) {
@@ -76,6 +76,7 @@ Flags:
   --add GAS        one parent gas: "MASS [± U] [of] GAS" (repeat, one per parent)
   --mass-u U       standard uncertainty of each weighed mass: %s (required)
   --json           one JSON object: parents, composition, budget, ...
+  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 
