@@ -175,6 +175,9 @@ func (sp *Species) fill(s *State, tempK, presPa float64, tr Treatment) {
 			s.Rot = sp.linearRotor(tempK, invT, lnT, tr.Rotation)
 		} else {
 			s.Rot = sp.rigidBodyRotor(lnT) // inlined: no call for most species
+			if sp.distortionPerK != 0 && sp.summedLevels(tr) {
+				s.Rot = s.Rot.add(sp.distortionTerms(tempK))
+			}
 		}
 		s.Vib = Terms{}
 		switch {
