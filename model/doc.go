@@ -116,9 +116,9 @@
 // comes within 0.6 % of the tables to 3000 K, CO2's within 0.1 % to
 // 3500 K.
 //
-// The rigid rotor with harmonic vibration stays the default
-// (LevelsDefault) until the worked examples that quote its figures are
-// refreshed; see summedByDefault.
+// Summed levels are the default (LevelsDefault, see summedByDefault)
+// wherever a species lists the constants for them; the rigid rotor with
+// harmonic vibration stays available as LevelsRigidHarmonic.
 //
 // # Nuclear spin of homonuclear molecules
 //
@@ -136,10 +136,9 @@
 // eD2, nD2 (2:1, frozen) and oD2 (ortho). A frozen modification is the
 // ideal mixture of the even-J and odd-J gases at fixed fractions x_i,
 // ln q_rot = Σ x_i ln(g_i q_i/(g_tot x_i)); see spinmod.go. They are
-// names for Lookup, not entries of All. "H2" and "D2" stay the
-// equilibrium gases until normalByDefault is set (with the README's
-// examples refreshed); then they name the normal gases, as a cylinder
-// holds them.
+// names for Lookup, not entries of All. With normalByDefault set, "H2"
+// and "D2" name the normal gases, as a cylinder holds them; the
+// equilibrium gases of the published tables are eH2 and eD2.
 //
 // # Conventions
 //

@@ -51,23 +51,23 @@ type spinVariant struct {
 }
 
 // spinVariants lists the named modifications. Normal hydrogen and
-// deuterium are "nH2" and "nD2", and take the base name too once
-// normalByDefault is set; until then the base name is the equilibrium
-// gas.
+// deuterium are "nH2" and "nD2", and take the base name too while
+// normalByDefault is set (3:1 and 2:1 ortho:para, frozen).
 var spinVariants = []spinVariant{
 	{"e", "H2", SpinModification{}, "equilibrium hydrogen"},
-	{"n", "H2", SpinModification{Frozen: true, EvenFraction: 0.25}, "normal hydrogen (3:1 ortho:para, frozen)"},
+	{"n", "H2", SpinModification{Frozen: true, EvenFraction: 0.25}, "normal hydrogen"},
 	{"p", "H2", SpinModification{Frozen: true, EvenFraction: 1}, "para hydrogen"},
 	{"e", "D2", SpinModification{}, "equilibrium deuterium"},
-	{"n", "D2", SpinModification{Frozen: true, EvenFraction: 2.0 / 3}, "normal deuterium (2:1 ortho:para, frozen)"},
+	{"n", "D2", SpinModification{Frozen: true, EvenFraction: 2.0 / 3}, "normal deuterium"},
 	{"o", "D2", SpinModification{Frozen: true, EvenFraction: 1}, "ortho deuterium"},
 }
 
 // normalByDefault says whether "H2" and "D2" name the normal (frozen)
-// gases rather than the equilibrium ones. It stays false until the
-// README's worked examples and the workbench's golden screens that show
-// H2 are refreshed in the same change.
-const normalByDefault = false
+// gases rather than the equilibrium ones. It is set: a cylinder holds
+// normal hydrogen, and the published tables' equilibrium gas is eH2.
+// Turning it off moves the README's worked examples and the workbench's
+// golden screens that show H2, which must be refreshed in the same change.
+const normalByDefault = true
 
 // splitSpinPrefix splits "eH2" into "e" and "H2"; a formula without a
 // known spin-modification prefix comes back whole.

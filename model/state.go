@@ -50,16 +50,16 @@ const (
 	LevelsRigidHarmonic
 )
 
-// summedByDefault says whether LevelsDefault sums the levels. It stays
-// false until the README's worked examples and the workbench's golden
-// screens, whose figures move in the fourth or fifth digit with it, are
+// summedByDefault says whether LevelsDefault sums the levels. It is set.
+// Turning it off moves figures of the README's worked examples and the
+// workbench's golden screens in the fourth or fifth digit; they must be
 // refreshed in the same change.
-const summedByDefault = false
+const summedByDefault = true
 
 // Treatment picks a model per degree of freedom. The zero value is the
-// default: the summed/series rigid rotor, harmonic vibration and all
-// listed electronic levels (and, once summedByDefault is set, the summed
-// levels of a diatomic with Dunham constants).
+// default: the summed levels of a species with Dunham or anharmonic
+// constants (summedByDefault), otherwise the summed/series rigid rotor,
+// harmonic vibration and all listed electronic levels.
 //
 // With the summed levels, RotationSummed and RotationClassical (which
 // name rigid rotors) select the rigid rotor and harmonic vibration;

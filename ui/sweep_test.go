@@ -798,7 +798,7 @@ func BenchmarkSweepResultArrives(b *testing.B) {
 func TestSweepHiddenCurveAndHeader(t *testing.T) {
 	// The sweep pane of the 120×40 screen.
 	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepPressure, From: "1 bar", To: "100 bar", Steps: 200, Property: "Cp", Overlay: true}, 72, 17)
-	if v := p.View(); !strings.Contains(v, "N2 29.11 (under ") {
+	if v := p.View(); !strings.Contains(v, "N2 29.12 (under ") {
 		t.Errorf("N2 lies under another curve, and the legend does not say so:\n%s", v)
 	}
 	for _, s := range []SweepSettings{

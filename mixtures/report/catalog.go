@@ -96,7 +96,16 @@ func WriteSpecies(w io.Writer, sp *model.Species, builtin bool, stdPa float64, t
 		d.Row("rotational constants", strings.Join(parts, ", "))
 	}
 	if sp.Homonuclear() {
-		d.Row("nuclear-spin weights", fmt.Sprintf("even J %g, odd J %g (spin isomers in equilibrium)", sp.SpinWeights[0], sp.SpinWeights[1]))
+		how := "spin isomers in equilibrium"
+		switch {
+		case sp.SpinMod.Frozen && sp.SpinMod.EvenFraction == 1:
+			how = "frozen: even J only"
+		case sp.SpinMod.Frozen && sp.SpinMod.EvenFraction == 0:
+			how = "frozen: odd J only"
+		case sp.SpinMod.Frozen:
+			how = fmt.Sprintf("frozen mixture: %s %% even J, %s %% odd J", Short(100*sp.SpinMod.EvenFraction, 3), Short(100*(1-sp.SpinMod.EvenFraction), 3))
+		}
+		d.Row("nuclear-spin weights", fmt.Sprintf("even J %g, odd J %g (%s)", sp.SpinWeights[0], sp.SpinWeights[1], how))
 	}
 	if len(sp.Vib) == 0 {
 		d.Row("vibrations", "none")

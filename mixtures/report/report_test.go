@@ -303,3 +303,33 @@ func TestAppendJSONString(t *testing.T) {
 		}
 	}
 }
+
+// The catalogue entry of H2 and its spin modifications says which mixture
+// of ortho and para each name holds, since normal and equilibrium
+// hydrogen differ by up to 80 % in rotational Cp below 300 K.
+func TestSpeciesSpinModificationText(t *testing.T) {
+	tests := []struct {
+		formula string
+		want    string
+	}{
+		{"H2", "(frozen mixture: 25 % even J, 75 % odd J)"}, // normal hydrogen, 3:1 ortho:para
+		{"nH2", "(frozen mixture: 25 % even J, 75 % odd J)"},
+		{"eH2", "(spin isomers in equilibrium)"},
+		{"pH2", "(frozen: even J only)"},
+		{"D2", "(frozen mixture: 66.7 % even J, 33.3 % odd J)"}, // normal deuterium, 2:1 ortho:para
+		{"oD2", "(frozen: even J only)"},
+	}
+	for _, tt := range tests {
+		sp, ok := model.Builtin().Lookup(tt.formula)
+		if !ok {
+			t.Fatalf("%s: not in the catalogue", tt.formula)
+		}
+		var b bytes.Buffer
+		if err := WriteSpecies(&b, sp, true, 1e5, []float64{298.15}); err != nil {
+			t.Fatal(err)
+		}
+		if !strings.Contains(b.String(), tt.want) {
+			t.Errorf("catalog %s: want %q in\n%s", tt.formula, tt.want, b.String())
+		}
+	}
+}
