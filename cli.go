@@ -191,6 +191,18 @@ func pickFormat(asJSON, asCSV bool) (outputFormat, error) {
 	return formatText, nil
 }
 
+// formatFlags are the --json and --csv flags of a command whose result is
+// nested (the process, hazard and release commands); their CSV is the
+// long table of report.WriteFlatCSV.
+type formatFlags struct{ json, csv bool }
+
+func (f *formatFlags) register(fs *flag.FlagSet) {
+	fs.BoolVar(&f.json, "json", false, "write one JSON object")
+	fs.BoolVar(&f.csv, "csv", false, "write CSV: one row per figure (section, row, name, value)")
+}
+
+func (f formatFlags) pick() (outputFormat, error) { return pickFormat(f.json, f.csv) }
+
 // page returns where a text output is rendered: out itself, or a writer
 // that turns it into plain ASCII.
 func page(out *bytes.Buffer, ascii bool) io.Writer {

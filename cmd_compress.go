@@ -11,7 +11,7 @@ import (
 func (a *app) cmdCompress(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix compress")
 	var blendSpec, tempText, presText, toText, effText, stagesText, coolText, rateText string
-	var asJSON bool
+	var outFmt formatFlags
 	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&tempText, "temp", "", "inlet temperature `T` with a unit")
 	fs.StringVar(&presText, "pres", "", "inlet pressure `P` with a unit")
@@ -20,7 +20,7 @@ func (a *app) cmdCompress(g *globalOpts, args []string) error {
 	fs.StringVar(&stagesText, "stages", "", "number of compression stages `N`, equal pressure ratios (default 1)")
 	fs.StringVar(&coolText, "intercool", "", "temperature `T` the gas is cooled to between stages (default the inlet's)")
 	fs.StringVar(&rateText, "rate", "", "the flow `\"VALUE UNIT\"`, for the power")
-	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
+	outFmt.register(fs)
 	g.register(fs, false)
 	if err := parseOnlyFlags(fs, "compress", args); err != nil {
 		return err
@@ -70,12 +70,12 @@ func (a *app) cmdCompress(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(src.label(), res, asJSON, g.ascii)
+	return a.printProcess(src.label(), res, outFmt, g.ascii)
 }
 
 func usageCompress(w io.Writer) {
 	io.WriteString(w, `Usage: zmix compress --blend SPEC --temp T --pres P --to P2 [--eff η]
-                     [--stages N --intercool T] [--rate R] [--json]
+                     [--stages N --intercool T] [--rate R] [--json | --csv]
 
 Compresses a blend adiabatically in steady flow from (T, P) to P2, or
 expands it when P2 is below P. The isentropic outlet comes from
@@ -96,6 +96,7 @@ Flags:
   --intercool T    the temperature between stages (default the inlet's)
   --rate R         the flow, for the power (see zmix flow --help for units)
   --json           one JSON object: outlet_temperature_K,
+  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
                    isentropic_outlet_temperature_K, work_J_mol, work_J_kg,
                    power_W (with --rate), stages (a list), ...
   --species FILE   merge a species file over the catalogue (repeatable)

@@ -11,7 +11,7 @@ import (
 func (a *app) cmdCylinder(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix cylinder")
 	var blendSpec, volText, tempText, presText, massText, amountText, toText, refText, recipe, ratedText string
-	var asJSON bool
+	var outFmt formatFlags
 	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&volText, "volume", "", "the cylinder's water volume `V` (50L, 0.05m3)")
 	fs.StringVar(&tempText, "temp", "", "the gas temperature `T` with a unit")
@@ -22,7 +22,7 @@ func (a *app) cmdCylinder(g *globalOpts, args []string) error {
 	fs.StringVar(&refText, "ref", "normal", "the reference condition `NAME` of the standard volume")
 	fs.StringVar(&recipe, "recipe", "", "a fill recipe: `pressure` or weight")
 	fs.StringVar(&ratedText, "rated", "", "the cylinder's rated pressure `PR`: a fill above it is refused")
-	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
+	outFmt.register(fs)
 	g.register(fs, false)
 	if err := parseOnlyFlags(fs, "cylinder", args); err != nil {
 		return err
@@ -94,7 +94,7 @@ func (a *app) cmdCylinder(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(src.label(), res, asJSON, g.ascii)
+	return a.printProcess(src.label(), res, outFmt, g.ascii)
 }
 
 // cylinderQuantity parses a volume, mass or amount flag; an empty
@@ -115,7 +115,7 @@ func cylinderQuantity(flagName, kind, text string, required bool) (float64, erro
 
 func usageCylinder(w io.Writer) {
 	io.WriteString(w, `Usage: zmix cylinder --blend SPEC --volume V --temp T (--pres P | --mass M | --amount N)
-                     [--to-temp T2] [--ref NAME] [--recipe pressure|weight] [--rated PR] [--json]
+                     [--to-temp T2] [--ref NAME] [--recipe pressure|weight] [--rated PR] [--json | --csv]
 
 A cylinder's contents: from its water volume, the gas temperature and one
 of the fill pressure, the mass or the amount, the others, with the
@@ -143,6 +143,7 @@ Flags:
   --recipe R       pressure or weight
   --rated PR       the cylinder's rated pressure: a fill above it is refused
   --json           one JSON object: amount_mol, mass_kg, z, pressure_Pa, ref_m3, steps, ...
+  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

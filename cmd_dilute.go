@@ -11,13 +11,13 @@ import (
 func (a *app) cmdDilute(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix dilute")
 	var blendSpec, withSpec, targetText, ratioText, rateText string
-	var asJSON bool
+	var outFmt formatFlags
 	fs.StringVar(&blendSpec, "blend", "", "the parent blend: `SPEC` text, or @FILE")
 	fs.StringVar(&withSpec, "with", "", "the diluent: a pure gas or a second blend, `SPEC` text or @FILE")
 	fs.StringVar(&targetText, "target", "", "the level to reach, `\"SPECIES LEVEL\"`, e.g. \"SiH4 50ppm\"")
 	fs.StringVar(&ratioText, "ratio", "", "instead of --target: moles of diluent per mole of parent, `R`; then --target names only the species (\"SiH4\")")
 	fs.StringVar(&rateText, "rate", "", "the parent's flow `\"VALUE UNIT\"`, for the diluent and total flows")
-	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
+	outFmt.register(fs)
 	g.register(fs, false)
 	if err := parseOnlyFlags(fs, "dilute", args); err != nil {
 		return err
@@ -71,12 +71,12 @@ func (a *app) cmdDilute(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(parentSrc.label()+"  diluted with  "+diluentB.Text, res, asJSON, g.ascii)
+	return a.printProcess(parentSrc.label()+"  diluted with  "+diluentB.Text, res, outFmt, g.ascii)
 }
 
 func usageDilute(w io.Writer) {
 	io.WriteString(w, `Usage: zmix dilute --blend PARENT --with DILUENT (--target "SPECIES LEVEL" | --target SPECIES --ratio R)
-                   [--rate R] [--json]
+                   [--rate R] [--json | --csv]
 
 The dilution that brings one species of a parent blend to a target level
 with a diluent (a pure gas or a second blend), from the mole balance
@@ -92,6 +92,7 @@ Flags:
   --ratio R        moles of diluent per mole of parent
   --rate R         the parent's flow (see zmix flow --help for units)
   --json           one JSON object: diluent_per_parent_mol_mol, final_level,
+  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
                    dilution_factor, species, ...
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)

@@ -9,13 +9,13 @@ import (
 func (a *app) cmdFlow(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix flow")
 	var blendSpec, rateText, tempText, presText, refText string
-	var asJSON bool
+	var outFmt formatFlags
 	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&rateText, "rate", "", "the flow `\"VALUE UNIT\"`: mol/s, kmol/h, kg/h, lb/h, m3/h, L/min, ACFM, Nm3/h, Sm3/h, SLPM, sccm, SCFH, SCFM")
 	fs.StringVar(&tempText, "temp", "", "the line temperature `T`, for actual volumes")
 	fs.StringVar(&presText, "pres", "", "the line pressure `P`, for actual volumes")
 	fs.StringVar(&refText, "ref", "", "the reference of standard volumes: `normal` (default), 15C, 20C, 60F, or \"T, P\"")
-	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
+	outFmt.register(fs)
 	g.register(fs, false)
 	if err := parseOnlyFlags(fs, "flow", args); err != nil {
 		return err
@@ -68,7 +68,7 @@ func (a *app) cmdFlow(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(src.label(), res, asJSON, g.ascii)
+	return a.printProcess(src.label(), res, outFmt, g.ascii)
 }
 
 const rateHelp = `Rates: "VALUE UNIT"
@@ -86,7 +86,7 @@ const referenceHelp = `References (--ref): normal (0 °C, 101.325 kPa), 15C (15 
 `
 
 func usageFlow(w io.Writer) {
-	io.WriteString(w, `Usage: zmix flow --blend SPEC --rate "VALUE UNIT" [--temp T --pres P] [--ref NAME] [--json]
+	io.WriteString(w, `Usage: zmix flow --blend SPEC --rate "VALUE UNIT" [--temp T --pres P] [--ref NAME] [--json | --csv]
 
 Converts a flow of a blend between molar, mass, actual-volume and
 standard-volume units, and gives the density at the reference, the
@@ -101,6 +101,7 @@ Flags:
   --pres P         the line pressure, for actual volumes
   --ref NAME       the reference of standard volumes (default normal)
   --json           one JSON object: mol_s, kg_s, ref_m3_s, ref_temperature_K,
+  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
                    ref_pressure_Pa, actual_m3_s, gas_correction_factor, ...
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)

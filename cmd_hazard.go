@@ -13,10 +13,10 @@ import (
 func (a *app) cmdHazard(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix hazard")
 	var blendSpec, presText string
-	var asJSON bool
+	var outFmt formatFlags
 	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&presText, "pres", "", "total pressure `P`, needed only to turn partial pressures into fractions")
-	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
+	outFmt.register(fs)
 	g.register(fs, false)
 	if err := parseOnlyFlags(fs, "hazard", args); err != nil {
 		return err
@@ -35,9 +35,16 @@ func (a *app) cmdHazard(g *globalOpts, args []string) error {
 	}
 	rep := &report.HazardReport{Label: src.label(), Result: safety.Classify(parts)}
 	var out bytes.Buffer
-	if asJSON {
+	format, err := outFmt.pick()
+	if err != nil {
+		return err
+	}
+	switch format {
+	case formatJSON:
 		err = report.WriteHazardJSON(&out, rep)
-	} else {
+	case formatCSV:
+		err = report.WriteHazardCSV(&out, rep)
+	default:
 		err = report.WriteHazardText(page(&out, g.ascii), rep)
 	}
 	if err != nil {

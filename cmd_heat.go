@@ -8,13 +8,13 @@ import (
 func (a *app) cmdHeat(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix heat")
 	var blendSpec, tempText, toText, presText, rateText string
-	var asJSON bool
+	var outFmt formatFlags
 	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&tempText, "temp", "", "inlet temperature `T1` with a unit")
 	fs.StringVar(&toText, "to-temp", "", "outlet temperature `T2` with a unit")
 	fs.StringVar(&presText, "pres", "", "the constant pressure `P`")
 	fs.StringVar(&rateText, "rate", "", "the flow `\"VALUE UNIT\"`, for the duty as a power")
-	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
+	outFmt.register(fs)
 	g.register(fs, false)
 	if err := parseOnlyFlags(fs, "heat", args); err != nil {
 		return err
@@ -42,11 +42,11 @@ func (a *app) cmdHeat(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(src.label(), res, asJSON, g.ascii)
+	return a.printProcess(src.label(), res, outFmt, g.ascii)
 }
 
 func usageHeat(w io.Writer) {
-	io.WriteString(w, `Usage: zmix heat --blend SPEC --temp T1 --to-temp T2 --pres P [--rate R] [--json]
+	io.WriteString(w, `Usage: zmix heat --blend SPEC --temp T1 --to-temp T2 --pres P [--rate R] [--json | --csv]
 
 The duty to take a blend from T1 to T2 at constant pressure: ΔH per mole
 and per kg, and as a power for a flow, from the engine's own H(T); a
@@ -60,6 +60,7 @@ Flags:
   --pres P         the pressure (required unless the file has one)
   --rate R         the flow, for the duty as a power (see zmix flow --help)
   --json           one JSON object: duty_J_mol, duty_J_kg, duty_W (with --rate), ...
+  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

@@ -25,10 +25,10 @@ func (a *app) cmdMix(g *globalOpts, args []string) error {
 	fset := newFlagSet("zmix mix")
 	var streams streamsFlag
 	var presText string
-	var asJSON bool
+	var outFmt formatFlags
 	fset.Var(&streams, "stream", "one inlet, `\"BLEND; T; RATE\"` (give two or more)")
 	fset.StringVar(&presText, "pres", "", "the mixing pressure `P`")
-	fset.BoolVar(&asJSON, "json", false, "write one JSON object")
+	outFmt.register(fset)
 	g.register(fset, false)
 	rest, err := parseFlags(fset, args, true)
 	if err != nil {
@@ -78,7 +78,7 @@ func (a *app) cmdMix(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(strings.Join(labels, "  +  "), res, asJSON, g.ascii)
+	return a.printProcess(strings.Join(labels, "  +  "), res, outFmt, g.ascii)
 }
 
 // streamBlend reads a stream's blend: text, or @FILE for a blend file.
@@ -103,7 +103,7 @@ func streamBlend(flag, text string) (*mixtures.Blend, error) {
 }
 
 func usageMix(w io.Writer) {
-	io.WriteString(w, `Usage: zmix mix --stream "BLEND; T; RATE" --stream "BLEND; T; RATE" [...] --pres P [--json]
+	io.WriteString(w, `Usage: zmix mix --stream "BLEND; T; RATE" --stream "BLEND; T; RATE" [...] --pres P [--json | --csv]
 
 Joins two or more streams adiabatically at one pressure, each with its own
 blend, temperature and flow. Gives the outlet composition, the outlet
@@ -116,6 +116,7 @@ Flags:
                    flow, separated by semicolons; give two or more
   --pres P         the mixing pressure (required)
   --json           one JSON object: outlet_temperature_K, rate_mol_s,
+  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
                    entropy_generation_W_K, species (as in state), outlet, streams
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)

@@ -14,14 +14,20 @@ import (
 // What the process commands share: reading their values and writing a
 // solved process. The calculations live in mixtures/process.
 
-// printProcess writes a solved process as text or JSON, in one go.
-func (a *app) printProcess(label string, res process.Result, asJSON, ascii bool) error {
+// printProcess writes a solved process as text, JSON or CSV, in one go.
+func (a *app) printProcess(label string, res process.Result, outFmt formatFlags, ascii bool) error {
+	format, err := outFmt.pick()
+	if err != nil {
+		return err
+	}
 	rep := &report.ProcessReport{Label: label, Result: res}
 	var out bytes.Buffer
-	var err error
-	if asJSON {
+	switch format {
+	case formatJSON:
 		err = report.WriteProcessJSON(&out, rep)
-	} else {
+	case formatCSV:
+		err = report.WriteProcessCSV(&out, rep)
+	default:
 		err = report.WriteProcessText(page(&out, ascii), rep)
 	}
 	if err != nil {

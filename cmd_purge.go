@@ -11,7 +11,7 @@ import (
 func (a *app) cmdPurge(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix purge")
 	var startSpec, purgeSpec, targetText, swingText, vacText, volText, rateText, tempText, presText string
-	var asJSON bool
+	var outFmt formatFlags
 	fs.StringVar(&startSpec, "start", "", "the gas in the volume at the start: `SPEC` text or @FILE")
 	fs.StringVar(&purgeSpec, "purge", "", "the purge gas: `SPEC` text or @FILE")
 	fs.StringVar(&targetText, "target", "", "the level to reach, `\"SPECIES LEVEL\"`, e.g. \"O2 10ppm\"")
@@ -21,7 +21,7 @@ func (a *app) cmdPurge(g *globalOpts, args []string) error {
 	fs.StringVar(&rateText, "rate", "", "the purge flow `\"VALUE UNIT\"`, for a flow purge")
 	fs.StringVar(&tempText, "temp", "", "the gas temperature `T` in the volume")
 	fs.StringVar(&presText, "pres", "", "the pressure `P` in the volume during a flow purge")
-	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
+	outFmt.register(fs)
 	g.register(fs, false)
 	if err := parseOnlyFlags(fs, "purge", args); err != nil {
 		return err
@@ -118,13 +118,13 @@ func (a *app) cmdPurge(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(startB.Text+"  purged with  "+purgeB.Text, res, asJSON, g.ascii)
+	return a.printProcess(startB.Text+"  purged with  "+purgeB.Text, res, outFmt, g.ascii)
 }
 
 func usagePurge(w io.Writer) {
 	io.WriteString(w, `Usage: zmix purge --start SPEC --purge SPEC --target "SPECIES LEVEL"
                   (--swing P_LOW..P_HIGH | --vacuum P_VAC..P_FILL | --volume V --rate R [--temp T --pres P])
-                  [--volume V --temp T] [--json]
+                  [--volume V --temp T] [--json | --csv]
 
 Purging a line or vessel of one species, on the common-practice ideal-mixing
 model, counting the purge gas's own content of that species:
@@ -147,6 +147,7 @@ Flags:
   --temp T         the gas temperature in the volume
   --pres P         the pressure in the volume during a flow purge
   --json           one JSON object: cycles (swing), time_s and
+  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
                    volume_exchanges (flow), final_level, ...
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)

@@ -14,7 +14,7 @@ import (
 func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix release")
 	var blendSpec, presText, amountText, rateText, roomText, achText, ventText string
-	var asJSON bool
+	var outFmt formatFlags
 	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&amountText, "amount", "", "the amount `Q` released: 2 Nm3, 5 kg, 300 scf, 40 mol")
 	fs.StringVar(&rateText, "rate", "", "a continuous release `R`: 10 SLPM, 2 Nm3/h, 0.1 kg/h")
@@ -22,7 +22,7 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	fs.StringVar(&achText, "ach", "", "ventilation in air changes per hour `N`")
 	fs.StringVar(&ventText, "vent", "", "ventilation as a flow `FLOW`: 360 m3/h, 200 ACFM")
 	fs.StringVar(&presText, "pres", "", "total pressure `P`, only to turn partial pressures into fractions")
-	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
+	outFmt.register(fs)
 	g.register(fs, false)
 	if err := parseOnlyFlags(fs, "release", args); err != nil {
 		return err
@@ -103,9 +103,16 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	}
 	rep := &report.ReleaseReport{Label: src.label(), Release: rel, Result: rel.Solve(), What: strings.Join(what, " "), Vent: vent}
 	var out bytes.Buffer
-	if asJSON {
+	format, err := outFmt.pick()
+	if err != nil {
+		return err
+	}
+	switch format {
+	case formatJSON:
 		err = report.WriteReleaseJSON(&out, rep)
-	} else {
+	case formatCSV:
+		err = report.WriteReleaseCSV(&out, rep)
+	default:
 		err = report.WriteReleaseText(page(&out, g.ascii), rep)
 	}
 	if err != nil {

@@ -9,13 +9,14 @@ import (
 func (a *app) cmdThrottle(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix throttle")
 	var blendSpec, tempText, presText, toText string
-	var ideal, asJSON bool
+	var ideal bool
+	var outFmt formatFlags
 	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&tempText, "temp", "", "inlet temperature `T1` with a unit")
 	fs.StringVar(&presText, "pres", "", "inlet pressure `P1`")
 	fs.StringVar(&toText, "to-pres", "", "outlet pressure `P2`")
 	fs.BoolVar(&ideal, "ideal", false, "use the ideal gas (the throttle is then isothermal)")
-	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
+	outFmt.register(fs)
 	g.register(fs, false)
 	if err := parseOnlyFlags(fs, "throttle", args); err != nil {
 		return err
@@ -46,11 +47,11 @@ func (a *app) cmdThrottle(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(src.label(), res, asJSON, g.ascii)
+	return a.printProcess(src.label(), res, outFmt, g.ascii)
 }
 
 func usageThrottle(w io.Writer) {
-	io.WriteString(w, `Usage: zmix throttle --blend SPEC --temp T1 --pres P1 --to-pres P2 [--ideal] [--json]
+	io.WriteString(w, `Usage: zmix throttle --blend SPEC --temp T1 --pres P1 --to-pres P2 [--ideal] [--json | --csv]
 
 The outlet temperature of a gas throttled across a valve: the enthalpy is
 kept, H(T2, P2) = H(T1, P1), with the real-gas departures of zmix state
@@ -65,6 +66,7 @@ Flags:
   --to-pres P2     outlet pressure (required)
   --ideal          the ideal gas instead of the real gas
   --json           one JSON object: outlet_temperature_K, delta_T_K, mean_jt_K_per_Pa, ...
+  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

@@ -327,3 +327,31 @@ func TestSavePromptProposalReplacedByTyping(t *testing.T) {
 		t.Errorf("editing the proposal gave %q, want blend.jsoXn", got)
 	}
 }
+
+// A path that cannot be written (here a directory) is refused at once,
+// with the reason, before any question about replacing it; what was
+// typed comes back at the next prompt.
+func TestWriteTargetRefusedBeforeAsking(t *testing.T) {
+	dir := t.TempDir()
+	r := testRoot(t, 80, 24, testRootOpts{stateDir: dir})
+	target := filepath.Join(dir, "out.csv")
+	if err := os.Mkdir(target, 0o700); err != nil {
+		t.Fatal(err)
+	}
+	press(t, r, "ctrl+e", "ctrl+u")
+	typeIn(t, r, target)
+	press(t, r, "enter")
+	if r.prompt == promptOverwrite {
+		t.Fatalf("asked to replace a directory")
+	}
+	if !r.statusErr || !strings.Contains(r.status, "not written") || !strings.Contains(r.status, "out.csv") {
+		t.Errorf("status %q", r.status)
+	}
+	if fi, err := os.Stat(target); err != nil || !fi.IsDir() {
+		t.Errorf("the directory was touched: %v", err)
+	}
+	press(t, r, "ctrl+e")
+	if !strings.Contains(r.input.value(), "out.csv") {
+		t.Errorf("the typed path was lost: %q", r.input.value())
+	}
+}

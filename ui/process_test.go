@@ -228,3 +228,23 @@ func TestProcessExport(t *testing.T) {
 		}
 	}
 }
+
+// A .csv name exports the commands' --csv table.
+func TestProcessExportCSV(t *testing.T) {
+	dir := t.TempDir()
+	r := testRoot(t, 120, 40, testRootOpts{stateDir: dir})
+	press(t, r, "6", "right")
+	press(t, r, "ctrl+e", "ctrl+u")
+	out := filepath.Join(dir, "compress.csv")
+	typeIn(t, r, out)
+	press(t, r, "enter")
+	data, err := os.ReadFile(out)
+	if err != nil {
+		t.Fatalf("no export: %v (status: %s)", err, r.View())
+	}
+	for _, k := range []string{"section,row,name,value\n", ",,process,compress\n", ",,outlet_temperature_K,", "cautions,1,,"} {
+		if !strings.Contains(string(data), k) {
+			t.Errorf("export lacks %q:\n%s", k, data)
+		}
+	}
+}

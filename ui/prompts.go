@@ -220,6 +220,14 @@ func (r *root) submitPrompt() {
 			return
 		}
 	}
+	// Say at once that the target cannot be written (a directory, a
+	// device, a dangling link), rather than after asking to replace it.
+	if err := mixtures.CheckWriteTarget(path); err != nil {
+		r.lastTyped[kind] = r.input.value()
+		r.closePrompt()
+		r.setError("not written: " + model.UserMessage(err))
+		return
+	}
 	r.closePrompt()
 	if _, err := os.Stat(path); err == nil && !(kind == promptSave && path == r.blendPath) {
 		r.pending, r.pendingKind = path, kind
@@ -295,7 +303,8 @@ func (r *root) export(path string) {
 	what := "readout"
 	var write func(w io.Writer) error
 	if r.exportProc != nil {
-		// The process commands' writers: JSON, or their text readout.
+		// The process commands' writers: JSON or CSV (submitPrompt takes
+		// no other name).
 		rep := r.exportProc.processReport()
 		if rep == nil {
 			r.setError("no process result to export: see the Process pane's message")
@@ -306,10 +315,7 @@ func (r *root) export(path string) {
 			if asJSON {
 				return report.WriteProcessJSON(w, rep)
 			}
-			if r.c.ASCII {
-				w = &report.ASCIIWriter{W: w}
-			}
-			return report.WriteProcessText(w, rep)
+			return report.WriteProcessCSV(w, rep)
 		}
 	} else if r.exportSrc != nil {
 		res := r.exportSrc.Result()

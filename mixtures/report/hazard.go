@@ -44,7 +44,7 @@ func HazardLines(r *safety.Result) [][2]string {
 		default:
 			add("LFL-UFL of the fuel", Sig(r.FuelLFLPct, 3)+"-"+Sig(r.FuelUFLPct, 3)+" % in air (Le Chatelier)")
 			if r.ReachesLFL {
-				add("LFL-UFL of the blend", Sig(r.LFLPct, 3)+"-"+Sig(r.UFLPct, 3)+" % of blend in air (inert components not counted; see ISO 10156)")
+				add("LFL-UFL of the blend", r.BlendRange()+" (inert components not counted; see ISO 10156)")
 				add("air to reach LFL", Sig(r.AirToLFL, 3)+" volumes per volume of blend")
 			} else {
 				add("LFL of the blend", "not reached: the fuel is below its LFL even undiluted")

@@ -340,7 +340,7 @@ func (r *Result) Summary() []string {
 		case !r.ReachesLFL:
 			out = append(out, fmt.Sprintf("Flammable limits: the blend's %.3g %% fuel is below the fuel's LFL of %.3g %%: no mixture with air reaches it (Le Chatelier).", r.FuelPct, r.FuelLFLPct))
 		default:
-			out = append(out, fmt.Sprintf("Flammable limits of the blend in air: %.3g-%.3g %% (Le Chatelier; inert components not counted); %.3g volumes of air bring a release to its LFL.", r.LFLPct, r.UFLPct, r.AirToLFL))
+			out = append(out, fmt.Sprintf("Flammable limits of the blend in air: %s (Le Chatelier; inert components not counted); %.3g volumes of air bring a release to its LFL.", r.BlendRange(), r.AirToLFL))
 		}
 		out = append(out, "As stored: "+r.Stored.String()+".")
 		out = append(out, "ISO 10156 flammability: "+r.FlamVerdict()+".")
@@ -420,4 +420,15 @@ func ppm(x float64) string {
 		return strconv.FormatFloat(math.Round(x/10)*10, 'f', 0, 64)
 	}
 	return strconv.FormatFloat(x, 'g', 4, 64)
+}
+
+// BlendRange says the blend's flammable range in air. Where the fuel's
+// UFL lies beyond the undiluted blend (a lean fuel in an inert balance),
+// the range runs up to the blend itself, and "100 %" alone would read as
+// a measured limit; the text says so instead.
+func (r *Result) BlendRange() string {
+	if r.UFLPct >= 100 {
+		return fmt.Sprintf("from %.3g %% of blend in air up to the undiluted blend", r.LFLPct)
+	}
+	return fmt.Sprintf("%.3g-%.3g %% of blend in air", r.LFLPct, r.UFLPct)
 }

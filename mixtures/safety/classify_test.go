@@ -214,3 +214,23 @@ func TestClassifySourcesAndFlags(t *testing.T) {
 		}
 	}
 }
+
+// A lean fuel in an inert balance burns in air from its LFL up to the
+// undiluted blend: Le Chatelier's UFL/F (75 %/0.10 = 750 % for 10 % H2,
+// limits 4-75 % from the catalogue) lies past it, and the text says so
+// rather than print a limit of 100 %.
+func TestBlendRangeText(t *testing.T) {
+	tests := []struct {
+		name string
+		r    Result
+		want string
+	}{
+		{"beyond the blend", Result{LFLPct: 40, UFLPct: 100}, "from 40 % of blend in air up to the undiluted blend"},
+		{"within", Result{LFLPct: 10, UFLPct: 30}, "10-30 % of blend in air"},
+	}
+	for _, tt := range tests {
+		if got := tt.r.BlendRange(); got != tt.want {
+			t.Errorf("%s: %q, want %q", tt.name, got, tt.want)
+		}
+	}
+}
