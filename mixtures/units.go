@@ -111,6 +111,7 @@ var pressureUnitTable = []struct {
 	{"Pa", 1, false, false},
 	{"kPa", 1e3, true, true},
 	{"MPa", 1e6, true, true},
+	{"GPa", 1e9, false, false}, // for the dense-gas limits of the real-gas models
 	{"bar", 1e5, true, true},
 	{"mbar", 100, true, true},
 	{"atm", model.StdPressureAtmPa, false, false},
