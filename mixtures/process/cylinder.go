@@ -290,7 +290,7 @@ func (r *CylinderResult) recipe(c Cylinder, mix *mixtures.Mixture) error {
 	title := "Fill by partial pressure, in this order, at " + strconv.FormatFloat(c.TempK, 'g', 5, 64) + " K"
 	if c.Recipe == "weight" {
 		title = "Fill by weight: masses to weigh in, in this order"
-		r.note("weights from the molar masses (IUPAC atomic weights) and pure parent gases; the uncertainty budget of ISO 6142-1 is not computed here")
+		r.note("weights from the molar masses (IUPAC atomic weights) and pure parent gases; the composition and its uncertainty (ISO 6142-1) from the masses actually weighed in: zmix weighed")
 	} else {
 		r.note("gauge readings against 1 atm at the fill temperature; each step's pressure uses Z of the gases in the cylinder so far, which is assumed well mixed")
 	}
