@@ -75,7 +75,7 @@ type Treatment struct {
 // usesLevels reports whether the state of sp under tr comes from its
 // summed levels.
 func (sp *Species) usesLevels(tr Treatment) bool {
-	return sp.levels != nil && sp.summedLevels(tr) && tr.Rotation == RotationAuto && !sp.SpinMod.Frozen
+	return sp.levels != nil && sp.summedLevels(tr) && tr.Rotation == RotationAuto
 }
 
 // summedLevels reports whether tr asks for summed levels where a species
@@ -250,6 +250,8 @@ func (sp *Species) FactorTreatments(tr Treatment) [4]string {
 	levels := sp.usesLevels(tr)
 	switch {
 	case sp.Rotor == Atom:
+	case levels && sp.SpinMod.Frozen:
+		out[1] = "summed levels, v = 0 (Dunham constants), spin modifications frozen"
 	case levels:
 		out[1] = "summed levels, v = 0 (Dunham constants)"
 	case sp.Rotor == Nonlinear:
