@@ -22,6 +22,7 @@ func TestProcessCSVHoldsTheJSON(t *testing.T) {
 		{"purge", "--start", "O2 21%, N2 bal", "--purge", "N2 1", "--target", "O2 10ppm", "--swing", "1bar..5bar"},
 		{"cylinder", "--blend", "Ar 1", "--volume", "50L", "--temp", "20C", "--pres", "200bar"},
 		{"throttle", "--blend", "N2 1", "--temp", "20C", "--pres", "200bar", "--to-pres", "5bar"},
+		{"weighed", "--add", "2.4105 g CH4 with C2H6 20ppm ±5ppm", "--add", "412.37 g N2 with O2 <5ppm", "--mass-u", "4mg"},
 		{"hazard", "--blend", "H2 10%, N2 bal"},
 		{"release", "--blend", "N2 1", "--amount", "9 Nm3", "--room", "60 m3"},
 	}

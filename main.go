@@ -82,6 +82,7 @@ func init() {
 		{"release", "a blend released into a room: oxygen, % LFL and ppm at the peak", (*app).cmdRelease, usageRelease},
 		{"cylinder", "a cylinder's contents with the real-gas Z, and its fill recipe", (*app).cmdCylinder, usageCylinder},
 		{"throttle", "a blend throttled across a valve: the outlet temperature (real gas)", (*app).cmdThrottle, usageThrottle},
+		{"weighed", "the composition of a cylinder filled by weight, with its uncertainty", (*app).cmdWeighed, usageWeighed},
 		{"catalog", "the species list, or one species' data, sources and table", (*app).cmdCatalog, usageCatalog},
 		{"open", "the workbench on a saved blend file", (*app).cmdOpen, usageOpen},
 		{"help", "help on zmix or on one command", (*app).cmdHelp, usageHelp},

@@ -102,7 +102,7 @@ func TestBadInput(t *testing.T) {
 		{"sweep pressure of partial pressures", []string{"sweep", "--blend", "Ar 0.5bar, He 0.5bar", "--temp", "300K", "--pres", "1..2bar"}, 2, "partial pressures"},
 		{"sweep missing fixed pressure", append([]string{"sweep", "--temp", "300..400K"}, okBlend...), 2, "--pres is missing"},
 		{"sweep json and csv", append([]string{"sweep", "--temp", "300..400K", "--pres", "1bar", "--json", "--csv"}, okBlend...), 2, "--json and --csv"},
-		{"unknown command", []string{"stir"}, 2, "unknown command \"stir\"; the commands are state, sweep, flow, compress, heat, mix, dilute, purge, hazard, release, cylinder, throttle, catalog, open, help"},
+		{"unknown command", []string{"stir"}, 2, "unknown command \"stir\"; the commands are state, sweep, flow, compress, heat, mix, dilute, purge, hazard, release, cylinder, throttle, weighed, catalog, open, help"},
 		{"unknown global flag", []string{"--verbose"}, 2, "unknown flag --verbose"},
 		{"unknown catalog species", []string{"catalog", "CO22"}, 2, "did you mean CO2"},
 		{"two catalog species", []string{"catalog", "CO2", "N2"}, 2, "one species at a time"},

@@ -43,6 +43,8 @@ func TestProcessJSONKeys(t *testing.T) {
 			[]string{"cycles", "final_level"}},
 		{[]string{"purge", "--start", air, "--purge", "N2 1", "--target", "O2 10ppm", "--volume", "2m3", "--rate", "6 m3/h"},
 			[]string{"time_s", "volume_exchanges", "final_level"}},
+		{[]string{"weighed", "--add", "25.103 g CO2", "--add", "475.2 g N2 with O2 <5ppm", "--mass-u", "2mg"},
+			[]string{"parent_count", "mass_uncertainty_kg", "mass_kg", "amount_mol", "molar_mass_kg_mol", "parents", "composition", "budget"}},
 	}
 	for _, c := range cases {
 		obj := processJSONOf(t, c.args...)
@@ -108,6 +110,11 @@ func TestProcessBadInput(t *testing.T) {
 		{"purge flow without volume", []string{"purge", "--start", air, "--purge", "N2 1", "--target", "O2 1ppm", "--rate", "1 Nm3/h"}, "--volume"},
 		{"purge flow needs T and P", []string{"purge", "--start", air, "--purge", "N2 1", "--target", "O2 1ppm", "--rate", "1 Nm3/h", "--volume", "1m3"}, "temperature and pressure"},
 		{"purge bad target", []string{"purge", "--start", air, "--purge", "N2 1", "--target", "O2 lots", "--swing", "1..7bar"}, "--target"},
+		{"weighed nothing added", []string{"weighed", "--mass-u", "2mg"}, "give each parent gas weighed in as --add"},
+		{"weighed without mass-u", []string{"weighed", "--add", "25 g CO2"}, "--mass-u is missing"},
+		{"weighed bad mass-u", []string{"weighed", "--add", "25 g CO2", "--mass-u", "2 grains"}, `unknown unit "grains"`},
+		{"weighed bad parent", []string{"weighed", "--add", "25 g CO2", "--add", "CO2 25 g", "--mass-u", "2mg"}, "--add 2: "},
+		{"weighed no balance", []string{"weighed", "--add", "25 g CH4 2%, N2 3%", "--mass-u", "2mg"}, "one balance species"},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
@@ -136,6 +143,7 @@ func TestProcessText(t *testing.T) {
 		{"mix", "--stream", "N2 1; 300K; 1 mol/s", "--stream", "O2 1; 400K; 1 mol/s", "--pres", "1bar"},
 		{"dilute", "--blend", "SiH4 2%, N2 bal", "--with", "N2 1", "--target", "SiH4", "--ratio", "9"},
 		{"purge", "--start", air, "--purge", "N2 1", "--target", "O2 10ppm", "--vacuum", "50mbar..1atm", "--volume", "50L", "--temp", "20C"},
+		{"weighed", "--add", "25.103 g CO2", "--add", "475.2 g ± 3 mg N2 with O2 <5ppm", "--mass-u", "2mg"},
 	} {
 		code, stdout, stderr := zmix(t, append(args, "--ascii")...)
 		if code != 0 {

@@ -84,7 +84,17 @@ var processKinds = []processKind{
 		{key: "recipe", label: "recipe", def: "pressure", hint: "enter switches", choices: []string{"pressure", "weight", "none"}},
 		{key: "rated", label: "rated P", def: "", hint: "the cylinder's rating: a fill above it is refused; empty: none"},
 	}},
+	{key: "weighed", name: "weighed", fields: []processField{
+		{key: "parent1", label: "parent 1", def: "2.4105 g CH4", hint: weighedParentHint},
+		{key: "parent2", label: "parent 2", def: "412.37 g N2 with O2 <5ppm", hint: weighedParentHint},
+		{key: "parent3", label: "parent 3", def: "", hint: weighedParentHint},
+		{key: "parent4", label: "parent 4", def: "", hint: weighedParentHint},
+		{key: "massu", label: "u of each mass", def: "4 mg", hint: "standard uncertainty of each weighed mass: " + process.WeighedMassUnits},
+	}},
 }
+
+// weighedParentHint says how a parent weighed in is typed.
+const weighedParentHint = "MASS [+- U] [of] GAS: 25.1 g CO2, 412 g N2 with O2 <5ppm, H2O 3ppm +-1ppm, or a premix CH4 2.5% +-0.002%, N2 bal; empty: none"
 
 // processPathPoints is how finely a path is sampled for the plot.
 const processPathPoints = 60
@@ -571,6 +581,27 @@ func (p *processPane) calculate() (process.Result, string, error) {
 		}
 		res, err := c.Solve()
 		return res, recipe + " in a cylinder", err
+	case "weighed":
+		massU, err := process.ParseWeighedMass(p.value("massu"))
+		if err != nil {
+			return nil, "", fieldError("u of each mass", err)
+		}
+		w := process.Weighing{MassUKg: massU}
+		var gases []string
+		for i, f := range p.current().fields[:4] {
+			text := p.value(f.key)
+			if text == "" {
+				continue
+			}
+			parent, err := process.ParseParent(p.c.Catalogue, text)
+			if err != nil {
+				return nil, "", fieldError("parent "+strconv.Itoa(i+1), err)
+			}
+			w.Parents = append(w.Parents, parent)
+			gases = append(gases, parent.Gas)
+		}
+		res, err := w.Solve()
+		return res, strings.Join(gases, "  +  ") + " weighed in (the recipe is not used)", err
 	case "release":
 		res, err := process.RoomRelease{Mixture: mix, Amount: p.value("amount"), Rate: p.value("rate"), Room: p.value("room"), ACH: p.value("ach")}.Solve()
 		if err != nil {
@@ -610,7 +641,16 @@ func (p *processPane) refresh() {
 			kinds = append(kinds, " "+k.name+" ")
 		}
 	}
-	add(strings.Join(kinds, ""))
+	// The kinds run on as many lines as the width needs, never cut.
+	row := ""
+	for _, k := range kinds {
+		if row != "" && lipgloss.Width(row)+lipgloss.Width(k) > p.w {
+			add(row)
+			row = ""
+		}
+		row += k
+	}
+	add(row)
 	if in := p.b.in; in.Valid() {
 		wrapped(s.Muted.Render, "", "inlet: the recipe at "+report.Short(in.TempK, 6)+" K, "+p.b.presShown(in.PresPa))
 	}

@@ -229,6 +229,49 @@ func TestProcessExport(t *testing.T) {
 	}
 }
 
+// The weighed choice shows the engine's composition for the parents as
+// typed, and a parent typed wrong names its field.
+func TestProcessPaneWeighed(t *testing.T) {
+	p, _ := testProcess(t, true, 100, 40)
+	for p.current().key != "weighed" {
+		p.keys(t, "right")
+	}
+	if p.result == nil {
+		t.Fatalf("weighed: no result: %s", p.err)
+	}
+	var w process.Weighing
+	for _, text := range []string{"2.4105 g CH4", "412.37 g N2 with O2 <5ppm"} {
+		parent, err := process.ParseParent(p.c.Catalogue, text)
+		if err != nil {
+			t.Fatal(err)
+		}
+		w.Parents = append(w.Parents, parent)
+	}
+	w.MassUKg = 4e-6
+	want, err := w.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	got, ok := p.result.(*process.WeighedResult)
+	if !ok || len(got.X) != len(want.X) || got.X[0] != want.X[0] || got.UX[0] != want.UX[0] {
+		t.Fatalf("pane result %+v, engine %+v", p.result, want)
+	}
+	v := p.whole()
+	for _, s := range []string{"Composition (mole fractions)", "CH4", report.Number(want.X[0], mixtures.Digits{Sig: 7})} {
+		if !strings.Contains(v, s) {
+			t.Errorf("screen lacks %q:\n%s", s, v)
+		}
+	}
+	p.keys(t, "down", "enter", "ctrl+u")
+	for _, r := range "412 g N2 with O2 5wt%" {
+		p.keys(t, string(r))
+	}
+	p.keys(t, "enter")
+	if p.result != nil || !strings.Contains(p.err, "parent 2") || !strings.Contains(p.err, "by moles") {
+		t.Errorf("bad parent 2: err %q, want it naming the field and the basis", p.err)
+	}
+}
+
 // A .csv name exports the commands' --csv table.
 func TestProcessExportCSV(t *testing.T) {
 	dir := t.TempDir()

@@ -97,10 +97,11 @@ func cylinderGas(mix *mixtures.Mixture, s *mixtures.State, tempK, presPa float64
 		return 0, err
 	}
 	mix.Fill(s, tempK, presPa, mixtures.Options{})
-	if !s.RealGasKnown {
+	rg, known := s.RealGasResult()
+	if !known {
 		return 1, nil
 	}
-	return s.RealGas.Z, nil
+	return rg.Z, nil
 }
 
 // pressureFor finds the pressure at which n mol of the blend fill V at
@@ -187,10 +188,10 @@ func (c Cylinder) Solve() (*CylinderResult, error) {
 		return nil, err
 	}
 	modelName := "ideal gas (no critical constants)"
-	if s.RealGasKnown {
-		modelName = s.RealGas.Model.String()
-		if s.RealGas.Range != realgas.InRange {
-			return nil, model.Errorf("process", "cylinder at %.4g bar: outside every model here (%s); zmix cannot give its contents", r.PresPa/1e5, s.RealGas.Range)
+	if rg, known := s.RealGasResult(); known {
+		modelName = rg.Model.String()
+		if rg.Range != realgas.InRange {
+			return nil, model.Errorf("process", "cylinder at %.4g bar: outside every model here (%s); zmix cannot give its contents", r.PresPa/1e5, rg.Range)
 		}
 	}
 	r.kind = "cylinder"
@@ -289,7 +290,7 @@ func (r *CylinderResult) recipe(c Cylinder, mix *mixtures.Mixture) error {
 	title := "Fill by partial pressure, in this order, at " + strconv.FormatFloat(c.TempK, 'g', 5, 64) + " K"
 	if c.Recipe == "weight" {
 		title = "Fill by weight: masses to weigh in, in this order"
-		r.note("weights from the molar masses (IUPAC atomic weights) and pure parent gases; the uncertainty budget of ISO 6142-1 is not computed here")
+		r.note("weights from the molar masses (IUPAC atomic weights) and pure parent gases; the composition and its uncertainty (ISO 6142-1) from the masses actually weighed in: zmix weighed")
 	} else {
 		r.note("gauge readings against 1 atm at the fill temperature; each step's pressure uses Z of the gases in the cylinder so far, which is assumed well mixed")
 	}

@@ -78,6 +78,22 @@
 // ln(P_high/P_low) rounded up; a well-mixed volume V swept at actual
 // flow Q follows x − y = (x₀ − y) e^(−Qt/V), N = Qt/V volume exchanges.
 //
+// # Composition from weighed masses
+//
+// Weighing is the gravimetric method of ISO 6142-1 run backwards from
+// the masses mA of the parent gases weighed into a cylinder, each parent
+// a set of mole fractions yₖ,A (its main species the balance):
+//
+//	nA = mA/MA,  MA = Σₖ yₖ,A Mₖ,  Mₖ = Σₑ νₖₑ Aₑ,  xᵢ = Σ_A yᵢ,A nA / Σ_A nA
+//
+// The inputs q are the masses, the parents' stated amounts and the
+// atomic weights Aₑ; the sensitivities follow from ∂xᵢ/∂nA = (yᵢ,A − xᵢ)/N
+// through nA, and u²(xᵢ) = Σⱼ (∂xᵢ/∂qⱼ)² u²(qⱼ) (JCGM 100, 5.1.2, inputs
+// uncorrelated; the covariance of the fractions is (J U)(J U)ᵀ, each of
+// its rows summing to 0). An amount below a limit L is L/2 with
+// u = L/(2√3), and an atomic weight's ± is the half-width of a
+// rectangular distribution.
+//
 // Inputs and outputs are SI unless a name says otherwise (tempK, presPa,
 // RateMolPerSec); temperatures are absolute, pressures absolute.
 package process

@@ -171,6 +171,7 @@ var titles = map[string]string{
 	"flow": "Flow", "compress": "Compression", "expand": "Expansion", "heat": "Heating and cooling",
 	"mix": "Mixing", "dilute": "Dilution", "purge": "Purging", "release": "Release into a room",
 	"cylinder": "Cylinder contents", "throttle": "Throttle across a valve",
+	"weighed": "Composition from weighed masses",
 }
 
 // Title is the heading of a result of the kind.

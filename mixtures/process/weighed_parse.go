@@ -1,0 +1,211 @@
+package process
+
+import (
+	"math"
+	"strings"
+	"unicode/utf8"
+
+	"zmix/mixtures"
+	"zmix/model"
+)
+
+// ParentForm says how one weighed parent gas is written, for messages.
+const ParentForm = `"MASS [± U] [of] GAS", GAS a species ("N2"), a species with impurities ` +
+	`("N2 with O2 <5ppm, H2O 10ppm ±2ppm") or a premix ("CO2 5.003% ±0.002%, N2 bal")`
+
+// maxParentChars bounds one parent's text before any work that grows
+// with it: room for a premix and a dozen impurities.
+const maxParentChars = 1000
+
+// plusMinus are the ways to write ±, the ASCII ones for keyboards that
+// have no ±.
+var plusMinus = strings.NewReplacer("+/-", "±", "+-", "±")
+
+// weighedMassUnits are the units of a weighed mass and its uncertainty.
+var weighedMassUnits = map[string]float64{"kg": 1, "g": 1e-3, "mg": 1e-6, "lb": 0.45359237}
+
+// WeighedMassUnits lists them, for messages and help.
+const WeighedMassUnits = "kg, g, mg, lb"
+
+// ParseWeighedMass reads a mass with its unit ("2.5 mg", "25.103g") in
+// kg; it must be finite and 0 or more.
+func ParseWeighedMass(s string) (float64, error) {
+	if err := tooLongN("a mass", s, maxInputChars); err != nil {
+		return 0, err
+	}
+	x, unit, err := mixtures.SplitNumber(s)
+	if err != nil {
+		return 0, model.Errorf("process", "mass %s: want a number and a unit (%s), e.g. 25.103 g", model.Quote(s), WeighedMassUnits)
+	}
+	scale, ok := weighedMassUnits[strings.ToLower(unit)]
+	if !ok {
+		return 0, model.Errorf("process", "mass %s: unknown unit %s; want %s", model.Quote(s), model.Quote(unit), WeighedMassUnits)
+	}
+	kg := x * scale
+	if !(kg >= 0) || math.IsInf(kg, 0) {
+		return 0, model.Errorf("process", "mass %s: want a finite mass of 0 or more", model.Quote(s))
+	}
+	return kg, nil
+}
+
+// ParseParent reads one weighed parent gas, "MASS [± U] [of] GAS", looking
+// its species up in cat. A mass with no ± gets the common uncertainty of
+// the balance later (MassUKg < 0 here).
+func ParseParent(cat *model.Catalogue, s string) (WeighedParent, error) {
+	if err := tooLongN("a parent gas", s, maxParentChars); err != nil {
+		return WeighedParent{}, err
+	}
+	fail := func(why string) (WeighedParent, error) {
+		return WeighedParent{}, model.Errorf("process", "parent %s: %s; want %s", model.Quote(s), why, ParentForm)
+	}
+	text := strings.TrimSpace(plusMinus.Replace(s))
+	p := WeighedParent{Text: text, MassUKg: -1}
+	// The mass: a number and a unit, the first two fields (or one, "25g").
+	mass, rest, ok := cutMass(text)
+	if !ok {
+		return fail("it does not start with a mass")
+	}
+	var err error
+	if p.MassKg, err = ParseWeighedMass(mass); err != nil {
+		return WeighedParent{}, model.Errorf("process", "parent %s: %v", model.Quote(s), err)
+	}
+	if !(p.MassKg > 0) {
+		return fail("the mass must be above 0")
+	}
+	if r, ok := strings.CutPrefix(rest, "±"); ok {
+		u, after, ok := cutMass(strings.TrimSpace(r))
+		if !ok {
+			return fail("± must be followed by a mass")
+		}
+		if p.MassUKg, err = ParseWeighedMass(u); err != nil {
+			return WeighedParent{}, model.Errorf("process", "parent %s: the mass's uncertainty: %v", model.Quote(s), err)
+		}
+		rest = after
+	}
+	if r, ok := strings.CutPrefix(rest, "of "); ok {
+		rest = r
+	}
+	rest = strings.TrimSpace(rest)
+	if rest == "" {
+		return fail("the gas is missing")
+	}
+	p.Gas = rest
+	// "N2 with O2 <5ppm, ..." is "N2 bal, O2 <5ppm, ...".
+	items := rest
+	if head, tail, ok := strings.Cut(rest, " with "); ok {
+		if len(strings.Fields(head)) != 1 {
+			return fail("before \"with\" goes one species, the main gas")
+		}
+		items = strings.TrimSpace(head) + " bal, " + tail
+	}
+	list := strings.Split(items, ",")
+	if len(list) == 1 && len(strings.Fields(list[0])) == 1 {
+		list[0] += " bal" // a pure gas
+	}
+	seen := map[string]bool{}
+	for _, it := range list {
+		part, err := parsePart(cat, strings.TrimSpace(it))
+		if err != nil {
+			return WeighedParent{}, model.Errorf("process", "parent %s: %v", model.Quote(s), err)
+		}
+		if seen[part.Species.Formula] {
+			return fail(part.Species.Formula + " is named twice")
+		}
+		seen[part.Species.Formula] = true
+		p.Parts = append(p.Parts, part)
+	}
+	if err := p.check(); err != nil {
+		return WeighedParent{}, model.Errorf("process", "parent %s: %v", model.Quote(s), err)
+	}
+	return p, nil
+}
+
+// cutMass splits the leading "NUMBER UNIT" from s: "25.103 g of CO2" →
+// "25.103 g", "of CO2".
+func cutMass(s string) (mass, rest string, ok bool) {
+	s = strings.TrimSpace(s)
+	_, after, err := mixtures.SplitNumber(s)
+	if err != nil || after == "" || !strings.HasSuffix(s, after) {
+		return "", "", false
+	}
+	num := strings.TrimSpace(s[:len(s)-len(after)])
+	// The unit is the letters after the number, up to a space or ±.
+	unitEnd := strings.IndexFunc(after, func(r rune) bool { return r == ' ' || r == '±' })
+	if unitEnd < 0 {
+		unitEnd = len(after)
+	}
+	return num + " " + after[:unitEnd], strings.TrimSpace(after[unitEnd:]), true
+}
+
+// parsePart reads "SPECIES AMOUNT [± U]", "SPECIES <LIMIT" or
+// "SPECIES bal".
+func parsePart(cat *model.Catalogue, it string) (ParentPart, error) {
+	fields := strings.Fields(it)
+	if len(fields) < 2 {
+		return ParentPart{}, model.Errorf("process", "item %s: want SPECIES AMOUNT, SPECIES <LIMIT or SPECIES bal", model.Quote(it))
+	}
+	sp, ok := cat.Lookup(fields[0])
+	if !ok {
+		hint := "it is not in the catalogue"
+		if sug := cat.Suggest(fields[0], 3); len(sug) > 0 {
+			hint = "did you mean " + strings.Join(sug, ", ") + "?"
+		}
+		return ParentPart{}, model.Errorf("process", "unknown species %s; %s", model.Quote(fields[0]), hint)
+	}
+	if _, err := model.ParseFormula(sp.Formula); err != nil {
+		return ParentPart{}, model.Errorf("process", "%s: its formula is needed for the molar mass: %v", model.Quote(fields[0]), err)
+	}
+	part := ParentPart{Species: sp}
+	amount := strings.TrimSpace(strings.TrimPrefix(it, fields[0]))
+	if low := strings.ToLower(amount); low == "bal" || low == "balance" {
+		part.Balance = true
+		return part, nil
+	}
+	if lim, ok := strings.CutPrefix(amount, "<"); ok {
+		x, err := moleAmount(it, lim)
+		if err != nil {
+			return ParentPart{}, err
+		}
+		if !(x > 0) {
+			return ParentPart{}, model.Errorf("process", "item %s: a limit must be above 0", model.Quote(it))
+		}
+		// ISO 6142-1: a component below a limit L is taken as L/2 with a
+		// rectangular distribution over [0, L].
+		part.Limit, part.LimitX = true, x
+		part.X, part.UX = x/2, x/(2*math.Sqrt(3))
+		return part, nil
+	}
+	val, unc, hasU := strings.Cut(amount, "±")
+	x, err := moleAmount(it, val)
+	if err != nil {
+		return ParentPart{}, err
+	}
+	part.X = x
+	if hasU {
+		if part.UX, err = moleAmount(it, unc); err != nil {
+			return ParentPart{}, err
+		}
+		part.Stated = true
+	}
+	return part, nil
+}
+
+// moleAmount reads an amount that must be a mole fraction.
+func moleAmount(item, s string) (float64, error) {
+	a, err := mixtures.ParseAmount(strings.TrimSpace(s))
+	if err != nil {
+		return 0, model.Errorf("process", "item %s: %v", model.Quote(item), err)
+	}
+	if a.Basis != mixtures.MoleFraction {
+		return 0, model.Errorf("process", "item %s: amounts in a parent gas are by moles (mol/mol, %%, ppm, ppb)", model.Quote(item))
+	}
+	return a.Value, nil
+}
+
+// tooLongN refuses text longer than n characters.
+func tooLongN(what, s string, n int) error {
+	if c := utf8.RuneCountInString(s); c > n {
+		return model.Errorf("process", "%s of %d characters; want at most %d", what, c, n)
+	}
+	return nil
+}
