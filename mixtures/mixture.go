@@ -95,27 +95,62 @@ type State struct {
 	// (package realgas); RealGasKnown is false when no species of the
 	// blend carries critical constants, or the models give no finite
 	// figure, and then the real-gas quantities read NaN: "not known".
+	//
+	// Mixture.State fills both. Mixture.Fill leaves them to be computed
+	// on the first request, since most states of a sweep or a process
+	// balance never show them: read them through RealGasResult (or the
+	// getters Z and RealDensityKgPerM3, as the quantity table does)
+	// after Fill.
 	RealGas      realgas.Result
 	RealGasKnown bool
+	realPending  pendingRealGas
 
 	Species []SpeciesTerm
+}
+
+// pendingRealGas is what the real-gas figures of a state filled by
+// Fill are computed from, kept apart from the State's public fields so
+// that a caller that changes those (a process model adding the
+// departures) cannot change the result.
+type pendingRealGas struct {
+	model                    *realgas.Mixture // nil: nothing pending
+	tempK, presPa, cpIdealJK float64
+}
+
+// RealGasResult returns the state's real-gas figures and whether they
+// are known, computing them first if Fill left them for later. Like
+// every method that may compute them (Z, RealDensityKgPerM3 and so the
+// quantity table's getters), it writes to s: a State read from several
+// goroutines at once must have had them computed before.
+func (s *State) RealGasResult() (*realgas.Result, bool) {
+	if p := &s.realPending; p.model != nil {
+		rg := &s.RealGas
+		p.model.Eval(rg, p.tempK, p.presPa, p.cpIdealJK)
+		s.RealGasKnown = finite(rg.Z) && finite(rg.VM3PerMol) && rg.VM3PerMol > 0 && finite(rg.HResJPerMol) &&
+			finite(rg.SResJPerMolK) && finite(rg.CpJPerMolK) && finite(rg.CvJPerMolK) &&
+			finite(rg.SoundSpeedMPerS) && finite(rg.JouleThomsonKPerPa)
+		p.model = nil
+	}
+	return &s.RealGas, s.RealGasKnown
 }
 
 // RealDensityKgPerM3 is the density from the real-gas Z, NaN when not
 // known.
 func (s *State) RealDensityKgPerM3() float64 {
-	if !s.RealGasKnown {
+	rg, ok := s.RealGasResult()
+	if !ok {
 		return math.NaN()
 	}
-	return s.MolarMassKgPerMol / s.RealGas.VM3PerMol
+	return s.MolarMassKgPerMol / rg.VM3PerMol
 }
 
 // Z is the compressibility factor PV/(RT), NaN when not known.
 func (s *State) Z() float64 {
-	if !s.RealGasKnown {
+	rg, ok := s.RealGasResult()
+	if !ok {
 		return math.NaN()
 	}
-	return s.RealGas.Z
+	return rg.Z
 }
 
 // PerKg converts a molar quantity of the state to a specific one.
@@ -147,12 +182,32 @@ func (m *Mixture) State(tempK, presPa float64, opts Options) (State, error) {
 	}
 	var s State
 	m.Fill(&s, tempK, presPa, opts)
+	s.RealGasResult() // the whole state, as callers of State read its fields
 	return s, nil
+}
+
+// The logs of the standard pressures, taken once.
+var (
+	lnStdBarPa = math.Log(StdBar.Pa())
+	lnStdAtmPa = math.Log(StdAtm.Pa())
+)
+
+// lnStdPa returns ln P° of std.
+func lnStdPa(std StdPressure) float64 {
+	if std == StdAtm {
+		return lnStdAtmPa
+	}
+	return lnStdBarPa
 }
 
 // Fill computes the mixture at (T, P) into s, reusing s.Species when it
 // has room. It does not check (T, P): callers check once with
-// m.CheckConditions.
+// m.CheckConditions. The real-gas figures are computed when first asked
+// for (see State.RealGasResult).
+//
+// ln T and ln P are taken once for the whole blend, and each species'
+// ln pᵢ is ln xᵢ + ln P from the ln xᵢ the mixture keeps, so that a
+// species adds only the exp and log calls of its own factors.
 func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 	if cap(s.Species) >= len(m.Components) {
 		s.Species = s.Species[:len(m.Components)]
@@ -172,19 +227,21 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 	rt := r * tempK
 	s.TempK, s.PresPa, s.StdPresPa = tempK, presPa, p0
 	s.MolarMassKgPerMol = m.MolarMassKgPerMol
-	lnPOverP0 := math.Log(presPa / p0)
+	lnT, lnP := math.Log(tempK), math.Log(presPa)
+	lnPOverP0 := lnP - lnStdPa(opts.Std)
 	var cp, cv, h, u, sEnt, g, a float64
 	for i, c := range m.Components {
 		t := &s.Species[i]
 		t.Species, t.X, t.MassFrac = c.Species, c.X, c.MassFrac
 		pi := c.X * presPa
 		t.PartialPresPa = pi
-		c.Species.Fill(&t.State, tempK, pi, opts.Treatment)
+		lnX := m.lnX[i]
+		c.Species.FillLn(&t.State, tempK, lnT, pi, lnX+lnP, opts.Treatment)
 		st := &t.State
 		t.MuJPerMol = st.GJPerMol
 		// μ° at P°: the species' G shifted from pᵢ to P°, with
-		// ln(pᵢ/P°) = ln xᵢ + ln(P/P°), ln xᵢ kept by the mixture.
-		t.Mu0JPerMol = st.GJPerMol - rt*(m.lnX[i]+lnPOverP0)
+		// ln(pᵢ/P°) = ln xᵢ + ln(P/P°).
+		t.Mu0JPerMol = st.GJPerMol - rt*(lnX+lnPOverP0)
 		t.SJPerMolK, t.CpJPerMolK, t.HJPerMol = st.SJPerMolK, st.CpJPerMolK, st.HJPerMol
 		t.SShareJPerMolK = c.X * st.SJPerMolK
 		t.CpShareJPerMolK = c.X * st.CpJPerMolK
@@ -205,11 +262,8 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 	s.DensityKgPerM3 = presPa * m.MolarMassKgPerMol / rt
 	s.SoundSpeedMPerS = math.Sqrt(s.Gamma * rt / m.MolarMassKgPerMol)
 	s.RealGasKnown = false
+	s.realPending = pendingRealGas{}
 	if m.real.Known() {
-		rg := &s.RealGas
-		m.real.Eval(rg, tempK, presPa, cp)
-		s.RealGasKnown = finite(rg.Z) && finite(rg.VM3PerMol) && rg.VM3PerMol > 0 && finite(rg.HResJPerMol) &&
-			finite(rg.SResJPerMolK) && finite(rg.CpJPerMolK) && finite(rg.CvJPerMolK) &&
-			finite(rg.SoundSpeedMPerS) && finite(rg.JouleThomsonKPerPa)
+		s.realPending = pendingRealGas{model: m.real, tempK: tempK, presPa: presPa, cpIdealJK: cp}
 	}
 }

@@ -226,6 +226,7 @@ func (m *Mixture) StreamSpan(ctx context.Context, sw Sweep, from, to int, fixedT
 		x := g.point(i)
 		t, p := sw.Conditions(x, fixedTempK, fixedPresPa)
 		m.Fill(s, t, p, opts)
+		s.RealGasResult() // each point is the whole state, as State gives it
 		if err := fn(i, x, s); err != nil {
 			return err
 		}

@@ -62,13 +62,13 @@ func realGasNotes(s *State, all bool) []StateNote {
 	note := func(sev model.Severity, format string, args ...any) []StateNote {
 		return []StateNote{{Note: model.Note{Severity: sev, Text: fmt.Sprintf(format, args...)}}}
 	}
-	if !s.RealGasKnown {
+	rg, known := s.RealGasResult()
+	if !known {
 		if s.PresPa > idealPressurePa {
 			return note(model.Caution, "%.4g bar: no species of the blend carries critical constants, so real-gas effects are not computed; above 10 bar they may exceed 1 %% (common practice)", s.PresPa/1e5)
 		}
 		return nil
 	}
-	rg := &s.RealGas
 	dev := math.Abs(rg.Z - 1)
 	switch {
 	case rg.Range != realgas.InRange:

@@ -49,7 +49,7 @@
 // catalogue fields term, we_cm … D0_cm, state_LABEL) can instead be summed
 // over its rovibronic levels, Treatment.Levels = LevelsSummed:
 //
-//	E(v,N) = Te + ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³ + B_v K − D_v K²
+//	E(v,N) = Te + ωe(v+½) − ωexe(v+½)² + ωeye(v+½)³ + B_v K − D_v K² + H_e K³
 //	B_v = Be − αe(v+½) + γe(v+½)²,  D_v = De + βe(v+½),  K = N(N+1) − Λ²
 //
 // for each electronic state, with a ²Π state's two spin components from
@@ -70,7 +70,9 @@
 //
 // The energy zero is the rotationless level (v = 0, N = 0) of a Σ ground
 // state, even where the nuclear spins forbid it (¹⁶O2), as in the
-// published tables; for other ground states it is the lowest level.
+// published tables; for a ²Π ground state it is the rotationless point
+// B0·Ω below the lowest level (J = Ω of the lower spin component), which
+// is also the tables' zero (OH: 1.5 B0 ≈ 28 cm⁻¹, 0.33 kJ/mol).
 //
 // The factors split as: rotation is the v = 0 ladder of the ground state;
 // vibration is what the ground state's other levels add (with the
@@ -79,8 +81,13 @@
 // v = 0 ladder, ElectronicGroundOnly the ground state, and
 // RotationSummed or RotationClassical select the rigid rotor.
 //
-// The built-in species with these constants are N2, O2 (with its a, b
-// and Herzberg c, A', A states), CO and NO.
+// The built-in species with these constants are H2 and D2 (with the
+// sextic H_e term, without which their levels of J > 15 fall far too
+// low), N2, O2 (with its a, b and Herzberg c, A', A states), CO, NO and
+// OH (X²Πi and A²Σ⁺). Against the tables, H2 meets Cp° 0.3 % and S° 0.05
+// J/(mol·K) to 3000 K and falls to −5 % in Cp° at 6000 K, where the
+// levels of J ≳ 25 and the quasi-bound levels count; OH lies 0.8 % high
+// in Cp° at 3000 K (see levels_test.go for each species' figures).
 //
 // Speed: the level list is built when the species is prepared; the sums
 // are tabulated as needed (an interval when a state first falls in it)
@@ -135,10 +142,13 @@
 // (equilibrium), nH2 (normal: 3:1 ortho:para, frozen) and pH2 (para);
 // eD2, nD2 (2:1, frozen) and oD2 (ortho). A frozen modification is the
 // ideal mixture of the even-J and odd-J gases at fixed fractions x_i,
-// ln q_rot = Σ x_i ln(g_i q_i/(g_tot x_i)); see spinmod.go. They are
-// names for Lookup, not entries of All. With normalByDefault set, "H2"
-// and "D2" name the normal gases, as a cylinder holds them; the
-// equilibrium gases of the published tables are eH2 and eD2.
+// ln q_rot = Σ x_i ln(g_i q_i/(g_tot x_i)); see spinmod.go. With the
+// summed levels each modification sums its own rovibrational levels
+// (all v, its own N), so the frozen gases and the equilibrium one share
+// one level list and meet at high T. They are names for Lookup, not
+// entries of All. With normalByDefault set, "H2" and "D2" name the
+// normal gases, as a cylinder holds them; the equilibrium gases of the
+// published tables are eH2 and eD2.
 //
 // # Conventions
 //

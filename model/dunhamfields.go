@@ -20,6 +20,7 @@ var dunhamFields = map[string]string{
 	"gammae_cm":  "vibration–rotation constant γe in cm⁻¹",
 	"De_cm":      "centrifugal distortion De in cm⁻¹",
 	"betae_cm":   "centrifugal distortion βe in cm⁻¹",
+	"He_cm":      "sextic centrifugal distortion He in cm⁻¹ (the +He·K³ term)",
 	"A_cm":       "spin–orbit constant A of a 2Pi ground state in cm⁻¹",
 	"D0_cm":      "dissociation energy D0 from the lowest level in cm⁻¹ (the level sums stop there)",
 	"harm_cm":    "harmonic wavenumbers ωi of a polyatomic's modes in cm⁻¹, in vib_cm's order",
@@ -43,6 +44,7 @@ var (
 	gammaeRange = numRange{"vibration–rotation constant γe", -1, 1, "cm⁻¹", false}
 	distRange   = numRange{"centrifugal distortion De", 0, 1, "cm⁻¹", false}
 	betaeRange  = numRange{"centrifugal distortion βe", -0.1, 0.1, "cm⁻¹", false}
+	sexticRange = numRange{"sextic centrifugal distortion He", -1e-3, 1e-3, "cm⁻¹", false}
 	soRange     = numRange{"spin–orbit constant A", -5000, 5000, "cm⁻¹", false}
 	dissocRange = numRange{"dissociation energy", 100, 100000, "cm⁻¹", false}
 )
@@ -114,6 +116,7 @@ func setDunhamField(sp *Species, key, value string) error {
 		"gammae_cm": {gammaeRange, &d.GammaeCm},
 		"De_cm":     {distRange, &d.DeCm},
 		"betae_cm":  {betaeRange, &d.BetaeCm},
+		"He_cm":     {sexticRange, &d.HeCm},
 		"A_cm":      {soRange, &d.SpinOrbitCm},
 		"D0_cm":     {dissocRange, &sp.DissociationCm},
 	}
@@ -199,7 +202,7 @@ func (d *DunhamConstants) check(formula, what string, ground bool) error {
 	}{
 		{vibRange, d.WeCm}, {wexeRange, d.WeXeCm}, {weyeRange, d.WeYeCm},
 		{rotRange, d.BeCm}, {alphaeRange, d.AlphaeCm}, {gammaeRange, d.GammaeCm},
-		{distRange, d.DeCm}, {betaeRange, d.BetaeCm}, {soRange, d.SpinOrbitCm}, {elecRange, d.TeCm},
+		{distRange, d.DeCm}, {betaeRange, d.BetaeCm}, {sexticRange, d.HeCm}, {soRange, d.SpinOrbitCm}, {elecRange, d.TeCm},
 	} {
 		if !c.r.contains(c.x) {
 			return Errorf("model", "%s %s: %g; want %s", formula, what, c.x, c.r)

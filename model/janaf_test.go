@@ -265,6 +265,16 @@ func janafTolerance(formula string, tempK float64) (cpRel, sAbs float64) {
 	if janafAtoms[formula] {
 		return 1e-4, 0.01
 	}
+	// The diatomics whose levels are summed by default are held to the
+	// level sums' own tolerances (levels_test.go), tighter than these
+	// except where a table is not a level sum (OH below 298.15 K).
+	if summedByDefault {
+		for _, tab := range levelTables {
+			if tab.formula == formula {
+				return levelTolerance(formula, tempK)
+			}
+		}
+	}
 	if tempK <= RefTempK {
 		return 0.01, 0.3
 	}

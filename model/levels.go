@@ -22,6 +22,7 @@ type DunhamConstants struct {
 	WeCm, WeXeCm, WeYeCm     float64 // ωe, ωexe, ωeye
 	BeCm, AlphaeCm, GammaeCm float64 // Be, αe, γe
 	DeCm, BetaeCm            float64 // centrifugal distortion De, βe
+	HeCm                     float64 // sextic distortion He (the K³ term), mostly 0
 	SpinOrbitCm              float64 // A, for a ²Π state; 0 otherwise
 	Term                     TermSymbol
 }
@@ -77,7 +78,16 @@ type rovibLevels struct {
 	thetaK []float64 // energy above the lowest level, in K
 	weight []float64 // statistical weight over the ground state's multiplicity
 	class  []uint8
-	lnNorm float64 // ln(σ), or ln of the total spin weight
+	// mod is the spin modification a level belongs to in a homonuclear
+	// molecule: 0 for the one of spin weight SpinWeights[0] (the even N of
+	// a Σg⁺ ground state), 1 for the other.
+	mod []uint8
+	// frozen, with evenFraction, sums a frozen mixture of the two spin
+	// modifications instead of their equilibrium (see spinmod.go).
+	frozen       bool
+	evenFraction float64
+	modLowK      [2]float64 // each modification's lowest level
+	lnNorm       float64    // ln(σ), or ln of the total spin weight
 	// zeroShiftK is the lowest level's height above the energy zero; the
 	// levels are listed from the lowest, so that no sum underflows.
 	zeroShiftK float64
@@ -92,7 +102,12 @@ type rovibLevels struct {
 // addState appends the levels of one electronic state. limitCm is the
 // dissociation limit above the state's own reference (the ground state's
 // lowest level), or +Inf while the ground state itself is being built.
-func (lv *rovibLevels) addLevels(st DunhamConstants, class0 uint8, gRel float64, sEven, sOdd, wS, wA float64, offsetCm, limitCm float64) {
+//
+// sEven and sOdd are the spin weights of a Σ state's even and odd N, and
+// par says which spin modification each belongs to; wS and wA are those of
+// the levels symmetric and antisymmetric under exchange of the nuclei, of
+// modifications par.s and par.a (a Λ-doubled level has one of each).
+func (lv *rovibLevels) addLevels(st DunhamConstants, class0 uint8, gRel float64, sEven, sOdd, wS, wA float64, par parityMods, offsetCm, limitCm float64) {
 	gv := func(v float64) float64 {
 		h := v + 0.5
 		return st.TeCm + h*(st.WeCm-h*(st.WeXeCm-h*st.WeYeCm))
@@ -116,13 +131,23 @@ func (lv *rovibLevels) addLevels(st DunhamConstants, class0 uint8, gRel float64,
 		if class0 == classRot0 && v > 0 {
 			class = classGround
 		}
-		add := func(eCm, w float64) {
+		add := func(eCm, w float64, mod uint8) {
 			if w == 0 {
 				return // forbidden by the nuclear spins
 			}
 			lv.thetaK = append(lv.thetaK, WavenumberToKelvin(eCm-offsetCm))
 			lv.weight = append(lv.weight, gRel*w)
 			lv.class = append(lv.class, class)
+			lv.mod = append(lv.mod, mod)
+		}
+		// addPair adds a Λ-doubled level: one component of each symmetry.
+		addPair := func(eCm, deg float64) {
+			if par.homo {
+				add(eCm, wS*deg, par.s)
+				add(eCm, wA*deg, par.a)
+				return
+			}
+			add(eCm, (wS+wA)*deg, 0)
 		}
 		switch {
 		case doubletPi:
@@ -145,12 +170,12 @@ func (lv *rovibLevels) addLevels(st DunhamConstants, class0 uint8, gRel float64,
 				for j := j0; j < maxRotN; j++ {
 					k := (j+0.5)*(j+0.5) - lambda*lambda
 					x := math.Sqrt(4*(j+0.5)*(j+0.5) + y*(y-4)*lambda*lambda)
-					e := g + bv*(k+sign*0.5*x) - dv*k*k
+					e := g + bv*(k+sign*0.5*x) - dv*k*k + st.HeCm*k*k*k
 					if e <= prev || e-offsetCm > limitCm {
 						break
 					}
 					prev = e
-					add(e, (wS+wA)*(2*j+1))
+					addPair(e, 2*j+1)
 				}
 			}
 		default:
@@ -161,19 +186,20 @@ func (lv *rovibLevels) addLevels(st DunhamConstants, class0 uint8, gRel float64,
 			for n := st.Term.Lambda; n < maxRotN; n++ {
 				fn := float64(n)
 				k := fn*(fn+1) - lambda*lambda
-				e := g + bv*k - dv*k*k
+				e := g + bv*k - dv*k*k + st.HeCm*k*k*k
 				if e <= prev || e-offsetCm > limitCm {
 					break
 				}
 				prev = e
-				w := wS + wA // a Λ-doubled level: one component of each symmetry
-				if st.Term.Lambda == 0 {
-					w = sOdd
-					if n%2 == 0 {
-						w = sEven
-					}
+				if st.Term.Lambda > 0 {
+					addPair(e, mult*(2*fn+1))
+					continue
 				}
-				add(e, w*mult*(2*fn+1))
+				w, mod := sOdd, par.odd
+				if n%2 == 0 {
+					w, mod = sEven, par.even
+				}
+				add(e, w*mult*(2*fn+1), mod)
 			}
 		}
 	}
@@ -197,14 +223,23 @@ func (sp *Species) buildLevels() error {
 			wS, wA = sp.SpinWeights[1], sp.SpinWeights[0]
 		}
 	}
-	parity := func(t TermSymbol) (even, odd float64) {
+	// The symmetric levels belong to the modification of spin weight
+	// SpinWeights[0] when the ground state's even N are symmetric.
+	mods := parityMods{homo: homo, s: 0, a: 1}
+	if homo && !gs.Term.evenNSymmetric() {
+		mods.s, mods.a = 1, 0
+	}
+	parity := func(t TermSymbol) (even, odd float64, pm parityMods) {
+		pm = mods
 		if !homo {
-			return 1, 1
+			return 1, 1, pm
 		}
 		if t.evenNSymmetric() {
-			return wS, wA
+			pm.even, pm.odd = pm.s, pm.a
+			return wS, wA, pm
 		}
-		return wA, wS
+		pm.even, pm.odd = pm.a, pm.s
+		return wA, wS, pm
 	}
 	// For a ²Π ground state the levels hold the spin components
 	// themselves; the weight is per level, the multiplicity inside.
@@ -213,11 +248,14 @@ func (sp *Species) buildLevels() error {
 		g0 = 1
 	}
 	lv := &rovibLevels{lnNorm: math.Log(norm)}
-	ev, od := parity(gs.Term)
+	if sp.SpinMod.Frozen && homo {
+		lv.frozen, lv.evenFraction = true, sp.SpinMod.EvenFraction
+	}
+	ev, od, pm := parity(gs.Term)
 	// First pass: the lowest levels of the ground state, to find the
 	// lowest of all.
 	g00 := gs.TeCm + 0.5*gs.WeCm - 0.25*gs.WeXeCm + 0.125*gs.WeYeCm
-	lv.addLevels(gs, classRot0, 1/g0, ev, od, wS, wA, 0, g00+math.Abs(gs.SpinOrbitCm)+10*gs.BeCm)
+	lv.addLevels(gs, classRot0, 1/g0, ev, od, wS, wA, pm, 0, g00+math.Abs(gs.SpinOrbitCm)+10*gs.BeCm)
 	if len(lv.thetaK) == 0 {
 		return Errorf("model", "%s: the Dunham constants give no bound level", sp.Formula)
 	}
@@ -228,22 +266,45 @@ func (sp *Species) buildLevels() error {
 	lowCm := lowK / WavenumberToKelvin(1)
 	// The energy zero is the rotationless level v = 0, N = 0 of a Σ ground
 	// state even where the nuclear spins forbid it (¹⁶O2), as in the
-	// published tables; it is the lowest level itself for the others.
-	if gs.Term.Lambda == 0 {
+	// published tables.
+	// For a ²Π ground state it is the rotationless point of the lowest
+	// spin component, B0·Ω below its lowest level J = Ω (the case (a)
+	// rotational energy B[J(J+1) − Ω²] of J = Ω), which is where the
+	// tables put it: OH's lowest level, X²Π3/2 J = 3/2, sits 1.5 B0 ≈ 28
+	// cm⁻¹ above the zero of table H-038.
+	switch {
+	case gs.Term.Lambda == 0:
 		lv.zeroShiftK = lowK - WavenumberToKelvin(g00)
+	case gs.Term.doubletPi():
+		omega := 0.5
+		if gs.SpinOrbitCm < 0 {
+			omega = 1.5
+		}
+		lv.zeroShiftK = WavenumberToKelvin((gs.BeCm - 0.5*gs.AlphaeCm + 0.25*gs.GammaeCm) * omega)
 	}
 	// Second pass, from the lowest level and up to the dissociation limit.
-	lv.thetaK, lv.weight, lv.class = lv.thetaK[:0], lv.weight[:0], lv.class[:0]
-	lv.addLevels(gs, classRot0, 1/g0, ev, od, wS, wA, lowCm, sp.DissociationCm)
+	lv.thetaK, lv.weight, lv.class, lv.mod = lv.thetaK[:0], lv.weight[:0], lv.class[:0], lv.mod[:0]
+	lv.addLevels(gs, classRot0, 1/g0, ev, od, wS, wA, pm, lowCm, sp.DissociationCm)
 	for _, st := range sp.States {
-		ev, od := parity(st.Term)
-		lv.addLevels(st.DunhamConstants, classExcited, 1/g0, ev, od, wS, wA, lowCm, sp.DissociationCm)
+		ev, od, pm := parity(st.Term)
+		lv.addLevels(st.DunhamConstants, classExcited, 1/g0, ev, od, wS, wA, pm, lowCm, sp.DissociationCm)
 	}
 	if len(lv.thetaK) > maxLevels {
 		return Errorf("model", "%s: the constants give %d levels below the dissociation limit; want at most %d", sp.Formula, len(lv.thetaK), maxLevels)
 	}
 	sort.Sort(byEnergy{lv})
 	lv.thetaK[0] = 0 // exactly, for the lowest level (rounding of lowCm)
+	if lv.frozen {
+		lv.modLowK = [2]float64{math.Inf(1), math.Inf(1)}
+		for i, th := range lv.thetaK {
+			lv.modLowK[lv.mod[i]] = min(lv.modLowK[lv.mod[i]], th)
+		}
+		for i, k := range lv.modLowK {
+			if math.IsInf(k, 1) {
+				lv.modLowK[i] = 0 // no level: the modification's sum is 0 and skipped
+			}
+		}
+	}
 	sp.lnElecG0Levels = math.Log(g0)
 	// The table starts where the 8th level lies 40 kT up: below it the
 	// direct sum touches at most 8 levels.
@@ -251,6 +312,14 @@ func (sp *Species) buildLevels() error {
 	lv.tableMinK = max(lv.thetaK[i]/40, MinTempK)
 	sp.levels = lv
 	return nil
+}
+
+// parityMods says which spin modification (0 or 1, see rovibLevels.mod)
+// the symmetric (s) and antisymmetric (a) levels, and a state's even and
+// odd N, belong to; homo is false for a heteronuclear molecule.
+type parityMods struct {
+	homo            bool
+	s, a, even, odd uint8
 }
 
 type byEnergy struct{ lv *rovibLevels }
@@ -262,6 +331,9 @@ func (b byEnergy) Swap(i, j int) {
 	l.thetaK[i], l.thetaK[j] = l.thetaK[j], l.thetaK[i]
 	l.weight[i], l.weight[j] = l.weight[j], l.weight[i]
 	l.class[i], l.class[j] = l.class[j], l.class[i]
+	if l.mod != nil {
+		l.mod[i], l.mod[j] = l.mod[j], l.mod[i]
+	}
 }
 
 // levelMoments are Σw e^{−x}, Σw x e^{−x}, Σw x² e^{−x} of one partial sum,
@@ -313,7 +385,15 @@ func (lv *rovibLevels) sums(tempK float64) (rot0, ground, all levelMoments) {
 // included), and electronic what the other states add (the ground state's
 // multiplicity included by the caller).
 func (lv *rovibLevels) direct(tempK float64) (rot, vib, el Terms) {
+	if lv.frozen {
+		return lv.directFrozen(tempK)
+	}
 	a, b, c := lv.sums(tempK)
+	return lv.split(tempK, a, b, c)
+}
+
+// split turns the three nested partial sums into the three factors.
+func (lv *rovibLevels) split(tempK float64, a, b, c levelMoments) (rot, vib, el Terms) {
 	ta, tb, tc := a.terms(), b.terms(), c.terms()
 	rot = ta
 	x0 := lv.zeroShiftK / tempK
@@ -321,6 +401,54 @@ func (lv *rovibLevels) direct(tempK float64) (rot, vib, el Terms) {
 	rot.U += x0
 	vib = Terms{tb.LnQ - ta.LnQ, tb.U - ta.U, tb.Cv - ta.Cv}
 	el = Terms{tc.LnQ - tb.LnQ, tc.U - tb.U, tc.Cv - tb.Cv}
+	return
+}
+
+// directFrozen returns the terms of a frozen mixture of the two spin
+// modifications: each modification's sums over its own levels, weighted
+// by its fraction x_i, with ln q = Σ x_i ln(z_i/(g_tot x_i)) (z_i holds
+// the spin weight g_i), so that U and Cv are the fraction-weighted sums
+// and S carries the mixing entropy of the two (see spinmod.go).
+func (lv *rovibLevels) directFrozen(tempK float64) (rot, vib, el Terms) {
+	// Each modification is summed from its own lowest level, so that
+	// neither underflows at low T (ortho-H2 holds its J = 1 at 1 K).
+	var m [2][3]levelMoments
+	invT := 1 / tempK
+	top := max(lv.modLowK[0], lv.modLowK[1]) * invT
+	for i, th := range lv.thetaK {
+		x := (th - lv.modLowK[lv.mod[i]]) * invT
+		if x > 40 {
+			if th*invT-top > 40 {
+				break
+			}
+			continue
+		}
+		ex := math.Exp(-x)
+		w := lv.weight[i]
+		p := &m[lv.mod[i]]
+		switch lv.class[i] {
+		case classRot0:
+			p[0].add(w, x, ex)
+			fallthrough
+		case classGround:
+			p[1].add(w, x, ex)
+			fallthrough
+		default:
+			p[2].add(w, x, ex)
+		}
+	}
+	for i, frac := range [2]float64{lv.evenFraction, 1 - lv.evenFraction} {
+		if frac == 0 || m[i][0].z == 0 {
+			continue
+		}
+		r, v, e := lv.split(tempK, m[i][0], m[i][1], m[i][2])
+		xLow := lv.modLowK[i] * invT
+		r.LnQ -= math.Log(frac) + xLow
+		r.U += xLow
+		rot = rot.add(r.scale(frac))
+		vib = vib.add(v.scale(frac))
+		el = el.add(e.scale(frac))
+	}
 	return
 }
 

@@ -153,15 +153,179 @@ var levelTables = []janafTable{
 			{6000, 44.387, 313.457, 276.089, 224.210},
 		},
 	},
+	{
+		// NIST-JANAF 4th ed., table H-050, Hydrogen (H2): equilibrium
+		// hydrogen, so the check takes eH2.
+		formula: "eH2", table: "H-050",
+		rows: []janafRow{
+			{100, 28.154, 100.727, 155.408, -5.468},
+			{200, 27.447, 119.412, 133.284, -2.774},
+			{250, 28.344, 125.640, 131.152, -1.378},
+			{298.15, 28.836, 130.680, 130.680, 0.},
+			{300, 28.849, 130.858, 130.680, 0.053},
+			{350, 29.081, 135.325, 131.032, 1.502},
+			{400, 29.181, 139.216, 131.817, 2.959},
+			{450, 29.229, 142.656, 132.834, 4.420},
+			{500, 29.260, 145.737, 133.973, 5.882},
+			{600, 29.327, 151.077, 136.392, 8.811},
+			{700, 29.441, 155.606, 138.822, 11.749},
+			{800, 29.624, 159.548, 141.171, 14.702},
+			{900, 29.881, 163.051, 143.411, 17.676},
+			{1000, 30.205, 166.216, 145.536, 20.680},
+			{1100, 30.581, 169.112, 147.549, 23.719},
+			{1200, 30.992, 171.790, 149.459, 26.797},
+			{1300, 31.423, 174.288, 151.274, 29.918},
+			{1400, 31.861, 176.633, 153.003, 33.082},
+			{1500, 32.298, 178.846, 154.652, 36.290},
+			{1600, 32.725, 180.944, 156.231, 39.541},
+			{1700, 33.139, 182.940, 157.743, 42.835},
+			{1800, 33.537, 184.846, 159.197, 46.169},
+			{1900, 33.917, 186.669, 160.595, 49.541},
+			{2000, 34.280, 188.418, 161.943, 52.951},
+			{2100, 34.624, 190.099, 163.244, 56.397},
+			{2200, 34.952, 191.718, 164.501, 59.876},
+			{2300, 35.263, 193.278, 165.719, 63.387},
+			{2400, 35.559, 194.785, 166.899, 66.928},
+			{2500, 35.842, 196.243, 168.044, 70.498},
+			{2600, 36.111, 197.654, 169.155, 74.096},
+			{2700, 36.370, 199.021, 170.236, 77.720},
+			{2800, 36.618, 200.349, 171.288, 81.369},
+			{2900, 36.856, 201.638, 172.313, 85.043},
+			{3000, 37.087, 202.891, 173.311, 88.740},
+			{3100, 37.311, 204.111, 174.285, 92.460},
+			{3200, 37.528, 205.299, 175.236, 96.202},
+			{3300, 37.740, 206.457, 176.164, 99.966},
+			{3400, 37.946, 207.587, 177.072, 103.750},
+			{3500, 38.149, 208.690, 177.960, 107.555},
+			{3600, 38.348, 209.767, 178.828, 111.380},
+			{3700, 38.544, 210.821, 179.679, 115.224},
+			{3800, 38.738, 211.851, 180.512, 119.089},
+			{3900, 38.928, 212.860, 181.328, 122.972},
+			{4000, 39.116, 213.848, 182.129, 126.874},
+			{4100, 39.301, 214.816, 182.915, 130.795},
+			{4200, 39.484, 215.765, 183.686, 134.734},
+			{4300, 39.665, 216.696, 184.442, 138.692},
+			{4400, 39.842, 217.610, 185.186, 142.667},
+			{4500, 40.017, 218.508, 185.916, 146.660},
+			{4600, 40.188, 219.389, 186.635, 150.670},
+			{4700, 40.355, 220.255, 187.341, 154.698},
+			{4800, 40.518, 221.106, 188.035, 158.741},
+			{4900, 40.676, 221.943, 188.719, 162.801},
+			{5000, 40.829, 222.767, 189.392, 166.876},
+			{5100, 40.976, 223.577, 190.054, 170.967},
+			{5200, 41.117, 224.374, 190.706, 175.071},
+			{5300, 41.252, 225.158, 191.349, 179.190},
+			{5400, 41.379, 225.931, 191.982, 183.322},
+			{5500, 41.498, 226.691, 192.606, 187.465},
+			{5600, 41.609, 227.440, 193.222, 191.621},
+			{5700, 41.712, 228.177, 193.829, 195.787},
+			{5800, 41.806, 228.903, 194.427, 199.963},
+			{5900, 41.890, 229.619, 195.017, 204.148},
+			{6000, 41.965, 230.323, 195.600, 208.341},
+		},
+	},
+	{
+		// NIST-JANAF 4th ed., table H-038, Hydroxyl (OH)
+		formula: "OH", table: "H-038",
+		rows: []janafRow{
+			{100, 32.627, 149.590, 210.980, -6.139},
+			{200, 30.777, 171.592, 186.471, -2.976},
+			{250, 30.283, 178.402, 184.204, -1.450},
+			{298.15, 29.986, 183.708, 183.708, 0.},
+			{300, 29.977, 183.894, 183.709, 0.055},
+			{350, 29.780, 188.499, 184.073, 1.549},
+			{400, 29.650, 192.466, 184.880, 3.035},
+			{450, 29.567, 195.954, 185.921, 4.515},
+			{500, 29.521, 199.066, 187.082, 5.992},
+			{600, 29.527, 204.447, 189.542, 8.943},
+			{700, 29.663, 209.007, 192.005, 11.902},
+			{800, 29.917, 212.983, 194.384, 14.880},
+			{900, 30.264, 216.526, 196.651, 17.888},
+			{1000, 30.676, 219.736, 198.801, 20.935},
+			{1100, 31.124, 222.680, 200.840, 24.024},
+			{1200, 31.586, 225.408, 202.775, 27.160},
+			{1300, 32.046, 227.955, 204.615, 30.342},
+			{1400, 32.492, 230.346, 206.368, 33.569},
+			{1500, 32.917, 232.602, 208.043, 36.839},
+			{1600, 33.319, 234.740, 209.645, 40.151},
+			{1700, 33.694, 236.771, 211.182, 43.502},
+			{1800, 34.044, 238.707, 212.657, 46.889},
+			{1900, 34.369, 240.557, 214.078, 50.310},
+			{2000, 34.670, 242.327, 215.446, 53.762},
+			{2100, 34.950, 244.026, 216.767, 57.243},
+			{2200, 35.209, 245.658, 218.043, 60.752},
+			{2300, 35.449, 247.228, 219.278, 64.285},
+			{2400, 35.673, 248.741, 220.474, 67.841},
+			{2500, 35.881, 250.202, 221.635, 71.419},
+			{2600, 36.075, 251.613, 222.761, 75.017},
+			{2700, 36.256, 252.978, 223.855, 78.633},
+			{2800, 36.426, 254.300, 224.918, 82.267},
+			{2900, 36.586, 255.581, 225.954, 85.918},
+			{3000, 36.736, 256.824, 226.962, 89.584},
+			{3100, 36.878, 258.031, 227.945, 93.265},
+			{3200, 37.013, 259.203, 228.904, 96.960},
+			{3300, 37.140, 260.344, 229.839, 100.667},
+			{3400, 37.261, 261.455, 230.753, 104.387},
+			{3500, 37.376, 262.537, 231.645, 108.119},
+			{3600, 37.486, 263.591, 232.518, 111.863},
+			{3700, 37.592, 264.620, 233.372, 115.617},
+			{3800, 37.693, 265.624, 234.208, 119.381},
+			{3900, 37.791, 266.604, 235.026, 123.155},
+			{4000, 37.885, 267.562, 235.827, 126.939},
+			{4100, 37.976, 268.499, 236.613, 130.732},
+			{4200, 38.064, 269.415, 237.383, 134.534},
+			{4300, 38.150, 270.311, 238.138, 138.345},
+			{4400, 38.233, 271.189, 238.879, 142.164},
+			{4500, 38.315, 272.050, 239.607, 145.991},
+			{4600, 38.394, 272.893, 240.322, 149.827},
+			{4700, 38.472, 273.719, 241.023, 153.670},
+			{4800, 38.549, 274.530, 241.713, 157.521},
+			{4900, 38.625, 275.326, 242.391, 161.380},
+			{5000, 38.699, 276.107, 243.057, 165.246},
+			{5100, 38.773, 276.874, 243.713, 169.120},
+			{5200, 38.846, 277.627, 244.358, 173.001},
+			{5300, 38.919, 278.368, 244.993, 176.889},
+			{5400, 38.991, 279.096, 245.617, 180.784},
+			{5500, 39.062, 279.812, 246.233, 184.687},
+			{5600, 39.134, 280.517, 246.839, 188.597},
+			{5700, 39.206, 281.210, 247.436, 192.514},
+			{5800, 39.278, 281.892, 248.024, 196.438},
+			{5900, 39.350, 282.564, 248.604, 200.369},
+			{6000, 39.423, 283.226, 249.175, 204.308},
+		},
+	},
 }
 
 // levelTolerance is the goal of the level sums against the tables: Cp°
 // within 0.3 % and S° and −[G°−H°(298.15)]/T within 0.05 J/(mol·K) up to
 // 3000 K; above it, Cp° within 1 % and S° within 0.15 J/(mol·K). N2 meets
-// it. O2 does not yet, and gets the wider tolerances below, with the
-// reason; it is still far closer than the rigid rotor (see the log).
+// it, and H2 up to 3000 K. O2, OH and H2 above 3000 K do not yet, and get
+// the wider tolerances below, with the reason; each is still far closer
+// than the rigid rotor (see the log).
 func levelTolerance(formula string, tempK float64) (cpRel, sAbs float64) {
 	switch {
+	case formula == "eH2" && tempK > 3000:
+		// Cp° falls from −0.3 % at 3000 K to −5.1 % at 6000 K (S°
+		// −0.54): the Dunham series with D and H describes the levels
+		// of J up to about 25 only, and the quasi-bound levels behind
+		// the centrifugal barrier are left out; the table's sum holds
+		// both. The rigid rotor is at −12.4 % there.
+		return 0.055, 0.6
+	case formula == "OH" && tempK < RefTempK:
+		// The table lies 0.50 J/(mol·K) below the direct sum of the
+		// X2Π fine-structure levels at 100 K (Cp° 3 % above it): its
+		// low-T rows match a rigid rotor times two spin-orbit levels
+		// 139.2 cm⁻¹ apart to 0.02, not the Hill–Van Vleck levels,
+		// which this sum takes and which reproduce the observed ones.
+		return 0.035, 0.55
+	case formula == "OH" && tempK <= 3000:
+		// Cp° 0.33 % low at 298.15 K (the same low-T treatment), and
+		// rising to 0.8 % high at 3000 K (S° +0.09): the H&H constants
+		// from memory, or a cut-off of the table's sum, not yet found.
+		return 0.009, 0.1
+	case formula == "OH":
+		// Up to 1.6 % high in Cp° at 4500–5000 K, S° +0.42 at 6000 K.
+		return 0.018, 0.45
 	case formula == "O2" && tempK <= 3000:
 		// 0.4 % high at 2700–3000 K: the a and b states' constants
 		// (from memory) or the spin splitting left out.
@@ -322,8 +486,10 @@ func TestLevelSumEnergyScale(t *testing.T) {
 		formula string
 		want    float64 // kJ/mol
 	}{
-		{"N2", 8.670}, // NIST-JANAF 4th ed., table N-023, 0 K row
-		{"O2", 8.683}, // NIST-JANAF 4th ed., table O-029, 0 K row
+		{"N2", 8.670},  // NIST-JANAF 4th ed., table N-023, 0 K row
+		{"O2", 8.683},  // NIST-JANAF 4th ed., table O-029, 0 K row
+		{"eH2", 8.467}, // NIST-JANAF 4th ed., table H-050, 0 K row
+		{"OH", 9.172},  // NIST-JANAF 4th ed., table H-038, 0 K row
 	} {
 		sp := mustSpecies(t, tt.formula)
 		s, err := sp.StateWith(RefTempK, StdPressureBarPa, summed)
@@ -363,13 +529,22 @@ func TestLevelSumLimits(t *testing.T) {
 		}
 		// Not for a Π ground state: its fine structure is no rigid rotor
 		// beside an electronic level, which is the point of summing it.
-		if diff := full.SJPerMolK - rr.SJPerMolK; d.Term.Lambda == 0 && math.Abs(diff) > 5e-3 {
-			t.Errorf("%s at %.4g K: summed levels S %.5f, rigid rotor %.5f: want within 0.005", sp.Formula, cold, full.SJPerMolK, rr.SJPerMolK)
+		// Stretching lowers the levels by D·K², which raises ln q by
+		// about 2DkT/B² to first order (classically), and S/R by twice
+		// that: a few 1e-3 J/(mol·K) for the heavy molecules, 0.05 for H2.
+		kTCm := cold / WavenumberToKelvin(1)
+		tolS := 5e-3 + GasConstant*4*d.DeCm*kTCm/(b0*b0)
+		if diff := full.SJPerMolK - rr.SJPerMolK; d.Term.Lambda == 0 && math.Abs(diff) > tolS {
+			t.Errorf("%s at %.4g K: summed levels S %.5f, rigid rotor %.5f: want within %.3g", sp.Formula, cold, full.SJPerMolK, rr.SJPerMolK, tolS)
 		}
-		hot, _ := sp.StateWith(2*theta0, 1e5, summed)
-		hotFrozen, _ := sp.StateWith(2*theta0, 1e5, Treatment{Levels: LevelsSummed, Vibration: VibrationFrozen})
+		// Vibration must add at least R/2 to Cv at twice its Θ, or where
+		// kT is an eighth of D0 if that comes first (H2, whose 15
+		// vibrational levels end at D0, has no harmonic limit to reach).
+		hotK := min(2*theta0, WavenumberToKelvin(sp.DissociationCm)/8)
+		hot, _ := sp.StateWith(hotK, 1e5, summed)
+		hotFrozen, _ := sp.StateWith(hotK, 1e5, Treatment{Levels: LevelsSummed, Vibration: VibrationFrozen})
 		if hot.CvJPerMolK-hotFrozen.CvJPerMolK < 0.5*GasConstant {
-			t.Errorf("%s at %.4g K: vibration adds only %.3g J/(mol·K) to Cv", sp.Formula, 2*theta0, hot.CvJPerMolK-hotFrozen.CvJPerMolK)
+			t.Errorf("%s at %.4g K: vibration adds only %.3g J/(mol·K) to Cv", sp.Formula, hotK, hot.CvJPerMolK-hotFrozen.CvJPerMolK)
 		}
 	}
 }

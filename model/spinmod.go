@@ -31,8 +31,11 @@ import "math"
 // requires. A pure modification (x_i = 1) sits R ln(g_tot/g_i) below it in
 // S at high T.
 //
-// The frozen modifications always sum the rigid-rotor levels (RotationAuto
-// and RotationSummed); RotationClassical gives the common high-T limit.
+// With the summed levels (LevelsSummed, or the default once it sums),
+// each modification sums its own rovibrational levels from the Dunham
+// constants (see levels.go, directFrozen). Otherwise the frozen
+// modifications sum the rigid-rotor levels (RotationAuto and
+// RotationSummed); RotationClassical gives the common high-T limit.
 
 // SpinModification says how the spin isomers of a homonuclear linear
 // molecule are populated. The zero value is equilibrium.

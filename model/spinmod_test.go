@@ -58,7 +58,9 @@ func TestSpinModificationLimits(t *testing.T) {
 		if !ok {
 			t.Fatalf("no %s", name)
 		}
-		s, err := sp.State(tempK, 1e5)
+		// The closed forms are those of the rigid rotor; the summed
+		// levels have their own test, TestSpinModificationLevels.
+		s, err := sp.StateWith(tempK, 1e5, Treatment{Levels: LevelsRigidHarmonic})
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -115,6 +117,67 @@ func TestSpinModificationLimits(t *testing.T) {
 			}
 			if d := -(up.GJPerMol-dn.GJPerMol)/(2*h) - s.SJPerMolK; math.Abs(d) > diffClose*math.Abs(s.SJPerMolK)+diffFloor {
 				t.Errorf("%s at %g K: S + ∂G/∂T = %.3g", name, tempK, d)
+			}
+		}
+	}
+}
+
+// TestSpinModificationLevels checks the frozen modifications with the
+// summed levels, where each sums its own rovibrational levels:
+//   - at Θrot/20 para H2 and ortho D2 sit in J = 0 (S_rot/R = ln(g/g_tot)),
+//     and normal H2 holds its ortho quarter in J = 1, whose energy is the
+//     level sum's own E(0,1) = 2B0 − 4D0 + 8H (U_rot/RT = ¾ E/kT);
+//   - at 2000 K, where Θrot/T = 0.04, normal and equilibrium H2 agree in
+//     S and Cv within (Θrot/T)² (the high-T meeting of the rigid rotor);
+//   - the identities hold by central differences at 5 K to 5000 K.
+func TestSpinModificationLevels(t *testing.T) {
+	st := func(name string, tempK float64) State {
+		sp, ok := Builtin().Lookup(name)
+		if !ok {
+			t.Fatalf("no %s", name)
+		}
+		s, err := sp.StateWith(tempK, 1e5, summed)
+		if err != nil {
+			t.Fatal(err)
+		}
+		return s
+	}
+	h2 := mustSpecies(t, "H2")
+	d := h2.Dunham
+	b0, d0 := d.BeCm-0.5*d.AlphaeCm, d.DeCm+0.5*d.BetaeCm
+	e1K := WavenumberToKelvin(2*b0 - 4*d0 + 8*d.HeCm)
+	thH2, thD2 := h2.RotThetaK()[0], mustSpecies(t, "D2").RotThetaK()[0]
+	for _, c := range []struct {
+		name         string
+		tempK        float64
+		wantS, wantU float64
+	}{
+		{"pH2", thH2 / 20, -math.Log(4), 0},
+		{"oD2", thD2 / 20, math.Log(6.0 / 9), 0},
+		{"nH2", thH2 / 20, 0.75 * math.Log(3), 0.75 * e1K / (thH2 / 20)},
+	} {
+		s := st(c.name, c.tempK)
+		if math.Abs(s.Rot.S()-c.wantS) > 1e-6*max(1, c.wantS) || math.Abs(s.Rot.U-c.wantU) > 1e-6*max(1, c.wantU) {
+			t.Errorf("%s at %.4g K: S_rot/R = %.8f, U_rot/RT = %.8f; want %.8f and %.8f", c.name, c.tempK, s.Rot.S(), s.Rot.U, c.wantS, c.wantU)
+		}
+	}
+	n, e := st("nH2", 2000), st("eH2", 2000)
+	y := thH2 / 2000
+	if dS := (n.SJPerMolK - e.SJPerMolK) / GasConstant; math.Abs(dS) > y*y {
+		t.Errorf("nH2 − eH2 at 2000 K: S/R differs by %.3g, want within %.3g", dS, y*y)
+	}
+	if dCv := (n.CvJPerMolK - e.CvJPerMolK) / GasConstant; math.Abs(dCv) > y*y {
+		t.Errorf("nH2 − eH2 at 2000 K: Cv/R differs by %.3g, want within %.3g", dCv, y*y)
+	}
+	for _, name := range []string{"nH2", "pH2", "nD2", "oD2"} {
+		for _, tempK := range []float64{5, 20, 77, 150, 300, 1000, 5000} {
+			s, up, dn := st(name, tempK), st(name, tempK*(1+1e-4)), st(name, tempK*(1-1e-4))
+			h := 1e-4 * tempK
+			if d := (up.UJPerMol-dn.UJPerMol)/(2*h) - s.CvJPerMolK; math.Abs(d) > diffClose*s.CvJPerMolK+diffFloor {
+				t.Errorf("%s summed at %g K: Cv − ∂U/∂T = %.3g", name, tempK, d)
+			}
+			if d := -(up.GJPerMol-dn.GJPerMol)/(2*h) - s.SJPerMolK; math.Abs(d) > diffClose*math.Abs(s.SJPerMolK)+diffFloor {
+				t.Errorf("%s summed at %g K: S + ∂G/∂T = %.3g", name, tempK, d)
 			}
 		}
 	}

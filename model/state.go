@@ -75,7 +75,7 @@ type Treatment struct {
 // usesLevels reports whether the state of sp under tr comes from its
 // summed levels.
 func (sp *Species) usesLevels(tr Treatment) bool {
-	return sp.levels != nil && sp.summedLevels(tr) && tr.Rotation == RotationAuto && !sp.SpinMod.Frozen
+	return sp.levels != nil && sp.summedLevels(tr) && tr.Rotation == RotationAuto
 }
 
 // summedLevels reports whether tr asks for summed levels where a species
@@ -157,11 +157,22 @@ func (sp *Species) Fill(s *State, tempK, presPa float64, tr Treatment) {
 	sp.fill(s, tempK, presPa, tr)
 }
 
+// FillLn is Fill given lnT = ln T and lnP = ln P as well, for a caller
+// that has them already: a mixture takes ln T once for all its species,
+// and ln pᵢ = ln xᵢ + ln P from the ln xᵢ it keeps, so that a species
+// costs no log of its own for translation.
+func (sp *Species) FillLn(s *State, tempK, lnT, presPa, lnP float64, tr Treatment) {
+	sp.fillLn(s, tempK, lnT, presPa, lnP, tr)
+}
+
 func (sp *Species) fill(s *State, tempK, presPa float64, tr Treatment) {
+	sp.fillLn(s, tempK, math.Log(tempK), presPa, math.Log(presPa), tr)
+}
+
+func (sp *Species) fillLn(s *State, tempK, lnT, presPa, lnP float64, tr Treatment) {
 	s.TempK, s.PresPa = tempK, presPa
-	lnT := math.Log(tempK)
 	invT := 1 / tempK // one division, shared by every factor
-	s.Trans = sp.translation(lnT, math.Log(presPa))
+	s.Trans = sp.translation(lnT, lnP)
 	if sp.usesLevels(tr) {
 		s.Rot, s.Vib, s.Elec = sp.rovib(tempK, lnT)
 		if tr.Vibration == VibrationFrozen {
@@ -239,6 +250,8 @@ func (sp *Species) FactorTreatments(tr Treatment) [4]string {
 	levels := sp.usesLevels(tr)
 	switch {
 	case sp.Rotor == Atom:
+	case levels && sp.SpinMod.Frozen:
+		out[1] = "summed levels, v = 0 (Dunham constants), spin modifications frozen"
 	case levels:
 		out[1] = "summed levels, v = 0 (Dunham constants)"
 	case sp.Rotor == Nonlinear:

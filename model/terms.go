@@ -15,6 +15,9 @@ func (t Terms) S() float64 { return t.LnQ + t.U }
 
 func (t Terms) add(o Terms) Terms { return Terms{t.LnQ + o.LnQ, t.U + o.U, t.Cv + o.Cv} }
 
+// scale multiplies each term by f.
+func (t Terms) scale(f float64) Terms { return Terms{f * t.LnQ, f * t.U, f * t.Cv} }
+
 // translation returns the translational terms at (T, P), given ln T and
 // ln P, with the 1/N! of indistinguishable molecules folded in
 // (Sackur-Tetrode).

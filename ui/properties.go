@@ -282,7 +282,8 @@ func (p *propertiesPane) realGasLine(add func(string)) {
 	t := p.c.Text
 	st := &p.b.state
 	line := s.Label.Render("real gas ")
-	if !st.RealGasKnown {
+	rg, known := st.RealGasResult()
+	if !known {
 		add(line + s.Muted.Render(t(" not known: no critical constants")))
 		return
 	}
@@ -299,7 +300,7 @@ func (p *propertiesPane) realGasLine(add func(string)) {
 		items = append(items, item)
 	}
 	line += s.Value.Render(t(" " + strings.Join(items, "  ")))
-	if model := "  " + st.RealGas.Model.Short(); lipgloss.Width(line)+lipgloss.Width(model) <= p.w {
+	if model := "  " + rg.Model.Short(); lipgloss.Width(line)+lipgloss.Width(model) <= p.w {
 		line += s.Muted.Render(t(model))
 	}
 	add(line)

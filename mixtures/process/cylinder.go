@@ -97,10 +97,11 @@ func cylinderGas(mix *mixtures.Mixture, s *mixtures.State, tempK, presPa float64
 		return 0, err
 	}
 	mix.Fill(s, tempK, presPa, mixtures.Options{})
-	if !s.RealGasKnown {
+	rg, known := s.RealGasResult()
+	if !known {
 		return 1, nil
 	}
-	return s.RealGas.Z, nil
+	return rg.Z, nil
 }
 
 // pressureFor finds the pressure at which n mol of the blend fill V at
@@ -187,10 +188,10 @@ func (c Cylinder) Solve() (*CylinderResult, error) {
 		return nil, err
 	}
 	modelName := "ideal gas (no critical constants)"
-	if s.RealGasKnown {
-		modelName = s.RealGas.Model.String()
-		if s.RealGas.Range != realgas.InRange {
-			return nil, model.Errorf("process", "cylinder at %.4g bar: outside every model here (%s); zmix cannot give its contents", r.PresPa/1e5, s.RealGas.Range)
+	if rg, known := s.RealGasResult(); known {
+		modelName = rg.Model.String()
+		if rg.Range != realgas.InRange {
+			return nil, model.Errorf("process", "cylinder at %.4g bar: outside every model here (%s); zmix cannot give its contents", r.PresPa/1e5, rg.Range)
 		}
 	}
 	r.kind = "cylinder"

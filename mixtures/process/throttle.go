@@ -34,8 +34,7 @@ func (g realGas) State(s *mixtures.State, tempK, presPa float64) error {
 		return err
 	}
 	g.mix.Fill(s, tempK, presPa, g.opts)
-	if s.RealGasKnown {
-		rg := &s.RealGas
+	if rg, known := s.RealGasResult(); known {
 		s.HJPerMol += rg.HResJPerMol
 		s.SJPerMolK += rg.SResJPerMolK
 		s.GJPerMol += rg.HResJPerMol - tempK*rg.SResJPerMolK

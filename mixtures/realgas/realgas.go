@@ -108,7 +108,8 @@ type species struct {
 	quantum     bool
 	massGPerMol float64
 	kappa       float64 // Peng–Robinson κ(ω)
-	// Tsonopoulos' polar term a/Tr⁶ − b/Tr⁸ (see polar.go).
+	// Tsonopoulos' polar term a/Tr⁶ − b/Tr⁸ (see polar.go); never for a
+	// quantum gas, so a pair with one has no polar term.
 	polar          bool
 	polarA, polarB float64
 	zc             float64 // Lee–Kesler Zc
@@ -134,11 +135,30 @@ type Mixture struct {
 	xTotal  float64 // mole fraction carried by species with constants
 	// Tsonopoulos' B is a polynomial in 1/T: the pairs of classical
 	// species sum, once per composition, to B = Σₖ bPoly[k]/Tᵏ over the
-	// powers in tsonoPowers. Pairs with a quantum gas, whose constants
-	// depend on T, are summed at each state.
-	bPoly       [len(tsonoPowers)]float64
-	quantumPair [][2]int
+	// powers in tsonoPowers. A pair of a quantum gas and a classical
+	// species is summed once per composition too, as the coefficients of
+	// quantumTerm; only pairs of two quantum gases are summed at each
+	// state (quantumPair, indices into the quantum gases).
+	bPoly        [len(tsonoPowers)]float64
+	quantumTerms []quantumTerm
+	quantumPair  [][2]int
+	// classicalPseudo is Σ xᵢTcᵢ, Σ xᵢPcᵢ and Σ xᵢVcᵢ over the classical
+	// species, to which Kay's rule adds the quantum gases at each T.
+	classicalPseudo [3]float64
 }
+
+// quantumTerm is one quantum gas's pairs with every classical species j.
+// A pair adds to B the term xq xj (aq + bj)³/(2(Zcq + Zcj)) ·
+// Σₖ cₖ(ωqj) (sq sj)^nₖ / T^nₖ, with a = ∛Vc and s = √Tc; only aq and sq
+// depend on T. Expanding the cube, the pairs sum once per composition to
+// g[k][m], the coefficient of aq^m sq^nₖ / T^nₖ.
+type quantumTerm struct {
+	idx int // the gas in Mixture.sp
+	g   [len(tsonoPowers)][4]float64
+}
+
+// maxStackQuantum is how many quantum gases Eval keeps on the stack.
+const maxStackQuantum = 8
 
 // tsonoPowers are the powers of Tc/T in Tsonopoulos' f⁰, f¹ and polar
 // f² = a/Tr⁶ − b/Tr⁸, with their coefficients (per unit a and b).
@@ -187,21 +207,54 @@ func New(comps []Component) *Mixture {
 		m.xTotal += c.X
 		m.sp = append(m.sp, s)
 	}
+	qpos := make([]int, len(m.sp)) // a quantum gas's place in quantumTerms
+	for i := range m.sp {
+		if s := &m.sp[i]; s.quantum {
+			qpos[i] = len(m.quantumTerms)
+			m.quantumTerms = append(m.quantumTerms, quantumTerm{idx: i})
+		} else {
+			m.classicalPseudo[0] += s.x * s.tcK
+			m.classicalPseudo[1] += s.x * s.pcPa
+			m.classicalPseudo[2] += s.x * s.vcM3PerMol
+		}
+	}
 	for i := range m.sp {
 		for j := i; j < len(m.sp); j++ {
 			si, sj := &m.sp[i], &m.sp[j]
-			if si.quantum || sj.quantum {
-				m.quantumPair = append(m.quantumPair, [2]int{i, j})
-				continue
-			}
-			w, tcij, scale, wij := pairConstants(si, sj, i != j)
-			var aij, bij float64
-			if si.polar && sj.polar {
-				aij, bij = 0.5*(si.polarA+sj.polarA), 0.5*(si.polarB+sj.polarB)
-			}
-			for k, n := range tsonoPowers {
-				f := tsonoF0[k] + wij*tsonoF1[k] + aij*tsonoA[k] + bij*tsonoB[k]
-				m.bPoly[k] += w * scale * f * math.Pow(tcij, float64(n))
+			switch {
+			case si.quantum && sj.quantum:
+				m.quantumPair = append(m.quantumPair, [2]int{qpos[i], qpos[j]})
+			case si.quantum || sj.quantum:
+				q, c := si, sj
+				if sj.quantum {
+					q, c = sj, si
+				}
+				qt := &m.quantumTerms[qpos[i]]
+				if sj.quantum {
+					qt = &m.quantumTerms[qpos[j]]
+				}
+				// w·scale of pairConstants with the cube left open.
+				w := 2 * q.x * c.x / (4 * (q.zc + c.zc))
+				wij := 0.5 * (q.omega + c.omega)
+				b := c.cbrtVc
+				for k, n := range tsonoPowers {
+					coef := w * (tsonoF0[k] + wij*tsonoF1[k]) * math.Pow(c.sqrtTc, float64(n))
+					g := &qt.g[k]
+					g[0] += coef * b * b * b
+					g[1] += coef * 3 * b * b
+					g[2] += coef * 3 * b
+					g[3] += coef
+				}
+			default:
+				w, tcij, scale, wij := pairConstants(si, sj, i != j)
+				var aij, bij float64
+				if si.polar && sj.polar {
+					aij, bij = 0.5*(si.polarA+sj.polarA), 0.5*(si.polarB+sj.polarB)
+				}
+				for k, n := range tsonoPowers {
+					f := tsonoF0[k] + wij*tsonoF1[k] + aij*tsonoA[k] + bij*tsonoB[k]
+					m.bPoly[k] += w * scale * f * math.Pow(tcij, float64(n))
+				}
 			}
 		}
 	}
@@ -253,30 +306,59 @@ func (m *Mixture) atTemperature(buf []species, tempK float64) []species {
 	return sp
 }
 
+// quantumAt returns the quantum gases, in the order of quantumTerms,
+// with their effective constants set for T, in buf when it has room.
+func (m *Mixture) quantumAt(buf []species, tempK float64) []species {
+	q := buf[:0]
+	if len(m.quantumTerms) > cap(buf) {
+		q = make([]species, 0, len(m.quantumTerms))
+	}
+	for _, qt := range m.quantumTerms {
+		s := m.sp[qt.idx]
+		mt := s.massGPerMol * tempK
+		s.setCritical(s.tc0/(1+21.8/mt), s.pc0/(1+44.2/mt))
+		q = append(q, s)
+	}
+	return q
+}
+
 // Known reports whether any species carries critical constants.
 func (m *Mixture) Known() bool { return len(m.sp) > 0 }
 
 // SecondVirial returns the blend's B and its first two T-derivatives,
 // in m³/mol, m³/(mol·K), m³/(mol·K²).
 func (m *Mixture) SecondVirial(tempK float64) (b, db, d2b float64) {
-	var buf [maxStackSpecies]species
-	return m.secondVirial(m.atTemperature(buf[:], tempK), tempK)
+	var buf [maxStackQuantum]species
+	return m.secondVirial(m.quantumAt(buf[:], tempK), tempK)
 }
 
-func (m *Mixture) secondVirial(sp []species, tempK float64) (b, db, d2b float64) {
+// secondVirial sums B from the quantum gases q at T (see quantumAt).
+// The T-derivatives are taken at fixed effective constants.
+func (m *Mixture) secondVirial(q []species, tempK float64) (b, db, d2b float64) {
 	u := 1 / tempK
 	u2 := u * u
 	u3 := u2 * u
 	u4 := u2 * u2
 	u6 := u4 * u2
 	u8 := u4 * u4
-	p := &m.bPoly
+	p := m.bPoly
+	for i := range m.quantumTerms {
+		g := &m.quantumTerms[i].g
+		a := q[i].cbrtVc
+		s := q[i].sqrtTc
+		s2 := s * s
+		s4 := s2 * s2
+		sn := [len(tsonoPowers)]float64{1, s, s2, s2 * s, s4 * s2, s4 * s4} // s^nₖ
+		for k := range p {
+			p[k] += sn[k] * (g[k][0] + a*(g[k][1]+a*(g[k][2]+a*g[k][3])))
+		}
+	}
 	// Σₖ cₖ/Tᵏ and its derivatives −k cₖ/Tᵏ⁺¹, k(k+1) cₖ/Tᵏ⁺².
 	b = p[0] + p[1]*u + p[2]*u2 + p[3]*u3 + p[4]*u6 + p[5]*u8
 	db = -(p[1]*u2 + 2*p[2]*u3 + 3*p[3]*u4 + 6*p[4]*u6*u + 8*p[5]*u8*u)
 	d2b = 2*p[1]*u3 + 6*p[2]*u4 + 12*p[3]*u4*u + 42*p[4]*u8 + 72*p[5]*u8*u2
 	for _, ij := range m.quantumPair {
-		w, tcij, scale, wij := pairConstants(&sp[ij[0]], &sp[ij[1]], ij[0] != ij[1])
+		w, tcij, scale, wij := pairConstants(&q[ij[0]], &q[ij[1]], ij[0] != ij[1])
 		f, f1, f2 := tsonopoulos(tempK/tcij, wij)
 		b += w * scale * f
 		db += w * scale * f1 / tcij
@@ -305,13 +387,15 @@ func tsonopoulos(tr, omega float64) (f, df, d2f float64) {
 }
 
 // pseudo returns Kay's pseudo-critical Tc, Pc and Vc over the species
-// with constants, normalised to their share of the blend.
-func (m *Mixture) pseudo(sp []species) (tcK, pcPa, vc float64) {
+// with constants, normalised to their share of the blend, given the
+// quantum gases q at T.
+func (m *Mixture) pseudo(q []species) (tcK, pcPa, vc float64) {
 	if m.xTotal == 0 {
 		return 0, 0, 0
 	}
-	for i := range sp {
-		s := &sp[i]
+	tcK, pcPa, vc = m.classicalPseudo[0], m.classicalPseudo[1], m.classicalPseudo[2]
+	for i := range q {
+		s := &q[i]
 		tcK += s.x * s.tcK
 		pcPa += s.x * s.pcPa
 		vc += s.x * s.vcM3PerMol
@@ -325,10 +409,10 @@ func (m *Mixture) Eval(r *Result, tempK, presPa, cpIdealJPerMolK float64) {
 	rg := model.GasConstant
 	rt := rg * tempK
 	cvIdeal := cpIdealJPerMolK - rg
-	var buf [maxStackSpecies]species
-	sp := m.atTemperature(buf[:], tempK)
-	b, db, d2b := m.secondVirial(sp, tempK)
-	tpc, ppc, vc := m.pseudo(sp)
+	var qbuf [maxStackQuantum]species
+	q := m.quantumAt(qbuf[:], tempK)
+	b, db, d2b := m.secondVirial(q, tempK)
+	tpc, ppc, vc := m.pseudo(q)
 	*r = Result{Model: Virial, BM3PerMol: b, PseudoCriticalK: tpc, PseudoCriticalPa: ppc}
 
 	z := 1 + b*presPa/rt
@@ -347,7 +431,8 @@ func (m *Mixture) Eval(r *Result, tempK, presPa, cpIdealJPerMolK float64) {
 		m.checkRange(r, tempK, presPa)
 		return
 	}
-	m.pengRobinson(r, sp, tempK, presPa, cpIdealJPerMolK, cvIdeal, vc)
+	var buf [maxStackSpecies]species
+	m.pengRobinson(r, m.atTemperature(buf[:], tempK), tempK, presPa, cpIdealJPerMolK, cvIdeal, vc)
 	m.checkRange(r, tempK, presPa)
 }
 

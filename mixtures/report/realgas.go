@@ -19,10 +19,10 @@ import (
 // real density are rows of the quantity table too (SectionRealGas), for
 // JSON, CSV, sweeps and the workbench.
 func RealGasLines(st *mixtures.State) [][2]string {
-	if !st.RealGasKnown {
+	rg, known := st.RealGasResult()
+	if !known {
 		return [][2]string{{"not known", "no species of the blend carries critical constants (Tc, Pc, ω)"}}
 	}
-	rg := &st.RealGas
 	deviation := math.Abs(rg.Z-1) * 100
 	lines := [][2]string{
 		{"model", ModelText(rg)},
@@ -60,11 +60,12 @@ func jtSense(muKPerPa float64) string {
 // realGasRemarks are the model's caveats for the blend, as lines.
 func realGasRemarks(st *mixtures.State) []string {
 	var out []string
-	if !st.RealGasKnown {
+	rg, known := st.RealGasResult()
+	if !known {
 		return nil
 	}
-	if st.RealGas.Range != realgas.InRange {
-		out = append(out, "outside every model here: "+st.RealGas.Range.String()+"; neither the ideal-gas nor these figures can be trusted")
+	if rg.Range != realgas.InRange {
+		out = append(out, "outside every model here: "+rg.Range.String()+"; neither the ideal-gas nor these figures can be trusted")
 	}
 	var ideal, polar []string
 	for i := range st.Species {
@@ -79,7 +80,7 @@ func realGasRemarks(st *mixtures.State) []string {
 	if len(ideal) > 0 {
 		out = append(out, "taken as ideal gases (no critical constants): "+strings.Join(ideal, ", "))
 	}
-	if len(polar) > 0 && st.RealGas.Model == realgas.Virial {
+	if len(polar) > 0 && rg.Model == realgas.Virial {
 		out = append(out, "polar virial terms left out for "+strings.Join(polar, ", ")+": their |B| is underestimated")
 	}
 	return out
@@ -166,11 +167,11 @@ func (j *jsonWriter) realGas(st *mixtures.State, indent string) {
 
 func (j *jsonWriter) realGasObject(st *mixtures.State, indent string) {
 	j.key(indent, "real_gas")
-	if !st.RealGasKnown {
+	rg, known := st.RealGasResult()
+	if !known {
 		j.buf = append(j.buf, "null"...)
 		return
 	}
-	rg := &st.RealGas
 	inner := indent + "  "
 	j.buf = append(j.buf, "{\n"...)
 	j.key(inner, "model")
