@@ -13,7 +13,7 @@ import (
 var notKnown = map[string]string{
 	"NO lc50_ppm":   "ISO 10298 value not recalled with confidence (1 h or 4 h basis unclear)",
 	"GeH4 lfl_pct":  "no flammable limits recalled or read; the gas-detection data page read gives none",
-	"GeH4 lc50_ppm": "ISO 10298 value not recalled with confidence; suppliers label it H330 (fatal if inhaled)",
+	"GeH4 lc50_ppm": "ISO 10298 value not recalled with confidence; suppliers label it H330 (fatal if inhaled), and OSHA's 1989 review (read) quotes mouse deaths after 1 h at 150 and 185 ppm, but no rat LC50",
 	"WF6 lc50_ppm":  "no LC50 recalled or read; suppliers classify it Acute Tox. 1 by inhalation (LC50 at most 100 ppm, 4 h)",
 	// The ISO 10156 classification of a blend with these then says "not
 	// known" unless the other fuels already sum above 1.
