@@ -66,7 +66,9 @@ func (a *app) cmdCatalog(g *globalOpts, args []string) error {
 		sp, ok := cat.Lookup(rest[0])
 		if !ok {
 			hint := "zmix catalog lists every species"
-			if sug := cat.Suggest(rest[0], 3); len(sug) > 0 {
+			if h, ok := cat.IsomerHint(rest[0]); ok {
+				hint = h
+			} else if sug := cat.Suggest(rest[0], 3); len(sug) > 0 {
 				hint = "did you mean " + strings.Join(sug, ", ") + "? (zmix catalog lists every species)"
 			}
 			return badInput("unknown species %s; %s", model.Quote(rest[0]), hint)

@@ -91,6 +91,8 @@ func TestBadInput(t *testing.T) {
 		{"empty blend", []string{"state", "--blend", " , ; ", "--temp", "300K", "--pres", "1bar"}, 2, "empty blend"},
 		{"unknown species", []string{"state", "--blend", "N3 79%, O2 21%", "--temp", "300K", "--pres", "1bar"}, 2, `"N3": unknown species: did you mean`},
 		{"two balances", []string{"state", "--blend", "N2 bal, Ar bal", "--temp", "300K", "--pres", "1bar"}, 2, "more than one balance"},
+		{"bare isomer formula", []string{"state", "--blend", "C4H10 2%, N2 bal", "--temp", "300K", "--pres", "1bar"}, 2, `"C4H10" is the formula of more than one isomer; write n-C4H10 (n-butane) or i-C4H10 (isobutane)`},
+		{"catalog bare isomer formula", []string{"catalog", "C4H10"}, 2, "write n-C4H10 (n-butane) or i-C4H10 (isobutane)"},
 		{"sweep both ranges", append([]string{"sweep", "--temp", "300..400K", "--pres", "1..2bar"}, okBlend...), 2, "both ranges"},
 		{"sweep no range", append([]string{"sweep", "--temp", "300K", "--pres", "1bar"}, okBlend...), 2, "nothing to sweep"},
 		{"sweep one step", append([]string{"sweep", "--temp", "300..400K", "--pres", "1bar", "--steps", "1"}, okBlend...), 2, `invalid value "1" for flag --steps: want a whole number of points from 2`},

@@ -10,6 +10,15 @@ import (
 // radicals have no critical point: they exist only in hot gases.
 var radicals = map[string]bool{"H": true, "O": true, "N": true, "OH": true}
 
+// criticalNotKnown lists bottled species whose critical constants no
+// source at hand gave; they are taken as ideal gases, and the readout says
+// so (see mixtures/report realGasRemarks).
+var criticalNotKnown = map[string]string{
+	"GeH4":    "no Tc, Pc, ω recalled with confidence or read",
+	"WF6":     "no Tc, Pc, ω recalled with confidence or read",
+	"SiH2Cl2": "no Tc, Pc, ω recalled with confidence or read",
+}
+
 // TestBuiltinCriticalConstants: every bottled species carries Tc, Pc and
 // ω with a source each, and the quantum gases are marked.
 func TestBuiltinCriticalConstants(t *testing.T) {
@@ -18,6 +27,12 @@ func TestBuiltinCriticalConstants(t *testing.T) {
 		if radicals[sp.Formula] {
 			if sp.HasCritical() {
 				t.Errorf("%s: a radical with critical constants", sp.Formula)
+			}
+			continue
+		}
+		if _, unknown := criticalNotKnown[sp.Formula]; unknown {
+			if sp.HasCritical() {
+				t.Errorf("%s: criticalNotKnown lists it, but it has critical constants: drop the exception", sp.Formula)
 			}
 			continue
 		}

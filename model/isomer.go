@@ -27,3 +27,43 @@ func splitIsomer(formula string) (prefix, bare string) {
 	}
 	return "", formula
 }
+
+// Isomers returns the species of c whose formula without its isomer
+// prefix is key, case-insensitively, in catalogue order: "C4H10" gives
+// n-C4H10 and i-C4H10. A bare formula never names one of them by itself,
+// even when the catalogue holds only one: C4F8 is also the formula of
+// perfluorobutenes, one of which (perfluoroisobutene) is far more toxic
+// than the ring.
+func (c *Catalogue) Isomers(key string) []*Species {
+	key = strings.TrimSpace(key)
+	if p, _ := splitIsomer(key); p != "" || key == "" {
+		return nil
+	}
+	var out []*Species
+	for _, sp := range c.species {
+		if p, bare := splitIsomer(sp.Formula); p != "" && strings.EqualFold(bare, key) {
+			out = append(out, sp)
+		}
+	}
+	return out
+}
+
+// IsomerHint says, for a bare formula that only isomers of the catalogue
+// carry, which prefixed names are accepted: `"C4H10" is the formula of
+// more than one isomer; write n-C4H10 (n-butane) or i-C4H10 (isobutane)`.
+// ok is false when key is not such a formula.
+func (c *Catalogue) IsomerHint(key string) (hint string, ok bool) {
+	isos := c.Isomers(key)
+	if len(isos) == 0 {
+		return "", false
+	}
+	names := make([]string, len(isos))
+	for i, sp := range isos {
+		names[i] = Printable(sp.Formula) + " (" + Printable(sp.Name) + ")"
+	}
+	what := "more than one isomer; write " + strings.Join(names, " or ")
+	if len(isos) == 1 {
+		what = "more than one isomer; write " + names[0] + " for the one in the catalogue"
+	}
+	return Quote(key) + " is the formula of " + what, true
+}

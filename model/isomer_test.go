@@ -64,3 +64,41 @@ func abs(x float64) float64 {
 	}
 	return x
 }
+
+// TestBuiltinIsomers: the built-in butanes are addressed by their prefixed
+// formulas or their names, and the bare formula is refused with a hint
+// that names each accepted isomer.
+func TestBuiltinIsomers(t *testing.T) {
+	c := Builtin()
+	for key, want := range map[string]string{
+		"n-C4H10": "n-C4H10", "i-C4H10": "i-C4H10", "isobutane": "i-C4H10", "n-butane": "n-C4H10", "I-C4H10": "i-C4H10",
+	} {
+		if sp, ok := c.Lookup(key); !ok || sp.Formula != want {
+			t.Errorf("Lookup(%q) = %v, %v; want %s", key, sp, ok, want)
+		}
+	}
+	for _, bare := range []string{"C4H10", "c4h10", " C4H10 "} {
+		if _, ok := c.Lookup(bare); ok {
+			t.Errorf("Lookup(%q) found a species; a bare formula names no isomer", bare)
+		}
+		hint, ok := c.IsomerHint(bare)
+		if !ok || !strings.Contains(hint, "n-C4H10 (n-butane)") || !strings.Contains(hint, "i-C4H10 (isobutane)") || strings.Contains(hint, "\n") {
+			t.Errorf("IsomerHint(%q) = %q, %v; want one line naming both butanes", bare, hint, ok)
+		}
+	}
+	for _, notIsomer := range []string{"CH4", "n-C4H10", "C3H8", "", "n-", "xyz"} {
+		if hint, ok := c.IsomerHint(notIsomer); ok {
+			t.Errorf("IsomerHint(%q) = %q; want none", notIsomer, hint)
+		}
+	}
+	// One isomer in the catalogue still needs its prefix.
+	list, err := ParseCatalogue("ring.cat", strings.NewReader("[c-C4F8]\nname = octafluorocyclobutane\nrotor = nonlinear\nrot_cm = 0.04 0.03 0.02 | test fixture\n"+
+		"vib_cm = 1000x5 900x5 500x5 400x5 200x5 100x5 | test fixture\ndHf0_kJ = -1500 | test fixture\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	ring := newCatalogue(append(append([]*Species(nil), c.All()...), list...))
+	if hint, ok := ring.IsomerHint("C4F8"); !ok || !strings.Contains(hint, "c-C4F8 (octafluorocyclobutane)") {
+		t.Errorf("IsomerHint(C4F8) = %q, %v; want the ring named", hint, ok)
+	}
+}

@@ -209,22 +209,32 @@ func TestProcessPaneSavedState(t *testing.T) {
 	}
 }
 
-// The export writes what the commands print.
+// The export writes what the commands print, in the format its name
+// chooses: --json's object or --csv's table.
 func TestProcessExport(t *testing.T) {
-	dir := t.TempDir()
-	r := testRoot(t, 120, 40, testRootOpts{stateDir: dir})
-	press(t, r, "6", "right")
-	press(t, r, "ctrl+e", "ctrl+u")
-	out := filepath.Join(dir, "compress.json")
-	typeIn(t, r, out)
-	press(t, r, "enter")
-	data, err := os.ReadFile(out)
-	if err != nil {
-		t.Fatalf("no export: %v (status: %s)", err, r.View())
+	tests := []struct {
+		name string
+		want []string
+	}{
+		{"compress.json", []string{`"process": "compress"`, `"outlet_temperature_K"`, `"work_J_mol"`, `"cautions"`}},
+		{"compress.csv", []string{"section,row,name,value\n", ",,process,compress\n", ",,outlet_temperature_K,", "cautions,1,,"}},
 	}
-	for _, k := range []string{`"process": "compress"`, `"outlet_temperature_K"`, `"work_J_mol"`, `"cautions"`} {
-		if !strings.Contains(string(data), k) {
-			t.Errorf("export lacks %s:\n%s", k, data)
+	for _, tt := range tests {
+		dir := t.TempDir()
+		r := testRoot(t, 120, 40, testRootOpts{stateDir: dir})
+		press(t, r, "6", "right")
+		press(t, r, "ctrl+e", "ctrl+u")
+		out := filepath.Join(dir, tt.name)
+		typeIn(t, r, out)
+		press(t, r, "enter")
+		data, err := os.ReadFile(out)
+		if err != nil {
+			t.Fatalf("%s: no export: %v (status: %s)", tt.name, err, r.View())
+		}
+		for _, k := range tt.want {
+			if !strings.Contains(string(data), k) {
+				t.Errorf("%s lacks %q:\n%s", tt.name, k, data)
+			}
 		}
 	}
 }
@@ -269,25 +279,5 @@ func TestProcessPaneWeighed(t *testing.T) {
 	p.keys(t, "enter")
 	if p.result != nil || !strings.Contains(p.err, "parent 2") || !strings.Contains(p.err, "by moles") {
 		t.Errorf("bad parent 2: err %q, want it naming the field and the basis", p.err)
-	}
-}
-
-// A .csv name exports the commands' --csv table.
-func TestProcessExportCSV(t *testing.T) {
-	dir := t.TempDir()
-	r := testRoot(t, 120, 40, testRootOpts{stateDir: dir})
-	press(t, r, "6", "right")
-	press(t, r, "ctrl+e", "ctrl+u")
-	out := filepath.Join(dir, "compress.csv")
-	typeIn(t, r, out)
-	press(t, r, "enter")
-	data, err := os.ReadFile(out)
-	if err != nil {
-		t.Fatalf("no export: %v (status: %s)", err, r.View())
-	}
-	for _, k := range []string{"section,row,name,value\n", ",,process,compress\n", ",,outlet_temperature_K,", "cautions,1,,"} {
-		if !strings.Contains(string(data), k) {
-			t.Errorf("export lacks %q:\n%s", k, data)
-		}
 	}
 }
