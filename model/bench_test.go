@@ -82,10 +82,13 @@ func BenchmarkSpeciesStateFloor(b *testing.B) {
 //     more, the table interpolates ln q, U and Cv in ln T; below the
 //     table, one exp per level within 40 kT and one log per partial sum
 //     (rotation, the ground state, all states);
-//   - a summed linear rigid rotor: one exp, e^{−2Θ/T}, from which every
-//     level follows by products, and one log of the sum, or one log per
-//     spin modification of a frozen mixture; above 50 Θ, where the rotor
-//     is a series in Θ/T, and for a nonlinear rotor: none;
+//   - a linear rigid rotor summed level by level (below 20 Θ for a
+//     homonuclear molecule, 10 Θ for a heteronuclear one): one exp,
+//     e^{−2Θ/T}, from which every level follows by products, and one log
+//     of the sum, or one log per spin modification of a frozen mixture;
+//     above, where the sum is its Euler–Maclaurin expansion in Θ/T, above
+//     50 Θ, where the rotor is a shorter series, and for a nonlinear
+//     rotor: none;
 //   - vibration: one exp per distinct harmonic mode not frozen out, and
 //     one log of the product of the modes' factors; torsions and
 //     anharmonic levels read from their tables: none;
@@ -111,7 +114,7 @@ func stateFloor(sp *Species, tempK, presPa float64, tr Treatment) float64 {
 		return acc
 	}
 	if sp.Rotor == Linear {
-		if theta := sp.rotThetaK[0]; sp.SpinMod.Frozen || tempK < rotorSumLimit*theta {
+		if theta := sp.rotThetaK[0]; tr.Rotation != RotationClassical && (theta*invT > sp.expansionMaxY() || tr.Rotation == RotationSummed) {
 			c := math.Exp(-2 * theta * invT)
 			acc += math.Log(1 + c)
 			if sp.SpinMod.Frozen && sp.SpinMod.EvenFraction > 0 && sp.SpinMod.EvenFraction < 1 {
