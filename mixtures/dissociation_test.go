@@ -88,19 +88,14 @@ func TestHotEstimatesEdges(t *testing.T) {
 //
 //	Kp = (2α/(1+α))² / ((1−α)/(1+α)) = 4α²/(1 − α²),  α = √(Kp/(4 + Kp)).
 //
-// The drift from the spectroscopic tables is logged, and held per row:
-// O2 has its rovibrational levels summed from Dunham constants and
-// agrees within 0.1 %, held to 0.5 % (the tables' log Kf carry three
-// decimals, ±0.1 % in α); H2 is still a rigid rotor and harmonic
-// oscillator in the catalogue, whose μ° drifts by about 0.07 RT at
-// 3000 K (α +3.4 %), held to 5 %: α ∝ √Kp, so 5 % is 0.1 RT in ΔG°. A
-// wrong energy zero (ΔfH° of the atom off by 5 kJ/mol) moves α by about
-// 20 % and fails either.
+// The drift from the spectroscopic tables is logged. O2 and H2 have
+// their rovibrational levels summed from Dunham constants and agree
+// within 0.1 %; they are held to 0.5 % (the tables' log Kf carry three
+// decimals, ±0.1 % in α). A rigid rotor and harmonic oscillator drifts by
+// 3 % for H2 at 3000 K, and a wrong energy zero (ΔfH° of the atom off by
+// 5 kJ/mol) moves α by about 20 %: either fails.
 func TestDissociationVsJANAF(t *testing.T) {
-	const (
-		summed = 0.005 // levels summed (O2)
-		rrho   = 0.05  // rigid rotor, harmonic oscillator (H2)
-	)
+	const summed = 0.005 // levels summed
 	for _, tt := range []struct {
 		molecule, atom string
 		tempK          float64
@@ -122,12 +117,12 @@ func TestDissociationVsJANAF(t *testing.T) {
 		//   3000  20.786  162.706  143.986  56.161  229.790  46.007  -0.801
 		// table H-050 (H2, ref), row 3000 K:
 		//   3000  37.087  202.891  173.311  88.740  0.  0.  0.
-		{"H2", "H", 3000, -0.801, 0, rrho},
+		{"H2", "H", 3000, -0.801, 0, summed},
 		// table H-001, row 4000 K:
 		//   4000  20.786  168.686  149.450  76.947  231.509  -15.541  0.203
 		// table H-050, row 4000 K:
 		//   4000  39.116  213.848  182.129  126.874  0.  0.  0.
-		{"H2", "H", 4000, 0.203, 0, rrho},
+		{"H2", "H", 4000, 0.203, 0, summed},
 	} {
 		kp := math.Pow(10, 2*tt.logKfAtom-tt.logKfMolecule)
 		want := math.Sqrt(kp / (4 + kp))

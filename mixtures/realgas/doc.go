@@ -19,9 +19,18 @@
 // ωᵢⱼ = (ωᵢ + ωⱼ)/2, Pcᵢⱼ = 4 Tcᵢⱼ (Pcᵢ Vcᵢ/Tcᵢ + Pcⱼ Vcⱼ/Tcⱼ)/(Vcᵢ^⅓ + Vcⱼ^⅓)³.
 // The critical volume comes from the Lee–Kesler critical compressibility
 // Zc = 0.2905 − 0.085 ω (AIChE J. 21, 510, 1975), Vc = Zc R Tc/Pc, so
-// that the catalogue needs no Vc. The polar terms (H2O, NH3, HF) are left
-// out: the correlation then underestimates |B| of those species, which
-// the output says when one of them is present. The pressure-explicit
+// that the catalogue needs no Vc.
+//
+// Polar gases add Tsonopoulos' polar term f² = a/Tr⁶ − b/Tr⁸ (polar.go):
+// water the fitted a = −0.0109, b = 0 of Tsonopoulos and Heidman (Fluid
+// Phase Equilib. 57, 261, 1990); NH3 and H2S, and as an estimate SO2,
+// HCl, HBr and NO2, b = 0 and a = −2.14×10⁻⁴ μr − 4.308×10⁻²¹ μr⁸ from
+// the reduced dipole moment μr = 10⁵ μ² Pc/Tc² (μ in debye, Pc in atm),
+// Tsonopoulos' rule for polar gases that do not hydrogen-bond. A polar–
+// non-polar pair takes aᵢⱼ = bᵢⱼ = 0, two polar species the means. HF,
+// which associates, and CHF3, of the alkyl-halide class, are left out:
+// the correlation then underestimates their |B|, which the output says.
+// The pressure-explicit
 // truncation Z = 1 + BP/(RT) gives the departure functions
 //
 //	H − Hig = P (B − T dB/dT)

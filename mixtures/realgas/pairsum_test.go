@@ -6,14 +6,23 @@ import (
 )
 
 // directSecondVirial sums Tsonopoulos' B pair by pair at T, every
-// constant at T: the definition that the per-composition sums of New
-// must reproduce to rounding.
+// constant at T, with the polar term aᵢⱼ/Tr⁶ − bᵢⱼ/Tr⁸ of two polar
+// species: the definition that the per-composition sums of New must
+// reproduce to rounding.
 func directSecondVirial(m *Mixture, tempK float64) (b, db, d2b float64) {
 	sp := m.atTemperature(nil, tempK)
 	for i := range sp {
 		for j := i; j < len(sp); j++ {
 			w, tcij, scale, wij := pairConstants(&sp[i], &sp[j], i != j)
 			f, f1, f2 := tsonopoulos(tempK/tcij, wij)
+			if sp[i].polar && sp[j].polar {
+				a, bb := 0.5*(sp[i].polarA+sp[j].polarA), 0.5*(sp[i].polarB+sp[j].polarB)
+				u := tcij / tempK // 1/Tr
+				u6 := math.Pow(u, 6)
+				f += a*u6 - bb*u6*u*u
+				f1 += -6*a*u6*u + 8*bb*u6*u*u*u
+				f2 += 42*a*u6*u*u - 72*bb*u6*u*u*u*u
+			}
 			b += w * scale * f
 			db += w * scale * f1 / tcij
 			d2b += w * scale * f2 / (tcij * tcij)
@@ -32,6 +41,7 @@ func TestSecondVirialPairSum(t *testing.T) {
 		{"N2": 0.7195, "O2": 0.1, "Ar": 0.05, "CO2": 0.04, "H2": 0.03, "He": 0.02, "CO": 0.01, "CH4": 0.01, "H2O": 0.02, "NH3": 0.0005},
 		{"He": 0.5, "H2": 0.5},
 		{"He": 1},
+		{"H2O": 0.4, "NH3": 0.3, "N2": 0.2, "H2": 0.1}, // two polar, a non-polar and a quantum gas
 	}
 	const tol = 1e-12 // relative to the largest pair term: rounding only
 	for _, xs := range blends {

@@ -108,7 +108,11 @@ type species struct {
 	quantum     bool
 	massGPerMol float64
 	kappa       float64 // Peng–Robinson κ(ω)
-	zc          float64 // Lee–Kesler Zc
+	// Tsonopoulos' polar term a/Tr⁶ − b/Tr⁸ (see polar.go); never for a
+	// quantum gas, so a pair with one has no polar term.
+	polar          bool
+	polarA, polarB float64
+	zc             float64 // Lee–Kesler Zc
 	// At the current T (fixed for a classical species):
 	tcK, pcPa  float64
 	sqrtTc     float64
@@ -125,7 +129,7 @@ type species struct {
 type Mixture struct {
 	sp      []species // species with critical constants only
 	Ideal   []string  // formulas taken as ideal gases (no critical constants)
-	Polar   []string  // formulas whose polar virial terms are left out
+	Polar   []string  // polar formulas whose polar virial terms are not known here
 	quantum bool      // some species has temperature-dependent constants
 	massKg  float64
 	xTotal  float64 // mole fraction carried by species with constants
@@ -156,12 +160,14 @@ type quantumTerm struct {
 // maxStackQuantum is how many quantum gases Eval keeps on the stack.
 const maxStackQuantum = 8
 
-// tsonoPowers are the powers of Tc/T in Tsonopoulos' f⁰ and f¹, with
-// their coefficients.
+// tsonoPowers are the powers of Tc/T in Tsonopoulos' f⁰, f¹ and polar
+// f² = a/Tr⁶ − b/Tr⁸, with their coefficients (per unit a and b).
 var (
-	tsonoPowers = [5]int{0, 1, 2, 3, 8}
-	tsonoF0     = [5]float64{0.1445, -0.330, -0.1385, -0.0121, -0.000607}
-	tsonoF1     = [5]float64{0.0637, 0, 0.331, -0.423, -0.008}
+	tsonoPowers = [6]int{0, 1, 2, 3, 6, 8}
+	tsonoF0     = [6]float64{0.1445, -0.330, -0.1385, -0.0121, 0, -0.000607}
+	tsonoF1     = [6]float64{0.0637, 0, 0.331, -0.423, 0, -0.008}
+	tsonoA      = [6]float64{0, 0, 0, 0, 1, 0}
+	tsonoB      = [6]float64{0, 0, 0, 0, 0, -1}
 )
 
 const maxStackSpecies = 24
@@ -172,13 +178,6 @@ const (
 	sqrt2    = math.Sqrt2
 )
 
-// polar lists species whose dipole makes Tsonopoulos' polar term matter.
-var polar = map[string]bool{"H2O": true, "NH3": true, "HF": true, "HCl": true, "SO2": true, "H2S": true, "NO2": true}
-
-// PolarLeftOut reports whether the species is one whose polar terms of
-// Tsonopoulos' correlation are left out.
-func PolarLeftOut(formula string) bool { return polar[formula] }
-
 // New builds the models' constants for a blend.
 func New(comps []Component) *Mixture {
 	m := &Mixture{}
@@ -188,11 +187,14 @@ func New(comps []Component) *Mixture {
 			m.Ideal = append(m.Ideal, c.Formula)
 			continue
 		}
-		if polar[c.Formula] {
+		if PolarLeftOut(c.Formula) {
 			m.Polar = append(m.Polar, c.Formula)
 		}
 		s := species{x: c.X, omega: c.Acentric, tc0: c.CriticalK, pc0: c.CriticalPa,
 			quantum: c.Quantum, massGPerMol: c.MolarMassKgPerMol * 1000}
+		if !c.Quantum {
+			s.polarA, s.polarB, s.polar = polarAB(c.Formula, c.CriticalK, c.CriticalPa)
+		}
 		w := c.Acentric
 		if w <= 0.49 {
 			s.kappa = 0.37464 + 1.54226*w - 0.26992*w*w
@@ -245,8 +247,13 @@ func New(comps []Component) *Mixture {
 				}
 			default:
 				w, tcij, scale, wij := pairConstants(si, sj, i != j)
+				var aij, bij float64
+				if si.polar && sj.polar {
+					aij, bij = 0.5*(si.polarA+sj.polarA), 0.5*(si.polarB+sj.polarB)
+				}
 				for k, n := range tsonoPowers {
-					m.bPoly[k] += w * scale * (tsonoF0[k] + wij*tsonoF1[k]) * math.Pow(tcij, float64(n))
+					f := tsonoF0[k] + wij*tsonoF1[k] + aij*tsonoA[k] + bij*tsonoB[k]
+					m.bPoly[k] += w * scale * f * math.Pow(tcij, float64(n))
 				}
 			}
 		}
@@ -332,6 +339,7 @@ func (m *Mixture) secondVirial(q []species, tempK float64) (b, db, d2b float64) 
 	u2 := u * u
 	u3 := u2 * u
 	u4 := u2 * u2
+	u6 := u4 * u2
 	u8 := u4 * u4
 	p := m.bPoly
 	for i := range m.quantumTerms {
@@ -340,15 +348,15 @@ func (m *Mixture) secondVirial(q []species, tempK float64) (b, db, d2b float64) 
 		s := q[i].sqrtTc
 		s2 := s * s
 		s4 := s2 * s2
-		sn := [len(tsonoPowers)]float64{1, s, s2, s2 * s, s4 * s4} // s^nₖ
+		sn := [len(tsonoPowers)]float64{1, s, s2, s2 * s, s4 * s2, s4 * s4} // s^nₖ
 		for k := range p {
 			p[k] += sn[k] * (g[k][0] + a*(g[k][1]+a*(g[k][2]+a*g[k][3])))
 		}
 	}
 	// Σₖ cₖ/Tᵏ and its derivatives −k cₖ/Tᵏ⁺¹, k(k+1) cₖ/Tᵏ⁺².
-	b = p[0] + p[1]*u + p[2]*u2 + p[3]*u3 + p[4]*u8
-	db = -(p[1]*u2 + 2*p[2]*u3 + 3*p[3]*u4 + 8*p[4]*u8*u)
-	d2b = 2*p[1]*u3 + 6*p[2]*u4 + 12*p[3]*u4*u + 72*p[4]*u8*u2
+	b = p[0] + p[1]*u + p[2]*u2 + p[3]*u3 + p[4]*u6 + p[5]*u8
+	db = -(p[1]*u2 + 2*p[2]*u3 + 3*p[3]*u4 + 6*p[4]*u6*u + 8*p[5]*u8*u)
+	d2b = 2*p[1]*u3 + 6*p[2]*u4 + 12*p[3]*u4*u + 42*p[4]*u8 + 72*p[5]*u8*u2
 	for _, ij := range m.quantumPair {
 		w, tcij, scale, wij := pairConstants(&q[ij[0]], &q[ij[1]], ij[0] != ij[1])
 		f, f1, f2 := tsonopoulos(tempK/tcij, wij)
