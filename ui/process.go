@@ -93,6 +93,7 @@ var processKinds = []processKind{
 		{key: "parent3", label: "parent 3", def: "", hint: weighedParentHint},
 		{key: "parent4", label: "parent 4", def: "", hint: weighedParentHint},
 		{key: "massu", label: "u of each mass", def: "4 mg", hint: "standard uncertainty of each weighed mass: " + process.WeighedMassUnits},
+		{key: "atomic", label: "atomic weight", def: "", hint: "an element's own: EL VALUE +- U, e.g. Ar 39.9478 +- 0.0002 (g/mol, standard uncertainty); empty: IUPAC's"},
 	}},
 }
 
@@ -590,6 +591,13 @@ func (p *processPane) calculate() (process.Result, string, error) {
 			return nil, "", fieldError("u of each mass", err)
 		}
 		w := process.Weighing{MassUKg: massU}
+		if text := p.value("atomic"); text != "" {
+			aw, err := process.ParseAtomicWeight(text)
+			if err != nil {
+				return nil, "", fieldError("atomic weight", err)
+			}
+			w.AtomicWeights = []process.AtomicWeight{aw}
+		}
 		var gases []string
 		for i, f := range p.current().fields[:4] {
 			text := p.value(f.key)

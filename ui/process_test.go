@@ -294,4 +294,12 @@ func TestProcessPaneWeighed(t *testing.T) {
 	if p.result != nil || !strings.Contains(p.err, "parent 2") || !strings.Contains(p.err, "by moles") {
 		t.Errorf("bad parent 2: err %q, want it naming the field and the basis", p.err)
 	}
+	p.keys(t, "esc", "down", "down", "down", "down", "enter")
+	for _, r := range "Ar 30 +- 1" {
+		p.keys(t, string(r))
+	}
+	p.keys(t, "enter")
+	if p.result != nil || !strings.HasPrefix(p.err, "atomic weight: ") {
+		t.Errorf("bad atomic weight: err %q, want it naming the field", p.err)
+	}
 }
