@@ -14,9 +14,8 @@ var radicals = map[string]bool{"H": true, "O": true, "N": true, "OH": true}
 // source at hand gave; they are taken as ideal gases, and the readout says
 // so (see mixtures/report realGasRemarks).
 var criticalNotKnown = map[string]string{
-	"GeH4":    "no Tc, Pc, ω recalled with confidence or read",
-	"WF6":     "no Tc, Pc, ω recalled with confidence or read",
-	"SiH2Cl2": "no Tc, Pc, ω recalled with confidence or read",
+	"GeH4": "no Tc, Pc, ω recalled with confidence or read",
+	"WF6":  "no Tc, Pc, ω recalled with confidence or read",
 }
 
 // TestBuiltinCriticalConstants: every bottled species carries Tc, Pc and

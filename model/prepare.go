@@ -99,6 +99,16 @@ func (sp *Species) Prepare() error {
 	if !dHf0Range.contains(sp.EnergyZeroJPerMol / 1000) {
 		return Errorf("model", "%s: ΔfH°(0 K) %g kJ/mol; want %s", sp.Formula, sp.EnergyZeroJPerMol/1000, dHf0Range)
 	}
+	sp.frozenLnW, sp.frozenLnMix = [2]float64{}, 0
+	if sp.SpinMod.Frozen && sp.Homonuclear() {
+		gTot := sp.SpinWeights[0] + sp.SpinWeights[1]
+		for parity, x := range [2]float64{sp.SpinMod.EvenFraction, 1 - sp.SpinMod.EvenFraction} {
+			if g := sp.SpinWeights[parity]; g > 0 && x > 0 {
+				sp.frozenLnW[parity] = math.Log(g / (gTot * x))
+				sp.frozenLnMix += x * sp.frozenLnW[parity]
+			}
+		}
+	}
 	if err := sp.prepareTorsions(); err != nil {
 		return err
 	}

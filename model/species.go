@@ -180,6 +180,11 @@ type Species struct {
 	lnNQ0 float64
 	// lnRotClassical is ln(√π/σ / √(ΘAΘBΘC)) or ln(1/(σΘ)).
 	lnRotClassical float64
+	// frozenLnW is ln(g_i/(g_tot x_i)) of each frozen spin modification
+	// (0 for a weight or fraction of 0), and frozenLnMix Σ x_i of it: the
+	// constant terms of a frozen mixture's ln q (spinmod.go).
+	frozenLnW   [2]float64
+	frozenLnMix float64
 }
 
 // vibTerm is one vibrational mode as the partition function uses it.

@@ -139,8 +139,8 @@ func (sp *Species) SpinModificationOf() SpinModification { return sp.SpinMod }
 // frozenRotorSum returns the rotational terms of a frozen mixture of the
 // two spin modifications (see the comment at the top of this file).
 func (sp *Species) frozenRotorSum(invT float64) Terms {
-	theta := sp.rotThetaK[0]
-	gTot := sp.SpinWeights[0] + sp.SpinWeights[1]
+	y := sp.rotThetaK[0] * invT
+	c := math.Exp(-2 * y) // both modifications' recurrences start from it
 	var t Terms
 	for parity := 0; parity < 2; parity++ {
 		x := sp.SpinMod.EvenFraction
@@ -150,12 +150,8 @@ func (sp *Species) frozenRotorSum(invT float64) Terms {
 		if x == 0 {
 			continue
 		}
-		one := paritySum(theta*invT, parity)
-		lnW := 0.0
-		if g := sp.SpinWeights[parity]; g > 0 {
-			lnW = math.Log(g / (gTot * x))
-		}
-		t.LnQ += x * (one.LnQ + lnW)
+		one := paritySum(y, c, parity)
+		t.LnQ += x * (one.LnQ + sp.frozenLnW[parity])
 		t.U += x * one.U
 		t.Cv += x * one.Cv
 	}
@@ -165,13 +161,16 @@ func (sp *Species) frozenRotorSum(invT float64) Terms {
 // paritySum sums (2J+1) e^{−J(J+1)y} over the J of one parity, relative
 // to J = 0 (its lowest level may be J = 1), with the recurrence of
 // linearRotorSum.
-func paritySum(y float64, parity int) Terms {
+func paritySum(y, c float64, parity int) Terms {
 	j0 := parity
 	e0 := j0 * (j0 + 1)
 	x0 := float64(e0) * y
-	c := math.Exp(-2 * y)
-	// From J to J+2 the factor is e^{−(4J+6)y}; that step shrinks by e^{−8y}.
-	step := math.Exp(-float64(4*j0+6) * y)
+	// c = e^{−2y}. From J to J+2 the factor is e^{−(4J+6)y} = c^{2J+3};
+	// that step shrinks by c⁴ = e^{−8y}.
+	step := c * c * c
+	if j0 == 1 {
+		step *= c * c
+	}
 	c4 := c * c * c * c
 	boltz := 1.0
 	var z, m1, m2 float64
