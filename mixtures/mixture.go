@@ -2,6 +2,7 @@ package mixtures
 
 import (
 	"math"
+	"sync"
 
 	"zmix/mixtures/realgas"
 	"zmix/model"
@@ -18,23 +19,43 @@ type Mixture struct {
 	// composition only.
 	lnX          []float64
 	sMixJPerMolK float64
-	// real holds the real-gas models' constants for the composition.
-	real *realgas.Mixture
+	// real holds the real-gas models' constants for the composition,
+	// made when a state first asks for its real-gas figures: a process
+	// balance on the ideal gas makes mixtures it never asks.
+	real *lazyRealGas
+}
+
+// lazyRealGas makes a composition's real-gas constants once, on request;
+// known says beforehand whether any species carries critical constants.
+type lazyRealGas struct {
+	once  sync.Once
+	comps []Component
+	known bool
+	m     *realgas.Mixture
+}
+
+func (l *lazyRealGas) get() *realgas.Mixture {
+	l.once.Do(func() {
+		comps := make([]realgas.Component, len(l.comps))
+		for i, c := range l.comps {
+			comps[i] = realgas.ComponentOf(c.Species, c.X)
+		}
+		l.m = realgas.New(comps)
+	})
+	return l.m
 }
 
 // prepare computes what every state of the mixture shares.
 func (m *Mixture) prepare() {
 	m.lnX = make([]float64, len(m.Components))
 	m.sMixJPerMolK = 0
+	m.real = &lazyRealGas{comps: m.Components}
 	for i, c := range m.Components {
 		m.lnX[i] = math.Log(c.X)
 		m.sMixJPerMolK -= model.GasConstant * c.X * m.lnX[i]
+		// As realgas.New counts a species with constants.
+		m.real.known = m.real.known || c.Species.CriticalK > 0 && c.Species.CriticalPa > 0
 	}
-	comps := make([]realgas.Component, len(m.Components))
-	for i, c := range m.Components {
-		comps[i] = realgas.ComponentOf(c.Species, c.X)
-	}
-	m.real = realgas.New(comps)
 }
 
 // RealGas returns the blend's real-gas models: which species they take as
@@ -43,7 +64,7 @@ func (m *Mixture) RealGas() *realgas.Mixture {
 	if len(m.lnX) != len(m.Components) {
 		m.prepare()
 	}
-	return m.real
+	return m.real.get()
 }
 
 // Options are the choices a state is computed with. The zero value means
@@ -113,7 +134,7 @@ type State struct {
 // that a caller that changes those (a process model adding the
 // departures) cannot change the result.
 type pendingRealGas struct {
-	model                    *realgas.Mixture // nil: nothing pending
+	model                    *lazyRealGas // nil: nothing pending
 	tempK, presPa, cpIdealJK float64
 }
 
@@ -125,7 +146,7 @@ type pendingRealGas struct {
 func (s *State) RealGasResult() (*realgas.Result, bool) {
 	if p := &s.realPending; p.model != nil {
 		rg := &s.RealGas
-		p.model.Eval(rg, p.tempK, p.presPa, p.cpIdealJK)
+		p.model.get().Eval(rg, p.tempK, p.presPa, p.cpIdealJK)
 		s.RealGasKnown = finite(rg.Z) && finite(rg.VM3PerMol) && rg.VM3PerMol > 0 && finite(rg.HResJPerMol) &&
 			finite(rg.SResJPerMolK) && finite(rg.CpJPerMolK) && finite(rg.CvJPerMolK) &&
 			finite(rg.SoundSpeedMPerS) && finite(rg.JouleThomsonKPerPa)
@@ -263,7 +284,7 @@ func (m *Mixture) Fill(s *State, tempK, presPa float64, opts Options) {
 	s.SoundSpeedMPerS = math.Sqrt(s.Gamma * rt / m.MolarMassKgPerMol)
 	s.RealGasKnown = false
 	s.realPending = pendingRealGas{}
-	if m.real.Known() {
+	if m.real.known {
 		s.realPending = pendingRealGas{model: m.real, tempK: tempK, presPa: presPa, cpIdealJK: cp}
 	}
 }
