@@ -291,7 +291,7 @@ func WriteSpeciesJSON(w io.Writer, sp *model.Species, builtin bool, stdPa float6
 		Table         tableDoc          `json:"table"`
 	}{catalogEntry: newCatalogEntry(sp, builtin), RotConstPerCm: sp.RotConstPerCm, Symmetry: sp.Symmetry,
 		Treatment: sp.Treatments(model.RefTempK, stdPa, model.Treatment{}).Kind,
-		BoilingK: sp.BoilingK, EnergyZero: sp.EnergyZeroJPerMol, Sources: sp.Sources,
+		BoilingK:  sp.BoilingK, EnergyZero: sp.EnergyZeroJPerMol, Sources: sp.Sources,
 		CriticalK: sp.CriticalK, CriticalPa: sp.CriticalPa, QuantumGas: sp.QuantumGas,
 		Table: tableDoc{StdPresPa: stdPa, Rows: []map[string]float64{}}}
 	if sp.HasCritical() {
