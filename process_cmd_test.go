@@ -115,6 +115,7 @@ func TestProcessBadInput(t *testing.T) {
 		{"weighed bad mass-u", []string{"weighed", "--add", "25 g CO2", "--mass-u", "2 grains"}, `unknown unit "grains"`},
 		{"weighed bad parent", []string{"weighed", "--add", "25 g CO2", "--add", "CO2 25 g", "--mass-u", "2mg"}, "--add 2: "},
 		{"weighed no balance", []string{"weighed", "--add", "25 g CH4 2%, N2 3%", "--mass-u", "2mg"}, "one balance species"},
+		{"weighed bad atomic weight", []string{"weighed", "--add", "25 g Ar", "--mass-u", "2mg", "--atomic-weight", "Ar 30 ± 0.1"}, "--atomic-weight: "},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {

@@ -127,8 +127,8 @@ func (sp *Species) prepareAnharmonic() error {
 		return nil
 	}
 	n := len(a.HarmonicCm)
-	if n != len(sp.Vib) || n > maxAnharmonicModes || len(sp.Torsions) > 0 {
-		return Errorf("model", "%s: harm_cm gives %d harmonic wavenumbers for %d modes; want one per vib_cm mode, at most %d, and no torsions", sp.Formula, n, len(sp.Vib), maxAnharmonicModes)
+	if n != len(sp.Vib) || n > maxAnharmonicModes || len(sp.Torsions) > 0 || len(sp.Ladders) > 0 {
+		return Errorf("model", "%s: harm_cm gives %d harmonic wavenumbers for %d modes; want one per vib_cm mode, at most %d, and no torsions or ladders", sp.Formula, n, len(sp.Vib), maxAnharmonicModes)
 	}
 	nDeg := 0
 	for _, m := range sp.Vib {

@@ -26,6 +26,8 @@ var dunhamFields = map[string]string{
 	"harm_cm":    "harmonic wavenumbers ωi of a polyatomic's modes in cm⁻¹, in vib_cm's order",
 	"gll_cm":     "vibrational angular momentum constants g_tt in cm⁻¹, one per doubly degenerate mode",
 	"xij_cm":     "anharmonicity constants xij in cm⁻¹, the upper triangle row by row (x11 x12 x13 x22 x23 x33)",
+	"dist_cm":    "quartic centrifugal distortion of a nonlinear molecule: the z axis (1, 2 or 3 in rot_cm's order), then ΔJ ΔJK ΔK δJ δK (Watson's A reduction) in cm⁻¹",
+	"ladder_cm":  "a mode by its observed levels: the vib_cm mode it replaces, the symmetry divisor, a colon, the levels from 0 (see ladder.go)",
 	"torsion_cm": "hindered internal rotations, each \"fundamental V0 F n σ\" (cm⁻¹, cm⁻¹, cm⁻¹, fold, symmetry), separated by ;",
 }
 
@@ -77,6 +79,10 @@ func setDunhamField(sp *Species, key, value string) error {
 	switch key {
 	case "torsion_cm":
 		return setTorsions(sp, value)
+	case "ladder_cm":
+		return setLadder(sp, value)
+	case "dist_cm":
+		return setDistortion(sp, value)
 	case "harm_cm", "xij_cm", "gll_cm":
 		return setAnharmonic(sp, key, value)
 	case "D0_cm":

@@ -212,11 +212,10 @@ var janafTables = []janafTable{
 	{
 		// NIST-JANAF 4th ed., table H-083, Ammonia (NH3)
 		//
-		// NH3 drifts most in S° (−1.2 at 1500 K, 80 % of the allowance):
-		// its umbrella mode ν2 inverts through a low barrier, so its
-		// levels are far from a harmonic ladder, and the tables include
-		// that; the model has one harmonic ν2 at the mean of the
-		// inversion doublet.
+		// NH3 drifts most in S° (−0.61 at 1500 K): its umbrella mode ν2
+		// is summed from its inversion levels (ladder_test.go), but its
+		// stretches and bend stay harmonic, while the tables include
+		// their anharmonicity.
 		formula: "NH3", table: "H-083",
 		h298MinusH0KJ: 10.045, dHf0KJ: -38.907,
 		rows: []janafRow{

@@ -327,16 +327,23 @@ func levelTolerance(formula string, tempK float64) (cpRel, sAbs float64) {
 		// Up to 1.6 % high in Cp° at 4500–5000 K, S° +0.42 at 6000 K.
 		return 0.018, 0.45
 	case formula == "O2" && tempK <= 3000:
-		// 0.4 % high at 2700–3000 K: the a and b states' constants
-		// (from memory) or the spin splitting left out.
-		return 0.005, 0.1
+		// Within the goal to 2900 K; 0.30 % high in Cp° and 0.05 in S°
+		// at 3000 K, the start of the overshoot below.
+		return 0.0035, 0.06
 	case formula == "O2":
-		// Above 4500 K the table's Cp° rises faster than the model's,
-		// to 3.2 % above it at 6000 K, with the Herzberg states (c1Σu−,
-		// A'3Δu, A3Σu+) summed from constants recalled from memory. The
-		// rest is not yet explained: the quasi-bound levels this model
-		// leaves out, or states above them, are candidates.
-		return 0.05, 0.2
+		// Cp° up to 0.5 % high at 3500–4500 K, then the table's Cp°
+		// rises faster, to 3.3 % above the model at 6000 K (S° stays
+		// within 0.13). What was found: the a state's ωe was its ΔG(½)
+		// (fixed: 1509.3 with Te gives the observed ν00 7882.4); the
+		// Herzberg states c1Σu−, A'3Δu, A3Σu+ are summed and add 0.49
+		// J/(mol·K) to Cp° at 6000 K; the ground state's quasi-bound
+		// levels, admitted up to 2000 cm⁻¹ above D0 as a trial, add
+		// under 0.4. The rest, 1.5 J/(mol·K) at 6000 K, needs states
+		// this catalogue lacks: of the 81 state-degeneracies that
+		// converge on O(3P) + O(3P), X, a, b, c, A' and A hold 16; the
+		// weakly bound others (5Πg among them) have no constants in
+		// any source here.
+		return 0.05, 0.15
 	case tempK <= 3000:
 		return 0.003, 0.05
 	}
@@ -406,7 +413,7 @@ var summed = Treatment{Levels: LevelsSummed}
 func TestLevelSumIdentities(t *testing.T) {
 	rng := rand.New(rand.NewPCG(1, 1))
 	for _, sp := range Builtin().All() {
-		if !sp.HasLevels() && len(sp.Torsions) == 0 && sp.Anharmonic == nil {
+		if !sp.HasLevels() && len(sp.Torsions) == 0 && sp.Anharmonic == nil && len(sp.Ladders) == 0 && sp.Distortion == nil {
 			continue
 		}
 		for _, tr := range []Treatment{summed, {Levels: LevelsSummed, Vibration: VibrationFrozen}, {Levels: LevelsSummed, Electronic: ElectronicGroundOnly}} {

@@ -115,6 +115,9 @@ func (sp *Species) Prepare() error {
 	if err := sp.prepareAnharmonic(); err != nil {
 		return err
 	}
+	if err := sp.prepareDistortion(); err != nil {
+		return err
+	}
 	return sp.prepareLevels()
 }
 

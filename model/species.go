@@ -126,6 +126,13 @@ type Species struct {
 	// Torsions are hindered internal rotations that replace vibrational
 	// modes when the levels are summed (see torsion.go).
 	Torsions []Torsion
+	// Ladders are modes given by their observed levels (NH3's inversion
+	// ladder), replacing harmonic modes when the levels are summed (see
+	// ladder.go).
+	Ladders []Ladder
+	// Distortion holds a nonlinear molecule's quartic centrifugal
+	// distortion constants, nil if none (see distortion.go).
+	Distortion *Distortion
 	// Anharmonic holds a polyatomic's harmonic wavenumbers and xij, nil
 	// if none (see anharmonic.go).
 	Anharmonic *Anharmonic
@@ -172,6 +179,7 @@ type Species struct {
 	torsionLevels    []*rovibLevels
 	anharmonicVib    *rovibLevels // the anharmonic vibrational levels
 	vibModesHindered []vibTerm
+	distortionPerK   float64 // ln q_rot gains distortionPerK·T (see distortion.go)
 	// lnElecG0Levels is ln of the ground state's multiplicity in the
 	// level sum (0 for ²Π, whose spin components are levels of their own).
 	lnElecG0Levels float64

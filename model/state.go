@@ -186,6 +186,9 @@ func (sp *Species) fillLn(s *State, tempK, lnT, presPa, lnP float64, tr Treatmen
 			s.Rot = sp.linearRotor(tempK, invT, lnT, tr.Rotation)
 		} else {
 			s.Rot = sp.rigidBodyRotor(lnT) // inlined: no call for most species
+			if sp.distortionPerK != 0 && sp.summedLevels(tr) {
+				s.Rot = s.Rot.add(sp.distortionTerms(tempK))
+			}
 		}
 		s.Vib = Terms{}
 		switch {

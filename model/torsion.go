@@ -2,6 +2,7 @@ package model
 
 import (
 	"math"
+	"slices"
 
 	"gonum.org/v1/gonum/mat"
 )
@@ -113,14 +114,14 @@ func (lv *rovibLevels) torsionTerms(tempK, lnT float64) Terms {
 // list of vibrational modes that remain harmonic beside them.
 func (sp *Species) prepareTorsions() error {
 	sp.torsionLevels, sp.vibModesHindered = nil, nil
-	if len(sp.Torsions) == 0 {
+	if len(sp.Torsions) == 0 && len(sp.Ladders) == 0 {
 		return nil
 	}
 	if len(sp.Torsions) > maxTorsions {
 		return Errorf("model", "%s: %d torsions; want at most %d", sp.Formula, len(sp.Torsions), maxTorsions)
 	}
 	if sp.Rotor != Nonlinear {
-		return Errorf("model", "%s: hindered internal rotations need a nonlinear molecule", sp.Formula)
+		return Errorf("model", "%s: hindered internal rotations and level ladders need a nonlinear molecule", sp.Formula)
 	}
 	left := append([]VibMode(nil), sp.Vib...)
 	for _, tor := range sp.Torsions {
@@ -139,6 +140,20 @@ func (sp *Species) prepareTorsions() error {
 			return Errorf("model", "%s: torsion replaces %g cm⁻¹, which vib_cm does not list as a single mode", sp.Formula, tor.ReplacesCm)
 		}
 		sp.torsionLevels = append(sp.torsionLevels, tor.levels())
+	}
+	for _, l := range sp.Ladders {
+		if err := l.check(sp.Formula); err != nil {
+			return err
+		}
+		if !dissocRange.contains(sp.DissociationCm) {
+			return Errorf("model", "%s: a ladder needs D0_cm, %s, where its continuation stops", sp.Formula, dissocRange)
+		}
+		i := slices.IndexFunc(left, func(v VibMode) bool { return v.WavenumberPerCm == l.ReplacesCm && v.Degeneracy == 1 })
+		if i < 0 {
+			return Errorf("model", "%s: ladder replaces %g cm⁻¹, which vib_cm does not list as a single mode", sp.Formula, l.ReplacesCm)
+		}
+		left = slices.Delete(left, i, i+1)
+		sp.torsionLevels = append(sp.torsionLevels, l.levels(sp.DissociationCm))
 	}
 	for _, v := range left {
 		sp.vibModesHindered = addVibTerm(sp.vibModesHindered, WavenumberToKelvin(v.WavenumberPerCm), v.Degeneracy)

@@ -23,6 +23,9 @@ import (
 type processKind struct {
 	key, name string
 	fields    []processField
+	// ownInputs: the calculation does not use the recipe and setpoint
+	// (a weighed fill names its own parent gases).
+	ownInputs bool
 }
 
 // processField is one input of a calculation.
@@ -84,12 +87,13 @@ var processKinds = []processKind{
 		{key: "recipe", label: "recipe", def: "pressure", hint: "enter switches", choices: []string{"pressure", "weight", "none"}},
 		{key: "rated", label: "rated P", def: "", hint: "the cylinder's rating: a fill above it is refused; empty: none"},
 	}},
-	{key: "weighed", name: "weighed", fields: []processField{
+	{key: "weighed", name: "weighed", ownInputs: true, fields: []processField{
 		{key: "parent1", label: "parent 1", def: "2.4105 g CH4", hint: weighedParentHint},
 		{key: "parent2", label: "parent 2", def: "412.37 g N2 with O2 <5ppm", hint: weighedParentHint},
 		{key: "parent3", label: "parent 3", def: "", hint: weighedParentHint},
 		{key: "parent4", label: "parent 4", def: "", hint: weighedParentHint},
 		{key: "massu", label: "u of each mass", def: "4 mg", hint: "standard uncertainty of each weighed mass: " + process.WeighedMassUnits},
+		{key: "atomic", label: "atomic weight", def: "", hint: "an element's own: EL VALUE +- U, e.g. Ar 39.9478 +- 0.0002 (g/mol, standard uncertainty); empty: IUPAC's"},
 	}},
 }
 
@@ -289,7 +293,7 @@ func (p *processPane) stopEdit() {
 func (p *processPane) solve() {
 	p.gen, p.solved = p.b.in.Gen, true
 	p.result, p.err, p.path, p.pathErr = nil, "", nil, ""
-	if !p.b.in.Valid() {
+	if !p.b.in.Valid() && !p.current().ownInputs {
 		p.err = "no valid recipe and setpoint yet (see Recipe and Setpoint)"
 		return
 	}
@@ -587,6 +591,13 @@ func (p *processPane) calculate() (process.Result, string, error) {
 			return nil, "", fieldError("u of each mass", err)
 		}
 		w := process.Weighing{MassUKg: massU}
+		if text := p.value("atomic"); text != "" {
+			aw, err := process.ParseAtomicWeight(text)
+			if err != nil {
+				return nil, "", fieldError("atomic weight", err)
+			}
+			w.AtomicWeights = []process.AtomicWeight{aw}
+		}
 		var gases []string
 		for i, f := range p.current().fields[:4] {
 			text := p.value(f.key)
@@ -601,7 +612,7 @@ func (p *processPane) calculate() (process.Result, string, error) {
 			gases = append(gases, parent.Gas)
 		}
 		res, err := w.Solve()
-		return res, strings.Join(gases, "  +  ") + " weighed in (the recipe is not used)", err
+		return res, strings.Join(gases, "  +  ") + " weighed in", err
 	case "release":
 		res, err := process.RoomRelease{Mixture: mix, Amount: p.value("amount"), Rate: p.value("rate"), Room: p.value("room"), ACH: p.value("ach")}.Solve()
 		if err != nil {
@@ -651,7 +662,7 @@ func (p *processPane) refresh() {
 		row += k
 	}
 	add(row)
-	if in := p.b.in; in.Valid() {
+	if in := p.b.in; in.Valid() && !p.current().ownInputs {
 		wrapped(s.Muted.Render, "", "inlet: the recipe at "+report.Short(in.TempK, 6)+" K, "+p.b.presShown(in.PresPa))
 	}
 

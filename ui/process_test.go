@@ -249,6 +249,20 @@ func TestProcessPaneWeighed(t *testing.T) {
 	if p.result == nil {
 		t.Fatalf("weighed: no result: %s", p.err)
 	}
+	// It names its own gases: with no valid recipe yet it still works,
+	// and no inlet line is shown.
+	c := testPaneCommon(true)
+	empty := newBench(c.Catalogue)
+	empty.update()
+	q := newProcessPane(c, empty)
+	q.SetSize(100, 40)
+	for q.current().key != "weighed" {
+		q.keys(t, "right")
+	}
+	q.Sync()
+	if empty.in.Valid() || q.result == nil || strings.Contains(q.whole(), "inlet:") {
+		t.Fatalf("weighed with no recipe: valid %v, result %v, err %q", empty.in.Valid(), q.result != nil, q.err)
+	}
 	var w process.Weighing
 	for _, text := range []string{"2.4105 g CH4", "412.37 g N2 with O2 <5ppm"} {
 		parent, err := process.ParseParent(p.c.Catalogue, text)
@@ -279,5 +293,13 @@ func TestProcessPaneWeighed(t *testing.T) {
 	p.keys(t, "enter")
 	if p.result != nil || !strings.Contains(p.err, "parent 2") || !strings.Contains(p.err, "by moles") {
 		t.Errorf("bad parent 2: err %q, want it naming the field and the basis", p.err)
+	}
+	p.keys(t, "esc", "down", "down", "down", "down", "enter")
+	for _, r := range "Ar 30 +- 1" {
+		p.keys(t, string(r))
+	}
+	p.keys(t, "enter")
+	if p.result != nil || !strings.HasPrefix(p.err, "atomic weight: ") {
+		t.Errorf("bad atomic weight: err %q, want it naming the field", p.err)
 	}
 }

@@ -131,6 +131,7 @@ func TestGoldenPanes(t *testing.T) {
 		{"process_compress_80x24", 80, 24, false, []string{"6", "right"}},
 		{"process_mix_80x24", 80, 24, false, []string{"6", "right", "right", "right", "pgdown"}},
 		{"ascii_process_plot_80x24", 80, 24, true, []string{"6", "right", "p"}},
+		{"ascii_process_weighed_80x24", 80, 24, true, []string{"6", "left", "pgdown"}},
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			r := testRoot(t, c.w, c.h, testRootOpts{ascii: c.ascii})

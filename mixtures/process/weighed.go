@@ -31,6 +31,17 @@ type Weighing struct {
 	// balance's, for the difference of the two weighings), unless a
 	// parent states its own.
 	MassUKg float64
+	// AtomicWeights replace the IUPAC values of some elements: argon of
+	// known origin, say, whose atomic weight is known far better than
+	// the standard interval.
+	AtomicWeights []AtomicWeight
+}
+
+// AtomicWeight is an element's atomic weight as the user knows it, with
+// its standard uncertainty.
+type AtomicWeight struct {
+	Element        string
+	GPerMol, UGPer float64
 }
 
 // WeighedParent is one parent gas and the mass of it weighed in.
@@ -355,6 +366,11 @@ func (w Weighing) build() (*gravimetry, []float64, []float64, error) {
 	}
 	g.elemAt = len(q)
 	for _, e := range g.elements {
+		if i := slices.IndexFunc(w.AtomicWeights, func(a AtomicWeight) bool { return a.Element == e }); i >= 0 {
+			q = append(q, w.AtomicWeights[i].GPerMol*1e-3)
+			u = append(u, w.AtomicWeights[i].UGPer*1e-3)
+			continue
+		}
 		a, err := model.MolarMassKgPerMol(e)
 		if err != nil {
 			return nil, nil, nil, err
@@ -377,6 +393,11 @@ func (w Weighing) Solve() (*WeighedResult, error) {
 	}
 	if len(w.Parents) > maxWeighedParents {
 		return nil, model.Errorf("process", "%d parent gases; want at most %d", len(w.Parents), maxWeighedParents)
+	}
+	for _, a := range w.AtomicWeights {
+		if !(a.GPerMol > 0) || math.IsInf(a.GPerMol, 0) || !(a.UGPer >= 0) || math.IsInf(a.UGPer, 0) {
+			return nil, model.Errorf("process", "atomic weight of %s: %g ± %g g/mol; want a value above 0 and an uncertainty of 0 or more", a.Element, a.GPerMol, a.UGPer)
+		}
 	}
 	if !(w.MassUKg >= 0) || math.IsInf(w.MassUKg, 0) {
 		return nil, model.Errorf("process", "mass uncertainty %g kg: want a finite value of 0 or more", w.MassUKg)
@@ -471,6 +492,15 @@ func (w Weighing) Solve() (*WeighedResult, error) {
 	}
 	if len(exact) > 0 {
 		r.note("amounts given without ± are taken as exact (u = 0): " + strings.Join(exact, ", "))
+	}
+	var given []string
+	for _, a := range w.AtomicWeights {
+		if slices.Contains(g.elements, a.Element) {
+			given = append(given, fmt.Sprintf("%s %s ± %s g/mol", a.Element, trimFloat(a.GPerMol), trimFloat(a.UGPer)))
+		}
+	}
+	if len(given) > 0 {
+		r.note("atomic weights as given, with their standard uncertainty: " + strings.Join(given, ", "))
 	}
 	r.note("atomic weights: IUPAC 2021, each ± taken as the half-width of a rectangular distribution (u = U/√3); U = 2u, a coverage of about 95 % for a normal distribution")
 	r.caution(mixtures.Caution{Title: "Verification", Text: "a gravimetric composition is verified by analysis before the cylinder is used as a calibration gas (ISO 6142-1); the cylinder's rating and marking are yours to check."})

@@ -1,7 +1,9 @@
 package process
 
 import (
+	"fmt"
 	"math"
+	"strconv"
 	"strings"
 	"unicode/utf8"
 
@@ -208,4 +210,43 @@ func tooLongN(what, s string, n int) error {
 		return model.Errorf("process", "%s of %d characters; want at most %d", what, c, n)
 	}
 	return nil
+}
+
+// AtomicWeightForm says how an atomic weight is written, for messages.
+const AtomicWeightForm = `"ELEMENT VALUE ± U" in g/mol, U a standard uncertainty, e.g. "Ar 39.9478 ± 0.0002"`
+
+// ParseAtomicWeight reads "ELEMENT VALUE ± U" (or "ELEMENT=VALUE+-U"),
+// an element's atomic weight in g/mol with its standard uncertainty.
+func ParseAtomicWeight(s string) (AtomicWeight, error) {
+	if err := tooLongN("an atomic weight", s, maxInputChars); err != nil {
+		return AtomicWeight{}, err
+	}
+	fail := func(why string) (AtomicWeight, error) {
+		return AtomicWeight{}, model.Errorf("process", "atomic weight %s: %s; want %s", model.Quote(s), why, AtomicWeightForm)
+	}
+	text := strings.TrimSpace(plusMinus.Replace(strings.Replace(s, "=", " ", 1)))
+	el, rest, ok := strings.Cut(text, " ")
+	if !ok {
+		return fail("the value is missing")
+	}
+	counts, err := model.ParseFormula(el)
+	if err != nil || len(counts) != 1 || counts[el] != 1 {
+		return fail("unknown element " + model.Quote(el))
+	}
+	val, unc, ok := strings.Cut(rest, "±")
+	if !ok {
+		return fail("the uncertainty is missing")
+	}
+	a := AtomicWeight{Element: el}
+	if a.GPerMol, err = strconv.ParseFloat(strings.TrimSpace(strings.TrimSuffix(strings.TrimSpace(val), "g/mol")), 64); err != nil || !(a.GPerMol > 0) || math.IsInf(a.GPerMol, 0) {
+		return fail("the value must be a number above 0")
+	}
+	if a.UGPer, err = strconv.ParseFloat(strings.TrimSpace(strings.TrimSuffix(strings.TrimSpace(unc), "g/mol")), 64); err != nil || !(a.UGPer >= 0) || math.IsInf(a.UGPer, 0) {
+		return fail("the uncertainty must be a number of 0 or more")
+	}
+	// A value far from the standard one is a typing slip, not a sample.
+	if std, _ := model.MolarMassKgPerMol(el); math.Abs(a.GPerMol/(std*1e3)-1) > 0.01 {
+		return fail(fmt.Sprintf("%s is more than 1 %% from the standard %s g/mol", trimFloat(a.GPerMol), trimFloat(std*1e3)))
+	}
+	return a, nil
 }

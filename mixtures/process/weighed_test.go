@@ -320,3 +320,96 @@ func TestAtomicWeightUncertaintiesCoverCatalogue(t *testing.T) {
 		}
 	}
 }
+
+// An atomic weight given by the user replaces the IUPAC one, value and
+// uncertainty: for CO2 in argon the closed form of
+// TestWeighedTwoComponents holds with u(M_Ar) = u(A_Ar) as given. With
+// the IUPAC interval for argon (±0.16 g/mol, u = 0.092 g/mol) the molar
+// masses dominate; with 39.9478 ± 0.0002 g/mol given (an input only,
+// of the size a lab knows for argon of one source; the check is the
+// closed form) the masses do.
+func TestWeighedAtomicWeightGiven(t *testing.T) {
+	base := mustParents(t, 0.002e-3, "37.6 g CO2", "695.1 g Ar")
+	rIUPAC, err := base.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	aw, err := ParseAtomicWeight("Ar 39.9478 +- 0.0002")
+	if err != nil {
+		t.Fatal(err)
+	}
+	given := base
+	given.AtomicWeights = []AtomicWeight{aw}
+	r, err := given.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	m1, m2, um := 37.6, 695.1, 0.002
+	mm1, mm2 := 12.011+2*15.999, 39.9478
+	um1 := math.Sqrt(math.Pow(0.002, 2)+4*math.Pow(0.001, 2)) / math.Sqrt(3)
+	um2 := 0.0002
+	n1, n2 := m1/mm1, m2/mm2
+	x1 := n1 / (n1 + n2)
+	closed := x1 * (1 - x1) * math.Sqrt(math.Pow(um/m1, 2)+math.Pow(um/m2, 2)+math.Pow(um1/mm1, 2)+math.Pow(um2/mm2, 2))
+	x, u := fractionOfWeighed(r, "CO2")
+	if math.Abs(x/x1-1) > 1e-12 || math.Abs(u/closed-1) > 1e-9 {
+		t.Errorf("CO2 in Ar, Ar as given: x, u = %.10g, %.6g; closed form %.10g, %.6g", x, u, x1, closed)
+	}
+	_, uIUPAC := fractionOfWeighed(rIUPAC, "CO2")
+	if !(uIUPAC > 10*u) || !(rIUPAC.UMolar[0] > rIUPAC.UMasses[0]) || !(r.UMolar[0] < r.UMasses[0]) {
+		t.Errorf("u(x CO2): IUPAC argon %.3g (molar %.3g, masses %.3g), given argon %.3g (molar %.3g, masses %.3g)",
+			uIUPAC, rIUPAC.UMolar[0], rIUPAC.UMasses[0], u, r.UMolar[0], r.UMasses[0])
+	}
+	if !strings.Contains(strings.Join(r.Notes(), "\n"), "Ar 39.9478 ± 0.0002 g/mol") {
+		t.Errorf("notes do not name the atomic weight given: %q", r.Notes())
+	}
+}
+
+func TestParseAtomicWeight(t *testing.T) {
+	for _, tt := range []struct {
+		in   string
+		el   string
+		v, u float64
+	}{
+		{"Ar 39.9478 ± 0.0002", "Ar", 39.9478, 0.0002},
+		{"Ar=39.9478+-0.0002", "Ar", 39.9478, 0.0002},
+		{"B 10.812 +/- 0.003 g/mol", "B", 10.812, 0.003},
+	} {
+		a, err := ParseAtomicWeight(tt.in)
+		if err != nil || a.Element != tt.el || a.GPerMol != tt.v || a.UGPer != tt.u {
+			t.Errorf("ParseAtomicWeight(%q) = %+v, %v", tt.in, a, err)
+		}
+	}
+	for _, tt := range []struct{ in, want string }{
+		{"Ar", "value is missing"},
+		{"Ar 39.95", "uncertainty is missing"},
+		{"Xx 1 ± 0", "unknown element"},
+		{"Ar2 79.9 ± 0", "unknown element"},
+		{"Ar forty ± 0", "number above 0"},
+		{"Ar 39.95 ± -1", "0 or more"},
+		{"Ar 3.995 ± 0.001", "more than 1 %"},
+	} {
+		if _, err := ParseAtomicWeight(tt.in); err == nil || !strings.Contains(err.Error(), tt.want) {
+			t.Errorf("ParseAtomicWeight(%q) = %v, want an error with %q", tt.in, err, tt.want)
+		}
+	}
+}
+
+// FuzzParseAtomicWeight: one error line or a finite, positive value.
+func FuzzParseAtomicWeight(f *testing.F) {
+	for _, s := range []string{"Ar 39.9478 ± 0.0002", "Ar=39.9478+-0.0002", "H 1.008 +/- 0", "Ar 1e308 ± 1e308"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, s string) {
+		a, err := ParseAtomicWeight(s)
+		if err != nil {
+			if strings.Contains(err.Error(), "\n") {
+				t.Errorf("error of more than one line: %q", err.Error())
+			}
+			return
+		}
+		if !(a.GPerMol > 0) || math.IsInf(a.GPerMol, 0) || !(a.UGPer >= 0) || math.IsInf(a.UGPer, 0) {
+			t.Errorf("%q: %+v", s, a)
+		}
+	})
+}
