@@ -69,6 +69,11 @@ func isStateField(key string) bool {
 	return true
 }
 
+// IsLevelField reports whether a catalogue field holds constants of the
+// summed levels (Dunham constants, excited states, xij, torsions, ladders,
+// distortion), for listings of sources.
+func IsLevelField(key string) bool { return isDunhamField(key) }
+
 // isDunhamField reports whether key is one of the fields of this file.
 func isDunhamField(key string) bool {
 	_, ok := dunhamFields[key]

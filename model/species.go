@@ -180,6 +180,7 @@ type Species struct {
 	anharmonicVib    *rovibLevels // the anharmonic vibrational levels
 	vibModesHindered []vibTerm
 	distortionPerK   float64 // ln q_rot gains distortionPerK·T (see distortion.go)
+	spinBase         string  // the species a spin modification derives from, "" if none
 	// lnElecG0Levels is ln of the ground state's multiplicity in the
 	// level sum (0 for ²Π, whose spin components are levels of their own).
 	lnElecG0Levels float64

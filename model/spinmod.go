@@ -122,6 +122,7 @@ func (sp *Species) variant(name string, mod SpinModification, what string) *Spec
 	c.Formula = name
 	c.Name = what
 	c.SpinMod = mod
+	c.spinBase = sp.Formula
 	c.Sources = make(map[string]string, len(sp.Sources))
 	for k, v := range sp.Sources {
 		c.Sources[k] = v
@@ -131,6 +132,21 @@ func (sp *Species) variant(name string, mod SpinModification, what string) *Spec
 		return nil
 	}
 	return &c
+}
+
+// SpinVariantOf reports whether sp is a named spin modification made by
+// the catalogue (eH2, pH2, nD2 …, and H2 and D2 themselves once they name
+// the normal gases), and the formula of the species it derives from.
+func (sp *Species) SpinVariantOf() (base string, ok bool) { return sp.spinBase, sp.spinBase != "" }
+
+// SpinVariantNames lists the names of the spin modifications a catalogue
+// answers to beside its entries, for listings.
+func SpinVariantNames() []string {
+	var out []string
+	for _, v := range spinVariants {
+		out = append(out, v.prefix+v.base)
+	}
+	return out
 }
 
 // SpinModificationOf reports the species' spin modification.

@@ -257,6 +257,8 @@ func (sp *Species) FactorTreatments(tr Treatment) [4]string {
 		out[1] = "summed levels, v = 0 (Dunham constants), spin modifications frozen"
 	case levels:
 		out[1] = "summed levels, v = 0 (Dunham constants)"
+	case sp.Rotor == Nonlinear && sp.distortionPerK != 0 && sp.summedLevels(tr):
+		out[1] = "rigid rotor, classical, with first-order centrifugal distortion"
 	case sp.Rotor == Nonlinear:
 		out[1] = "rigid rotor, classical"
 	case tr.Rotation == RotationClassical:
@@ -272,7 +274,7 @@ func (sp *Species) FactorTreatments(tr Treatment) [4]string {
 	case levels:
 		out[2] = "summed levels (anharmonic, vibration–rotation coupling)"
 	case sp.torsionLevels != nil && sp.summedLevels(tr):
-		out[2] = "harmonic, torsions as hindered rotors"
+		out[2] = sp.hinderedText()
 	case sp.anharmonicVib != nil && sp.summedLevels(tr):
 		out[2] = "summed levels (anharmonic, xij)"
 	case len(sp.vibModes) > 0:

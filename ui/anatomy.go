@@ -164,6 +164,9 @@ func (p *anatomyPane) render() []string {
 	addWrapped(s.Muted.Render, "", "* Cp = Cv + R: the R, the P dV work of heating at constant pressure, is booked with translation.")
 
 	add("")
+	p.treatment(sp, st, term.PartialPresPa, addWrapped)
+
+	add("")
 	p.thetas(sp, addLabeled)
 
 	add("")
@@ -187,6 +190,31 @@ func (p *anatomyPane) render() []string {
 		}
 	}
 	return lines
+}
+
+// treatment says how the species is modelled, factor by factor, and what
+// that adds over the rigid rotor with harmonic vibration; the facts come
+// from the model.
+func (p *anatomyPane) treatment(sp *model.Species, st *model.State, presPa float64, addWrapped func(func(...string) string, string, string)) {
+	s := p.c.Styles
+	r := sp.Treatments(st.TempK, presPa, model.Treatment{})
+	addWrapped(s.Label.Render, "", "Treatment: "+r.Kind)
+	names := [4]string{"translation", "rotation", "vibration", "electronic"}
+	for i, f := range r.Factors {
+		addWrapped(s.Muted.Render, "  ", names[i]+": "+f)
+	}
+	if !r.RigidHarmonic {
+		addWrapped(s.Muted.Render, "  ", "over the rigid rotor and harmonic oscillator: S "+signed(r.DeltaSJPerMolK, 3)+", Cp "+signed(r.DeltaCpJPerMolK, 3)+" J/(mol·K)")
+	}
+}
+
+// signed formats a difference with its sign.
+func signed(x float64, decimals int) string {
+	f := report.Fixed(x, decimals)
+	if !strings.HasPrefix(f, "-") {
+		f = "+" + f
+	}
+	return f
 }
 
 func noteStyle(s *Styles, sev model.Severity) func(...string) string {

@@ -111,3 +111,35 @@ func TestAnatomyBlendNote(t *testing.T) {
 		t.Errorf("no blend-wide pressure note at 40 bar:\n%s", v)
 	}
 }
+
+// The pane says which treatment each species gets, factor by factor, and
+// what it adds over the rigid rotor: facts it reads from the model.
+func TestAnatomyTreatment(t *testing.T) {
+	blend := mixtures.BlendFile{Components: []mixtures.FileComponent{{Species: "H2", Amount: "0.2"}, {Species: "NH3", Amount: "0.2"},
+		{Species: "pH2", Amount: "0.2"}, {Species: "C2H6", Amount: "0.2"}, {Species: "Ar", Amount: "bal"}},
+		Temperature: "300 K", Pressure: "1 bar"}
+	p, b := testAnatomy(t, blend)
+	want := map[string][]string{
+		"H2":   {"summed rovibronic levels", "spin modification: normal hydrogen", "over the rigid rotor and harmonic oscillator"},
+		"NH3":  {"inversion ladder", "centrifugal distortion", "the inversion mode from its levels"},
+		"pH2":  {"spin modification: para hydrogen", "spin modifications frozen"},
+		"C2H6": {"hindered internal rotation", "torsions as hindered rotors"},
+		"Ar":   {"Treatment: rigid rotor and harmonic oscillator", "rotation: none"},
+	}
+	for range b.state.Species {
+		v := strings.Join(strings.Fields(p.View()), " ") // wrapped lines joined
+		f := p.formula
+		if f == "" {
+			f = b.state.Species[0].Species.Formula
+		}
+		for _, w := range want[f] {
+			if !strings.Contains(v, w) {
+				t.Errorf("%s: view lacks %q:\n%s", f, w, p.View())
+			}
+		}
+		if f == "Ar" && strings.Contains(v, "over the rigid rotor") {
+			t.Errorf("Ar: a correction shown for the rigid rotor itself")
+		}
+		p.Update(testKey("right"))
+	}
+}

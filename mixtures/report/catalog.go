@@ -5,6 +5,7 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
+	"sort"
 	"strconv"
 	"strings"
 
@@ -17,6 +18,12 @@ func BuiltinSpecies() map[*model.Species]bool {
 	set := map[*model.Species]bool{}
 	for _, sp := range model.Builtin().All() {
 		set[sp] = true
+	}
+	// The named spin modifications (eH2, pH2 …) are built in too.
+	for _, name := range model.SpinVariantNames() {
+		if sp, ok := model.Builtin().Lookup(name); ok {
+			set[sp] = true
+		}
 	}
 	return set
 }
@@ -74,6 +81,12 @@ func WriteSpecies(w io.Writer, sp *model.Species, builtin bool, stdPa float64, t
 	origin := "built-in catalogue"
 	if !builtin {
 		origin = "from a --species file"
+	}
+	if base, ok := sp.SpinVariantOf(); ok && base != sp.Formula {
+		origin = "spin modification of " + model.Printable(base) + ", built in"
+		if !builtin {
+			origin = "spin modification of " + model.Printable(base) + " from a --species file"
+		}
 	}
 	fmt.Fprintf(w, "%s  %s  (%s)\n\n", model.Printable(sp.Formula), model.Printable(sp.Name), origin)
 
@@ -167,6 +180,16 @@ func WriteSpecies(w io.Writer, sp *model.Species, builtin bool, stdPa float64, t
 			WriteWrapped(w, "  ", "    ", f.label+": "+model.Printable(src))
 		}
 	}
+	var levelKeys []string
+	for k := range sp.Sources {
+		if model.IsLevelField(k) {
+			levelKeys = append(levelKeys, k)
+		}
+	}
+	sort.Strings(levelKeys)
+	for _, k := range levelKeys {
+		WriteWrapped(w, "  ", "    ", k+": "+model.Printable(sp.Sources[k]))
+	}
 	if len(sp.Sources) == 0 {
 		fmt.Fprintln(w, "  no source recorded for the other fields")
 	}
@@ -187,7 +210,8 @@ func WriteSpecies(w io.Writer, sp *model.Species, builtin bool, stdPa float64, t
 			Fixed(row.HIncJPerMol/1000, 3))
 	}
 	t.Write(w)
-	fmt.Fprintln(w, "  rigid rotor and harmonic oscillator; see the README for the model's limits")
+	WriteWrapped(w, "  treatment: ", "    ", sp.Treatments(model.RefTempK, stdPa, model.Treatment{}).Kind)
+	fmt.Fprintln(w, "  see the README for the model's limits")
 	return nil
 }
 
@@ -262,14 +286,20 @@ func WriteSpeciesJSON(w io.Writer, sp *model.Species, builtin bool, stdPa float6
 		QuantumGas    bool              `json:"quantum_gas,omitempty"`
 		EnergyZero    float64           `json:"dHf0_J_mol"`
 		Sources       map[string]string `json:"sources"`
+		Treatment     string            `json:"treatment"`
+		SpinBase      string            `json:"spin_modification_of,omitempty"`
 		Table         tableDoc          `json:"table"`
 	}{catalogEntry: newCatalogEntry(sp, builtin), RotConstPerCm: sp.RotConstPerCm, Symmetry: sp.Symmetry,
-		BoilingK: sp.BoilingK, EnergyZero: sp.EnergyZeroJPerMol, Sources: sp.Sources,
+		Treatment: sp.Treatments(model.RefTempK, stdPa, model.Treatment{}).Kind,
+		BoilingK:  sp.BoilingK, EnergyZero: sp.EnergyZeroJPerMol, Sources: sp.Sources,
 		CriticalK: sp.CriticalK, CriticalPa: sp.CriticalPa, QuantumGas: sp.QuantumGas,
 		Table: tableDoc{StdPresPa: stdPa, Rows: []map[string]float64{}}}
 	if sp.HasCritical() {
 		omega := sp.Acentric
 		doc.Acentric = &omega
+	}
+	if base, ok := sp.SpinVariantOf(); ok && base != sp.Formula {
+		doc.SpinBase = base
 	}
 	for _, tempK := range tempsK {
 		row, err := sp.Table(tempK, stdPa, model.Treatment{})
