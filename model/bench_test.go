@@ -101,15 +101,18 @@ func stateFloor(sp *Species, tempK, presPa float64, tr Treatment) float64 {
 	acc := math.Log(tempK) + math.Log(presPa)
 	if sp.usesLevels(tr) {
 		if lv := sp.levels; tempK < lv.tableMinK {
-			z := 0.0
-			for _, th := range lv.thetaK {
+			var z [3]float64 // the nested partial sums of rovibLevels.sums
+			for i, th := range lv.thetaK {
 				x := th * invT
 				if x > 40 {
 					break
 				}
-				z += math.Exp(-x)
+				e := math.Exp(-x)
+				for k := int(lv.class[i]); k < 3; k++ {
+					z[k] += e
+				}
 			}
-			acc += 3 * math.Log(z)
+			acc += math.Log(z[0]) + math.Log(z[1]) + math.Log(z[2])
 		}
 		return acc
 	}
