@@ -81,13 +81,22 @@
 // v = 0 ladder, ElectronicGroundOnly the ground state, and
 // RotationSummed or RotationClassical select the rigid rotor.
 //
-// The built-in species with these constants are H2 and D2 (with the
-// sextic H_e term, without which their levels of J > 15 fall far too
-// low), N2, O2 (with its a, b and Herzberg c, A', A states), CO, NO and
-// OH (X²Πi and A²Σ⁺). Against the tables, H2 meets Cp° 0.3 % and S° 0.05
-// J/(mol·K) to 3000 K and falls to −5 % in Cp° at 6000 K, where the
-// levels of J ≳ 25 and the quasi-bound levels count; OH lies 0.8 % high
-// in Cp° at 3000 K (see levels_test.go for each species' figures).
+// For H2 and D2 the series in K fails past N ≈ 15 (H2's levels bend
+// over towards the dissociation limit), so their ground state's levels
+// come from its potential curve instead (catalogue field curve = yes,
+// see potential.go): the RKR curve of G(v) and B_v, continued by an
+// exponential wall and a De − C/r⁶ tail, and the levels of each N by
+// WKB quantization in V(r) + B_e r_e² N(N+1)/r². There the cut-off rule
+// is the barrier: a level counts below the dissociation limit, or above
+// it (quasi-bound) while it lies below the top of its centrifugal
+// barrier. H2's 49 quasi-bound levels add 0.75 J/(mol·K) to Cp° at
+// 6000 K.
+//
+// The built-in species with these constants are H2 and D2 (from their
+// curves), N2, O2 (with its a, b and Herzberg c, A', A states), CO, NO
+// and OH (X²Πi and A²Σ⁺). Against the tables, H2 meets Cp° 0.3 % and S°
+// 0.05 J/(mol·K) to 3000 K and Cp° 1 % to 6000 K; OH lies 0.8 % high in
+// Cp° at 3000 K (see levels_test.go for each species' figures).
 //
 // Speed: the level list is built when the species is prepared; the sums
 // are tabulated as needed (an interval when a state first falls in it)

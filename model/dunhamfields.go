@@ -22,6 +22,7 @@ var dunhamFields = map[string]string{
 	"betae_cm":   "centrifugal distortion βe in cm⁻¹",
 	"He_cm":      "sextic centrifugal distortion He in cm⁻¹ (the +He·K³ term)",
 	"A_cm":       "spin–orbit constant A of a 2Pi ground state in cm⁻¹",
+	"curve":      "yes: the ground state's levels from its RKR potential curve by WKB quantization, quasi-bound levels included (a Sigma ground state; see potential.go); no: from the series in K",
 	"D0_cm":      "dissociation energy D0 from the lowest level in cm⁻¹ (the level sums stop there)",
 	"harm_cm":    "harmonic wavenumbers ωi of a polyatomic's modes in cm⁻¹, in vib_cm's order",
 	"gll_cm":     "vibrational angular momentum constants g_tt in cm⁻¹, one per doubly degenerate mode",
@@ -105,6 +106,17 @@ func setDunhamField(sp *Species, key, value string) error {
 			return err
 		}
 		sp.States = append(sp.States, st)
+		return nil
+	}
+	if key == "curve" {
+		switch value {
+		case "yes":
+			d.FromCurve = true
+		case "no":
+			d.FromCurve = false
+		default:
+			return Errorf("model", "%s: want yes or no", Quote(value))
+		}
 		return nil
 	}
 	if key == "term" {

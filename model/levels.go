@@ -25,6 +25,10 @@ type DunhamConstants struct {
 	HeCm                     float64 // sextic distortion He (the K³ term), mostly 0
 	SpinOrbitCm              float64 // A, for a ²Π state; 0 otherwise
 	Term                     TermSymbol
+	// FromCurve takes a ground Σ state's levels from its RKR potential
+	// curve by WKB quantization, quasi-bound levels included (see
+	// potential.go), instead of the series in K.
+	FromCurve bool
 }
 
 // TermSymbol is what the level sum needs of a state's term symbol
@@ -284,7 +288,13 @@ func (sp *Species) buildLevels() error {
 	}
 	// Second pass, from the lowest level and up to the dissociation limit.
 	lv.thetaK, lv.weight, lv.class, lv.mod = lv.thetaK[:0], lv.weight[:0], lv.class[:0], lv.mod[:0]
-	lv.addLevels(gs, classRot0, 1/g0, ev, od, wS, wA, pm, lowCm, sp.DissociationCm)
+	if gs.FromCurve {
+		if err := lv.addCurveLevels(sp, gs, 1/g0, ev, od, pm, lowCm); err != nil {
+			return err
+		}
+	} else {
+		lv.addLevels(gs, classRot0, 1/g0, ev, od, wS, wA, pm, lowCm, sp.DissociationCm)
+	}
 	for _, st := range sp.States {
 		ev, od, pm := parity(st.Term)
 		lv.addLevels(st.DunhamConstants, classExcited, 1/g0, ev, od, wS, wA, pm, lowCm, sp.DissociationCm)

@@ -298,19 +298,12 @@ var levelTables = []janafTable{
 
 // levelTolerance is the goal of the level sums against the tables: Cp°
 // within 0.3 % and S° and −[G°−H°(298.15)]/T within 0.05 J/(mol·K) up to
-// 3000 K; above it, Cp° within 1 % and S° within 0.15 J/(mol·K). N2 meets
-// it, and H2 up to 3000 K. O2, OH and H2 above 3000 K do not yet, and get
-// the wider tolerances below, with the reason; each is still far closer
-// than the rigid rotor (see the log).
+// 3000 K; above it, Cp° within 1 % and S° within 0.15 J/(mol·K). N2 and
+// H2 (its levels from the RKR curve, quasi-bound ones included) meet it.
+// O2 and OH do not yet, and get the wider tolerances below, with the
+// reason; each is still far closer than the rigid rotor (see the log).
 func levelTolerance(formula string, tempK float64) (cpRel, sAbs float64) {
 	switch {
-	case formula == "eH2" && tempK > 3000:
-		// Cp° falls from −0.3 % at 3000 K to −5.1 % at 6000 K (S°
-		// −0.54): the Dunham series with D and H describes the levels
-		// of J up to about 25 only, and the quasi-bound levels behind
-		// the centrifugal barrier are left out; the table's sum holds
-		// both. The rigid rotor is at −12.4 % there.
-		return 0.055, 0.6
 	case formula == "OH" && tempK < RefTempK:
 		// The table lies 0.50 J/(mol·K) below the direct sum of the
 		// X2Π fine-structure levels at 100 K (Cp° 3 % above it): its

@@ -126,7 +126,7 @@ func TestSpinModificationLimits(t *testing.T) {
 // summed levels, where each sums its own rovibrational levels:
 //   - at Θrot/20 para H2 and ortho D2 sit in J = 0 (S_rot/R = ln(g/g_tot)),
 //     and normal H2 holds its ortho quarter in J = 1, whose energy is the
-//     level sum's own E(0,1) = 2B0 − 4D0 + 8H (U_rot/RT = ¾ E/kT);
+//     level sum's own E(0,1) (U_rot/RT = ¾ E/kT);
 //   - at 2000 K, where Θrot/T = 0.04, normal and equilibrium H2 agree in
 //     S and Cv within (Θrot/T)² (the high-T meeting of the rigid rotor);
 //   - the identities hold by central differences at 5 K to 5000 K.
@@ -142,10 +142,13 @@ func TestSpinModificationLevels(t *testing.T) {
 		}
 		return s
 	}
-	h2 := mustSpecies(t, "H2")
-	d := h2.Dunham
-	b0, d0 := d.BeCm-0.5*d.AlphaeCm, d.DeCm+0.5*d.BetaeCm
-	e1K := WavenumberToKelvin(2*b0 - 4*d0 + 8*d.HeCm)
+	h2 := mustSpecies(t, "nH2")
+	// E(0,1) as the level sum has it (from the curve), and the lowest
+	// level's height above the energy zero.
+	e1K, shiftK := h2.levels.modLowK[1], h2.levels.zeroShiftK
+	if e1K < 150 || e1K > 190 {
+		t.Fatalf("nH2: lowest odd-N level at %g K, want E(0,1) ≈ 118.5 cm⁻¹ = 170.5 K", e1K)
+	}
 	thH2, thD2 := h2.RotThetaK()[0], mustSpecies(t, "D2").RotThetaK()[0]
 	for _, c := range []struct {
 		name         string
@@ -154,7 +157,7 @@ func TestSpinModificationLevels(t *testing.T) {
 	}{
 		{"pH2", thH2 / 20, -math.Log(4), 0},
 		{"oD2", thD2 / 20, math.Log(6.0 / 9), 0},
-		{"nH2", thH2 / 20, 0.75 * math.Log(3), 0.75 * e1K / (thH2 / 20)},
+		{"nH2", thH2 / 20, 0.75 * math.Log(3), (0.75*e1K + shiftK) / (thH2 / 20)},
 	} {
 		s := st(c.name, c.tempK)
 		if math.Abs(s.Rot.S()-c.wantS) > 1e-6*max(1, c.wantS) || math.Abs(s.Rot.U-c.wantU) > 1e-6*max(1, c.wantU) {
