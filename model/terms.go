@@ -243,6 +243,9 @@ func (sp *Species) vibration(invT float64) Terms { return vibrationOf(sp.vibMode
 
 // vibrationOf returns the harmonic-oscillator terms of a list of modes.
 func vibrationOf(modes []vibTerm, invT float64) Terms {
+	if len(modes) > 2 {
+		return vibrationTwoPass(modes, invT)
+	}
 	var lnQ, u, cv float64
 	prod := 1.0 // Π (1 − e^{−x})^g not yet logged
 	for _, m := range modes {
@@ -258,20 +261,7 @@ func vibrationOf(modes []vibTerm, invT float64) Terms {
 			em = math.Exp(-x)
 			om = 1 - em
 		}
-		switch m.nDeg {
-		case 1:
-			prod *= om
-		case 2:
-			prod *= om * om
-		case 3:
-			prod *= om * om * om
-		default:
-			prod *= powInt(om, m.nDeg)
-		}
-		if prod < 1e-250 { // keep the product clear of underflow
-			lnQ -= math.Log(prod)
-			prod = 1
-		}
+		prod *= powInt(om, m.nDeg)
 		r := x / om  // x/(1 − e^{−x})
 		xe := r * em // x/(e^x − 1)
 		u += m.deg * xe
@@ -282,6 +272,71 @@ func vibrationOf(modes []vibTerm, invT float64) Terms {
 	}
 	return Terms{LnQ: lnQ, U: u, Cv: cv}
 }
+
+// vibrationTwoPass is vibrationOf for three modes or more, with the same
+// arithmetic in the same order. The exponentials come first, into a
+// small buffer, and the arithmetic after: across a call nothing stays in
+// a register, so a loop that did both would store and reload its running
+// sums around every exp.
+func vibrationTwoPass(modes []vibTerm, invT float64) Terms {
+	var lnQ, u, cv float64
+	prod := 1.0
+	var ems [vibChunk]float64
+	for len(modes) > 0 {
+		chunk := modes[:min(len(modes), vibChunk)]
+		modes = modes[len(chunk):]
+		for i, m := range chunk {
+			x := m.thetaK * invT
+			switch {
+			case x > 700: // frozen, and skipped below too
+			case x < expm1Below:
+				ems[i] = math.Expm1(-x)
+			default:
+				ems[i] = math.Exp(-x)
+			}
+		}
+		for i, m := range chunk {
+			x := m.thetaK * invT
+			if x > 700 {
+				continue
+			}
+			var em, om float64
+			if x < expm1Below {
+				om = -ems[i]
+				em = 1 - om
+			} else {
+				em = ems[i]
+				om = 1 - em
+			}
+			switch m.nDeg {
+			case 1:
+				prod *= om
+			case 2:
+				prod *= om * om
+			case 3:
+				prod *= om * om * om
+			default:
+				prod *= powInt(om, m.nDeg)
+			}
+			if prod < 1e-250 { // keep the product clear of underflow
+				lnQ -= math.Log(prod)
+				prod = 1
+			}
+			r := x / om
+			xe := r * em
+			u += m.deg * xe
+			cv += m.deg * xe * r
+		}
+	}
+	if prod != 1 {
+		lnQ -= math.Log(prod)
+	}
+	return Terms{LnQ: lnQ, U: u, Cv: cv}
+}
+
+// vibChunk is how many modes vibrationOf takes per pass; most molecules
+// have fewer distinct modes.
+const vibChunk = 32
 
 // expm1Below is the x under which 1 − e^{−x} is taken from expm1: there
 // e^{−x} > 0.78, and 1 − e^{−x} would lose more than two bits. Either way
