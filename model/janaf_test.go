@@ -132,13 +132,12 @@ var janafTables = []janafTable{
 	{
 		// NIST-JANAF 4th ed., table H-050, Hydrogen (H2)
 		//
-		// H2 drifts most of the diatomics (Cp° −2.0 %, S° −0.50 at
-		// 1500 K): it is the least rigid and most anharmonic of them
-		// (αe/Be ≈ 5 %, ωe·xe/ωe ≈ 2.8 %), and the tables sum its real
-		// levels, which crowd together as v and J rise. The table is
+		// H2 is the least rigid and most anharmonic diatomic (αe/Be ≈
+		// 5 %, ωe·xe/ωe ≈ 2.8 %): the rigid rotor drifts 2 % low in Cp°
+		// by 1500 K, while its summed levels stay within 0.03 %
+		// (levels_test.go checks every row to 6000 K). The table is
 		// equilibrium hydrogen, so the check takes eH2, whatever "H2"
-		// names (see TestJANAFHydrogenIsEquilibrium). It stays inside the common
-		// tolerances, so it has no row of its own.
+		// names (see TestJANAFHydrogenIsEquilibrium).
 		formula: "eH2", table: "H-050",
 		h298MinusH0KJ: 8.467, dHf0KJ: 0,
 		rows: []janafRow{
@@ -391,7 +390,7 @@ func TestJANAFEnergyScale(t *testing.T) {
 // Values for Thermodynamics (J. D. Cox, D. D. Wagman, V. A. Medvedev,
 // Hemisphere, 1989), values from memory. The noble gases are Sackur-Tetrode
 // alone, so they must agree to the key values' own uncertainty; the
-// molecules get 0.2 J/(mol·K) for what the rigid rotor leaves out.
+// molecules get the goals of their treatments, each row says which.
 func TestCODATAKeyValues(t *testing.T) {
 	tests := []struct {
 		formula string
@@ -403,11 +402,15 @@ func TestCODATAKeyValues(t *testing.T) {
 		{"Ar", 154.846, 0.01}, // CODATA 1989, from memory
 		{"Kr", 164.085, 0.01}, // CODATA 1989, from memory
 		{"Xe", 169.685, 0.01}, // CODATA 1989, from memory
-		{"eH2", 130.680, 0.2}, // CODATA 1989, from memory (equilibrium H2)
-		{"N2", 191.609, 0.2},  // CODATA 1989, from memory
-		{"O2", 205.152, 0.2},  // CODATA 1989, from memory
-		{"CO2", 213.785, 0.2}, // CODATA 1989, from memory
-		{"H2O", 188.835, 0.2}, // CODATA 1989, from memory
+		// The summed diatomics to the goal of their level sums (0.05),
+		// CO2 to the polyatomics' goal (0.1). H2O misses that goal: its
+		// S° lies 0.12 low, the centrifugal distortion of a very
+		// non-rigid rotor, which H2O does not take (see distortion.go).
+		{"eH2", 130.680, 0.05}, // CODATA 1989, from memory (equilibrium H2)
+		{"N2", 191.609, 0.05},  // CODATA 1989, from memory
+		{"O2", 205.152, 0.05},  // CODATA 1989, from memory
+		{"CO2", 213.785, 0.1},  // CODATA 1989, from memory
+		{"H2O", 188.835, 0.2},  // CODATA 1989, from memory
 	}
 	for _, tt := range tests {
 		s, err := mustSpecies(t, tt.formula).State(RefTempK, StdPressureBarPa)

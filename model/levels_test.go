@@ -682,8 +682,9 @@ func TestDoubletPiFineStructure(t *testing.T) {
 // TestLevelSumsRecalled checks the summed diatomics no shared table
 // covers against S° and Cp° at 298.15 K recalled from the published
 // tables, to the goal of the shared ones (0.05 J/(mol·K), 0.3 %): CO, a
-// 1Σ+ ground state like N2's, and NO, whose regular X2Π ground state
-// exercises the Hill–Van Vleck fine structure (J ≥ ½ for Ω = ½).
+// 1Σ+ ground state like N2's, NO, whose regular X2Π ground state
+// exercises the Hill–Van Vleck fine structure (J ≥ ½ for Ω = ½), and
+// D2, equilibrium and normal.
 func TestLevelSumsRecalled(t *testing.T) {
 	for _, tt := range []struct {
 		formula    string
@@ -693,6 +694,13 @@ func TestLevelSumsRecalled(t *testing.T) {
 	}{
 		{"CO", 197.660, 29.142, "NIST-JANAF, CO, 298.15 K, from memory"},
 		{"NO", 210.758, 29.845, "NIST-JANAF, NO, 298.15 K, from memory"},
+		// D2, whose levels are H2's scaled: S° 144.96 is NIST-JANAF's
+		// (Chase 1998) as the NIST Chemistry WebBook quotes it, and Cp°
+		// 29.19 the WebBook's Shomate fit of the same table at 298.15 K
+		// (A 32.684534, B −14.841301, C 21.064857, D −7.204633,
+		// E −0.066534, t = 0.29815); eD2 and nD2 agree to 1e-6 there.
+		{"eD2", 144.96, 29.193, "NIST-JANAF D2 via the NIST WebBook, 298.15 K"},
+		{"D2", 144.96, 29.193, "NIST-JANAF D2 via the NIST WebBook, 298.15 K"},
 	} {
 		row, err := mustSpecies(t, tt.formula).Table(RefTempK, StdPressureBarPa, summed)
 		if err != nil {
