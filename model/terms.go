@@ -111,10 +111,21 @@ func (sp *Species) expansionMaxY() float64 {
 func linearRotorExpansion(lnInvSigmaTheta, y, lnT float64) Terms {
 	y2 := y * y
 	y4 := y2 * y2
-	l := y * poly16(&expansionCoef[0], y, y4)
-	kb := y * poly16(&expansionCoef[1], y, y4)
-	kkb := y2 * poly16(&expansionCoef[2], y, y4)
-	return Terms{LnQ: lnInvSigmaTheta + lnT + l, U: 1 - kb, Cv: 1 + kkb}
+	y8 := y4 * y4
+	// Each sum as four short Horner chains joined by y⁴ and y⁸: the
+	// chains run side by side, where one long chain would make each
+	// product wait for the one before (written out: a call would not be
+	// inlined).
+	var p [3]float64
+	for k := range p {
+		c := &expansionCoef[k]
+		q0 := c[0] + y*(c[1]+y*(c[2]+y*c[3]))
+		q1 := c[4] + y*(c[5]+y*(c[6]+y*c[7]))
+		q2 := c[8] + y*(c[9]+y*(c[10]+y*c[11]))
+		q3 := c[12] + y*(c[13]+y*(c[14]+y*c[15]))
+		p[k] = (q0 + y4*q1) + y8*(q2+y4*q3)
+	}
+	return Terms{LnQ: lnInvSigmaTheta + lnT + y*p[0], U: 1 - y*p[1], Cv: 1 + y2*p[2]}
 }
 
 // expansionCoef holds, for linearRotorExpansion, the bₖ of L(y) from k = 1
@@ -143,17 +154,6 @@ var expansionCoef = func() (c [3][16]float64) {
 	}
 	return c
 }()
-
-// poly16 returns Σ c[k] yᵏ for k < 16, given y⁴, as four short Horner
-// chains joined by y⁴ and y⁸: the chains run side by side, where one
-// long chain would make each product wait for the one before.
-func poly16(c *[16]float64, y, y4 float64) float64 {
-	q0 := c[0] + y*(c[1]+y*(c[2]+y*c[3]))
-	q1 := c[4] + y*(c[5]+y*(c[6]+y*c[7]))
-	q2 := c[8] + y*(c[9]+y*(c[10]+y*c[11]))
-	q3 := c[12] + y*(c[13]+y*(c[14]+y*c[15]))
-	return (q0 + y4*q1) + y4*y4*(q2+y4*q3)
-}
 
 // linearRotorSeries is the Euler–Maclaurin expansion of the rigid-rotor
 // sum, q = T/(σΘ)·f(y) with f = 1 + y/3 + y²/15 + 4y³/315 and y = Θ/T. Its
