@@ -36,9 +36,12 @@
 //     q = √π/σ · T^{3/2}/√(ΘA ΘB ΘC). Treatment selects the choice. The
 //     summed levels' Boltzmann factors come by recurrence, with one exp a
 //     sum: e^{−ε_{J+1}/kT} = e^{−ε_J/kT}·e^{−2(J+1)Θ/T}, and the step
-//     itself shrinks by e^{−2Θ/T} each level. Above 50 Θrot, ln of the
-//     series' bracket is taken as its own Taylor series in Θ/T, so that the
-//     rotor costs no log.
+//     itself shrinks by e^{−2Θ/T} each level. From 20 Θrot (10 Θrot for a
+//     heteronuclear molecule) to 50 Θrot the sum is taken as its full
+//     Euler–Maclaurin expansion on the half-integers J + ½, which equals it
+//     to rounding there (see linearRotorExpansion): no exp, no log. Above
+//     50 Θrot, ln of the series' bracket is taken as its own Taylor series
+//     in Θ/T, so that the rotor costs no log.
 //   - Vibration: harmonic oscillators, energy zero at v = 0 (the zero-point
 //     energy is inside E0).
 //   - Electronic: a sum over the listed levels, ground level at zero.

@@ -111,10 +111,21 @@ func (sp *Species) expansionMaxY() float64 {
 func linearRotorExpansion(lnInvSigmaTheta, y, lnT float64) Terms {
 	y2 := y * y
 	y4 := y2 * y2
-	l := y * poly16(&expansionCoef[0], y, y4)
-	kb := y * poly16(&expansionCoef[1], y, y4)
-	kkb := y2 * poly16(&expansionCoef[2], y, y4)
-	return Terms{LnQ: lnInvSigmaTheta + lnT + l, U: 1 - kb, Cv: 1 + kkb}
+	y8 := y4 * y4
+	// Each sum as four short Horner chains joined by y⁴ and y⁸: the
+	// chains run side by side, where one long chain would make each
+	// product wait for the one before (written out: a call would not be
+	// inlined).
+	var p [3]float64
+	for k := range p {
+		c := &expansionCoef[k]
+		q0 := c[0] + y*(c[1]+y*(c[2]+y*c[3]))
+		q1 := c[4] + y*(c[5]+y*(c[6]+y*c[7]))
+		q2 := c[8] + y*(c[9]+y*(c[10]+y*c[11]))
+		q3 := c[12] + y*(c[13]+y*(c[14]+y*c[15]))
+		p[k] = (q0 + y4*q1) + y8*(q2+y4*q3)
+	}
+	return Terms{LnQ: lnInvSigmaTheta + lnT + y*p[0], U: 1 - y*p[1], Cv: 1 + y2*p[2]}
 }
 
 // expansionCoef holds, for linearRotorExpansion, the bₖ of L(y) from k = 1
@@ -143,17 +154,6 @@ var expansionCoef = func() (c [3][16]float64) {
 	}
 	return c
 }()
-
-// poly16 returns Σ c[k] yᵏ for k < 16, given y⁴, as four short Horner
-// chains joined by y⁴ and y⁸: the chains run side by side, where one
-// long chain would make each product wait for the one before.
-func poly16(c *[16]float64, y, y4 float64) float64 {
-	q0 := c[0] + y*(c[1]+y*(c[2]+y*c[3]))
-	q1 := c[4] + y*(c[5]+y*(c[6]+y*c[7]))
-	q2 := c[8] + y*(c[9]+y*(c[10]+y*c[11]))
-	q3 := c[12] + y*(c[13]+y*(c[14]+y*c[15]))
-	return (q0 + y4*q1) + y4*y4*(q2+y4*q3)
-}
 
 // linearRotorSeries is the Euler–Maclaurin expansion of the rigid-rotor
 // sum, q = T/(σΘ)·f(y) with f = 1 + y/3 + y²/15 + 4y³/315 and y = Θ/T. Its
@@ -243,6 +243,9 @@ func (sp *Species) vibration(invT float64) Terms { return vibrationOf(sp.vibMode
 
 // vibrationOf returns the harmonic-oscillator terms of a list of modes.
 func vibrationOf(modes []vibTerm, invT float64) Terms {
+	if len(modes) > 2 {
+		return vibrationTwoPass(modes, invT)
+	}
 	var lnQ, u, cv float64
 	prod := 1.0 // Π (1 − e^{−x})^g not yet logged
 	for _, m := range modes {
@@ -258,20 +261,7 @@ func vibrationOf(modes []vibTerm, invT float64) Terms {
 			em = math.Exp(-x)
 			om = 1 - em
 		}
-		switch m.nDeg {
-		case 1:
-			prod *= om
-		case 2:
-			prod *= om * om
-		case 3:
-			prod *= om * om * om
-		default:
-			prod *= powInt(om, m.nDeg)
-		}
-		if prod < 1e-250 { // keep the product clear of underflow
-			lnQ -= math.Log(prod)
-			prod = 1
-		}
+		prod *= powInt(om, m.nDeg)
 		r := x / om  // x/(1 − e^{−x})
 		xe := r * em // x/(e^x − 1)
 		u += m.deg * xe
@@ -282,6 +272,71 @@ func vibrationOf(modes []vibTerm, invT float64) Terms {
 	}
 	return Terms{LnQ: lnQ, U: u, Cv: cv}
 }
+
+// vibrationTwoPass is vibrationOf for three modes or more, with the same
+// arithmetic in the same order. The exponentials come first, into a
+// small buffer, and the arithmetic after: across a call nothing stays in
+// a register, so a loop that did both would store and reload its running
+// sums around every exp.
+func vibrationTwoPass(modes []vibTerm, invT float64) Terms {
+	var lnQ, u, cv float64
+	prod := 1.0
+	var ems [vibChunk]float64
+	for len(modes) > 0 {
+		chunk := modes[:min(len(modes), vibChunk)]
+		modes = modes[len(chunk):]
+		for i, m := range chunk {
+			x := m.thetaK * invT
+			switch {
+			case x > 700: // frozen, and skipped below too
+			case x < expm1Below:
+				ems[i] = math.Expm1(-x)
+			default:
+				ems[i] = math.Exp(-x)
+			}
+		}
+		for i, m := range chunk {
+			x := m.thetaK * invT
+			if x > 700 {
+				continue
+			}
+			var em, om float64
+			if x < expm1Below {
+				om = -ems[i]
+				em = 1 - om
+			} else {
+				em = ems[i]
+				om = 1 - em
+			}
+			switch m.nDeg {
+			case 1:
+				prod *= om
+			case 2:
+				prod *= om * om
+			case 3:
+				prod *= om * om * om
+			default:
+				prod *= powInt(om, m.nDeg)
+			}
+			if prod < 1e-250 { // keep the product clear of underflow
+				lnQ -= math.Log(prod)
+				prod = 1
+			}
+			r := x / om
+			xe := r * em
+			u += m.deg * xe
+			cv += m.deg * xe * r
+		}
+	}
+	if prod != 1 {
+		lnQ -= math.Log(prod)
+	}
+	return Terms{LnQ: lnQ, U: u, Cv: cv}
+}
+
+// vibChunk is how many modes vibrationOf takes per pass; most molecules
+// have fewer distinct modes.
+const vibChunk = 32
 
 // expm1Below is the x under which 1 − e^{−x} is taken from expm1: there
 // e^{−x} > 0.78, and 1 − e^{−x} would lose more than two bits. Either way
