@@ -331,7 +331,9 @@ func levelTolerance(formula string, tempK float64) (cpRel, sAbs float64) {
 		// Herzberg states c1Σu−, A'3Δu, A3Σu+ are summed and add 0.49
 		// J/(mol·K) to Cp° at 6000 K; the ground state's quasi-bound
 		// levels, admitted up to 2000 cm⁻¹ above D0 as a trial, add
-		// under 0.4. The rest, 1.5 J/(mol·K) at 6000 K, needs states
+		// under 0.4, and its levels from the RKR curve (as H2's, with
+		// the quasi-bound ones) bring Cp° at 6000 K only to −2.7 %. The
+		// rest, 1.5 J/(mol·K) at 6000 K, needs states
 		// this catalogue lacks: of the 81 state-degeneracies that
 		// converge on O(3P) + O(3P), X, a, b, c, A' and A hold 16; the
 		// weakly bound others (5Πg among them) have no constants in

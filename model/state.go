@@ -254,9 +254,9 @@ func (sp *Species) FactorTreatments(tr Treatment) [4]string {
 	switch {
 	case sp.Rotor == Atom:
 	case levels && sp.SpinMod.Frozen:
-		out[1] = "summed levels, v = 0 (Dunham constants), spin modifications frozen"
+		out[1] = "summed levels, v = 0 (" + sp.levelSource() + "), spin modifications frozen"
 	case levels:
-		out[1] = "summed levels, v = 0 (Dunham constants)"
+		out[1] = "summed levels, v = 0 (" + sp.levelSource() + ")"
 	case sp.Rotor == Nonlinear && sp.distortionPerK != 0 && sp.summedLevels(tr):
 		out[1] = "rigid rotor, classical, with first-order centrifugal distortion"
 	case sp.Rotor == Nonlinear:

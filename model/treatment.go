@@ -30,6 +30,9 @@ func (sp *Species) Treatments(tempK, presPa float64, tr Treatment) TreatmentRepo
 	switch {
 	case sp.usesLevels(tr):
 		k := "summed rovibronic levels (Dunham constants)"
+		if sp.Dunham.FromCurve {
+			k = "summed rovibronic levels from the RKR potential curve, quasi-bound levels included"
+		}
 		if len(sp.States) > 0 {
 			k += " with excited states"
 		}
@@ -71,6 +74,14 @@ func (sp *Species) Treatments(tempK, presPa float64, tr Treatment) TreatmentRepo
 	r.DeltaSJPerMolK = a.SJPerMolK - b.SJPerMolK
 	r.DeltaCpJPerMolK = a.CpJPerMolK - b.CpJPerMolK
 	return r
+}
+
+// levelSource names where a diatomic's summed levels come from.
+func (sp *Species) levelSource() string {
+	if sp.Dunham.FromCurve {
+		return "RKR curve"
+	}
+	return "Dunham constants"
 }
 
 // hinderedText names the vibrational model of a molecule whose summed

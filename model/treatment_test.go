@@ -16,7 +16,7 @@ func TestTreatments(t *testing.T) {
 		want  []string
 		rigid bool
 	}{
-		{"H2", Treatment{}, []string{"summed rovibronic levels", "spin modification: normal hydrogen"}, false},
+		{"H2", Treatment{}, []string{"summed rovibronic levels from the RKR potential curve", "spin modification: normal hydrogen"}, false},
 		{"eH2", Treatment{}, []string{"summed rovibronic levels", "spin modifications in equilibrium"}, false},
 		{"O2", Treatment{}, []string{"summed rovibronic levels (Dunham constants) with excited states"}, false},
 		{"NH3", Treatment{}, []string{"inversion ladder", "centrifugal distortion"}, false},

@@ -83,7 +83,7 @@ func WriteSpecies(w io.Writer, sp *model.Species, builtin bool, stdPa float64, t
 		origin = "from a --species file"
 	}
 	if base, ok := sp.SpinVariantOf(); ok && base != sp.Formula {
-		origin = "spin modification of " + model.Printable(base) + ", built in"
+		origin = "built-in spin modification of " + model.Printable(base)
 		if !builtin {
 			origin = "spin modification of " + model.Printable(base) + " from a --species file"
 		}
