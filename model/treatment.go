@@ -76,6 +76,15 @@ func (sp *Species) Treatments(tempK, presPa float64, tr Treatment) TreatmentRepo
 	return r
 }
 
+// vibrationSummed reports whether, under the default treatment, all of
+// sp's vibrations are summed over anharmonic levels (a diatomic's levels,
+// or a polyatomic's from its xij), so that the harmonic drift note does
+// not apply.
+func (sp *Species) vibrationSummed() bool {
+	var tr Treatment
+	return sp.usesLevels(tr) || sp.anharmonicVib != nil && sp.summedLevels(tr)
+}
+
 // levelSource names where a diatomic's summed levels come from.
 func (sp *Species) levelSource() string {
 	if sp.Dunham.FromCurve {

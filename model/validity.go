@@ -120,6 +120,8 @@ func (v Validity) Notes(sp *Species) []Note {
 	}
 	if len(sp.vibThetaK) > 0 {
 		switch {
+		case v.TOverThetaVib > 1.5 && sp.vibrationSummed():
+			out = append(out, Note{Info, fmt.Sprintf("T/Θvib = %.3g: vibrations summed over their anharmonic levels", v.TOverThetaVib)})
 		case v.TOverThetaVib > 1.5:
 			out = append(out, Note{Caution, fmt.Sprintf("T/Θvib = %.3g: harmonic vibration drifts (anharmonicity) this hot", v.TOverThetaVib)})
 		case v.TOverThetaVib < 0.1:

@@ -73,6 +73,8 @@ func TestValidityNotes(t *testing.T) {
 		{"vibrations frozen", "N2", 300, 101325, Info, "vibrations frozen out"},
 		{"vibrations partly excited", "CO2", 300, 101325, Info, "vibrations partly excited"},
 		{"anharmonic drift", "CH4", 3000, 101325, Caution, "harmonic vibration drifts"},
+		{"anharmonic levels summed", "CO2", 3000, 101325, Info, "summed over their anharmonic levels"},
+		{"diatomic levels summed", "N2", 6000, 101325, Info, "summed over their anharmonic levels"},
 		{"quantum corrections", "H2", 20.5, 101325, Caution, "quantum corrections may matter"},
 	}
 	for _, tt := range tests {
