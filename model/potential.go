@@ -150,8 +150,13 @@ func (c *rkrCurve) v(x float64) float64 {
 		return c.vIn[0] * math.Exp(-c.wallA*(x-c.xIn[0]))
 	case x <= c.xIn[len(c.xIn)-1]:
 		return interpRising(c.xIn, c.vIn, x)
+	case x <= 1:
+		// Between the innermost RKR points and the minimum (V ≤ 0.4
+		// cm⁻¹ for H2): the harmonic parabola through the last point.
+		n := len(c.xIn) - 1
+		return c.vIn[n] * math.Pow((1-x)/(1-c.xIn[n]), 2)
 	case x <= c.xOut[0]:
-		return 0 // the few points around the minimum (≤ 1e-6 of ωe)
+		return c.vOut[0] * math.Pow((x-1)/(c.xOut[0]-1), 2)
 	case x <= c.xOut[len(c.xOut)-1]:
 		return interpRising(c.xOut, c.vOut, x)
 	}
@@ -248,7 +253,8 @@ func (c *rkrCurve) levels(maxLevels int) []rkrLevel {
 		rot := c.be * float64(n*(n+1))
 		vn := func(x float64) float64 { return c.v(x) + rot/(x*x) }
 		// The well's minimum and the barrier's top, on a grid out to
-		// 40 re; with no barrier the limit is De.
+		// 40 re; with no barrier (N = 0) the limit is De. Beyond the
+		// barrier V_N falls back towards De, as rot/x² outlasts C/x⁶.
 		const xMax, steps = 40.0, 2000
 		xm, vm := 0.0, math.Inf(1)
 		for i := 1; i <= steps; i++ {
@@ -260,7 +266,7 @@ func (c *rkrCurve) levels(maxLevels int) []rkrLevel {
 		xb, top := xMax, c.de
 		for i := 1; i <= steps; i++ {
 			x := xm + (xMax-xm)*float64(i)/steps
-			if y := vn(x); y > top || (top == c.de && y > c.de && x < xMax) {
+			if y := vn(x); y > top {
 				xb, top = x, y
 			}
 		}
