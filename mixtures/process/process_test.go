@@ -346,6 +346,29 @@ func TestGasCorrectionFactor(t *testing.T) {
 		{"NH3 1", 0.7310, 0.02},
 		{"SF6 1", 0.2696, 0.025},
 	}
+	// The formula itself, fed the engine's Cp°, against the same formula
+	// fed the tables' Cp° by hand: a tight check on the engine that the
+	// published factors' spread cannot give. GCF = (s/s_N2)·Cp_N2/Cp with
+	// Cp° at 298.15 K from NIST-JANAF 4th ed.: N2 29.124 (N-023), NH3
+	// 35.652 (H-083), CO2 37.129 (C-095), CH4 35.639 (C-067); s 1.00 for
+	// N2, 0.941 for CO2, 0.88 for NH3 and CH4.
+	byHand := []struct {
+		blend string
+		want  float64
+	}{
+		{"NH3 1", 0.88 * 29.124 / 35.652},
+		{"CO2 1", 0.941 * 29.124 / 37.129},
+		{"CH4 1", 0.88 * 29.124 / 35.639},
+	}
+	for _, c := range byHand {
+		got, err := GasCorrectionFactor(nil, mixOf(t, c.blend))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if math.Abs(got/c.want-1) > 0.003 {
+			t.Errorf("GCF(%s) = %.4f, want %.4f ± 0.3 %% (the formula with the JANAF Cp° at 298.15 K)", c.blend, got, c.want)
+		}
+	}
 	for _, c := range cases {
 		got, err := GasCorrectionFactor(nil, mixOf(t, c.blend))
 		if err != nil {
