@@ -61,6 +61,9 @@ func splitNumberRaw(s string) (float64, string, error) {
 		return 0, "", errors.New("no number")
 	}
 	x, err := strconv.ParseFloat(s[:end], 64)
+	if errors.Is(err, strconv.ErrRange) && math.IsInf(x, 0) {
+		return 0, "", errors.New(model.Quote(s[:end]) + " is too large a number to compute with (beyond 1.8e308)")
+	}
 	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
 		return 0, "", errors.New(model.Quote(s[:end]) + " is not a number")
 	}

@@ -152,6 +152,7 @@ func TestParsePressureErrors(t *testing.T) {
 		{"5 K", PressureUnits},
 		{"NaN bar", PressureUnits},
 		{"1e400 Pa", PressureUnits},
+		{"1e400 Pa", "too large a number"}, // a number, but past float64
 		// Finite as typed, infinite in Pa.
 		{"1e303 MPa", "too large"},
 		// mPa would be millipascal; read as MPa it would be 10⁹ times off.
