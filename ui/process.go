@@ -744,6 +744,11 @@ func (p *processPane) resultLines(add func(string), wrapped func(func(...string)
 		add("")
 	}
 	wrapped(s.Muted.Render, "", "Model: "+res.Assumptions()+".")
+	// The notes qualify the figures (a factor that is common practice, a
+	// target already met), so they are shown as the commands show them.
+	for _, n := range res.Notes() {
+		wrapped(s.Muted.Render, "", "Note: "+strings.TrimSuffix(n, ".")+".")
+	}
 	if n := len(res.Cautions()); n > 0 {
 		var titles []string
 		for _, c := range res.Cautions() {

@@ -303,3 +303,19 @@ func TestProcessPaneWeighed(t *testing.T) {
 		t.Errorf("bad atomic weight: err %q, want it naming the field", p.err)
 	}
 }
+
+// The pane shows the result's notes, as the commands print them: here
+// that the demo's start gas, with no O2, needs no purge at all.
+func TestProcessPaneShowsNotes(t *testing.T) {
+	p, _ := testProcess(t, false, 90, 60)
+	p.keys(t, "right", "right", "right", "right", "right")
+	if p.current().key != "purge" {
+		t.Fatalf("process %s, want purge", p.current().key)
+	}
+	v := p.View()
+	for _, want := range []string{"Note: the start gas already meets the target: no purge is needed.", "Note: levels of O2"} {
+		if !strings.Contains(strings.Join(strings.Fields(v), " "), want) {
+			t.Errorf("the pane lacks %q:\n%s", want, v)
+		}
+	}
+}
