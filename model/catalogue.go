@@ -17,6 +17,7 @@ var builtinText string
 type Catalogue struct {
 	species   []*Species
 	byFormula map[string]*Species
+	spinMods  []*Species // named spin modifications, in catalogue order
 }
 
 var (
@@ -58,10 +59,15 @@ func newCatalogue(list []*Species) *Catalogue {
 	for _, sp := range variants {
 		if _, taken := c.byFormula[sp.Formula]; !taken {
 			c.byFormula[sp.Formula] = sp
+			c.spinMods = append(c.spinMods, sp)
 		}
 	}
 	return c
 }
+
+// SpinModifications lists the named spin modifications (eH2, nH2, pH2,
+// eD2, nD2, oD2) that Lookup answers to besides the entries of All.
+func (c *Catalogue) SpinModifications() []*Species { return c.spinMods }
 
 // WithFile returns a new catalogue: this one with the species of a user
 // file added, or overriding those of the same formula.

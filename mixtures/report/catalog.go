@@ -53,6 +53,16 @@ func WriteCatalogList(w io.Writer, cat *model.Catalogue) {
 	if user > 0 {
 		fmt.Fprintf(w, "  * %d from --species files (added, or replacing the built-in entry)\n", user)
 	}
+	if mods := cat.SpinModifications(); len(mods) > 0 {
+		var names []string
+		for _, sp := range mods {
+			names = append(names, model.Printable(sp.Formula)+" ("+model.Printable(sp.Name)+")")
+		}
+		fmt.Fprintln(w)
+		for _, l := range Wrap("Spin modifications, by name: "+strings.Join(names, ", ")+".", 78) {
+			fmt.Fprintln(w, l)
+		}
+	}
 	fmt.Fprintln(w, "\nzmix catalog FORMULA shows one species' data, sources and standard-state table.")
 }
 

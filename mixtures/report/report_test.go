@@ -333,3 +333,16 @@ func TestSpeciesSpinModificationText(t *testing.T) {
 		}
 	}
 }
+
+// The species list names the spin modifications that blend text takes,
+// since they are not entries of the list.
+func TestCatalogListNamesSpinModifications(t *testing.T) {
+	var b bytes.Buffer
+	WriteCatalogList(&b, model.Builtin())
+	flat := strings.Join(strings.Fields(b.String()), " ")
+	for _, want := range []string{"Spin modifications, by name: eH2 (equilibrium hydrogen)", "pH2 (para hydrogen)", "oD2 (ortho deuterium)"} {
+		if !strings.Contains(flat, want) {
+			t.Errorf("the list lacks %q:\n%s", want, b.String())
+		}
+	}
+}
