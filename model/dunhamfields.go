@@ -29,7 +29,7 @@ var dunhamFields = map[string]string{
 	"xij_cm":     "anharmonicity constants xij in cm⁻¹, the upper triangle row by row (x11 x12 x13 x22 x23 x33)",
 	"dist_cm":    "quartic centrifugal distortion of a nonlinear molecule: the z axis (1, 2 or 3 in rot_cm's order), then ΔJ ΔJK ΔK δJ δK (Watson's A reduction) in cm⁻¹",
 	"ladder_cm":  "a mode by its observed levels: the vib_cm mode it replaces, the symmetry divisor, a colon, the levels from 0 (see ladder.go)",
-	"torsion_cm": "hindered internal rotations, each \"fundamental V0 F n σ\" (cm⁻¹, cm⁻¹, cm⁻¹, fold, symmetry), separated by ;",
+	"torsion_cm": "hindered internal rotations, each \"fundamental V0 F n σ\" (cm⁻¹, cm⁻¹, cm⁻¹, fold, symmetry) and any further potential terms as \"V n\" pairs, separated by ;",
 }
 
 // requiredDunhamFields must all come with any Dunham field.
@@ -253,11 +253,11 @@ func (d *DunhamConstants) check(formula, what string, ground bool) error {
 // setTorsions reads "289 1012 10.68 3 3; …": for each hindered rotor the
 // vib_cm fundamental it replaces, V0, F, the fold n and the symmetry σ.
 func setTorsions(sp *Species, value string) error {
-	const want = "fundamental V0 F n σ, e.g. 289 1012 10.68 3 3"
+	const want = "fundamental V0 F n σ, e.g. 289 1012 10.68 3 3, then any further terms as V n pairs"
 	for _, group := range strings.Split(value, ";") {
 		f := strings.Fields(group)
-		if len(f) != 5 {
-			return Errorf("model", "torsion %s: %d items; want %s", Quote(strings.TrimSpace(group)), len(f), want)
+		if len(f) < 5 || len(f)%2 == 0 || len(f) > 5+2*maxTorsionTerms {
+			return Errorf("model", "torsion %s: %d items; want %s (at most %d pairs)", Quote(strings.TrimSpace(group)), len(f), want, maxTorsionTerms)
 		}
 		var nums [5]float64
 		for i, r := range []numRange{vibRange, barrierRange, torsionFRange, foldRange, sigmaRange} {
@@ -270,7 +270,19 @@ func setTorsions(sp *Species, value string) error {
 		if len(sp.Torsions) == maxTorsions {
 			return Errorf("model", "more than %d torsions", maxTorsions)
 		}
-		sp.Torsions = append(sp.Torsions, Torsion{nums[0], nums[1], nums[2], int(nums[3]), int(nums[4])})
+		tor := Torsion{ReplacesCm: nums[0], BarrierCm: nums[1], FCm: nums[2], Fold: int(nums[3]), Symmetry: int(nums[4])}
+		for i := 5; i+1 < len(f); i += 2 {
+			v, err := termRange.parse(f[i])
+			if err != nil {
+				return Errorf("model", "torsion %s: %v", Quote(strings.TrimSpace(group)), err)
+			}
+			n, err := foldRange.parse(f[i+1])
+			if err != nil {
+				return Errorf("model", "torsion %s: %v", Quote(strings.TrimSpace(group)), err)
+			}
+			tor.More = append(tor.More, PotentialTerm{Cm: v, Fold: int(n)})
+		}
+		sp.Torsions = append(sp.Torsions, tor)
 	}
 	return nil
 }

@@ -93,13 +93,16 @@ func TestRecalledStandardValues(t *testing.T) {
 //
 // Isobutane's three methyl tops as rotors bring Cp° within 1 % (harmonic:
 // −2.4 %) and leave S° 1.5 J/(mol·K) low with a recalled V3 (harmonic:
-// +0.2, with a recalled e torsion 225 cm⁻¹). n-Butane is its anti
-// conformer alone, the C–C torsion harmonic: the two gauche conformers,
-// 2.8 kJ/mol up (from memory), would add about
+// +0.2, with a recalled e torsion 225 cm⁻¹). n-Butane's C–C torsion, as a
+// harmonic vibration, leaves out the two gauche conformers, 2.8 kJ/mol up
+// (from memory), which add about
 // R[ln(1+2e^−x) + 2x e^−x/(1+2e^−x)] = 7.8 J/(mol·K) to S° and
 // R[2x²e^−x(1+2e^−x) − (2x e^−x)²]/(1+2e^−x)² = 2.5 J/(mol·K) to Cp° at
-// x = 1.13, so its tolerances are that share: the model is 6.2 (harmonic)
-// and 6.6 (rotors) low in S°, 6.7 % and 4.3 % in Cp°.
+// x = 1.13: the harmonic row's tolerances are that share (the model is
+// 6.2 low in S°, 6.7 % in Cp°). Summed, the C–C torsion is a rotor over
+// a three-term potential with the anti and gauche wells (V1, V2, V3 from
+// recalled well and barrier energies), which brings S° to about 3 J/(mol·K)
+// high and Cp° within 1 %; the 3.5 allows the recalled potential.
 func TestRecalledButanes(t *testing.T) {
 	harmonic := Treatment{Levels: LevelsRigidHarmonic}
 	tests := []struct {
@@ -114,7 +117,7 @@ func TestRecalledButanes(t *testing.T) {
 		{"i-C4H10", harmonic, 295.50, 96.65, 2.0, 0.03, "CCCBDB-TRC, isobutane, read from the CCCBDB isobutane page"},
 		{"i-C4H10", summed, 295.50, 96.65, 2.0, 0.01, "CCCBDB-TRC, isobutane, read from the CCCBDB isobutane page"},
 		{"n-C4H10", harmonic, 310.02, 98.49, 7.0, 0.08, "CCCBDB-TRC, n-butane, read from the CCCBDB n-butane page"},
-		{"n-C4H10", summed, 310.02, 98.49, 7.0, 0.05, "CCCBDB-TRC, n-butane, read from the CCCBDB n-butane page"},
+		{"n-C4H10", summed, 310.02, 98.49, 3.5, 0.01, "CCCBDB-TRC, n-butane, read from the CCCBDB n-butane page"},
 	}
 	for _, tt := range tests {
 		sp := mustSpecies(t, tt.formula)

@@ -19,6 +19,28 @@ type Torsion struct {
 	FCm        float64 // F = h/(8π²c I_red)
 	Fold       int     // n: minima per turn
 	Symmetry   int     // σ_int: indistinguishable positions per turn
+	// More are further terms (Vk/2)(1 − cos nk φ) of the potential, for
+	// a torsion whose wells differ in depth: n-butane's C–C torsion has
+	// its anti well and two gauche wells above it, which a single
+	// cos 3φ term would put at the same energy.
+	More []PotentialTerm
+}
+
+// PotentialTerm is one Fourier term (V/2)(1 − cos nφ) of a torsional
+// potential; V may be negative.
+type PotentialTerm struct {
+	Cm   float64
+	Fold int
+}
+
+// meanPotentialCm is the potential's average over a turn, Σ V/2: the
+// level of the free rotor far above the barriers.
+func (tor Torsion) meanPotentialCm() float64 {
+	v := tor.BarrierCm / 2
+	for _, t := range tor.More {
+		v += t.Cm / 2
+	}
+	return v
 }
 
 // Limits of the torsion fields (values from memory): methyl barriers lie
@@ -27,9 +49,12 @@ type Torsion struct {
 // gas-mixture molecules.
 var (
 	barrierRange  = numRange{"torsional barrier V0", 1, 20000, "cm⁻¹", false}
+	termRange     = numRange{"further torsional term V", -20000, 20000, "cm⁻¹", false}
 	torsionFRange = numRange{"internal rotational constant F", 0.01, 100, "cm⁻¹", false}
 	foldRange     = numRange{"torsional fold n", 1, 6, "", true}
 	maxTorsions   = 6
+	// maxTorsionTerms bounds the further Fourier terms of one torsion.
+	maxTorsionTerms = 4
 )
 
 // torsionBasisM is the largest |m| of the basis: eigenvalues well below
@@ -47,9 +72,14 @@ func (tor Torsion) levels() *rovibLevels {
 	h := mat.NewSymDense(n, nil)
 	for i := 0; i < n; i++ {
 		m := float64(i - torsionBasisM)
-		h.SetSym(i, i, tor.FCm*m*m+tor.BarrierCm/2)
+		h.SetSym(i, i, tor.FCm*m*m+tor.meanPotentialCm())
 		if j := i + tor.Fold; j < n {
 			h.SetSym(i, j, -tor.BarrierCm/4)
+		}
+	}
+	for _, t := range tor.More {
+		for i := 0; i+t.Fold < n; i++ {
+			h.SetSym(i, i+t.Fold, h.At(i, i+t.Fold)-t.Cm/4)
 		}
 	}
 	var eig mat.EigenSym
@@ -58,7 +88,7 @@ func (tor Torsion) levels() *rovibLevels {
 	// Converged below the free-rotor energy of |m| = M − 10; free rotor
 	// levels (each ±m, so twice) from there on.
 	mCut := torsionBasisM - 10
-	eCut := tor.FCm*float64(mCut*mCut) + tor.BarrierCm/2
+	eCut := tor.FCm*float64(mCut*mCut) + tor.meanPotentialCm()
 	lv := &rovibLevels{lnNorm: math.Log(float64(tor.Symmetry))}
 	e0 := vals[0]
 	group := e0
@@ -81,7 +111,7 @@ func (tor Torsion) levels() *rovibLevels {
 	}
 	topK := 45 * MaxTempK
 	for m := mCut; ; m++ {
-		e := tor.FCm*float64(m*m) + tor.BarrierCm/2
+		e := tor.FCm*float64(m*m) + tor.meanPotentialCm()
 		if e < eCut {
 			continue
 		}
@@ -127,6 +157,13 @@ func (sp *Species) prepareTorsions() error {
 	for _, tor := range sp.Torsions {
 		if !barrierRange.contains(tor.BarrierCm) || !torsionFRange.contains(tor.FCm) || !foldRange.contains(float64(tor.Fold)) || !sigmaRange.contains(float64(tor.Symmetry)) || tor.Symmetry > tor.Fold {
 			return Errorf("model", "%s: torsion V0 %g cm⁻¹, F %g cm⁻¹, n %d, σ %d: want %s, %s, %s, and σ from 1 to n", sp.Formula, tor.BarrierCm, tor.FCm, tor.Fold, tor.Symmetry, barrierRange, torsionFRange, foldRange)
+		}
+		for _, t := range tor.More {
+			// σ_int positions are alike only if every term repeats
+			// σ_int times a turn.
+			if !termRange.contains(t.Cm) || !foldRange.contains(float64(t.Fold)) || t.Fold%tor.Symmetry != 0 {
+				return Errorf("model", "%s: torsion term V %g cm⁻¹, n %d: want %s, %s, and n a multiple of σ %d", sp.Formula, t.Cm, t.Fold, termRange, foldRange, tor.Symmetry)
+			}
 		}
 		found := false
 		for i, v := range left {

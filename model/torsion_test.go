@@ -89,3 +89,41 @@ func TestTorsionField(t *testing.T) {
 		}
 	}
 }
+
+// A potential given as several terms is their sum: a threefold barrier
+// split in two halves gives the levels of the whole.
+func TestTorsionTermsAdd(t *testing.T) {
+	whole := Torsion{ReplacesCm: 289, BarrierCm: 1012, FCm: 10.68, Fold: 3, Symmetry: 3}.levels()
+	split := Torsion{ReplacesCm: 289, BarrierCm: 506, FCm: 10.68, Fold: 3, Symmetry: 3, More: []PotentialTerm{{506, 3}}}.levels()
+	if len(whole.thetaK) != len(split.thetaK) {
+		t.Fatalf("%d levels against %d", len(split.thetaK), len(whole.thetaK))
+	}
+	for i := range whole.thetaK {
+		if math.Abs(whole.thetaK[i]-split.thetaK[i]) > 1e-6*(1+whole.thetaK[i]) {
+			t.Fatalf("level %d: %g K against %g K", i, split.thetaK[i], whole.thetaK[i])
+		}
+	}
+}
+
+// n-Butane's C–C torsion over V1 576, V2 −264, V3 1174 cm⁻¹ (F 0.913):
+// the anti well's ladder starts near its observed 102 cm⁻¹ (Shimanouchi's
+// tables, as the catalogue lists it), and the two gauche wells, 234 cm⁻¹
+// above the anti minimum by construction, give a pair of alike ground
+// levels below 350 cm⁻¹, above the anti ground level by the well
+// difference less the change in zero-point energy.
+func TestTorsionGaucheWells(t *testing.T) {
+	lv := Torsion{ReplacesCm: 102, BarrierCm: 576, FCm: 0.913, Fold: 1, Symmetry: 1, More: []PotentialTerm{{-264, 2}, {1174, 3}}}.levels()
+	cm := func(i int) float64 { return lv.thetaK[i] / WavenumberToKelvin(1) }
+	if f := cm(1); f < 85 || f > 110 {
+		t.Errorf("first anti excitation %.1f cm⁻¹, want near the observed 102", f)
+	}
+	pair := 0
+	for i := 1; i+1 < len(lv.thetaK) && cm(i) < 350; i++ {
+		if cm(i) > 150 && math.Abs(cm(i+1)-cm(i)) < 0.01 {
+			pair++
+		}
+	}
+	if pair == 0 {
+		t.Errorf("no pair of alike gauche levels between 150 and 350 cm⁻¹; levels %v", lv.thetaK[:12])
+	}
+}
