@@ -131,7 +131,7 @@ func flammableCite(r *safety.Result) string {
 	case !r.ReachesLFL:
 		lim = fmt.Sprintf("Its %.3g %% fuel is below the fuel's LFL in air, %.3g %% (Le Chatelier)", r.FuelPct, r.FuelLFLPct)
 	default:
-		lim = fmt.Sprintf("Limits of the blend in air %.3g-%.3g %% (Le Chatelier)", r.LFLPct, r.UFLPct)
+		lim = "Flammable " + r.BlendRange() + " (Le Chatelier)"
 	}
 	s := lim + "; ISO 10156: " + r.FlamVerdict() + "."
 	if r.Recalled {
