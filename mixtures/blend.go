@@ -99,6 +99,11 @@ func (e *BlendError) Error() string { return "mixtures: " + e.UserMessage() }
 // UserMessage is the one line a person reads: where, what, and what is
 // accepted.
 func (e *BlendError) UserMessage() string {
+	if e.Index >= 0 && e.Text == "" && e.Token == "" && e.Origin == "" && e.Detail != "" {
+		// An amount read on its own (ParseAmount): no blend, no item to
+		// name, and the detail names the amount as typed.
+		return e.Detail
+	}
 	var b strings.Builder
 	what := "item"
 	if e.ofSpecies || errors.Is(e.Err, ErrUnknownSpecies) {

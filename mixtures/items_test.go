@@ -286,3 +286,15 @@ func BenchmarkLoadHugeBlendFile(b *testing.B) {
 		}
 	}
 }
+
+// An amount read on its own names the amount, not an empty blend item.
+func TestParseAmountErrorAlone(t *testing.T) {
+	_, err := ParseAmount("5%%%")
+	if err == nil {
+		t.Fatal("5%%% accepted")
+	}
+	msg := model.UserMessage(err)
+	if strings.Contains(msg, `item ""`) || !strings.Contains(msg, `amount "5%%%"`) || !strings.Contains(msg, "ppm") {
+		t.Errorf("message %q: want the amount named and the accepted forms, with no empty item", msg)
+	}
+}
