@@ -293,7 +293,7 @@ func TestParseAmountErrorAlone(t *testing.T) {
 	if err == nil {
 		t.Fatal("5%%% accepted")
 	}
-	msg := model.UserMessage(err)
+	msg := err.(*BlendError).UserMessage()
 	if strings.Contains(msg, `item ""`) || !strings.Contains(msg, `amount "5%%%"`) || !strings.Contains(msg, "ppm") {
 		t.Errorf("message %q: want the amount named and the accepted forms, with no empty item", msg)
 	}
