@@ -33,44 +33,17 @@ func TestAmmoniaInversionLadder(t *testing.T) {
 	if len(sp.Ladders) != 1 || sp.Distortion == nil {
 		t.Fatalf("NH3 has %d ladders and distortion %v", len(sp.Ladders), sp.Distortion)
 	}
-	tol := func(tempK float64) (cpRel, sAbs float64) {
+	allow := func(tempK float64) rowAllowance {
 		switch {
 		case tempK <= 500:
-			return 0.003, 0.05 // the diatomics' goal
+			return rowAllowance{cpRel: 0.003, sAbs: 0.05} // the diatomics' goal
 		case tempK <= 1000:
-			return 0.012, 0.25
+			return rowAllowance{cpRel: 0.012, sAbs: 0.25}
 		}
-		return 0.03, 2.0
+		return rowAllowance{cpRel: 0.03, sAbs: 2.0}
 	}
-	var worst, worstRR [2]struct{ d, tempK float64 }
-	for _, row := range ammoniaRows {
-		got, err := sp.Table(row.tempK, StdPressureBarPa, summed)
-		if err != nil {
-			t.Fatal(err)
-		}
-		rr, err := sp.Table(row.tempK, StdPressureBarPa, Treatment{Levels: LevelsRigidHarmonic})
-		if err != nil {
-			t.Fatal(err)
-		}
-		dCp, dS := got.CpJPerMolK/row.cpJPerMolK-1, got.SJPerMolK-row.sJPerMolK
-		for i, d := range [2]float64{dCp, dS} {
-			if math.Abs(d) > math.Abs(worst[i].d) {
-				worst[i].d, worst[i].tempK = d, row.tempK
-			}
-		}
-		for i, d := range [2]float64{rr.CpJPerMolK/row.cpJPerMolK - 1, rr.SJPerMolK - row.sJPerMolK} {
-			if math.Abs(d) > math.Abs(worstRR[i].d) {
-				worstRR[i].d, worstRR[i].tempK = d, row.tempK
-			}
-		}
-		cpRel, sAbs := tol(row.tempK)
-		if math.Abs(dCp) > cpRel {
-			t.Errorf("NH3 (table H-083) Cp°(%g K) = %.3f, want %.3f ± %.1f %%", row.tempK, got.CpJPerMolK, row.cpJPerMolK, 100*cpRel)
-		}
-		if math.Abs(dS) > sAbs {
-			t.Errorf("NH3 (table H-083) S°(%g K) = %.3f, want %.3f ± %.2f", row.tempK, got.SJPerMolK, row.sJPerMolK, sAbs)
-		}
-	}
+	cp, dS := checkTableRows(t, sp, "H-083", ammoniaRows, summed, allow)
+	cpRR, dSRR := checkTableRows(t, sp, "H-083", ammoniaRows, Treatment{Levels: LevelsRigidHarmonic}, nil)
 	if d := func() float64 {
 		s, _ := sp.Table(RefTempK, StdPressureBarPa, summed)
 		return s.SJPerMolK - 192.774 // NIST-JANAF 4th ed., table H-083, 298.15 K
@@ -78,7 +51,7 @@ func TestAmmoniaInversionLadder(t *testing.T) {
 		t.Errorf("NH3 S°(298.15 K) off the table by %.3f, want within 0.1 (the polyatomics' goal)", d)
 	}
 	t.Logf("NH3 table H-083, ladder + distortion: worst Cp° %+.2f %% at %g K, S° %+.3f at %g K (rigid/harmonic: %+.2f %% at %g K, %+.3f at %g K)",
-		100*worst[0].d, worst[0].tempK, worst[1].d, worst[1].tempK, 100*worstRR[0].d, worstRR[0].tempK, worstRR[1].d, worstRR[1].tempK)
+		100*cp.d, cp.tempK, dS.d, dS.tempK, 100*cpRR.d, cpRR.tempK, dSRR.d, dSRR.tempK)
 }
 
 // TestDistortionAverages checks the closed-form averages of distortion.go
