@@ -79,12 +79,20 @@ func WriteHazardText(w io.Writer, rep *HazardReport) error {
 		t.Row(row[0], row[1])
 	}
 	t.Write(w)
-	if r.Recalled {
+	writeSafetyFooter(w, r.Recalled, r.Sources)
+	return nil
+}
+
+// writeSafetyFooter ends a safety readout (hazard, release): whether it
+// rests on recalled figures, its methods and sources, and the line that
+// defers to the data sheets, codes and a qualified assessment.
+func writeSafetyFooter(w io.Writer, recalled bool, sources []string) {
+	if recalled {
 		fmt.Fprintln(w, "\n  Rests on figures recalled from the named compilations (\"from memory\"), not read from them.")
 	}
-	if len(r.Sources) > 0 {
+	if len(sources) > 0 {
 		fmt.Fprintln(w, "\nMethods and sources")
-		for _, s := range r.Sources {
+		for _, s := range sources {
 			for i, l := range Wrap(s, 76) {
 				if i == 0 {
 					fmt.Fprintln(w, "  "+l)
@@ -98,7 +106,6 @@ func WriteHazardText(w io.Writer, rep *HazardReport) error {
 	for _, l := range Wrap(ScreeningLine+" "+mixtures.DeferLine, 78) {
 		fmt.Fprintln(w, l)
 	}
-	return nil
 }
 
 // hazardJSON is the JSON of `zmix hazard`; a null is a figure that does

@@ -7,7 +7,6 @@ import (
 	"sort"
 	"strings"
 
-	"zmix/mixtures"
 	"zmix/mixtures/safety"
 	"zmix/model"
 )
@@ -144,23 +143,7 @@ func WriteReleaseText(w io.Writer, rep *ReleaseReport) error {
 		}
 		tc.Write(w)
 	}
-	if res.Recalled {
-		fmt.Fprintln(w, "\n  Rests on figures recalled from the named compilations (\"from memory\"), not read from them.")
-	}
-	fmt.Fprintln(w, "\nMethods and sources")
-	for _, s := range releaseSources(rep) {
-		for i, l := range Wrap(s, 76) {
-			if i == 0 {
-				fmt.Fprintln(w, "  "+l)
-			} else {
-				fmt.Fprintln(w, "    "+l)
-			}
-		}
-	}
-	fmt.Fprintln(w)
-	for _, l := range Wrap(ScreeningLine+" "+mixtures.DeferLine, 78) {
-		fmt.Fprintln(w, l)
-	}
+	writeSafetyFooter(w, res.Recalled, releaseSources(rep))
 	return nil
 }
 
