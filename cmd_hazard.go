@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"flag"
 	"strings"
 
 	"zmix/mixtures"
@@ -21,15 +22,7 @@ func (a *app) cmdHazard(g *globalOpts, args []string) error {
 	if err := parseOnlyFlags(fs, "hazard", args); err != nil {
 		return err
 	}
-	src, err := readBlend(blendSpec)
-	if err != nil {
-		return err
-	}
-	cat, err := g.catalogue()
-	if err != nil {
-		return err
-	}
-	parts, err := blendParts(cat, src, src.pick(flagsGiven(fs), "pres", presText))
+	src, parts, err := safetyBlend(g, fs, blendSpec, presText)
 	if err != nil {
 		return err
 	}
@@ -51,6 +44,24 @@ func (a *app) cmdHazard(g *globalOpts, args []string) error {
 		return badInput("%s", model.UserMessage(err))
 	}
 	return a.emit(&out)
+}
+
+// safetyBlend reads the blend of a safety command (hazard, release) into
+// species and mole fractions; a blend file's pressure is --pres's default.
+func safetyBlend(g *globalOpts, fs *flag.FlagSet, blendSpec, presText string) (*blendSource, []safety.Part, error) {
+	src, err := readBlend(blendSpec)
+	if err != nil {
+		return nil, nil, err
+	}
+	cat, err := g.catalogue()
+	if err != nil {
+		return nil, nil, err
+	}
+	parts, err := blendParts(cat, src, src.pick(flagsGiven(fs), "pres", presText))
+	if err != nil {
+		return nil, nil, err
+	}
+	return src, parts, nil
 }
 
 // blendParts resolves a blend into species and mole fractions for the

@@ -27,15 +27,7 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	if err := parseOnlyFlags(fs, "release", args); err != nil {
 		return err
 	}
-	src, err := readBlend(blendSpec)
-	if err != nil {
-		return err
-	}
-	cat, err := g.catalogue()
-	if err != nil {
-		return err
-	}
-	parts, err := blendParts(cat, src, src.pick(flagsGiven(fs), "pres", presText))
+	src, parts, err := safetyBlend(g, fs, blendSpec, presText)
 	if err != nil {
 		return err
 	}
