@@ -65,26 +65,66 @@ const torsionBasisM = 120
 // tunnelMergeCm is the tunnelling splitting below which levels are merged.
 const tunnelMergeCm = 0.01
 
+// eigenvalues returns, in ascending order, the eigenvalues of
+// F·(−i d/dφ)² + V(φ) in the basis e^{imφ}, |m| ≤ torsionBasisM. A term
+// of fold n couples m only to m ± n, so the matrix falls apart into g
+// blocks, one per residue of m modulo g, the greatest common divisor of
+// the folds: a methyl top's three blocks take a ninth of the work of
+// the whole matrix, which is most of the catalogue's load time.
+func (tor Torsion) eigenvalues() []float64 {
+	g := tor.Fold
+	for _, t := range tor.More {
+		g = gcd(g, t.Fold)
+	}
+	mean := tor.meanPotentialCm()
+	var vals []float64
+	for r := 0; r < g; r++ {
+		var ms []int // this block's m, ascending
+		for m := -torsionBasisM; m <= torsionBasisM; m++ {
+			if ((m-r)%g+g)%g == 0 {
+				ms = append(ms, m)
+			}
+		}
+		n := len(ms)
+		h := mat.NewSymDense(n, nil)
+		for i, m := range ms {
+			h.SetSym(i, i, tor.FCm*float64(m*m)+mean)
+		}
+		// Within a block, m + fold sits fold/g places further on.
+		couple := func(fold int, vCm float64) {
+			for i := 0; i+fold/g < n; i++ {
+				j := i + fold/g
+				h.SetSym(i, j, h.At(i, j)-vCm/4)
+			}
+		}
+		couple(tor.Fold, tor.BarrierCm)
+		for _, t := range tor.More {
+			couple(t.Fold, t.Cm)
+		}
+		var eig mat.EigenSym
+		if !eig.Factorize(h, false) {
+			// EigenSym does not fail on a finite symmetric matrix; a
+			// NaN would be caught by the state's finite check.
+			vals = append(vals, math.NaN())
+			continue
+		}
+		vals = append(vals, eig.Values(nil)...)
+	}
+	slices.Sort(vals)
+	return vals
+}
+
+func gcd(a, b int) int {
+	for b != 0 {
+		a, b = b, a%b
+	}
+	return a
+}
+
 // torsionLevels builds the level list of one torsion, energies from its
 // lowest level, up to the energy a sum at MaxTempK needs.
 func (tor Torsion) levels() *rovibLevels {
-	n := 2*torsionBasisM + 1
-	h := mat.NewSymDense(n, nil)
-	for i := 0; i < n; i++ {
-		m := float64(i - torsionBasisM)
-		h.SetSym(i, i, tor.FCm*m*m+tor.meanPotentialCm())
-		if j := i + tor.Fold; j < n {
-			h.SetSym(i, j, -tor.BarrierCm/4)
-		}
-	}
-	for _, t := range tor.More {
-		for i := 0; i+t.Fold < n; i++ {
-			h.SetSym(i, i+t.Fold, h.At(i, i+t.Fold)-t.Cm/4)
-		}
-	}
-	var eig mat.EigenSym
-	eig.Factorize(h, false)
-	vals := eig.Values(nil) // ascending
+	vals := tor.eigenvalues()
 	// Converged below the free-rotor energy of |m| = M − 10; free rotor
 	// levels (each ±m, so twice) from there on.
 	mCut := torsionBasisM - 10

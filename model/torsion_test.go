@@ -4,6 +4,8 @@ import (
 	"math"
 	"strings"
 	"testing"
+
+	"gonum.org/v1/gonum/mat"
 )
 
 // TestHinderedRotorEthane: with its torsion summed as a hindered rotor,
@@ -125,5 +127,42 @@ func TestTorsionGaucheWells(t *testing.T) {
 	}
 	if pair == 0 {
 		t.Errorf("no pair of alike gauche levels between 150 and 350 cm⁻¹; levels %v", lv.thetaK[:12])
+	}
+}
+
+// The block-by-block eigenvalues are those of the whole matrix, for a
+// methyl top (three blocks) and for n-butane's C–C torsion (one).
+func TestTorsionBlocksMatchWholeMatrix(t *testing.T) {
+	for _, tor := range []Torsion{
+		{ReplacesCm: 289, BarrierCm: 1012, FCm: 10.68, Fold: 3, Symmetry: 3},
+		{ReplacesCm: 216, BarrierCm: 1154, FCm: 6.27, Fold: 3, Symmetry: 3, More: []PotentialTerm{{40, 6}}},
+		{ReplacesCm: 102, BarrierCm: 576, FCm: 0.913, Fold: 1, Symmetry: 1, More: []PotentialTerm{{-264, 2}, {1174, 3}}},
+	} {
+		n := 2*torsionBasisM + 1
+		h := mat.NewSymDense(n, nil)
+		for i := 0; i < n; i++ {
+			m := float64(i - torsionBasisM)
+			h.SetSym(i, i, tor.FCm*m*m+tor.meanPotentialCm())
+		}
+		terms := append([]PotentialTerm{{tor.BarrierCm, tor.Fold}}, tor.More...)
+		for _, p := range terms {
+			for i := 0; i+p.Fold < n; i++ {
+				h.SetSym(i, i+p.Fold, h.At(i, i+p.Fold)-p.Cm/4)
+			}
+		}
+		var eig mat.EigenSym
+		if !eig.Factorize(h, false) {
+			t.Fatal("no eigenvalues")
+		}
+		want := eig.Values(nil)
+		got := tor.eigenvalues()
+		if len(got) != len(want) {
+			t.Fatalf("%d eigenvalues, want %d", len(got), len(want))
+		}
+		for i := range want {
+			if math.Abs(got[i]-want[i]) > 1e-9*(1+math.Abs(want[i])) {
+				t.Fatalf("fold %d: eigenvalue %d = %.12g, want %.12g", tor.Fold, i, got[i], want[i])
+			}
+		}
 	}
 }
