@@ -61,7 +61,7 @@ func (sp *Species) anharmonicLevels() (*rovibLevels, error) {
 	}
 	v := make([]int, n)
 	g0 := g(v)
-	var es, ws []float64
+	es, ws := make([]float64, 0, 1024), make([]float64, 0, 1024)
 	// leaf adds the levels of one v, over the l of its degenerate modes.
 	var leaf func(t int, e, w float64)
 	leaf = func(t int, e, w float64) {
@@ -106,7 +106,11 @@ func (sp *Species) anharmonicLevels() (*rovibLevels, error) {
 	if err := walk(n - 1); err != nil {
 		return nil, err
 	}
-	lv := &rovibLevels{}
+	lv := &rovibLevels{ // sized once: CO2 has some 90 000 levels
+		thetaK: make([]float64, 0, len(es)),
+		weight: make([]float64, 0, len(es)),
+		class:  make([]uint8, 0, len(es)),
+	}
 	for i, e := range es {
 		lv.thetaK = append(lv.thetaK, WavenumberToKelvin(e))
 		lv.weight = append(lv.weight, ws[i])
