@@ -5,6 +5,7 @@ import (
 	"math"
 	"slices"
 	"strconv"
+	"strings"
 
 	"zmix/model"
 )
@@ -197,7 +198,19 @@ func DewPointOf(blend []Condensable, presPa, minK, maxK float64) DewPoint {
 		return DewPoint{Why: "nothing in the blend condenses at any temperature from " + kelvinText(minK) + " up"}
 	}
 	if sum(hi) >= 1 {
-		return DewPoint{Why: "a partial pressure lies above its species' critical pressure: a dense fluid, with no dew point"}
+		// Name the species: above its critical pressure, cooling at the
+		// line pressure never splits it into vapour and liquid.
+		var above []string
+		for _, c := range blend {
+			if c.Species.CriticalPa > 0 && c.X*presPa >= c.Species.CriticalPa {
+				above = append(above, model.Printable(c.Species.Formula))
+			}
+		}
+		who := "a species"
+		if len(above) > 0 {
+			who = strings.Join(above, ", ")
+		}
+		return DewPoint{Why: who + " at a partial pressure above its critical pressure: cooled at this pressure it stays one dense (supercritical-pressure) fluid, with no dew point"}
 	}
 	lo := minK
 	for i := 0; i < 100 && hi/lo > 1+1e-12; i++ {
