@@ -187,6 +187,14 @@ func (c Cylinder) Solve() (*CylinderResult, error) {
 	if _, err := cylinderGas(mix, &s, c.TempK, r.PresPa); err != nil {
 		return nil, err
 	}
+	// Condensation first: a liquefied gas is refused for that reason,
+	// before its dense, liquid-like state puts it outside the models.
+	if dp := mixtures.DewPoint(&s); dp.Known && dp.TempK >= c.TempK {
+		if c.PresPa > 0 {
+			return nil, model.Errorf("process", "%s would condense at %.5g K (its dew point at %.4g bar is %.5g K); refused", strings.Join(dp.Species, ", "), c.TempK, r.PresPa/1e5, dp.TempK)
+		}
+		return nil, model.Errorf("process", "that much gas would be partly liquid at %.5g K (%s condenses below %.5g K at the %.4g bar it would reach); zmix models the gas only: a liquefied-gas cylinder stands at its vapour pressure, and its contents go by weight", c.TempK, strings.Join(dp.Species, ", "), dp.TempK, r.PresPa/1e5)
+	}
 	modelName := "ideal gas (no critical constants)"
 	if rg, known := s.RealGasResult(); known {
 		modelName = rg.Model.String()
@@ -207,9 +215,6 @@ func (c Cylinder) Solve() (*CylinderResult, error) {
 	r.out(figCylRef, r.RefM3)
 	r.note(fmt.Sprintf("the ideal gas would put %.4g mol in at this pressure: %+.2g %% against Z", r.IdealAmountMol, 100*(r.IdealAmountMol/r.AmountMol-1)))
 
-	if dp := mixtures.DewPoint(&s); dp.Known && dp.TempK >= c.TempK {
-		return nil, model.Errorf("process", "%s would condense at %.5g K (its dew point at %.4g bar is %.5g K); refused", strings.Join(dp.Species, ", "), c.TempK, r.PresPa/1e5, dp.TempK)
-	}
 	if c.RatedPresPa > 0 && r.PresPa > c.RatedPresPa {
 		return nil, model.Errorf("process", "%.4g bar exceeds the rating given, %.4g bar; refused", r.PresPa/1e5, c.RatedPresPa/1e5)
 	}

@@ -90,6 +90,11 @@ func TestCylinderRefusals(t *testing.T) {
 		msg  string
 	}{
 		{"condenses", Cylinder{Mixture: mixOf(t, "CO2 100%"), VolumeM3: 0.05, TempK: 293.15, PresPa: 60e5}, "condense"},
+		// Past the vapour pressure (57.3 bar at 20 °C, from memory) and
+		// on the cubic's liquid-like root: condensation is the reason.
+		{"condenses, dense", Cylinder{Mixture: mixOf(t, "CO2 100%"), VolumeM3: 0.05, TempK: 293.15, PresPa: 70e5}, "would condense"},
+		// 30 kg in 50 L is a liquefied-CO2 cylinder, which is mostly liquid.
+		{"liquefied by weight", Cylinder{Mixture: mixOf(t, "CO2 100%"), VolumeM3: 0.05, TempK: 293.15, MassKg: 30}, "partly liquid"},
 		{"over the rating", Cylinder{Mixture: mixOf(t, "N2 100%"), VolumeM3: 0.05, TempK: 293.15, PresPa: 300e5, RatedPresPa: 200e5}, "exceeds the rating"},
 		{"two of pressure, mass, amount", Cylinder{Mixture: mixOf(t, "N2 100%"), VolumeM3: 0.05, TempK: 293.15, PresPa: 1e5, MassKg: 1}, "exactly one"},
 		{"no volume", Cylinder{Mixture: mixOf(t, "N2 100%"), TempK: 293.15, PresPa: 1e5}, "water volume"},
