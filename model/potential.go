@@ -2,6 +2,7 @@ package model
 
 import (
 	"math"
+	"runtime"
 	"sort"
 	"sync"
 
@@ -252,99 +253,130 @@ type rkrLevel struct {
 
 // levels returns the bound and quasi-bound levels of every N.
 func (c *rkrCurve) levels(maxLevels int) []rkrLevel {
+	// Each N's ladder is its own problem: solve a batch of them at once,
+	// one per core, and keep them in order up to the first N whose well
+	// is gone. The result is the same as solving them one after another.
+	workers := max(1, runtime.GOMAXPROCS(0))
 	var out []rkrLevel
-	for n := 0; n < maxRotN; n++ {
-		rot := c.be * float64(n*(n+1))
-		vn := func(x float64) float64 { return c.v(x) + rot/(x*x) }
-		// The well's minimum and the barrier's top, on a grid out to
-		// 40 re; with no barrier (N = 0) the limit is De. Beyond the
-		// barrier V_N falls back towards De, as rot/x² outlasts C/x⁶.
-		const xMax, steps = 40.0, 2000
-		xm, vm := 0.0, math.Inf(1)
-		for i := 1; i <= steps; i++ {
-			x := 0.2 + (xMax-0.2)*float64(i)/steps
-			if y := vn(x); y < vm {
-				xm, vm = x, y
-			}
+	for n0 := 0; n0 < maxRotN; n0 += workers {
+		k := min(workers, maxRotN-n0)
+		ladders := make([][]rkrLevel, k)
+		gone := make([]bool, k)
+		var wg sync.WaitGroup
+		for i := 0; i < k; i++ {
+			wg.Add(1)
+			go func() {
+				defer wg.Done()
+				ladders[i], gone[i] = c.ladder(n0+i, maxLevels)
+			}()
 		}
-		xb, top := xMax, c.de
-		for i := 1; i <= steps; i++ {
-			x := xm + (xMax-xm)*float64(i)/steps
-			if y := vn(x); y > top {
-				xb, top = x, y
+		wg.Wait()
+		for i := 0; i < k; i++ {
+			if gone[i] {
+				return out
 			}
-		}
-		if top-vm < 1 {
-			break // no well left
-		}
-		turn := func(e float64) (x1, x2 float64) {
-			lo, hi := 0.05, xm
-			for k := 0; k < 48; k++ {
-				mid := 0.5 * (lo + hi)
-				if vn(mid) > e {
-					lo = mid
-				} else {
-					hi = mid
-				}
+			out = append(out, ladders[i]...)
+			if len(out) >= maxLevels {
+				return out[:maxLevels]
 			}
-			x1 = 0.5 * (lo + hi)
-			lo, hi = xm, xb
-			for k := 0; k < 48; k++ {
-				mid := 0.5 * (lo + hi)
-				if vn(mid) > e {
-					hi = mid
-				} else {
-					lo = mid
-				}
-			}
-			return x1, 0.5 * (lo + hi)
-		}
-		// phase is ∫k dx/π − ½ with x = mid + half·cos φ.
-		phase := func(e float64) float64 {
-			x1, x2 := turn(e)
-			mid, half := 0.5*(x1+x2), 0.5*(x2-x1)
-			s := 0.0
-			for k, u := range c.quadX {
-				phi := math.Pi * u
-				d := e - vn(mid+half*math.Cos(phi))
-				if d > 0 {
-					s += c.quadW[k] * math.Sqrt(d/c.be) * math.Sin(phi)
-				}
-			}
-			return s*math.Pi*half/math.Pi - 0.5
-		}
-		hiE := top - 1e-9*top
-		pTop := phase(hiE)
-		lo, fLo := vm, -0.5 // the phase is −½ at the bottom of the well
-		for v := 0; float64(v) <= pTop && len(out) < maxLevels; v++ {
-			// Illinois false position on the smooth, rising phase.
-			a, fa := lo, fLo-float64(v)
-			b, fb := hiE, pTop-float64(v)
-			side := 0
-			var e float64
-			for k := 0; k < 100; k++ {
-				e = (a*fb - b*fa) / (fb - fa)
-				fe := phase(e) - float64(v)
-				if math.Abs(fe) < 1e-9 || b-a < 1e-9 {
-					break
-				}
-				if fe*fb > 0 {
-					b, fb = e, fe
-					if side == 1 {
-						fa /= 2
-					}
-					side = 1
-				} else {
-					a, fa = e, fe
-					if side == -1 {
-						fb /= 2
-					}
-					side = -1
-				}
-			}
-			out = append(out, rkrLevel{v, n, e})
-			lo, fLo = e, float64(v)
 		}
 	}
 	return out
+}
+
+// ladder solves the vibrational ladder of rotational level N (at most
+// maxLevels levels); gone says the well has vanished at this N.
+func (c *rkrCurve) ladder(n, maxLevels int) (out []rkrLevel, gone bool) {
+	rot := c.be * float64(n*(n+1))
+	vn := func(x float64) float64 { return c.v(x) + rot/(x*x) }
+	// The well's minimum and the barrier's top, on a grid out to
+	// 40 re; with no barrier (N = 0) the limit is De. Beyond the
+	// barrier V_N falls back towards De, as rot/x² outlasts C/x⁶.
+	const xMax, steps = 40.0, 2000
+	xm, vm := 0.0, math.Inf(1)
+	for i := 1; i <= steps; i++ {
+		x := 0.2 + (xMax-0.2)*float64(i)/steps
+		if y := vn(x); y < vm {
+			xm, vm = x, y
+		}
+	}
+	xb, top := xMax, c.de
+	for i := 1; i <= steps; i++ {
+		x := xm + (xMax-xm)*float64(i)/steps
+		if y := vn(x); y > top {
+			xb, top = x, y
+		}
+	}
+	if top-vm < 1 {
+		return nil, true // no well left
+	}
+	turn := func(e float64) (x1, x2 float64) {
+		lo, hi := 0.05, xm
+		for k := 0; k < 48; k++ {
+			mid := 0.5 * (lo + hi)
+			if vn(mid) > e {
+				lo = mid
+			} else {
+				hi = mid
+			}
+		}
+		x1 = 0.5 * (lo + hi)
+		lo, hi = xm, xb
+		for k := 0; k < 48; k++ {
+			mid := 0.5 * (lo + hi)
+			if vn(mid) > e {
+				hi = mid
+			} else {
+				lo = mid
+			}
+		}
+		return x1, 0.5 * (lo + hi)
+	}
+	// phase is ∫k dx/π − ½ with x = mid + half·cos φ.
+	phase := func(e float64) float64 {
+		x1, x2 := turn(e)
+		mid, half := 0.5*(x1+x2), 0.5*(x2-x1)
+		s := 0.0
+		for k, u := range c.quadX {
+			phi := math.Pi * u
+			d := e - vn(mid+half*math.Cos(phi))
+			if d > 0 {
+				s += c.quadW[k] * math.Sqrt(d/c.be) * math.Sin(phi)
+			}
+		}
+		return s*math.Pi*half/math.Pi - 0.5
+	}
+	hiE := top - 1e-9*top
+	pTop := phase(hiE)
+	lo, fLo := vm, -0.5 // the phase is −½ at the bottom of the well
+	for v := 0; float64(v) <= pTop && len(out) < maxLevels; v++ {
+		// Illinois false position on the smooth, rising phase.
+		a, fa := lo, fLo-float64(v)
+		b, fb := hiE, pTop-float64(v)
+		side := 0
+		var e float64
+		for k := 0; k < 100; k++ {
+			e = (a*fb - b*fa) / (fb - fa)
+			fe := phase(e) - float64(v)
+			if math.Abs(fe) < 1e-9 || b-a < 1e-9 {
+				break
+			}
+			if fe*fb > 0 {
+				b, fb = e, fe
+				if side == 1 {
+					fa /= 2
+				}
+				side = 1
+			} else {
+				a, fa = e, fe
+				if side == -1 {
+					fb /= 2
+				}
+				side = -1
+			}
+		}
+		out = append(out, rkrLevel{v, n, e})
+		lo, fLo = e, float64(v)
+	}
+	return out, false
 }
