@@ -6,9 +6,11 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"runtime"
 	"sort"
 	"strconv"
 	"strings"
+	"sync"
 	"unicode"
 	"unicode/utf8"
 )
@@ -173,7 +175,22 @@ func (r numRange) parse(tok string) (float64, error) {
 // (MaxSpeciesLineBytes, MaxSpeciesFileBytes); the first fault is returned
 // as a *CatalogueError naming the file, line and field.
 func ParseCatalogue(file string, r io.Reader) ([]*Species, error) {
-	p := catParser{file: file, headerAt: map[string]int{}}
+	p := catParser{file: file, headerAt: map[string]int{}, slots: make(chan struct{}, max(1, runtime.GOMAXPROCS(0)))}
+	list, err := p.parse(r)
+	// Whatever stopped the reading, the species begun before it are
+	// waited for, and an error among them comes first.
+	if werr := p.wait(); werr != nil {
+		return nil, werr
+	}
+	if err != nil {
+		return nil, err
+	}
+	return list, nil
+}
+
+// parse reads the file; the species it finishes are prepared as it goes.
+func (p *catParser) parse(r io.Reader) ([]*Species, error) {
+	file := p.file
 	br := bufio.NewReaderSize(io.LimitReader(r, MaxSpeciesFileBytes+1), MaxSpeciesLineBytes+2)
 	read := 0
 	for {
@@ -220,6 +237,8 @@ type catParser struct {
 	curLine  int
 	fieldAt  map[string]int // field → its line in the current block
 	headerAt map[string]int // formula → line of its block
+	jobs     []*prepareJob  // species being prepared, in file order
+	slots    chan struct{}  // one per core: how many prepare at once
 }
 
 // errf makes the error of a line; errors among args contribute their
@@ -319,19 +338,62 @@ func (p *catParser) finish() error {
 	if err := sp.Safety.check(); err != nil {
 		return p.errf(p.curLine, "", "%s", UserMessage(err))
 	}
-	if err := sp.Prepare(); err != nil {
-		return p.errf(p.curLine, "", "%s", UserMessage(err))
+	// Preparing a species (its level lists, potential curves, torsions)
+	// is most of a catalogue's load time, and each is independent of the
+	// others: it runs on its own goroutine while the file is read on, and
+	// wait reports the first error in file order.
+	job := &prepareJob{sp: sp, line: p.curLine, fieldAt: p.fieldAt}
+	p.jobs = append(p.jobs, job)
+	p.slots <- struct{}{}
+	job.wg.Add(1)
+	go func() {
+		defer func() { <-p.slots; job.wg.Done() }()
+		job.err = p.prepare(job)
+	}()
+	p.out = append(p.out, sp)
+	return nil
+}
+
+// prepareJob is one species being prepared.
+type prepareJob struct {
+	sp      *Species
+	line    int            // its block's line
+	fieldAt map[string]int // its fields' lines
+	wg      sync.WaitGroup // done when prepared
+	err     error
+}
+
+// prepare prepares a species and checks its shape, with the error of the
+// line at fault.
+func (p *catParser) prepare(job *prepareJob) error {
+	if err := job.sp.Prepare(); err != nil {
+		return p.errf(job.line, "", "%s", UserMessage(err))
 	}
-	if err := checkShape(sp); err != nil {
+	if err := checkShape(job.sp); err != nil {
 		field := err.field
-		line, ok := p.fieldAt[field]
+		line, ok := job.fieldAt[field]
 		if !ok {
-			line, field = p.curLine, ""
+			line, field = job.line, ""
 		}
 		return p.errf(line, field, "%s", err.msg)
 	}
-	p.out = append(p.out, sp)
 	return nil
+}
+
+// wait waits for every species being prepared and returns the first
+// error in file order: every block already finished lies before the line
+// being read, so its error comes first, as when they were prepared one by
+// one.
+func (p *catParser) wait() error {
+	var first error
+	for _, job := range p.jobs {
+		job.wg.Wait()
+		if first == nil && job.err != nil {
+			first = job.err
+		}
+	}
+	p.jobs = nil
+	return first
 }
 
 // count returns how many of the fields the current block gave.

@@ -345,3 +345,24 @@ func FuzzParseCatalogue(f *testing.F) {
 		}
 	})
 }
+
+// Species are prepared while the file is read on, yet the error shown is
+// the first in file order: a block that fails to prepare comes before a
+// bad line further down, and a bad line before a block after it.
+func TestSpeciesFileFirstErrorInOrder(t *testing.T) {
+	badShape := "[N2]\nname = n\nrotor = atom\ndHf0_kJ = 0\n"                            // fails when prepared
+	good := "[CO]\nname = c\nrotor = linear\nrot_cm = 1.9\nvib_cm = 2143\ndHf0_kJ = 0\n" // prepares
+	badLine := "[Ar]\nname = a\ncolour = blue\n"                                         // fails as read
+	tests := []struct{ name, text, want string }{
+		{"prepare error first", badShape + good + badLine, "lab.cat:3:"}, // its rotor line
+		{"line error first", good + badLine + badShape, "lab.cat:9:"},
+	}
+	for _, tt := range tests {
+		for i := 0; i < 20; i++ { // the goroutines' order must not matter
+			_, err := ParseCatalogue("lab.cat", strings.NewReader(tt.text))
+			if err == nil || !strings.HasPrefix(err.Error(), tt.want) {
+				t.Fatalf("%s: error %v, want one starting %q", tt.name, err, tt.want)
+			}
+		}
+	}
+}
