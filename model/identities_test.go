@@ -3,6 +3,7 @@ package model
 import (
 	"math"
 	"math/rand/v2"
+	"slices"
 	"testing"
 
 	"gonum.org/v1/gonum/unit/constant"
@@ -46,53 +47,81 @@ func mustState(tb testing.TB, sp *Species, tempK, presPa float64) State {
 // Cp − Cv = R, H = U + RT, A = U − TS, G = H − TS = A + RT, and by central
 // differences Cv = ∂U/∂T, Cp = (∂H/∂T)_P, S = −(∂A/∂T)_V, S = −(∂G/∂T)_P
 // and (∂G/∂P)_T = RT/P (the ideal-gas law, from the partition function).
+//
+// They hold under every treatment a caller can choose, not only the
+// default: each degree of freedom's model must be a consistent partition
+// function on its own.
 func TestThermodynamicIdentities(t *testing.T) {
 	r := GasConstant
-	for _, sp := range Builtin().All() {
-		for _, pt := range identityPoints(12) {
-			tempK, presPa := pt[0], pt[1]
-			s := mustState(t, sp, tempK, presPa)
-			scale := math.Abs(s.HJPerMol) + tempK*math.Abs(s.SJPerMolK) + r*tempK
+	treatments := []Treatment{
+		{}, // the default: summed levels where the constants exist
+		{Levels: LevelsRigidHarmonic},
+		{Rotation: RotationClassical},
+		{Rotation: RotationSummed},
+		{Vibration: VibrationFrozen},
+		{Electronic: ElectronicGroundOnly},
+	}
+	species := slices.Concat(Builtin().All(), Builtin().SpinModifications()) // and eH2, pH2, oD2 …
+	for _, tr := range treatments {
+		for _, sp := range species {
+			identitiesOf(t, sp, tr, r)
+		}
+	}
+}
 
-			algebra := []struct {
-				name      string
-				got, want float64
-				tol       float64
-			}{
-				{"Cp − Cv", s.CpJPerMolK - s.CvJPerMolK, r, close * r},
-				{"H", s.HJPerMol, s.UJPerMol + r*tempK, close * scale},
-				{"A", s.AJPerMol, s.UJPerMol - tempK*s.SJPerMolK, close * scale},
-				{"G", s.GJPerMol, s.HJPerMol - tempK*s.SJPerMolK, close * scale},
-				{"G − A", s.GJPerMol - s.AJPerMol, r * tempK, close * scale},
-			}
-			for _, c := range algebra {
-				if math.Abs(c.got-c.want) > c.tol {
-					t.Errorf("%s at %.6g K, %.6g Pa: %s = %.12g, want %.12g", sp.Formula, tempK, presPa, c.name, c.got, c.want)
-				}
-			}
+// identitiesOf checks the identities of one species under one treatment.
+func identitiesOf(t *testing.T, sp *Species, tr Treatment, r float64) {
+	t.Helper()
+	mustState := func(_ *testing.T, sp *Species, tempK, presPa float64) State {
+		s, err := sp.StateWith(tempK, presPa, tr)
+		if err != nil {
+			t.Fatalf("%s.StateWith(%g K, %g Pa, %+v): %v", sp.Formula, tempK, presPa, tr, err)
+		}
+		return s
+	}
+	for _, pt := range identityPoints(12) {
+		tempK, presPa := pt[0], pt[1]
+		s := mustState(t, sp, tempK, presPa)
+		scale := math.Abs(s.HJPerMol) + tempK*math.Abs(s.SJPerMolK) + r*tempK
 
-			h := 1e-4 * tempK
-			// Fixed P for U, H and G; fixed n/V (P ∝ T) for A.
-			up, dn := mustState(t, sp, tempK+h, presPa), mustState(t, sp, tempK-h, presPa)
-			upV := mustState(t, sp, tempK+h, presPa*(tempK+h)/tempK)
-			dnV := mustState(t, sp, tempK-h, presPa*(tempK-h)/tempK)
-			dp := 1e-4 * presPa
-			upP, dnP := mustState(t, sp, tempK, presPa+dp), mustState(t, sp, tempK, presPa-dp)
-
-			derivs := []struct {
-				name      string
-				got, want float64
-			}{
-				{"Cv = ∂U/∂T", (up.UJPerMol - dn.UJPerMol) / (2 * h), s.CvJPerMolK},
-				{"Cp = (∂H/∂T)_P", (up.HJPerMol - dn.HJPerMol) / (2 * h), s.CpJPerMolK},
-				{"S = −(∂A/∂T)_V", -(upV.AJPerMol - dnV.AJPerMol) / (2 * h), s.SJPerMolK},
-				{"S = −(∂G/∂T)_P", -(up.GJPerMol - dn.GJPerMol) / (2 * h), s.SJPerMolK},
-				{"(∂G/∂P)_T = RT/P", (upP.GJPerMol - dnP.GJPerMol) / (2 * dp), r * tempK / presPa},
+		algebra := []struct {
+			name      string
+			got, want float64
+			tol       float64
+		}{
+			{"Cp − Cv", s.CpJPerMolK - s.CvJPerMolK, r, close * r},
+			{"H", s.HJPerMol, s.UJPerMol + r*tempK, close * scale},
+			{"A", s.AJPerMol, s.UJPerMol - tempK*s.SJPerMolK, close * scale},
+			{"G", s.GJPerMol, s.HJPerMol - tempK*s.SJPerMolK, close * scale},
+			{"G − A", s.GJPerMol - s.AJPerMol, r * tempK, close * scale},
+		}
+		for _, c := range algebra {
+			if math.Abs(c.got-c.want) > c.tol {
+				t.Errorf("%s (%+v) at %.6g K, %.6g Pa: %s = %.12g, want %.12g", sp.Formula, tr, tempK, presPa, c.name, c.got, c.want)
 			}
-			for _, c := range derivs {
-				if math.Abs(c.got-c.want) > diffClose*math.Abs(c.want)+diffFloor {
-					t.Errorf("%s at %.6g K, %.6g Pa: %s: difference quotient %.10g, want %.10g", sp.Formula, tempK, presPa, c.name, c.got, c.want)
-				}
+		}
+
+		h := 1e-4 * tempK
+		// Fixed P for U, H and G; fixed n/V (P ∝ T) for A.
+		up, dn := mustState(t, sp, tempK+h, presPa), mustState(t, sp, tempK-h, presPa)
+		upV := mustState(t, sp, tempK+h, presPa*(tempK+h)/tempK)
+		dnV := mustState(t, sp, tempK-h, presPa*(tempK-h)/tempK)
+		dp := 1e-4 * presPa
+		upP, dnP := mustState(t, sp, tempK, presPa+dp), mustState(t, sp, tempK, presPa-dp)
+
+		derivs := []struct {
+			name      string
+			got, want float64
+		}{
+			{"Cv = ∂U/∂T", (up.UJPerMol - dn.UJPerMol) / (2 * h), s.CvJPerMolK},
+			{"Cp = (∂H/∂T)_P", (up.HJPerMol - dn.HJPerMol) / (2 * h), s.CpJPerMolK},
+			{"S = −(∂A/∂T)_V", -(upV.AJPerMol - dnV.AJPerMol) / (2 * h), s.SJPerMolK},
+			{"S = −(∂G/∂T)_P", -(up.GJPerMol - dn.GJPerMol) / (2 * h), s.SJPerMolK},
+			{"(∂G/∂P)_T = RT/P", (upP.GJPerMol - dnP.GJPerMol) / (2 * dp), r * tempK / presPa},
+		}
+		for _, c := range derivs {
+			if math.Abs(c.got-c.want) > diffClose*math.Abs(c.want)+diffFloor {
+				t.Errorf("%s (%+v) at %.6g K, %.6g Pa: %s: difference quotient %.10g, want %.10g", sp.Formula, tr, tempK, presPa, c.name, c.got, c.want)
 			}
 		}
 	}
