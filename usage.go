@@ -6,6 +6,7 @@ import (
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
+	"zmix/model"
 )
 
 // The help of each command, written out so that it can carry examples and
@@ -22,9 +23,10 @@ var unitsHelp = "Units:\n" +
 const blendHelp = `Blend text: "SPECIES AMOUNT" items separated by , ; or new lines. An amount is
   a mole fraction (0.21), mol % (21% or 21 mol%), ppm or ppb by moles, a mass
   fraction (0.3 kg/kg), mass % (30 wt% or 30 mass%), a partial pressure
-  (0.2 bar), or bal for the one balance species. --blend @FILE reads a saved
-  blend file; its temperature, pressure and standard pressure are then the
-  defaults of --temp, --pres and --std.
+  (0.2 bar), or bal for the one balance species. Isomers, which share a
+  formula, take a prefix: ` + model.IsomerPrefixes + `, as in n-C4H10.
+  --blend @FILE reads a saved blend file; its temperature, pressure and
+  standard pressure are then the defaults of --temp, --pres and --std.
 `
 
 func usageState(w io.Writer) {
