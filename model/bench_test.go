@@ -101,7 +101,7 @@ func stateFloor(sp *Species, tempK, presPa float64, tr Treatment) float64 {
 	invT := 1 / tempK
 	acc := math.Log(tempK) + math.Log(presPa)
 	if sp.usesLevels(tr) {
-		if lv := sp.levels; tempK < lv.tableMinK {
+		if lv := sp.levelList(); tempK < lv.tableMinK {
 			var z [3]float64 // the nested partial sums of rovibLevels.sums
 			for i, th := range lv.thetaK {
 				x := th * invT

@@ -29,7 +29,7 @@ var (
 // callers must not modify the species it returns.
 func Builtin() *Catalogue {
 	builtinOnce.Do(func() {
-		list, err := ParseCatalogue("species.cat", strings.NewReader(builtinText))
+		list, err := parseCatalogue("species.cat", strings.NewReader(builtinText), true)
 		if err != nil {
 			// The embedded file is tested; failing here is a build defect.
 			panic(err)

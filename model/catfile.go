@@ -175,7 +175,15 @@ func (r numRange) parse(tok string) (float64, error) {
 // (MaxSpeciesLineBytes, MaxSpeciesFileBytes); the first fault is returned
 // as a *CatalogueError naming the file, line and field.
 func ParseCatalogue(file string, r io.Reader) ([]*Species, error) {
-	p := catParser{file: file, headerAt: map[string]int{}, slots: make(chan struct{}, max(1, runtime.GOMAXPROCS(0)))}
+	return parseCatalogue(file, r, false)
+}
+
+// parseCatalogue is ParseCatalogue; deferCurves lets the species solve
+// their potential curves on first use (the built-in catalogue, whose
+// curves the tests solve), where a user's file has them solved, and any
+// error reported, as it is read.
+func parseCatalogue(file string, r io.Reader, deferCurves bool) ([]*Species, error) {
+	p := catParser{file: file, headerAt: map[string]int{}, slots: make(chan struct{}, max(1, runtime.GOMAXPROCS(0))), deferCurves: deferCurves}
 	list, err := p.parse(r)
 	// Whatever stopped the reading, the species begun before it are
 	// waited for, and an error among them comes first.
@@ -239,6 +247,8 @@ type catParser struct {
 	headerAt map[string]int // formula → line of its block
 	jobs     []*prepareJob  // species being prepared, in file order
 	slots    chan struct{}  // one per core: how many prepare at once
+	// deferCurves: see parseCatalogue.
+	deferCurves bool
 }
 
 // errf makes the error of a line; errors among args contribute their
@@ -342,6 +352,7 @@ func (p *catParser) finish() error {
 	// is most of a catalogue's load time, and each is independent of the
 	// others: it runs on its own goroutine while the file is read on, and
 	// wait reports the first error in file order.
+	sp.deferCurve = p.deferCurves
 	job := &prepareJob{sp: sp, line: p.curLine, fieldAt: p.fieldAt}
 	p.jobs = append(p.jobs, job)
 	p.slots <- struct{}{}

@@ -210,8 +210,22 @@ func (lv *rovibLevels) addLevels(st DunhamConstants, class0 uint8, gRel float64,
 }
 
 // buildLevels makes the level list of a diatomic species with Dunham
-// constants. It returns an error when the constants give no bound level.
+// constants and keeps it. It returns an error when the constants give no
+// bound level.
 func (sp *Species) buildLevels() error {
+	lv, lnG0, err := sp.makeLevels()
+	if err != nil {
+		return err
+	}
+	sp.levels, sp.lnElecG0Levels = lv, lnG0
+	return nil
+}
+
+// makeLevels makes the level list of a diatomic species with Dunham
+// constants, and ln of the ground state's multiplicity in its sum,
+// without changing the species (a deferred list is made on whichever
+// goroutine first needs it).
+func (sp *Species) makeLevels() (*rovibLevels, float64, error) {
 	gs := *sp.Dunham
 	// Spin weights of the levels symmetric (wS) and antisymmetric (wA)
 	// under exchange of the nuclei; the species' spin field gives them for
@@ -261,7 +275,7 @@ func (sp *Species) buildLevels() error {
 	g00 := gs.TeCm + 0.5*gs.WeCm - 0.25*gs.WeXeCm + 0.125*gs.WeYeCm
 	lv.addLevels(gs, classRot0, 1/g0, ev, od, wS, wA, pm, 0, g00+math.Abs(gs.SpinOrbitCm)+10*gs.BeCm)
 	if len(lv.thetaK) == 0 {
-		return Errorf("model", "%s: the Dunham constants give no bound level", sp.Formula)
+		return nil, 0, Errorf("model", "%s: the Dunham constants give no bound level", sp.Formula)
 	}
 	lowK := lv.thetaK[0]
 	for _, e := range lv.thetaK {
@@ -290,7 +304,7 @@ func (sp *Species) buildLevels() error {
 	lv.thetaK, lv.weight, lv.class, lv.mod = lv.thetaK[:0], lv.weight[:0], lv.class[:0], lv.mod[:0]
 	if gs.FromCurve {
 		if err := lv.addCurveLevels(sp, gs, 1/g0, ev, od, pm, lowCm); err != nil {
-			return err
+			return nil, 0, err
 		}
 	} else {
 		lv.addLevels(gs, classRot0, 1/g0, ev, od, wS, wA, pm, lowCm, sp.DissociationCm)
@@ -300,7 +314,7 @@ func (sp *Species) buildLevels() error {
 		lv.addLevels(st.DunhamConstants, classExcited, 1/g0, ev, od, wS, wA, pm, lowCm, sp.DissociationCm)
 	}
 	if len(lv.thetaK) > maxLevels {
-		return Errorf("model", "%s: the constants give %d levels below the dissociation limit; want at most %d", sp.Formula, len(lv.thetaK), maxLevels)
+		return nil, 0, Errorf("model", "%s: the constants give %d levels below the dissociation limit; want at most %d", sp.Formula, len(lv.thetaK), maxLevels)
 	}
 	sort.Sort(byEnergy{lv})
 	lv.thetaK[0] = 0 // exactly, for the lowest level (rounding of lowCm)
@@ -315,13 +329,11 @@ func (sp *Species) buildLevels() error {
 			}
 		}
 	}
-	sp.lnElecG0Levels = math.Log(g0)
 	// The table starts where the 8th level lies 40 kT up: below it the
 	// direct sum touches at most 8 levels.
 	i := min(7, len(lv.thetaK)-1)
 	lv.tableMinK = max(lv.thetaK[i]/40, MinTempK)
-	sp.levels = lv
-	return nil
+	return lv, math.Log(g0), nil
 }
 
 // parityMods says which spin modification (0 or 1, see rovibLevels.mod)
@@ -559,7 +571,7 @@ func hermite(c []float64, s, invH float64) Terms {
 // rovib returns the rotational, vibrational and electronic terms of a
 // species with a level list.
 func (sp *Species) rovib(tempK, lnT float64) (rot, vib, el Terms) {
-	lv := sp.levels
+	lv := sp.levelList()
 	if tempK < lv.tableMinK {
 		rot, vib, el = lv.direct(tempK)
 	} else {
@@ -572,12 +584,43 @@ func (sp *Species) rovib(tempK, lnT float64) (rot, vib, el Terms) {
 
 // HasLevels reports whether the species' rotation and vibration (and
 // electronic states) can be summed level by level from Dunham constants.
-func (sp *Species) HasLevels() bool { return sp.levels != nil }
+func (sp *Species) HasLevels() bool { return sp.levels != nil || sp.deferredLevels != nil }
+
+// levelList returns the species' level list, making a deferred one on
+// first use.
+func (sp *Species) levelList() *rovibLevels {
+	if d := sp.deferredLevels; d != nil {
+		return d.get()
+	}
+	return sp.levels
+}
+
+// deferredLevels is a level list made on first use: the built-in
+// catalogue's potential curves (H2, D2 and their spin modifications) take
+// tens of milliseconds to solve, which a command whose blend holds neither
+// need not pay. The catalogue's tests solve them all, so a failure here is
+// a defect of the build, as a failure of the embedded catalogue is.
+type deferredLevels struct {
+	once sync.Once
+	sp   *Species
+	lv   *rovibLevels
+}
+
+func (d *deferredLevels) get() *rovibLevels {
+	d.once.Do(func() {
+		lv, _, err := d.sp.makeLevels()
+		if err != nil {
+			panic(err)
+		}
+		d.lv = lv
+	})
+	return d.lv
+}
 
 // LevelCount returns the number of rovibronic levels summed, 0 if none.
 func (sp *Species) LevelCount() int {
-	if sp.levels == nil {
+	if !sp.HasLevels() {
 		return 0
 	}
-	return len(sp.levels.thetaK)
+	return len(sp.levelList().thetaK)
 }

@@ -4,6 +4,7 @@ import (
 	"math"
 	"math/rand/v2"
 	"strings"
+	"sync"
 	"testing"
 )
 
@@ -451,7 +452,7 @@ func TestLevelTableMatchesDirectSum(t *testing.T) {
 		if !sp.HasLevels() {
 			continue
 		}
-		lv := sp.levels
+		lv := sp.levelList()
 		lv.once.Do(lv.build)
 		worst := 0.0
 		for x := lv.table.x0 + 0.5*tableStepLnT; x < math.Log(2e5); x += 7.5 * tableStepLnT {
@@ -654,7 +655,7 @@ func TestDoubletPiFineStructure(t *testing.T) {
 	if err := sp.Prepare(); err != nil {
 		t.Fatal(err)
 	}
-	lv := sp.levels
+	lv := sp.levelList()
 	near := func(wantCm, weight float64) bool {
 		for i, th := range lv.thetaK {
 			if math.Abs(th/WavenumberToKelvin(1)-wantCm) < 1 && lv.weight[i] == weight {
@@ -728,5 +729,49 @@ func TestFactorTreatments(t *testing.T) {
 	}
 	if sp, _ := Builtin().Lookup("pH2"); !strings.Contains(sp.FactorTreatments(Treatment{})[1], "frozen") {
 		t.Errorf("pH2: %q", sp.FactorTreatments(Treatment{}))
+	}
+}
+
+// The built-in catalogue solves its potential curves on first use; the
+// levels, and the states from them, are those solved as the file is read,
+// and several goroutines may ask first at once.
+func TestDeferredCurveLevels(t *testing.T) {
+	eager, err := ParseCatalogue("species.cat", strings.NewReader(builtinText))
+	if err != nil {
+		t.Fatal(err)
+	}
+	deferred, err := parseCatalogue("species.cat", strings.NewReader(builtinText), true)
+	if err != nil {
+		t.Fatal(err)
+	}
+	n := 0
+	for i, sp := range deferred {
+		if sp.Dunham == nil || !sp.Dunham.FromCurve {
+			continue
+		}
+		n++
+		if sp.deferredLevels == nil || eager[i].deferredLevels != nil {
+			t.Fatalf("%s: deferred %v, eager %v", sp.Formula, sp.deferredLevels != nil, eager[i].deferredLevels != nil)
+		}
+		var wg sync.WaitGroup
+		states := make([]State, 4)
+		for g := range states {
+			wg.Add(1)
+			go func() { defer wg.Done(); sp.Fill(&states[g], 300, 1e5, Treatment{}) }()
+		}
+		wg.Wait()
+		var want State
+		eager[i].Fill(&want, 300, 1e5, Treatment{})
+		for _, s := range states {
+			if s.SJPerMolK != want.SJPerMolK || s.CpJPerMolK != want.CpJPerMolK {
+				t.Errorf("%s at 300 K: deferred S %v Cp %v, solved as read S %v Cp %v", sp.Formula, s.SJPerMolK, s.CpJPerMolK, want.SJPerMolK, want.CpJPerMolK)
+			}
+		}
+		if sp.LevelCount() != eager[i].LevelCount() {
+			t.Errorf("%s: %d levels deferred, %d as read", sp.Formula, sp.LevelCount(), eager[i].LevelCount())
+		}
+	}
+	if n == 0 {
+		t.Fatal("no species takes its levels from a potential curve")
 	}
 }

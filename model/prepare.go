@@ -124,7 +124,7 @@ func (sp *Species) Prepare() error {
 // prepareLevels checks a diatomic's Dunham constants and builds its level
 // list; a species without them has none.
 func (sp *Species) prepareLevels() error {
-	sp.levels, sp.lnElecG0Levels = nil, 0
+	sp.levels, sp.lnElecG0Levels, sp.deferredLevels = nil, 0, nil
 	if sp.Dunham == nil {
 		if len(sp.States) > 0 {
 			return Errorf("model", "%s: electronic states with constants need the ground state's Dunham constants", sp.Formula)
@@ -155,6 +155,19 @@ func (sp *Species) prepareLevels() error {
 		if err := st.check(sp.Formula, "state "+Quote(st.Name), false); err != nil {
 			return err
 		}
+	}
+	if sp.Dunham.FromCurve && sp.deferCurve {
+		// Checked now, solved on first use: the curve must exist, and the
+		// ground state's multiplicity enters every state.
+		if sp.Dunham.Term.Lambda != 0 {
+			return Errorf("model", "%s: levels from the potential curve take a Σ ground state", sp.Formula)
+		}
+		if _, ok := newRKRCurve(*sp.Dunham, sp.DissociationCm); !ok {
+			return Errorf("model", "%s: the Dunham constants give no RKR curve (G(v) must rise to near D0)", sp.Formula)
+		}
+		sp.lnElecG0Levels = math.Log(float64(sp.Dunham.Term.Multiplicity))
+		sp.deferredLevels = &deferredLevels{sp: sp}
+		return nil
 	}
 	return sp.buildLevels()
 }

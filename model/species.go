@@ -173,6 +173,10 @@ type Species struct {
 	elecDeg    []float64
 	lnElecG0   float64 // ln of the ground level's degeneracy
 	levels     *rovibLevels
+	// deferredLevels, when set, makes the level list on first use (see
+	// levelList); deferCurve lets Prepare defer a potential curve's.
+	deferredLevels *deferredLevels
+	deferCurve     bool
 	// torsionLevels and vibModesHindered serve the summed levels of a
 	// molecule with torsions: one level list per torsion, and the modes
 	// left harmonic beside them.

@@ -145,7 +145,7 @@ func TestSpinModificationLevels(t *testing.T) {
 	h2 := mustSpecies(t, "nH2")
 	// E(0,1) as the level sum has it (from the curve), and the lowest
 	// level's height above the energy zero.
-	e1K, shiftK := h2.levels.modLowK[1], h2.levels.zeroShiftK
+	e1K, shiftK := h2.levelList().modLowK[1], h2.levelList().zeroShiftK
 	if e1K < 150 || e1K > 190 {
 		t.Fatalf("nH2: lowest odd-N level at %g K, want E(0,1) ≈ 118.5 cm⁻¹ = 170.5 K", e1K)
 	}

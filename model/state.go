@@ -75,7 +75,7 @@ type Treatment struct {
 // usesLevels reports whether the state of sp under tr comes from its
 // summed levels.
 func (sp *Species) usesLevels(tr Treatment) bool {
-	return sp.levels != nil && sp.summedLevels(tr) && tr.Rotation == RotationAuto
+	return sp.HasLevels() && sp.summedLevels(tr) && tr.Rotation == RotationAuto
 }
 
 // summedLevels reports whether tr asks for summed levels where a species
