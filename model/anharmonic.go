@@ -125,7 +125,7 @@ func (sp *Species) anharmonicLevels() (*rovibLevels, error) {
 // prepareAnharmonic checks the constants against the modes and builds
 // the level list.
 func (sp *Species) prepareAnharmonic() error {
-	sp.anharmonicVib = nil
+	sp.anharmonicVib, sp.anharmonicDeferred = nil, nil
 	a := sp.Anharmonic
 	if a == nil {
 		return nil
@@ -183,10 +183,28 @@ func (sp *Species) prepareAnharmonic() error {
 	if !dissocRange.contains(sp.DissociationCm) {
 		return Errorf("model", "%s: anharmonic levels need D0_cm, %s", sp.Formula, dissocRange)
 	}
+	if sp.deferLevels {
+		sp.anharmonicDeferred = &deferredLevels{make: sp.anharmonicLevels}
+		return nil
+	}
 	lv, err := sp.anharmonicLevels()
 	if err != nil {
 		return err
 	}
 	sp.anharmonicVib = lv
 	return nil
+}
+
+// hasAnharmonic reports whether the species sums anharmonic levels.
+func (sp *Species) hasAnharmonic() bool {
+	return sp.anharmonicVib != nil || sp.anharmonicDeferred != nil
+}
+
+// anharmonicList returns the anharmonic levels, making deferred ones on
+// first use.
+func (sp *Species) anharmonicList() *rovibLevels {
+	if d := sp.anharmonicDeferred; d != nil {
+		return d.get()
+	}
+	return sp.anharmonicVib
 }

@@ -130,7 +130,7 @@ func stateFloor(sp *Species, tempK, presPa float64, tr Treatment) float64 {
 	switch {
 	case sp.torsionLevels != nil && sp.summedLevels(tr):
 		modes = sp.vibModesHindered
-	case sp.anharmonicVib != nil && sp.summedLevels(tr):
+	case sp.hasAnharmonic() && sp.summedLevels(tr):
 		modes = nil
 	}
 	prod := 1.0

@@ -178,12 +178,12 @@ func ParseCatalogue(file string, r io.Reader) ([]*Species, error) {
 	return parseCatalogue(file, r, false)
 }
 
-// parseCatalogue is ParseCatalogue; deferCurves lets the species solve
+// parseCatalogue is ParseCatalogue; deferLevelss lets the species solve
 // their potential curves on first use (the built-in catalogue, whose
 // curves the tests solve), where a user's file has them solved, and any
 // error reported, as it is read.
-func parseCatalogue(file string, r io.Reader, deferCurves bool) ([]*Species, error) {
-	p := catParser{file: file, headerAt: map[string]int{}, slots: make(chan struct{}, max(1, runtime.GOMAXPROCS(0))), deferCurves: deferCurves}
+func parseCatalogue(file string, r io.Reader, deferLevelss bool) ([]*Species, error) {
+	p := catParser{file: file, headerAt: map[string]int{}, slots: make(chan struct{}, max(1, runtime.GOMAXPROCS(0))), deferLevelss: deferLevelss}
 	list, err := p.parse(r)
 	// Whatever stopped the reading, the species begun before it are
 	// waited for, and an error among them comes first.
@@ -247,8 +247,8 @@ type catParser struct {
 	headerAt map[string]int // formula → line of its block
 	jobs     []*prepareJob  // species being prepared, in file order
 	slots    chan struct{}  // one per core: how many prepare at once
-	// deferCurves: see parseCatalogue.
-	deferCurves bool
+	// deferLevelss: see parseCatalogue.
+	deferLevelss bool
 }
 
 // errf makes the error of a line; errors among args contribute their
@@ -352,7 +352,7 @@ func (p *catParser) finish() error {
 	// is most of a catalogue's load time, and each is independent of the
 	// others: it runs on its own goroutine while the file is read on, and
 	// wait reports the first error in file order.
-	sp.deferCurve = p.deferCurves
+	sp.deferLevels = p.deferLevelss
 	job := &prepareJob{sp: sp, line: p.curLine, fieldAt: p.fieldAt}
 	p.jobs = append(p.jobs, job)
 	p.slots <- struct{}{}

@@ -596,19 +596,19 @@ func (sp *Species) levelList() *rovibLevels {
 }
 
 // deferredLevels is a level list made on first use: the built-in
-// catalogue's potential curves (H2, D2 and their spin modifications) take
-// tens of milliseconds to solve, which a command whose blend holds neither
-// need not pay. The catalogue's tests solve them all, so a failure here is
+// catalogue's potential curves (H2, D2 and their spin modifications) and
+// CO2's 90 000 anharmonic levels take tens of milliseconds to make, which
+// a command whose blend holds none of them need not pay. The catalogue's tests solve them all, so a failure here is
 // a defect of the build, as a failure of the embedded catalogue is.
 type deferredLevels struct {
 	once sync.Once
-	sp   *Species
+	make func() (*rovibLevels, error)
 	lv   *rovibLevels
 }
 
 func (d *deferredLevels) get() *rovibLevels {
 	d.once.Do(func() {
-		lv, _, err := d.sp.makeLevels()
+		lv, err := d.make()
 		if err != nil {
 			panic(err)
 		}

@@ -156,7 +156,7 @@ func (sp *Species) prepareLevels() error {
 			return err
 		}
 	}
-	if sp.Dunham.FromCurve && sp.deferCurve {
+	if sp.Dunham.FromCurve && sp.deferLevels {
 		// Checked now, solved on first use: the curve must exist, and the
 		// ground state's multiplicity enters every state.
 		if sp.Dunham.Term.Lambda != 0 {
@@ -166,7 +166,10 @@ func (sp *Species) prepareLevels() error {
 			return Errorf("model", "%s: the Dunham constants give no RKR curve (G(v) must rise to near D0)", sp.Formula)
 		}
 		sp.lnElecG0Levels = math.Log(float64(sp.Dunham.Term.Multiplicity))
-		sp.deferredLevels = &deferredLevels{sp: sp}
+		sp.deferredLevels = &deferredLevels{make: func() (*rovibLevels, error) {
+			lv, _, err := sp.makeLevels()
+			return lv, err
+		}}
 		return nil
 	}
 	return sp.buildLevels()

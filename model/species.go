@@ -174,17 +174,20 @@ type Species struct {
 	lnElecG0   float64 // ln of the ground level's degeneracy
 	levels     *rovibLevels
 	// deferredLevels, when set, makes the level list on first use (see
-	// levelList); deferCurve lets Prepare defer a potential curve's.
+	// levelList); deferLevels lets Prepare defer the costly level lists
+	// (potential curves, anharmonic levels) of the built-in catalogue.
 	deferredLevels *deferredLevels
-	deferCurve     bool
+	deferLevels    bool
 	// torsionLevels and vibModesHindered serve the summed levels of a
 	// molecule with torsions: one level list per torsion, and the modes
 	// left harmonic beside them.
-	torsionLevels    []*rovibLevels
-	anharmonicVib    *rovibLevels // the anharmonic vibrational levels
-	vibModesHindered []vibTerm
-	distortionPerK   float64 // ln q_rot gains distortionPerK·T (see distortion.go)
-	spinBase         string  // the species a spin modification derives from, "" if none
+	torsionLevels []*rovibLevels
+	anharmonicVib *rovibLevels // the anharmonic vibrational levels
+	// anharmonicDeferred, when set, makes them on first use instead.
+	anharmonicDeferred *deferredLevels
+	vibModesHindered   []vibTerm
+	distortionPerK     float64 // ln q_rot gains distortionPerK·T (see distortion.go)
+	spinBase           string  // the species a spin modification derives from, "" if none
 	// lnElecG0Levels is ln of the ground state's multiplicity in the
 	// level sum (0 for ²Π, whose spin components are levels of their own).
 	lnElecG0Levels float64

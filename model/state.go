@@ -195,8 +195,8 @@ func (sp *Species) fillLn(s *State, tempK, lnT, presPa, lnP float64, tr Treatmen
 		case tr.Vibration != VibrationHarmonic:
 		case sp.torsionLevels != nil && sp.summedLevels(tr):
 			s.Vib = sp.hinderedVibration(tempK, invT, lnT)
-		case sp.anharmonicVib != nil && sp.summedLevels(tr):
-			s.Vib = sp.anharmonicVib.torsionTerms(tempK, lnT)
+		case sp.hasAnharmonic() && sp.summedLevels(tr):
+			s.Vib = sp.anharmonicList().torsionTerms(tempK, lnT)
 		case len(sp.vibModes) > 0:
 			s.Vib = sp.vibration(invT)
 		}
@@ -275,7 +275,7 @@ func (sp *Species) FactorTreatments(tr Treatment) [4]string {
 		out[2] = "summed levels (anharmonic, vibration–rotation coupling)"
 	case sp.torsionLevels != nil && sp.summedLevels(tr):
 		out[2] = sp.hinderedText()
-	case sp.anharmonicVib != nil && sp.summedLevels(tr):
+	case sp.hasAnharmonic() && sp.summedLevels(tr):
 		out[2] = "summed levels (anharmonic, xij)"
 	case len(sp.vibModes) > 0:
 		out[2] = "harmonic"

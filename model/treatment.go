@@ -37,7 +37,7 @@ func (sp *Species) Treatments(tempK, presPa float64, tr Treatment) TreatmentRepo
 			k += " with excited states"
 		}
 		kinds = append(kinds, k)
-	case summed && sp.anharmonicVib != nil && tr.Vibration == VibrationHarmonic:
+	case summed && sp.hasAnharmonic() && tr.Vibration == VibrationHarmonic:
 		kinds = append(kinds, "anharmonic vibration summed from xij")
 	}
 	if summed && tr.Vibration == VibrationHarmonic {
@@ -82,7 +82,7 @@ func (sp *Species) Treatments(tempK, presPa float64, tr Treatment) TreatmentRepo
 // not apply.
 func (sp *Species) vibrationSummed() bool {
 	var tr Treatment
-	return sp.usesLevels(tr) || sp.anharmonicVib != nil && sp.summedLevels(tr)
+	return sp.usesLevels(tr) || sp.hasAnharmonic() && sp.summedLevels(tr)
 }
 
 // levelSource names where a diatomic's summed levels come from.
