@@ -65,11 +65,12 @@ func (a *app) cmdCatalog(g *globalOpts, args []string) error {
 	} else {
 		sp, ok := cat.Lookup(rest[0])
 		if !ok {
-			hint := "zmix catalog lists every species"
+			const more = "zmix catalog lists every species, and --species FILE adds others"
+			hint := more
 			if h, ok := cat.IsomerHint(rest[0]); ok {
 				hint = h
 			} else if sug := cat.Suggest(rest[0], 3); len(sug) > 0 {
-				hint = "did you mean " + strings.Join(sug, ", ") + "? (zmix catalog lists every species)"
+				hint = "did you mean " + strings.Join(sug, ", ") + "? (" + more + ")"
 			}
 			return badInput("unknown species %s; %s", model.Quote(rest[0]), hint)
 		}
