@@ -1,8 +1,8 @@
 package main
 
 import (
-	"bytes"
 	"flag"
+	"io"
 	"strings"
 
 	"zmix/mixtures"
@@ -27,23 +27,10 @@ func (a *app) cmdHazard(g *globalOpts, args []string) error {
 		return err
 	}
 	rep := &report.HazardReport{Label: src.label(), Result: safety.Classify(parts)}
-	var out bytes.Buffer
-	format, err := outFmt.pick()
-	if err != nil {
-		return err
-	}
-	switch format {
-	case formatJSON:
-		err = report.WriteHazardJSON(&out, rep)
-	case formatCSV:
-		err = report.WriteHazardCSV(&out, rep)
-	default:
-		err = report.WriteHazardText(page(&out, g.ascii), rep)
-	}
-	if err != nil {
-		return badInput("%s", model.UserMessage(err))
-	}
-	return a.emit(&out)
+	return a.printNested(outFmt, g.ascii,
+		func(w io.Writer) error { return report.WriteHazardJSON(w, rep) },
+		func(w io.Writer) error { return report.WriteHazardCSV(w, rep) },
+		func(w io.Writer) error { return report.WriteHazardText(w, rep) })
 }
 
 // safetyBlend reads the blend of a safety command (hazard, release) into

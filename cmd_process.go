@@ -3,6 +3,7 @@ package main
 import (
 	"bytes"
 	"flag"
+	"io"
 	"strings"
 
 	"zmix/mixtures"
@@ -16,19 +17,29 @@ import (
 
 // printProcess writes a solved process as text, JSON or CSV, in one go.
 func (a *app) printProcess(label string, res process.Result, outFmt formatFlags, ascii bool) error {
+	rep := &report.ProcessReport{Label: label, Result: res}
+	return a.printNested(outFmt, ascii,
+		func(w io.Writer) error { return report.WriteProcessJSON(w, rep) },
+		func(w io.Writer) error { return report.WriteProcessCSV(w, rep) },
+		func(w io.Writer) error { return report.WriteProcessText(w, rep) })
+}
+
+// printNested writes a nested result (a process, a hazard classification,
+// a release) in the format --json or --csv chose, text otherwise, in one
+// go; a result that cannot be written is bad input, one line.
+func (a *app) printNested(outFmt formatFlags, ascii bool, writeJSON, writeCSV, writeText func(io.Writer) error) error {
 	format, err := outFmt.pick()
 	if err != nil {
 		return err
 	}
-	rep := &report.ProcessReport{Label: label, Result: res}
 	var out bytes.Buffer
 	switch format {
 	case formatJSON:
-		err = report.WriteProcessJSON(&out, rep)
+		err = writeJSON(&out)
 	case formatCSV:
-		err = report.WriteProcessCSV(&out, rep)
+		err = writeCSV(&out)
 	default:
-		err = report.WriteProcessText(page(&out, ascii), rep)
+		err = writeText(page(&out, ascii))
 	}
 	if err != nil {
 		return badInput("%s", model.UserMessage(err))

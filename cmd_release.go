@@ -1,7 +1,7 @@
 package main
 
 import (
-	"bytes"
+	"io"
 	"math"
 	"strings"
 
@@ -94,21 +94,8 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 		return badInput("the amount, rate or ventilation is too large to compute with")
 	}
 	rep := &report.ReleaseReport{Label: src.label(), Release: rel, Result: rel.Solve(), What: strings.Join(what, " "), Vent: vent}
-	var out bytes.Buffer
-	format, err := outFmt.pick()
-	if err != nil {
-		return err
-	}
-	switch format {
-	case formatJSON:
-		err = report.WriteReleaseJSON(&out, rep)
-	case formatCSV:
-		err = report.WriteReleaseCSV(&out, rep)
-	default:
-		err = report.WriteReleaseText(page(&out, g.ascii), rep)
-	}
-	if err != nil {
-		return badInput("%s", model.UserMessage(err))
-	}
-	return a.emit(&out)
+	return a.printNested(outFmt, g.ascii,
+		func(w io.Writer) error { return report.WriteReleaseJSON(w, rep) },
+		func(w io.Writer) error { return report.WriteReleaseCSV(w, rep) },
+		func(w io.Writer) error { return report.WriteReleaseText(w, rep) })
 }

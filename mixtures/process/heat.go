@@ -31,8 +31,6 @@ type HeatingResult struct {
 }
 
 var (
-	figT2Heat = &Figure{Key: "t2", Label: "outlet temperature", Symbol: "T₂", SymbolASCII: "T2", Unit: "K", UnitASCII: "K", Scale: 1,
-		Name: "outlet_temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figDuty = &Figure{Key: "q", Label: "duty ΔH (into the gas)", Symbol: "q", SymbolASCII: "q", Unit: unitKJPerMol, UnitASCII: unitKJPerMol, Scale: 1e-3,
 		Name: "duty_J_mol", Digits: mixtures.Digits{Sig: 6}}
 	figDutyKg = &Figure{Key: "qkg", Label: "duty per kg", Symbol: "q", SymbolASCII: "q", Unit: unitKJPerKg, UnitASCII: unitKJPerKg, Scale: 1e-3,
@@ -70,7 +68,7 @@ func (h Heating) Solve() (*HeatingResult, error) {
 	r.kind = "heat"
 	r.assumptions = "constant pressure, steady flow (or a closed amount: ΔH is the heat either way), " + m.Name() + ", no phase change, kinetic and potential energy neglected"
 	r.in(figInletT, h.InletTempK)
-	r.in(figT2Heat, h.OutletTempK)
+	r.in(figT2, h.OutletTempK) // the compression's outlet temperature, given here
 	r.in(figPres, h.PresPa)
 	if h.RateMolPerSec > 0 {
 		r.in(figRateIn, h.RateMolPerSec)
