@@ -50,13 +50,5 @@ func condensationNote(t *SpeciesTerm, tempK float64) (n model.Note, ok bool) {
 	return model.Note{Severity: model.Info, Text: fmt.Sprintf("partial pressure is %.2g %% of %s", 100*ratio, est)}, true
 }
 
-// paText writes a pressure in the unit that suits its size.
-func paText(pa float64) string {
-	switch {
-	case pa >= 1e5:
-		return fmt.Sprintf("%.4g bar", pa/1e5)
-	case pa >= 1e3:
-		return fmt.Sprintf("%.4g kPa", pa/1e3)
-	}
-	return fmt.Sprintf("%.3g Pa", pa)
-}
+// paText writes a pressure in a note, to four digits.
+func paText(pa float64) string { return model.PressureNoteText(pa, 4) }

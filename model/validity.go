@@ -158,13 +158,19 @@ func formatPaApprox(pa float64) string {
 	return "about " + formatPa(pa)
 }
 
-// formatPa writes a pressure in the unit that suits its size.
-func formatPa(pa float64) string {
+// formatPa writes a pressure for a note, to three digits.
+func formatPa(pa float64) string { return PressureNoteText(pa, 3) }
+
+// PressureNoteText writes a pressure in a note, in bar, kPa or Pa as its
+// size suits, to sig significant digits. Notes are made below the
+// presentation layer (mixtures/report), so they keep this one small
+// formatter for themselves.
+func PressureNoteText(pa float64, sig int) string {
 	switch {
 	case pa >= 1e5:
-		return fmt.Sprintf("%.3g bar", pa/1e5)
+		return fmt.Sprintf("%.*g bar", sig, pa/1e5)
 	case pa >= 1e3:
-		return fmt.Sprintf("%.3g kPa", pa/1e3)
+		return fmt.Sprintf("%.*g kPa", sig, pa/1e3)
 	}
-	return fmt.Sprintf("%.3g Pa", pa)
+	return fmt.Sprintf("%.*g Pa", min(sig, 3), pa)
 }
