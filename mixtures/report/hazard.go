@@ -124,6 +124,7 @@ type hazardJSON struct {
 	FlammableInAir         *bool    `json:"flammable_in_air"`
 	FlammabilitySum        *float64 `json:"flammability_sum"`
 	FlammabilitySumPartial *float64 `json:"flammability_sum_known_part"`
+	FlammabilitySumAtMost  *float64 `json:"flammability_sum_at_most"`
 	Oxidizers              []string `json:"oxidizers"`
 	Oxidizing              *bool    `json:"oxidizing"`
 	OxidizingSum           *float64 `json:"oxidizing_sum"`
@@ -194,6 +195,9 @@ func WriteHazardJSON(w io.Writer, rep *HazardReport) error {
 		j.FlammabilitySum = fptr(r.FlamSum)
 	} else {
 		j.FlammabilitySumPartial = fptr(r.FlamSum)
+		if r.FlamSumMaxKnown {
+			j.FlammabilitySumAtMost = fptr(r.FlamSumMax)
+		}
 	}
 	if r.OxKnown {
 		j.Oxidizing = bptr(r.Oxidizing)

@@ -20,6 +20,7 @@ type Part struct {
 const (
 	MethodLeChatelier = "Le Chatelier's rule over the flammable components (Zabetakis, US Bureau of Mines Bulletin 627, 1965)"
 	MethodISOFlam     = "ISO 10156 calculation: flammable in air when the sum of A'i/Tci (inert gases as nitrogen equivalents, Ki) exceeds 1"
+	MethodTciBound    = "A missing Tci taken at its least, the gas's LFL in air: a mix of the gas in nitrogen below its LFL stays below it in any amount of air (a bound zmix applies; not part of ISO 10156)"
 	MethodISOOx       = "ISO 10156 calculation: more oxidizing than air when the sum of xi*Ci exceeds 0.235"
 	MethodGHSTox      = "GHS additivity formula, 100/LC50mix = sum of Ci/LC50i, 4 h rat LC50 (UN GHS chapter 3.1)"
 )
@@ -72,14 +73,18 @@ type Result struct {
 	FlammableNoLimits      []string // flammable components with no LFL/UFL
 
 	// ISO 10156, flammable in air. FlamKnown is false when the answer
-	// depends on a missing Tci; FlamSum then holds the known part.
-	FlamSum       float64
-	FlamSumKnown  bool
-	FlamKnown     bool
-	FlamInAir     bool
-	NoTci         []string // flammable components with no Tci
-	NotDiluents   []string // neither fuels nor inert gases with a Ki
-	OxidizerInMix bool     // fuels with oxidizers: ISO 10156 asks for a test
+	// depends on a missing Tci; FlamSum then holds the known part, and
+	// FlamSumMax, when FlamSumMaxKnown, the sum with each missing Tci
+	// replaced by the gas's LFL, which no Tci can be below.
+	FlamSum         float64
+	FlamSumKnown    bool
+	FlamSumMax      float64
+	FlamSumMaxKnown bool
+	FlamKnown       bool
+	FlamInAir       bool
+	NoTci           []string // flammable components with no Tci
+	NotDiluents     []string // neither fuels nor inert gases with a Ki
+	OxidizerInMix   bool     // fuels with oxidizers: ISO 10156 asks for a test
 
 	// ISO 10156, oxidizing.
 	OxSum      float64
@@ -148,6 +153,9 @@ func Classify(parts []Part) Result {
 	methods := []string{}
 	if len(r.Flammables) > 0 {
 		methods = append(methods, MethodLeChatelier, MethodISOFlam)
+		if len(r.NoTci) > 0 && r.FlamSumMaxKnown && !r.FlamInAir {
+			methods = append(methods, MethodTciBound)
+		}
 	}
 	if len(r.Oxidizers) > 0 {
 		methods = append(methods, MethodISOOx)
@@ -237,6 +245,7 @@ func (r *Result) isoFlammable(parts []Part, cite func(*model.Species, string)) {
 		r.OxidizerInMix = false
 		return
 	}
+	r.FlamSumMaxKnown = true
 	for _, p := range parts {
 		sp := p.Species
 		if sp.Hazards&model.Flammable == 0 {
@@ -245,17 +254,37 @@ func (r *Result) isoFlammable(parts []Part, cite func(*model.Species, string)) {
 			}
 			continue
 		}
+		share := 100 * p.X / (fuel + diluent) // A'i, %
 		if sp.Safety.TciPct == 0 {
 			r.NoTci = append(r.NoTci, sp.Formula)
+			if sp.Safety.LFLPct > 0 {
+				r.FlamSumMax += share / sp.Safety.LFLPct
+			} else {
+				r.FlamSumMaxKnown = false
+			}
 			continue
 		}
 		cite(sp, "tci_pct")
-		r.FlamSum += 100 * p.X / (fuel + diluent) / sp.Safety.TciPct
+		r.FlamSum += share / sp.Safety.TciPct
+		r.FlamSumMax += share / sp.Safety.TciPct
 	}
 	r.FlamSumKnown = len(r.NoTci) == 0
 	r.FlamInAir = r.FlamSum > 1
 	// A missing Tci only adds to the sum: above 1 the answer stands.
 	r.FlamKnown = r.FlamSumKnown || r.FlamInAir
+	// Nor can a missing Tci be below the gas's LFL in air: a mix of the
+	// gas with nitrogen that holds less of it than its LFL stays below
+	// the LFL however much air is added, so it is not flammable in air.
+	// With the LFL in place of each missing Tci the sum is therefore an
+	// upper bound, and at or below 1 it decides too.
+	if !r.FlamKnown && r.FlamSumMaxKnown && r.FlamSumMax <= 1 {
+		r.FlamKnown = true
+		for _, p := range parts {
+			if p.Species.Hazards&model.Flammable != 0 && p.Species.Safety.TciPct == 0 {
+				cite(p.Species, "lfl_pct") // as the Le Chatelier limits do
+			}
+		}
+	}
 }
 
 func (r *Result) isoOxidizing(parts []Part, cite func(*model.Species, string)) {
@@ -361,6 +390,8 @@ func (r *Result) Summary() []string {
 func (r *Result) FlamVerdict() string {
 	var s string
 	switch {
+	case !r.FlamKnown && r.FlamSumMaxKnown:
+		s = fmt.Sprintf("not known: no Tci for %s; the sum of A'i/Tci lies between %.3g and %.3g (a missing Tci taken at its least, the LFL)", strings.Join(r.NoTci, ", "), r.FlamSum, r.FlamSumMax)
 	case !r.FlamKnown && r.FlamSum == 0:
 		s = "not known: no Tci for " + strings.Join(r.NoTci, ", ")
 	case !r.FlamKnown:
@@ -370,6 +401,8 @@ func (r *Result) FlamVerdict() string {
 		if !r.FlamSumKnown {
 			s = fmt.Sprintf("FLAMMABLE IN AIR, sum of A'i/Tci at least %.3g > 1 (no Tci for %s)", r.FlamSum, strings.Join(r.NoTci, ", "))
 		}
+	case !r.FlamSumKnown:
+		s = fmt.Sprintf("not flammable in air, sum of A'i/Tci at most %.3g <= 1 (no Tci for %s: taken at its least, the LFL)", r.FlamSumMax, strings.Join(r.NoTci, ", "))
 	default:
 		s = fmt.Sprintf("not flammable in air, sum of A'i/Tci = %.3g <= 1", r.FlamSum)
 	}

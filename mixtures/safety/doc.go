@@ -50,7 +50,11 @@
 // sum. ISO 10156 asks for a test, not this calculation, for a mixture of
 // fuels with oxidizers; the readout says so. When a flammable component has
 // no Tci, the sum of the others is a lower bound: above 1 it still
-// decides, otherwise the answer is not known.
+// decides. No Tci can be below the gas's LFL in air (a mix of the gas in
+// nitrogen below its LFL stays below it however much air is added), so
+// the sum with each missing Tci replaced by the LFL is an upper bound: at
+// or below 1 it decides that the blend is not flammable. Between the two
+// bounds the answer is not known, and the readout gives both.
 //
 // # ISO 10156: more oxidizing than air
 //
