@@ -171,7 +171,10 @@ func (sp *Species) fill(s *State, tempK, presPa float64, tr Treatment) {
 
 func (sp *Species) fillLn(s *State, tempK, lnT, presPa, lnP float64, tr Treatment) {
 	s.TempK, s.PresPa = tempK, presPa
-	invT := 1 / tempK // one division, shared by every factor
+	var invT float64 // 1/T: one division, shared by every factor that needs it
+	if sp.Rotor != Atom || len(sp.elecThetaK) > 1 {
+		invT = 1 / tempK
+	}
 	s.Trans = sp.translation(lnT, lnP)
 	if sp.usesLevels(tr) {
 		s.Rot, s.Vib, s.Elec = sp.rovib(tempK, lnT)
