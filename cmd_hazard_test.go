@@ -39,7 +39,7 @@ func TestHazardJSON(t *testing.T) {
 		{"N2 100%", "lfl_percent", nil}, // nothing flammable
 		{"N2 100%", "lc50_ppm", nil},    // nothing toxic
 		{"N2 100%", "ghs_inhalation_category", nil},
-		{"SiH4 2%, N2 bal", "flammable_in_air", nil}, // no Tci for SiH4, and 2/LFL > 1: not known
+		{"SiH4 2%, N2 bal", "flammable_in_air", nil},   // no Tci for SiH4, and 2/LFL > 1: not known
 		{"SiH4 1%, N2 bal", "flammable_in_air", false}, // at most 1/LFL = 1/1.37 <= 1
 		{"SiH4 1%, N2 bal", "flammability_sum_at_most", 1 / 1.37},
 		{"SiH4 1%, N2 bal", "flammability_sum", nil},

@@ -17,19 +17,37 @@ import (
 // limit D0 above G(0), along each mode only while G still rises. The sum
 // is the second-order (Dunham-type) expansion of the vibrational term,
 // exact to first order in the xij; it neglects Fermi and Darling–Dennison
-// resonances and the vibration–rotation coupling, so it is stated for
-// molecules without strong resonances (H2O) and for T up to where the
-// levels near D0 start to count (a few thousand K).
+// resonances, so it is stated for molecules without strong resonances
+// (H2O) and for T up to where the levels near D0 start to count (a few
+// thousand K).
+//
+// With alpha_cm, each level also carries its own rotational constants,
+// B_v = B_0 − Σ αi vi for each of rot_cm's constants, and so its own
+// classical rotor: relative to the ground level's, its rotational
+// partition function is Π_k (B_0,k/B_v,k)^{1/2}. The level's weight takes
+// this factor to first order in the αi, as exp(½ Σ_k Σ_i αik vi/B_0,k),
+// which stays positive and finite where the linear B_v of a level high up
+// a ladder would not. For H2O the bend's negative αA (A grows from 27.9
+// to 31.1 cm⁻¹ in v2 = 1) lowers Cp° by about 1 % at 3000 K, which is
+// what the first-order centrifugal distortion adds there.
 type Anharmonic struct {
 	HarmonicCm []float64   // ωi, one per mode, in vib_cm's order
 	XCm        [][]float64 // xij, i ≤ j, as xij_cm lists the upper triangle row by row
 	GllCm      []float64   // g_tt, one per doubly degenerate mode, in order
+	// AlphaCm holds αik, mode i's vibration–rotation constant for
+	// rot_cm's constant k, row by row (mode by mode); nil when not given.
+	AlphaCm []float64
 }
 
 // Limits of the anharmonic fields (values from memory): |xij| stays below
 // some 200 cm⁻¹ (H2O's x13 is −166), and a molecule with more modes than
 // maxAnharmonicModes has too many levels to list.
 var xijRange = numRange{"anharmonicity constant xij", -500, 500, "cm⁻¹", false}
+
+// alphaRange bounds a vibration–rotation constant αi (H2O's bend, −3.2
+// cm⁻¹, is among the largest); prepareAnharmonic also holds each below
+// its rotational constant.
+var alphaRange = numRange{"vibration–rotation constant αi", -20, 20, "cm⁻¹", false}
 
 const (
 	maxAnharmonicModes  = 6
@@ -59,6 +77,21 @@ func (sp *Species) anharmonicLevels() (*rovibLevels, error) {
 		}
 		return e
 	}
+	// rotorFactor is a level's rotational partition function relative to
+	// the ground level's, to first order in the αi (see Anharmonic).
+	nRot := len(sp.RotConstPerCm)
+	rotorFactor := func(v []int) float64 {
+		if a.AlphaCm == nil {
+			return 1
+		}
+		x := 0.0
+		for i := 0; i < n; i++ {
+			for k := 0; k < nRot; k++ {
+				x += a.AlphaCm[i*nRot+k] * float64(v[i]) / sp.RotConstPerCm[k]
+			}
+		}
+		return math.Exp(x / 2)
+	}
 	v := make([]int, n)
 	g0 := g(v)
 	es, ws := make([]float64, 0, 1024), make([]float64, 0, 1024)
@@ -83,7 +116,7 @@ func (sp *Species) anharmonicLevels() (*rovibLevels, error) {
 	var walk func(k int) error
 	walk = func(k int) error {
 		if k < 0 {
-			leaf(0, g(v)-g0, 1)
+			leaf(0, g(v)-g0, rotorFactor(v))
 			if len(es) > maxAnharmonicLevels {
 				return Errorf("model", "%s: the anharmonic constants give over %d levels below D0", sp.Formula, maxAnharmonicLevels)
 			}
@@ -182,6 +215,17 @@ func (sp *Species) prepareAnharmonic() error {
 	}
 	if !dissocRange.contains(sp.DissociationCm) {
 		return Errorf("model", "%s: anharmonic levels need D0_cm, %s", sp.Formula, dissocRange)
+	}
+	if a.AlphaCm != nil {
+		nRot := len(sp.RotConstPerCm)
+		if len(a.AlphaCm) != n*nRot {
+			return Errorf("model", "%s: alpha_cm gives %d constants; want %d, one per rot_cm constant (%d) for each of the %d modes", sp.Formula, len(a.AlphaCm), n*nRot, nRot, n)
+		}
+		for i, x := range a.AlphaCm {
+			if b := sp.RotConstPerCm[i%nRot]; math.Abs(x) >= b/2 {
+				return Errorf("model", "%s: α%d = %g cm⁻¹ for a rotational constant of %g; want |α| below half of it", sp.Formula, i/nRot+1, x, b)
+			}
+		}
 	}
 	if sp.deferLevels {
 		sp.anharmonicDeferred = &deferredLevels{make: sp.anharmonicLevels}

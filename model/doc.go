@@ -33,7 +33,9 @@
 //     E_J = kΘ J(J+1) exactly while T < 50 Θrot and use the Euler–Maclaurin
 //     series q = T/(σΘ)·(1 + Θ/3T + Θ²/15T² + 4Θ³/315T³) above; nonlinear
 //     molecules use the classical rigid-rotor limit
-//     q = √π/σ · T^{3/2}/√(ΘA ΘB ΘC). Treatment selects the choice. The
+//     q = √π/σ · T^{3/2}/√(ΘA ΘB ΘC) with its first quantum correction,
+//     e^{a/T} (Stripp and Kirkwood; see rigidBodyRotor), which moves
+//     H − H(0) and G but not S or Cp. Treatment selects the choice. The
 //     summed levels' Boltzmann factors come by recurrence, with one exp a
 //     sum: e^{−ε_{J+1}/kT} = e^{−ε_J/kT}·e^{−2(J+1)Θ/T}, and the step
 //     itself shrinks by e^{−2Θ/T} each level. From 20 Θrot (10 Θrot for a
@@ -145,8 +147,10 @@
 // (dist_cm, see Distortion); with the summed levels its rotor then gains
 // the first-order classical correction ln q += ⟨E_cd⟩/kT = c·T. NH3 takes
 // both: S° at 298.15 K comes within 0.02 J/(mol·K) of the tables (0.11
-// with the rigid rotor and harmonic ν2). H2O takes no distortion: its
-// expansion diverges by 1000 K (see distortion.go).
+// with the rigid rotor and harmonic ν2). H2O takes distortion together
+// with its vibration–rotation constants (alpha_cm, see Anharmonic), which
+// take back at high T what the first-order distortion overshoots there
+// (see distortion.go).
 //
 // Summed levels are the default (LevelsDefault, see summedByDefault)
 // wherever a species lists the constants for them; the rigid rotor with

@@ -27,6 +27,7 @@ var dunhamFields = map[string]string{
 	"harm_cm":    "harmonic wavenumbers ωi of a polyatomic's modes in cm⁻¹, in vib_cm's order",
 	"gll_cm":     "vibrational angular momentum constants g_tt in cm⁻¹, one per doubly degenerate mode",
 	"xij_cm":     "anharmonicity constants xij in cm⁻¹, the upper triangle row by row (x11 x12 x13 x22 x23 x33)",
+	"alpha_cm":   "vibration–rotation constants of a polyatomic with anharmonic levels: for each vib_cm mode in order, one αi per rot_cm constant (A B C, or B), in cm⁻¹; B_v = B_0 − Σ αi vi",
 	"dist_cm":    "quartic centrifugal distortion of a nonlinear molecule: the z axis (1, 2 or 3 in rot_cm's order), then ΔJ ΔJK ΔK δJ δK (Watson's A reduction) in cm⁻¹",
 	"ladder_cm":  "a mode by its observed levels: the vib_cm mode it replaces, the symmetry divisor, a colon, the levels from 0 (see ladder.go)",
 	"torsion_cm": "hindered internal rotations, each \"fundamental V0 F n σ\" (cm⁻¹, cm⁻¹, cm⁻¹, fold, symmetry) and any further potential terms as \"V n\" pairs, separated by ;",
@@ -89,7 +90,7 @@ func setDunhamField(sp *Species, key, value string) error {
 		return setLadder(sp, value)
 	case "dist_cm":
 		return setDistortion(sp, value)
-	case "harm_cm", "xij_cm", "gll_cm":
+	case "harm_cm", "xij_cm", "gll_cm", "alpha_cm":
 		return setAnharmonic(sp, key, value)
 	case "D0_cm":
 		x, err := dissocRange.parse(value)
@@ -295,6 +296,14 @@ func setAnharmonic(sp *Species, key, value string) error {
 		sp.Anharmonic = &Anharmonic{}
 	}
 	a := sp.Anharmonic
+	if key == "alpha_cm" {
+		xs, err := parseNumbers(value, alphaRange, 3*maxAnharmonicModes)
+		if err != nil {
+			return err
+		}
+		a.AlphaCm = xs
+		return nil
+	}
 	if key == "gll_cm" {
 		xs, err := parseNumbers(value, xijRange, maxAnharmonicModes)
 		if err != nil {

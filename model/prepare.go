@@ -37,6 +37,11 @@ func (sp *Species) Prepare() error {
 	case Nonlinear:
 		sp.lnRotClassical = 0.5*math.Log(math.Pi) - math.Log(float64(sp.Symmetry)) - 0.5*math.Log(prod)
 	}
+	sp.rotQuantumK = 0
+	if sp.Rotor == Nonlinear {
+		a, b, c := sp.rotThetaK[0], sp.rotThetaK[1], sp.rotThetaK[2]
+		sp.rotQuantumK = (2*(a+b+c) - (a*b/c + b*c/a + c*a/b)) / 12
+	}
 	if sp.Homonuclear() && sp.Rotor != Linear {
 		return Errorf("model", "%s: spin weights apply to linear molecules only", sp.Formula)
 	}

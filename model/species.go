@@ -196,6 +196,9 @@ type Species struct {
 	lnNQ0 float64
 	// lnRotClassical is ln(√π/σ / √(ΘAΘBΘC)) or ln(1/(σΘ)).
 	lnRotClassical float64
+	// rotQuantumK is a nonlinear rotor's first quantum correction, in K:
+	// ln q_rot = ln q_classical + rotQuantumK/T (see rigidBodyRotor).
+	rotQuantumK float64
 	// frozenLnW is ln(g_i/(g_tot x_i)) of each frozen spin modification
 	// (0 for a weight or fraction of 0), and frozenLnMix Σ x_i of it: the
 	// constant terms of a frozen mixture's ln q (spinmod.go).

@@ -188,7 +188,7 @@ func (sp *Species) fillLn(s *State, tempK, lnT, presPa, lnP float64, tr Treatmen
 		if sp.Rotor == Linear {
 			s.Rot = sp.linearRotor(tempK, invT, lnT, tr.Rotation)
 		} else {
-			s.Rot = sp.rigidBodyRotor(lnT) // inlined: no call for most species
+			s.Rot = sp.rigidBodyRotor(lnT, invT, tr.Rotation) // inlined: no call for most species
 			if sp.distortionPerK != 0 && sp.summedLevels(tr) {
 				s.Rot = s.Rot.add(sp.distortionTerms(tempK))
 			}
@@ -260,10 +260,12 @@ func (sp *Species) FactorTreatments(tr Treatment) [4]string {
 		out[1] = "summed levels, v = 0 (" + sp.levelSource() + "), spin modifications frozen"
 	case levels:
 		out[1] = "summed levels, v = 0 (" + sp.levelSource() + ")"
-	case sp.Rotor == Nonlinear && sp.distortionPerK != 0 && sp.summedLevels(tr):
-		out[1] = "rigid rotor, classical, with first-order centrifugal distortion"
-	case sp.Rotor == Nonlinear:
+	case sp.Rotor == Nonlinear && tr.Rotation == RotationClassical:
 		out[1] = "rigid rotor, classical"
+	case sp.Rotor == Nonlinear && sp.distortionPerK != 0 && sp.summedLevels(tr):
+		out[1] = "rigid rotor, classical with first quantum correction, and first-order centrifugal distortion"
+	case sp.Rotor == Nonlinear:
+		out[1] = "rigid rotor, classical with first quantum correction"
 	case tr.Rotation == RotationClassical:
 		out[1] = "rigid rotor, classical"
 	case sp.SpinMod.Frozen:
@@ -278,6 +280,8 @@ func (sp *Species) FactorTreatments(tr Treatment) [4]string {
 		out[2] = "summed levels (anharmonic, vibration–rotation coupling)"
 	case sp.torsionLevels != nil && sp.summedLevels(tr):
 		out[2] = sp.hinderedText()
+	case sp.hasAnharmonic() && sp.summedLevels(tr) && sp.Anharmonic.AlphaCm != nil:
+		out[2] = "summed levels (anharmonic, xij; each level's own rotational constants, αi)"
 	case sp.hasAnharmonic() && sp.summedLevels(tr):
 		out[2] = "summed levels (anharmonic, xij)"
 	case len(sp.vibModes) > 0:

@@ -32,13 +32,33 @@ func (sp *Species) translation(lnT, lnP float64) Terms {
 const rotorSumLimit = 50
 
 // rigidBodyRotor returns the terms of an atom (none) or of a nonlinear
-// molecule (the classical limit). It is small enough to be inlined, so
-// that fill calls nothing for them.
-func (sp *Species) rigidBodyRotor(lnT float64) Terms {
+// rigid rotor: the classical limit, ln q = const + (3/2) ln T, with its
+// first quantum correction unless how asks for the classical rotor alone.
+//
+// The correction is the leading term of the high-temperature expansion
+// of the rigid asymmetric top's level sum (Stripp and Kirkwood, J. Chem.
+// Phys. 19, 1131 (1951), from memory):
+//
+//	q = q_classical · [1 + (1/12T)(2(ΘA+ΘB+ΘC) − ΘAΘB/ΘC − ΘBΘC/ΘA − ΘCΘA/ΘB) + O(Θ²/T²)]
+//
+// which for a spherical top is the familiar e^{Θ/4T}. Taken as
+// ln q += a/T, it leaves S and Cv unchanged (U gains −a/T, Cv nothing)
+// and lowers H − H(0) by R·a: the classical rotor's energy counts from
+// the bottom of a continuum, the quantum rotor's from its J = 0 level.
+// For H2O, a = 4.45 K, so H°(298.15) − H°(0) drops by 37 J/mol. The
+// test against an exact sum over the asymmetric top's levels is
+// TestRotorQuantumCorrection. It is small enough to be inlined, so that
+// fill calls nothing for these species.
+func (sp *Species) rigidBodyRotor(lnT, invT float64, how RotationTreatment) Terms {
 	var t Terms
 	if sp.Rotor == Nonlinear {
 		// ln q = const + (3/2) ln T: U = 3/2 and Cv = ∂(T·U)/∂T = 3/2.
 		t = Terms{LnQ: sp.lnRotClassical + 1.5*lnT, U: 1.5, Cv: 1.5}
+		if how != RotationClassical {
+			c := sp.rotQuantumK * invT
+			t.LnQ += c
+			t.U -= c
+		}
 	}
 	return t
 }

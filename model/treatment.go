@@ -38,7 +38,11 @@ func (sp *Species) Treatments(tempK, presPa float64, tr Treatment) TreatmentRepo
 		}
 		kinds = append(kinds, k)
 	case summed && sp.hasAnharmonic() && tr.Vibration == VibrationHarmonic:
-		kinds = append(kinds, "anharmonic vibration summed from xij")
+		k := "anharmonic vibration summed from xij"
+		if sp.Anharmonic.AlphaCm != nil {
+			k += ", with vibration–rotation coupling (αi)"
+		}
+		kinds = append(kinds, k)
 	}
 	if summed && tr.Vibration == VibrationHarmonic {
 		if len(sp.Torsions) > 0 {

@@ -113,7 +113,9 @@ func (v Validity) Notes(sp *Species) []Note {
 		case v.RotorSummed:
 			out = append(out, Note{Info, fmt.Sprintf("T/Θrot = %.3g: rotor levels summed one by one", v.TOverThetaRot)})
 		case sp.Rotor == Nonlinear && v.TOverThetaRot < 5:
-			out = append(out, Note{Caution, fmt.Sprintf("T/Θrot = %.3g: classical rotor is rough this close to Θrot", v.TOverThetaRot)})
+			out = append(out, Note{Caution, fmt.Sprintf("T/Θrot = %.3g: classical rotor is rough this close to Θrot, even with its first quantum correction", v.TOverThetaRot)})
+		case sp.Rotor == Nonlinear:
+			out = append(out, Note{Info, fmt.Sprintf("T/Θrot = %.3g: rotation classical, with its first quantum correction", v.TOverThetaRot)})
 		default:
 			out = append(out, Note{Info, fmt.Sprintf("T/Θrot = %.3g: rotation fully classical", v.TOverThetaRot)})
 		}

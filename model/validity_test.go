@@ -70,6 +70,7 @@ func TestValidityNotes(t *testing.T) {
 		{"rotor summed", "N2", 100, 101325, Info, "rotor levels summed"},
 		{"rotor classical", "N2", 300, 101325, Info, "rotation fully classical"},
 		{"nonlinear rotor near Θrot", "H2O", 150, 100, Caution, "classical rotor is rough"},
+		{"nonlinear rotor", "CH4", 300, 101325, Info, "rotation classical, with its first quantum correction"},
 		{"vibrations frozen", "N2", 300, 101325, Info, "vibrations frozen out"},
 		{"vibrations partly excited", "CO2", 300, 101325, Info, "vibrations partly excited"},
 		{"anharmonic drift", "CH4", 3000, 101325, Caution, "harmonic vibration drifts"},
