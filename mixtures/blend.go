@@ -142,10 +142,12 @@ const amountForms = "a mole fraction (0.21), mol % (21%), ppm, ppb, mass fractio
 
 // ParseBlend reads blend text such as "SiH4 2%, H2 500ppm, N2 bal": items
 // separated by commas, semicolons or new lines, each a species and an
-// amount. It is a front end to NewBlend.
+// amount. A species written alone, as the blend's only item ("N2"), is the
+// pure gas: it reads as "N2 bal". It is a front end to NewBlend.
 func ParseBlend(text string) (*Blend, error) {
 	var items []BlendItem
 	var offsets, lengths []int
+	lone := itemCount(text) == 1
 	start := 0
 	for i := 0; i <= len(text); i++ {
 		if i < len(text) && text[i] != ',' && text[i] != ';' && text[i] != '\n' {
@@ -161,8 +163,13 @@ func ParseBlend(text string) (*Blend, error) {
 		off += strings.Index(raw, trimmed)
 		fields := strings.Fields(trimmed)
 		if len(fields) < 2 {
+			if lone {
+				items = append(items, BlendItem{Species: fields[0], Amount: "bal"})
+				offsets, lengths = append(offsets, off), append(lengths, len(trimmed))
+				continue
+			}
 			return nil, &BlendError{Text: text, Token: trimmed, Offset: off, Index: len(items), Err: ErrSyntax,
-				Detail: "want SPECIES AMOUNT, where AMOUNT is " + amountForms}
+				Detail: "want SPECIES AMOUNT, where AMOUNT is " + amountForms + " (a species alone is the pure gas only when it is the whole blend)"}
 		}
 		items = append(items, BlendItem{Species: fields[0], Amount: strings.Join(fields[1:], " ")})
 		offsets, lengths = append(offsets, off), append(lengths, len(trimmed))
@@ -172,6 +179,17 @@ func ParseBlend(text string) (*Blend, error) {
 		return nil, err
 	}
 	return b, nil
+}
+
+// itemCount returns how many non-blank items blend text holds.
+func itemCount(text string) int {
+	n := 0
+	for _, part := range strings.FieldsFunc(text, func(r rune) bool { return r == ',' || r == ';' || r == '\n' }) {
+		if strings.TrimSpace(part) != "" {
+			n++
+		}
+	}
+	return n
 }
 
 // NewBlend builds a blend from items, such as the rows of a recipe or the

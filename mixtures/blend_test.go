@@ -49,6 +49,9 @@ func TestRequiredBlendExamples(t *testing.T) {
 			map[string]float64{"SiH4": 0.02, "H2": 500e-6, "N2": 1 - 0.02 - 500e-6}, 1e-12},
 		{"bare mole fractions", "N2 0.79, O2 0.21",
 			map[string]float64{"N2": 0.79, "O2": 0.21}, 1e-12},
+		// A species alone is the pure gas, as a person writes it.
+		{"a species alone", "N2", map[string]float64{"N2": 1}, 0},
+		{"a species alone with separators", " ;N2,\n", map[string]float64{"N2": 1}, 0},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
@@ -231,6 +234,7 @@ func TestBlendErrors(t *testing.T) {
 		{"psig as partial pressure", "N2 bal, O2 2 psig", 1e5, ErrSyntax, "O2 2 psig", "gauge"},
 		{"unknown unit", "N2 79 furlongs, O2 bal", 1e5, ErrSyntax, "N2 79 furlongs", "furlongs"},
 		{"no amount", "N2, O2 21%", 1e5, ErrSyntax, "N2", "SPECIES AMOUNT"},
+		{"two species alone", "N2, O2", 1e5, ErrSyntax, "N2", "whole blend"},
 		{"amount not a number", "N2 lots, O2 21%", 1e5, ErrSyntax, "N2 lots", "lots"},
 		{"partial pressure without total", "O2 0.2 bar, N2 bal", 0, ErrSyntax, "", "total pressure"},
 	}

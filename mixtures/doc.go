@@ -40,7 +40,8 @@
 // percent (30 wt% or 30 mass%), a partial pressure with a pressure unit
 // (0.2 bar, 150 Pa), or "bal" for the one balance species. Amounts that
 // sum to 100 % within 0.05 % are renormalised. A species listed twice is
-// one species: its amounts add, and it adds no mixing entropy.
+// one species: its amounts add, and it adds no mixing entropy. A species
+// alone, as the whole blend ("N2"), is the pure gas.
 //
 // Blend text is one front end: NewBlend builds the same Blend from
 // (species, amount) items, such as recipe rows or blend-file components,
