@@ -75,7 +75,9 @@ as analysed, or a premix:
 
 An amount with ± carries that standard uncertainty; "<L" (below a
 detection limit) is taken as L/2 with u = L/(2√3); an amount with
-neither is taken as exact. A mass may carry its own ± (a standard
+neither is taken as exact. A premix certified by mass gives its amounts
+in wt%% or kg/kg ("CH4 2.013 wt%% ±0.004 wt%%, N2 bal"), all of one
+parent on one basis. A mass may carry its own ± (a standard
 uncertainty); otherwise --mass-u applies. ASCII "+-" or "+/-" may stand
 for ±. The uncertainty of the molar masses comes from the IUPAC atomic
 weights, or from --atomic-weight for an element whose source the lab

@@ -287,7 +287,7 @@ func TestProcessPaneWeighed(t *testing.T) {
 		}
 	}
 	p.keys(t, "down", "enter", "ctrl+u")
-	for _, r := range "412 g N2 with O2 5wt%" {
+	for _, r := range "412 g N2 with O2 5wt%, Ar 3ppm" { // moles and mass mixed in one parent
 		p.keys(t, string(r))
 	}
 	p.keys(t, "enter")

@@ -51,13 +51,18 @@ type WeighedParent struct {
 	MassKg  float64
 	MassUKg float64 // < 0: the Weighing's MassUKg
 	Parts   []ParentPart
+	// ByMass: the parts' amounts are mass fractions (a premix certified
+	// in wt% or kg/kg), turned into mole fractions with the molar masses,
+	// whose uncertainty then counts twice: in MA and in the conversion.
+	ByMass bool
 }
 
 // ParentPart is one species of a parent gas.
 type ParentPart struct {
 	Species *model.Species
-	// X is the stated mole fraction and UX its standard uncertainty; for
-	// the balance they are found from the others.
+	// X is the stated mole fraction (mass fraction in a parent ByMass)
+	// and UX its standard uncertainty; for the balance they are found
+	// from the others.
 	X, UX   float64
 	Balance bool
 	// Limit: stated as below LimitX, taken as LimitX/2 with a rectangular
@@ -175,6 +180,7 @@ type gravimetry struct {
 }
 
 type gravParent struct {
+	byMass  bool  // the stated amounts are mass fractions
 	species []int // species index of each part
 	balance int   // index into species of the balance part
 	qAt     []int // position in q of each stated part (-1 for the balance)
@@ -227,6 +233,19 @@ func (g *gravimetry) state(q []float64) parentState {
 			}
 		}
 		y[p.species[p.balance]] = rest
+		if p.byMass {
+			// Mass fractions w to mole fractions: yₖ = (wₖ/Mₖ)/Σ wⱼ/Mⱼ.
+			sum := 0.0
+			for k, wk := range y {
+				if wk != 0 {
+					y[k] = wk / s.molM[k]
+					sum += y[k]
+				}
+			}
+			for k := range y {
+				y[k] /= sum
+			}
+		}
 		s.y[a] = y
 		for k, yk := range y {
 			s.mA[a] += yk * s.molM[k]
@@ -260,6 +279,10 @@ func (g *gravimetry) jacobian(jac *mat.Dense, q []float64) {
 	g.fractions(x, q)
 	jac.Zero()
 	for a, p := range g.parents {
+		if p.byMass {
+			g.massParentJacobian(jac, q, s, x, a)
+			continue
+		}
 		y := s.y[a]
 		// The mass.
 		for i := range ns {
@@ -295,6 +318,56 @@ func (g *gravimetry) jacobian(jac *mat.Dense, q []float64) {
 				jac.Set(i, g.elemAt+e, jac.At(i, g.elemAt+e)+(y[i]-x[i])/s.n*dnA)
 			}
 		}
+	}
+}
+
+// massParentJacobian adds parent a's sensitivities when its amounts are
+// mass fractions: it brings Nᵢ = mA wᵢ/Mᵢ of each species (wᵢ its mass
+// fraction, the balance's 1 − Σ of the stated ones), so that
+// ∂xᵢ/∂q = (∂Nᵢ/∂q − xᵢ ∂N/∂q)/N with ∂Nᵢ/∂mA = wᵢ/Mᵢ,
+// ∂Nᵢ/∂wₖ = mA(δᵢₖ/Mₖ − δᵢᵦ/Mᵦ) and ∂Nᵢ/∂Aₑ = −mA wᵢ νᵢₑ/Mᵢ².
+func (g *gravimetry) massParentJacobian(jac *mat.Dense, q []float64, s parentState, x []float64, a int) {
+	p := g.parents[a]
+	ns := len(g.species)
+	m := q[g.massAt+a]
+	w := make([]float64, ns) // the parent's mass fractions over all species
+	rest := 1.0
+	for i, at := range p.qAt {
+		if at >= 0 {
+			w[p.species[i]] = q[at]
+			rest -= q[at]
+		}
+	}
+	b := p.species[p.balance]
+	w[b] = rest
+	set := func(j int, dN func(i int) float64) {
+		total := 0.0
+		for i := range ns {
+			total += dN(i)
+		}
+		for i := range ns {
+			jac.Set(i, j, jac.At(i, j)+(dN(i)-x[i]*total)/s.n)
+		}
+	}
+	set(g.massAt+a, func(i int) float64 { return w[i] / s.molM[i] })
+	for pi, at := range p.qAt {
+		if at < 0 {
+			continue
+		}
+		k := p.species[pi]
+		set(at, func(i int) float64 {
+			d := 0.0
+			if i == k {
+				d += m / s.molM[k]
+			}
+			if i == b {
+				d -= m / s.molM[b]
+			}
+			return d
+		})
+	}
+	for e := range g.elements {
+		set(g.elemAt+e, func(i int) float64 { return -m * w[i] * g.nu[i][e] / (s.molM[i] * s.molM[i]) })
 	}
 }
 
@@ -350,7 +423,7 @@ func (w Weighing) build() (*gravimetry, []float64, []float64, error) {
 	}
 	g.partAt = len(q)
 	for _, p := range w.Parents {
-		gp := gravParent{}
+		gp := gravParent{byMass: p.ByMass}
 		for i, pt := range p.Parts {
 			gp.species = append(gp.species, index[pt.Species.Formula])
 			if pt.Balance {
@@ -475,8 +548,11 @@ func (w Weighing) Solve() (*WeighedResult, error) {
 		Table{Name: "composition", Title: "Composition (mole fractions)", RowName: "species", RowLabels: g.species, Rows: compRows},
 		Table{Name: "budget", Title: "Standard uncertainty by source", RowName: "species", RowLabels: g.species, Rows: budgetRows})
 
-	var exact, limits []string
+	var exact, limits, byMass []string
 	for a, p := range w.Parents {
+		if p.ByMass {
+			byMass = append(byMass, fmt.Sprintf("parent %d", a+1))
+		}
 		for _, pt := range p.Parts {
 			where := fmt.Sprintf("%s in parent %d", pt.Species.Formula, a+1)
 			switch {
@@ -492,6 +568,9 @@ func (w Weighing) Solve() (*WeighedResult, error) {
 	}
 	if len(exact) > 0 {
 		r.note("amounts given without ± are taken as exact (u = 0): " + strings.Join(exact, ", "))
+	}
+	if len(byMass) > 0 {
+		r.note("amounts by mass, turned into mole fractions with the molar masses (yᵢ = (wᵢ/Mᵢ)/Σ wⱼ/Mⱼ), whose uncertainty is carried through the conversion too: " + strings.Join(byMass, ", "))
 	}
 	var given []string
 	for _, a := range w.AtomicWeights {

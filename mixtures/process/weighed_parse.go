@@ -105,11 +105,23 @@ func ParseParent(cat *model.Catalogue, s string) (WeighedParent, error) {
 		list[0] += " bal" // a pure gas
 	}
 	seen := map[string]bool{}
+	var byMole, byMass string // the first item stated on each basis
 	for _, it := range list {
-		part, err := parsePart(cat, strings.TrimSpace(it))
+		part, basis, err := parsePart(cat, strings.TrimSpace(it))
 		if err != nil {
 			return WeighedParent{}, model.Errorf("process", "parent %s: %v", model.Quote(s), err)
 		}
+		switch {
+		case basis == mixtures.MassFraction && byMass == "":
+			byMass = strings.TrimSpace(it)
+		case basis == mixtures.MoleFraction && byMole == "":
+			byMole = strings.TrimSpace(it)
+		}
+		if byMass != "" && byMole != "" {
+			return WeighedParent{}, model.Errorf("process", "parent %s: %s is by moles and %s by mass; give one parent's amounts all by moles (%%, ppm) or all by mass (wt%%, kg/kg)",
+				model.Quote(s), model.Quote(byMole), model.Quote(byMass))
+		}
+		p.ByMass = byMass != ""
 		if seen[part.Species.Formula] {
 			return fail(part.Species.Formula + " is named twice")
 		}
@@ -140,11 +152,12 @@ func cutMass(s string) (mass, rest string, ok bool) {
 }
 
 // parsePart reads "SPECIES AMOUNT [± U]", "SPECIES <LIMIT" or
-// "SPECIES bal".
-func parsePart(cat *model.Catalogue, it string) (ParentPart, error) {
+// "SPECIES bal", and says whether the amount is by moles or by mass
+// (mixtures.Balance for the balance, which states neither).
+func parsePart(cat *model.Catalogue, it string) (ParentPart, mixtures.Basis, error) {
 	fields := strings.Fields(it)
 	if len(fields) < 2 {
-		return ParentPart{}, model.Errorf("process", "item %s: want SPECIES AMOUNT, SPECIES <LIMIT or SPECIES bal", model.Quote(it))
+		return ParentPart{}, 0, model.Errorf("process", "item %s: want SPECIES AMOUNT, SPECIES <LIMIT or SPECIES bal", model.Quote(it))
 	}
 	sp, ok := cat.Lookup(fields[0])
 	if !ok {
@@ -152,56 +165,61 @@ func parsePart(cat *model.Catalogue, it string) (ParentPart, error) {
 		if sug := cat.Suggest(fields[0], 3); len(sug) > 0 {
 			hint = "did you mean " + strings.Join(sug, ", ") + "?"
 		}
-		return ParentPart{}, model.Errorf("process", "unknown species %s; %s", model.Quote(fields[0]), hint)
+		return ParentPart{}, 0, model.Errorf("process", "unknown species %s; %s", model.Quote(fields[0]), hint)
 	}
 	if _, err := model.ParseFormula(sp.Formula); err != nil {
-		return ParentPart{}, model.Errorf("process", "%s: its formula is needed for the molar mass: %v", model.Quote(fields[0]), err)
+		return ParentPart{}, 0, model.Errorf("process", "%s: its formula is needed for the molar mass: %v", model.Quote(fields[0]), err)
 	}
 	part := ParentPart{Species: sp}
 	amount := strings.TrimSpace(strings.TrimPrefix(it, fields[0]))
 	if low := strings.ToLower(amount); low == "bal" || low == "balance" {
 		part.Balance = true
-		return part, nil
+		return part, mixtures.Balance, nil
 	}
 	if lim, ok := strings.CutPrefix(amount, "<"); ok {
-		x, err := moleAmount(it, lim)
+		x, basis, err := parentAmount(it, lim)
 		if err != nil {
-			return ParentPart{}, err
+			return ParentPart{}, 0, err
 		}
 		if !(x > 0) {
-			return ParentPart{}, model.Errorf("process", "item %s: a limit must be above 0", model.Quote(it))
+			return ParentPart{}, 0, model.Errorf("process", "item %s: a limit must be above 0", model.Quote(it))
 		}
 		// ISO 6142-1: a component below a limit L is taken as L/2 with a
 		// rectangular distribution over [0, L].
 		part.Limit, part.LimitX = true, x
 		part.X, part.UX = x/2, x/(2*math.Sqrt(3))
-		return part, nil
+		return part, basis, nil
 	}
 	val, unc, hasU := strings.Cut(amount, "±")
-	x, err := moleAmount(it, val)
+	x, basis, err := parentAmount(it, val)
 	if err != nil {
-		return ParentPart{}, err
+		return ParentPart{}, 0, err
 	}
 	part.X = x
 	if hasU {
-		if part.UX, err = moleAmount(it, unc); err != nil {
-			return ParentPart{}, err
+		var uBasis mixtures.Basis
+		if part.UX, uBasis, err = parentAmount(it, unc); err != nil {
+			return ParentPart{}, 0, err
+		}
+		if uBasis != basis {
+			return ParentPart{}, 0, model.Errorf("process", "item %s: the amount and its uncertainty must be on one basis, both by moles or both by mass", model.Quote(it))
 		}
 		part.Stated = true
 	}
-	return part, nil
+	return part, basis, nil
 }
 
-// moleAmount reads an amount that must be a mole fraction.
-func moleAmount(item, s string) (float64, error) {
+// parentAmount reads an amount of a parent gas: a mole fraction (mol/mol,
+// %, ppm, ppb) or a mass fraction (kg/kg, wt%).
+func parentAmount(item, s string) (float64, mixtures.Basis, error) {
 	a, err := mixtures.ParseAmount(strings.TrimSpace(s))
 	if err != nil {
-		return 0, model.Errorf("process", "item %s: %v", model.Quote(item), err)
+		return 0, 0, model.Errorf("process", "item %s: %v", model.Quote(item), err)
 	}
-	if a.Basis != mixtures.MoleFraction {
-		return 0, model.Errorf("process", "item %s: amounts in a parent gas are by moles (mol/mol, %%, ppm, ppb)", model.Quote(item))
+	if a.Basis != mixtures.MoleFraction && a.Basis != mixtures.MassFraction {
+		return 0, 0, model.Errorf("process", "item %s: amounts in a parent gas are by moles (mol/mol, %%, ppm, ppb) or by mass (kg/kg, wt%%)", model.Quote(item))
 	}
-	return a.Value, nil
+	return a.Value, a.Basis, nil
 }
 
 // tooLongN refuses text longer than n characters.

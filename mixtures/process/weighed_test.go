@@ -3,6 +3,7 @@ package process
 import (
 	"math"
 	"math/rand/v2"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -160,7 +161,8 @@ func TestWeighedFiniteDifference(t *testing.T) {
 		"12.345 g CO2 with H2O 20ppm ±4ppm, N2 <10ppm",
 		"2.0513 g of CH4 1.002% ±0.003%, N2 bal",
 		"780.25 g N2 with O2 <5ppm, H2O 3ppm ±1ppm, Ar 15ppm ±5ppm",
-		"40.1 g ±0.02 g Ar")
+		"40.1 g ±0.02 g Ar",
+		"5.02 g CH4 2.013 wt% ±0.004 wt%, CO2 <0.01 wt%, N2 bal") // a premix certified by mass
 	r, err := w.Solve()
 	if err != nil {
 		t.Fatal(err)
@@ -222,6 +224,51 @@ func TestWeighedLimitRule(t *testing.T) {
 	}
 }
 
+// TestWeighedPremixByMass: a parent certified by mass brings
+// Nᵢ = mA wᵢ/Mᵢ of each species. Hand calculation, with the IUPAC 2021
+// conventional atomic weights (C 12.011, H 1.008, N 14.007; from memory):
+// 10 g of 2 wt% CH4 in N2 and 400 g of N2 give
+//
+//	M_CH4 = 16.043, M_N2 = 28.014 g/mol
+//	n_CH4 = 10 · 0.02/16.043 = 0.01246650 mol
+//	n_N2  = (10 · 0.98 + 400)/28.014 = 14.62840 mol
+//	x_CH4 = 0.000851486, and the premix's molar mass 27.60208 g/mol.
+//
+// The same premix stated by moles (3.4409 % CH4, the same gas) gives the
+// same composition.
+func TestWeighedPremixByMass(t *testing.T) {
+	w := mustParents(t, 4e-6, "10 g CH4 2 wt%, N2 bal", "400 g N2")
+	if !w.Parents[0].ByMass || w.Parents[1].ByMass {
+		t.Fatalf("ByMass = %v, %v; want the premix only", w.Parents[0].ByMass, w.Parents[1].ByMass)
+	}
+	r, err := w.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if x, _ := fractionOfWeighed(r, "CH4"); math.Abs(x/0.000851486-1) > 1e-6 {
+		t.Errorf("x(CH4) = %.9g, want 0.000851486 (hand calculation)", x)
+	}
+	parents := r.tables[0]
+	if m := parents.Rows[0][2].SI * 1e3; math.Abs(m-27.60208) > 1e-5 {
+		t.Errorf("premix molar mass %.7g g/mol, want 27.60208", m)
+	}
+	// By moles: y = (0.02/16.043)/(0.02/16.043 + 0.98/28.014).
+	yMol := (0.02 / 16.043) / (0.02/16.043 + 0.98/28.014)
+	w2 := mustParents(t, 4e-6, "10 g CH4 "+strconv.FormatFloat(100*yMol, 'g', 17, 64)+"%, N2 bal", "400 g N2")
+	r2, err := w2.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	x1, _ := fractionOfWeighed(r, "CH4")
+	x2, _ := fractionOfWeighed(r2, "CH4")
+	if math.Abs(x1/x2-1) > 1e-12 {
+		t.Errorf("by mass x = %.12g, by moles %.12g", x1, x2)
+	}
+	if !strings.Contains(strings.Join(r.Notes(), " "), "amounts by mass") {
+		t.Errorf("notes %q should say the amounts were by mass", r.Notes())
+	}
+}
+
 func TestParseParent(t *testing.T) {
 	cat := model.Builtin()
 	for _, tt := range []struct {
@@ -261,7 +308,9 @@ func TestParseParent(t *testing.T) {
 		{"25 furlongs CO2", "unknown unit"},
 		{"0 g CO2", "above 0"},
 		{"25 g Unobtainium", "unknown species"},
-		{"25 g N2 with O2 5wt%", "by moles"},
+		{"25 g N2 with O2 0.2 bar", "by moles (mol/mol, %, ppm, ppb) or by mass"},
+		{"25 g N2 with O2 5wt%, Ar 3ppm", "all by moles (%, ppm) or all by mass"},
+		{"25 g CH4 2 wt% ± 10ppm, N2 bal", "on one basis"},
 		{"25 g CH4 2%, N2 3%", "one balance"},
 		{"25 g CH4 2%, N2 bal, Ar bal", "one balance"},
 		{"25 g CH4 60%, CO2 50%, N2 bal", "nothing for the balance"},
