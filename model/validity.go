@@ -16,8 +16,11 @@ type Validity struct {
 	// TOverThetaRot is T over the largest rotational temperature; zero
 	// for atoms, which have no rotation.
 	TOverThetaRot float64
-	// TOverThetaVib is T over the lowest vibrational temperature; zero for
-	// atoms.
+	// TOverThetaVib is T over the lowest vibrational temperature of the
+	// modes taken as harmonic under the default treatment (a mode summed
+	// as a hindered rotor or from its ladder is left out: C2F6's 68 cm⁻¹
+	// torsion does not make its 216 cm⁻¹ bend "drift" at room
+	// temperature); zero for atoms, and for a molecule with no such mode.
 	TOverThetaVib float64
 	// TOverBoiling is T over the normal boiling point; zero if unknown.
 	TOverBoiling float64
@@ -45,8 +48,8 @@ func (sp *Species) Validity(tempK, presPa float64) Validity {
 		v.TOverThetaRot = tempK / floats.Max(sp.rotThetaK)
 		v.RotorSummed = sp.Rotor == Linear && tempK < rotorSumLimit*sp.rotThetaK[0]
 	}
-	if len(sp.vibThetaK) > 0 {
-		v.TOverThetaVib = tempK / floats.Min(sp.vibThetaK)
+	if theta := sp.lowestHarmonicThetaK(); theta > 0 {
+		v.TOverThetaVib = tempK / theta
 	}
 	if sp.BoilingK > 0 {
 		v.TOverBoiling = tempK / sp.BoilingK
@@ -57,6 +60,24 @@ func (sp *Species) Validity(tempK, presPa float64) Validity {
 		v.PresOverSat = math.Exp(max(math.Log(presPa)-lnSat, -700))
 	}
 	return v
+}
+
+// lowestHarmonicThetaK returns the lowest vibrational temperature among
+// the modes the default treatment takes as harmonic, or 0 if none.
+func (sp *Species) lowestHarmonicThetaK() float64 {
+	if len(sp.vibThetaK) == 0 {
+		return 0
+	}
+	if sp.torsionLevels == nil || !sp.summedLevels(Treatment{}) {
+		return floats.Min(sp.vibThetaK)
+	}
+	lowest := 0.0
+	for _, m := range sp.vibModesHindered {
+		if lowest == 0 || m.thetaK < lowest {
+			lowest = m.thetaK
+		}
+	}
+	return lowest
 }
 
 // troutonEntropyOverR is the entropy of vaporisation at the normal boiling
@@ -120,7 +141,7 @@ func (v Validity) Notes(sp *Species) []Note {
 			out = append(out, Note{Info, fmt.Sprintf("T/Θrot = %.3g: rotation fully classical", v.TOverThetaRot)})
 		}
 	}
-	if len(sp.vibThetaK) > 0 {
+	if v.TOverThetaVib > 0 {
 		switch {
 		case v.TOverThetaVib > 1.5 && sp.vibrationSummed():
 			out = append(out, Note{Info, fmt.Sprintf("T/Θvib = %.3g: vibrations summed over their anharmonic levels", v.TOverThetaVib)})

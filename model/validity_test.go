@@ -118,6 +118,39 @@ func TestValidityQuiet(t *testing.T) {
 	}
 }
 
+// TestValidityLeavesOutTorsions: the harmonic drift note counts only the
+// modes that stay harmonic. Hexafluoroethane's 68 cm⁻¹ torsion (Θ 98 K)
+// is summed as a hindered rotor, so at room temperature its lowest
+// harmonic mode is the 216 cm⁻¹ bend (Θ 311 K): no caution at 295 K, a
+// caution at 600 K. Propane likewise: its torsions at 216 and 268 cm⁻¹
+// are rotors, its lowest harmonic mode 369 cm⁻¹ (Θ 531 K).
+func TestValidityLeavesOutTorsions(t *testing.T) {
+	drift := func(f string, tempK float64) bool {
+		sp := mustSpecies(t, f)
+		for _, n := range sp.Validity(tempK, 1e5).Notes(sp) {
+			if n.Severity == Caution && strings.Contains(n.Text, "drifts") {
+				return true
+			}
+		}
+		return false
+	}
+	for _, tt := range []struct {
+		formula string
+		tempK   float64
+		want    bool
+	}{
+		{"C2F6", 295, false}, {"C2F6", 600, true}, {"C3H8", 500, false}, {"C3H8", 900, true},
+	} {
+		if got := drift(tt.formula, tt.tempK); got != tt.want {
+			t.Errorf("%s at %g K: harmonic drift caution %v, want %v", tt.formula, tt.tempK, got, tt.want)
+		}
+	}
+	sp := mustSpecies(t, "C2F6")
+	if got, want := sp.Validity(295, 1e5).TOverThetaVib, 295/WavenumberToKelvin(216); math.Abs(got/want-1) > 1e-12 {
+		t.Errorf("C2F6 T/Θvib at 295 K = %g, want %g (the 216 cm⁻¹ bend)", got, want)
+	}
+}
+
 func TestSeverityString(t *testing.T) {
 	for s, want := range map[Severity]string{Info: "note", Caution: "caution", Invalid: "outside model"} {
 		if s.String() != want {
