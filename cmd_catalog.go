@@ -66,11 +66,12 @@ func (a *app) cmdCatalog(g *globalOpts, args []string) error {
 		sp, ok := cat.Lookup(rest[0])
 		if !ok {
 			const more = "zmix catalog lists every species, and --species FILE adds others"
-			hint := more
-			if h, ok := cat.IsomerHint(rest[0]); ok {
-				hint = h
-			} else if sug := cat.Suggest(rest[0], 3); len(sug) > 0 {
-				hint = "did you mean " + strings.Join(sug, ", ") + "? (" + more + ")"
+			hint := cat.UnknownHint(rest[0])
+			switch {
+			case hint == "":
+				hint = more
+			case strings.HasPrefix(hint, "did you mean"):
+				hint += " (" + more + ")"
 			}
 			return badInput("unknown species %s; %s", model.Quote(rest[0]), hint)
 		}

@@ -392,11 +392,9 @@ func (b *Blend) lookup(cat *model.Catalogue) ([]*model.Species, error) {
 	for i, it := range b.Items {
 		sp, ok := cat.Lookup(it.Key)
 		if !ok {
-			detail := "not in the catalogue"
-			if hint, ok := cat.IsomerHint(it.Key); ok {
-				detail = hint
-			} else if sug := cat.Suggest(it.Key, 3); len(sug) > 0 {
-				detail = "did you mean " + strings.Join(sug, ", ") + "?"
+			detail := cat.UnknownHint(it.Key)
+			if detail == "" {
+				detail = "not in the catalogue"
 			}
 			return nil, &BlendError{Text: b.Text, Token: it.Key, Offset: it.Offset, Index: it.Index, Origin: it.Origin, Err: ErrUnknownSpecies, Detail: detail}
 		}

@@ -295,3 +295,31 @@ func TestCatalogueLookup(t *testing.T) {
 		t.Errorf("Search(meth) first = %v, want CH4", got)
 	}
 }
+
+// TestAbsentSpecies: a gas the catalogue is known to lack is named with
+// the reason, under its formula, its prefixed formula and its names,
+// until a species file adds it.
+func TestAbsentSpecies(t *testing.T) {
+	c := Builtin()
+	for _, key := range []string{"c-C4F8", "C4F8", "octafluorocyclobutane", "RC318", " c-c4f8 "} {
+		h := c.UnknownHint(key)
+		if !strings.Contains(h, "not in the built-in catalogue") || !strings.Contains(h, "--species FILE") {
+			t.Errorf("UnknownHint(%q) = %q, want the reason c-C4F8 is missing", key, h)
+		}
+	}
+	if h := c.UnknownHint("C4H10"); !strings.Contains(h, "n-C4H10") {
+		t.Errorf("UnknownHint(C4H10) = %q, want the isomers", h)
+	}
+	if h := c.UnknownHint("Xq"); !strings.HasPrefix(h, "did you mean") {
+		t.Errorf("UnknownHint(Xq) = %q, want the nearest names", h)
+	}
+	list, err := ParseCatalogue("ring.cat", strings.NewReader("[c-C4F8]\nname = octafluorocyclobutane\nrotor = nonlinear\nrot_cm = 0.04 0.03 0.02 | test fixture\n"+
+		"vib_cm = 1000x5 900x5 500x5 400x5 200x5 100x5 | test fixture\ndHf0_kJ = -1500 | test fixture\n"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	with := newCatalogue(append(append([]*Species(nil), c.All()...), list...))
+	if _, ok := with.AbsentHint("C4F8"); ok {
+		t.Error("with c-C4F8 added by a species file, AbsentHint still says it is missing")
+	}
+}

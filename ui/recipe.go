@@ -45,6 +45,9 @@ type recipePane struct {
 	search field
 	hits   []*model.Species
 	hit    int
+	// absent is why the catalogue lacks the gas a query names (c-C4F8),
+	// when it is one it is known to lack.
+	absent string
 	// nearest says the hits are the names nearest a query that matched
 	// nothing; beforeEntries is the recipe when an amount was opened.
 	nearest       bool
@@ -253,8 +256,14 @@ func (p *recipePane) stopNaming(keep bool) {
 // offers the nearest names instead, as the commands' "did you mean" does.
 func (p *recipePane) findHits() {
 	q := p.search.value()
-	p.hits, p.hit, p.nearest = p.c.Catalogue.Search(q), 0, false
+	p.hits, p.hit, p.nearest, p.absent = p.c.Catalogue.Search(q), 0, false, ""
 	if len(p.hits) > 0 || strings.TrimSpace(q) == "" {
+		return
+	}
+	// A gas the catalogue is known to lack says why, rather than offering
+	// a look-alike.
+	if why, ok := p.c.Catalogue.AbsentHint(q); ok {
+		p.absent = why
 		return
 	}
 	for _, f := range p.c.Catalogue.Suggest(q, 3) {
@@ -412,6 +421,10 @@ func (p *recipePane) searchLines() []string {
 		lines = append(lines, s.Muted.Render(l))
 	}
 	switch {
+	case p.absent != "":
+		for _, l := range report.Wrap(p.c.Text(p.absent), max(p.w-2, 10)) {
+			lines = append(lines, s.Error.Render("  "+l))
+		}
 	case len(p.hits) == 0:
 		lines = append(lines, s.Error.Render("  no match in the catalogue"))
 	case p.nearest:

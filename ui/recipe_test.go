@@ -222,6 +222,21 @@ func TestRecipeSearchSuggestsNearest(t *testing.T) {
 	}
 }
 
+// A query naming a gas the catalogue is known to lack says why, and offers
+// no look-alike to add by mistake.
+func TestRecipeSearchSaysWhyAbsent(t *testing.T) {
+	p, b := testRecipe(t)
+	recipeKeys(p, b, "a")
+	recipeType(p, b, "C4F8")
+	if len(p.hits) != 0 || !strings.Contains(p.View(), "not in the built-in") || !strings.Contains(p.View(), "--species FILE") {
+		t.Fatalf("hits for C4F8 = %d; view:\n%s", len(p.hits), p.View())
+	}
+	recipeKeys(p, b, "enter")
+	if len(b.entries) != 4 {
+		t.Errorf("enter on no hits added a row: %d entries", len(b.entries))
+	}
+}
+
 // The new row's amount is ready to type; enter on an empty amount asks for
 // one and keeps the field open; after the amount, the row stays marked;
 // esc on a new row takes it back out.

@@ -68,11 +68,9 @@ func ParseTarget(cat *model.Catalogue, s string) (Target, error) {
 	}
 	sp, ok := cat.Lookup(fields[0])
 	if !ok {
-		hint := "it is not in the catalogue"
-		if h, ok := cat.IsomerHint(fields[0]); ok {
-			hint = h
-		} else if sug := cat.Suggest(fields[0], 3); len(sug) > 0 {
-			hint = "did you mean " + strings.Join(sug, ", ") + "?"
+		hint := cat.UnknownHint(fields[0])
+		if hint == "" {
+			hint = "it is not in the catalogue"
 		}
 		return Target{}, model.Errorf("process", "target %s: unknown species %s; %s", model.Quote(s), model.Quote(fields[0]), hint)
 	}

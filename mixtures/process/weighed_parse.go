@@ -161,9 +161,9 @@ func parsePart(cat *model.Catalogue, it string) (ParentPart, mixtures.Basis, err
 	}
 	sp, ok := cat.Lookup(fields[0])
 	if !ok {
-		hint := "it is not in the catalogue"
-		if sug := cat.Suggest(fields[0], 3); len(sug) > 0 {
-			hint = "did you mean " + strings.Join(sug, ", ") + "?"
+		hint := cat.UnknownHint(fields[0])
+		if hint == "" {
+			hint = "it is not in the catalogue"
 		}
 		return ParentPart{}, 0, model.Errorf("process", "unknown species %s; %s", model.Quote(fields[0]), hint)
 	}
