@@ -66,6 +66,12 @@ func TestRecalledStandardValues(t *testing.T) {
 		{"B2H6", 232.11, 56.90, 0.3, 0.015, "NBS tables 1982, B2H6, from memory"},
 		// No Cp° is recalled with confidence (cp 0: S° only).
 		{"SiH2Cl2", 286.72, 0, 0.3, 0, "NIST-JANAF, SiH2Cl2, from memory"},
+		// The etch and chamber-clean gases that predate issue 10, S° only
+		// (their Cp° is not recalled with confidence); CF4's S° is
+		// recalled to about 0.2.
+		{"SF6", 291.52, 0, 0.3, 0, "NIST-JANAF, SF6, from memory"},
+		{"CF4", 261.42, 0, 0.3, 0, "NIST-JANAF, CF4, from memory"},
+		{"NF3", 260.77, 0, 0.3, 0, "NIST-JANAF, NF3, from memory"},
 	}
 	for _, tt := range tests {
 		sp := mustSpecies(t, tt.formula)
