@@ -19,13 +19,14 @@ type stateConfig struct {
 	std      mixtures.StdPressure
 	format   outputFormat
 	allNotes bool
+	anatomy  bool
 	ascii    bool
 }
 
 func (a *app) cmdState(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix state")
 	var blendSpec, tempText, presText, stdText string
-	var asJSON, asCSV, allNotes bool
+	var asJSON, asCSV, allNotes, anatomy bool
 	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&tempText, "temp", "", "temperature `T` with a unit: K, C, F or R")
 	fs.StringVar(&presText, "pres", "", "total pressure `P` with a unit: Pa, kPa, MPa, bar, mbar, atm, Torr, psi, barg, psig")
@@ -33,6 +34,7 @@ func (a *app) cmdState(g *globalOpts, args []string) error {
 	fs.BoolVar(&asJSON, "json", false, "write one JSON object")
 	fs.BoolVar(&asCSV, "csv", false, "write CSV: a header row and one row")
 	fs.BoolVar(&allNotes, "all-notes", false, "list every validity figure, not only the cautions")
+	fs.BoolVar(&anatomy, "anatomy", false, "take each species apart: the S and Cp of translation, rotation, vibration and electronic levels, their treatment, the characteristic temperatures")
 	g.register(fs, false)
 	if err := parseOnlyFlags(fs, "state", args); err != nil {
 		return err
@@ -50,7 +52,7 @@ func (a *app) cmdState(g *globalOpts, args []string) error {
 	if err != nil {
 		return err
 	}
-	cfg.format, cfg.allNotes, cfg.ascii = format, allNotes, g.ascii
+	cfg.format, cfg.allNotes, cfg.anatomy, cfg.ascii = format, allNotes, anatomy, g.ascii
 	cat, err := g.catalogue()
 	if err != nil {
 		return err
@@ -90,14 +92,18 @@ func computeState(cat *model.Catalogue, cfg stateConfig) (*report.StateReport, e
 	if err := report.CheckFinite(&st); err != nil {
 		return nil, badInput("%s", model.UserMessage(err))
 	}
-	return &report.StateReport{
+	rep := &report.StateReport{
 		Label:    cfg.src.label(),
 		State:    &st,
 		PresText: cfg.pres.text,
 		Gauge:    cfg.pres.Gauge,
 		Cautions: mixtures.Cautions(mix, cfg.pres.Pa),
 		Notes:    mixtures.Notes(&st, cfg.allNotes),
-	}, nil
+	}
+	if cfg.anatomy {
+		rep.Anatomy = report.Anatomy(&st)
+	}
+	return rep, nil
 }
 
 func (a *app) printState(cat *model.Catalogue, cfg stateConfig) error {

@@ -145,6 +145,7 @@ func (p *anatomyPane) render() []string {
 	term := &p.b.state.Species[i]
 	sp := term.Species
 	st := &term.State
+	a := report.AnatomyOf(term)
 	n := len(p.b.state.Species)
 	addWrapped(s.Title.Render, "", fmt.Sprintf("%s, %s: x %s at pᵢ %s, %s K", sp.Formula, sp.Name, report.Sig(term.X, 4), report.PressureAuto(term.PartialPresPa), report.Short(st.TempK, 6)))
 	if n > 1 {
@@ -153,21 +154,32 @@ func (p *anatomyPane) render() []string {
 
 	const lw, vw = 13, 13
 	add(s.Label.Render(padRight("", lw) + padLeft(t("S J/(mol·K)"), vw) + padLeft(t("Cp J/(mol·K)"), vw+1)))
-	for _, f := range st.Breakdown() {
+	for _, f := range a.Factors {
 		mark := ""
 		if f.Name == "translation" {
 			mark = " *"
 		}
 		add(s.Label.Render(padRight(f.Name, lw)) + s.Value.Render(padLeft(report.Fixed(f.SJPerMolK, 3), vw)+padLeft(report.Fixed(f.CpJPerMolK, 3), vw+1)) + mark)
 	}
-	add(s.Label.Render(padRight("total", lw)) + s.Value.Render(padLeft(report.Fixed(st.SJPerMolK, 3), vw)+padLeft(report.Fixed(st.CpJPerMolK, 3), vw+1)))
+	add(s.Label.Render(padRight("total", lw)) + s.Value.Render(padLeft(report.Fixed(a.TotalS, 3), vw)+padLeft(report.Fixed(a.TotalCp, 3), vw+1)))
 	addWrapped(s.Muted.Render, "", "* Cp = Cv + R: the R, the P dV work of heating at constant pressure, is booked with translation.")
 
 	add("")
-	p.treatment(sp, st, term.PartialPresPa, addWrapped)
+	addWrapped(s.Label.Render, "", "Treatment: "+a.Treatment)
+	for _, f := range a.Factors {
+		addWrapped(s.Muted.Render, "  ", f.Name+": "+f.Treatment)
+	}
+	if line := a.OverRigidHarmonicLine(); line != "" {
+		addWrapped(s.Muted.Render, "  ", line)
+	}
 
 	add("")
-	p.thetas(sp, addLabeled)
+	addLabeled("Θrot", a.RotorLine())
+	addLabeled("Θvib", a.VibLine())
+	addLabeled("Θel", a.ElecLine())
+	if a.BoilingK > 0 {
+		addLabeled("Tb", report.Sig(a.BoilingK, 5)+" K at 1 atm")
+	}
 
 	add("")
 	add(s.Label.Render("Does the model hold here?"))
@@ -192,31 +204,6 @@ func (p *anatomyPane) render() []string {
 	return lines
 }
 
-// treatment says how the species is modelled, factor by factor, and what
-// that adds over the rigid rotor with harmonic vibration; the facts come
-// from the model.
-func (p *anatomyPane) treatment(sp *model.Species, st *model.State, presPa float64, addWrapped func(func(...string) string, string, string)) {
-	s := p.c.Styles
-	r := sp.Treatments(st.TempK, presPa, model.Treatment{})
-	addWrapped(s.Label.Render, "", "Treatment: "+r.Kind)
-	names := [4]string{"translation", "rotation", "vibration", "electronic"}
-	for i, f := range r.Factors {
-		addWrapped(s.Muted.Render, "  ", names[i]+": "+f)
-	}
-	if !r.RigidHarmonic {
-		addWrapped(s.Muted.Render, "  ", "over the rigid rotor and harmonic oscillator: S "+signed(r.DeltaSJPerMolK, 3)+", Cp "+signed(r.DeltaCpJPerMolK, 3)+" J/(mol·K)")
-	}
-}
-
-// signed formats a difference with its sign.
-func signed(x float64, decimals int) string {
-	f := report.Fixed(x, decimals)
-	if !strings.HasPrefix(f, "-") {
-		f = "+" + f
-	}
-	return f
-}
-
 func noteStyle(s *Styles, sev model.Severity) func(...string) string {
 	switch sev {
 	case model.Invalid:
@@ -225,40 +212,4 @@ func noteStyle(s *Styles, sev model.Severity) func(...string) string {
 		return s.Warning.Render
 	}
 	return s.Value.Render
-}
-
-// thetas writes the characteristic temperatures, each with its degeneracy.
-func (p *anatomyPane) thetas(sp *model.Species, addLabeled func(label, text string)) {
-	list := func(ks []float64, deg func(int) int) string {
-		parts := make([]string, len(ks))
-		for i, k := range ks {
-			parts[i] = report.Sig(k, 4)
-			if g := deg(i); g > 1 {
-				parts[i] += fmt.Sprintf(" ×%d", g)
-			}
-		}
-		return strings.Join(parts, ", ") + " K"
-	}
-	one := func(int) int { return 1 }
-	switch sp.Rotor {
-	case model.Atom:
-		addLabeled("Θrot", "none: an atom does not rotate")
-	default:
-		addLabeled("Θrot", fmt.Sprintf("%s (%s, σ = %d)", list(sp.RotThetaK(), one), sp.Rotor, sp.Symmetry))
-	}
-	if vib := sp.VibThetaK(); len(vib) > 0 {
-		addLabeled("Θvib", list(vib, func(i int) int { return sp.Vib[i].Degeneracy }))
-	} else {
-		addLabeled("Θvib", "none: no vibration")
-	}
-	el := sp.ElecThetaK()
-	ground := fmt.Sprintf("ground level g = %d", sp.Elec[0].Degeneracy)
-	if len(el) > 1 {
-		addLabeled("Θel", ground+"; then "+list(el[1:], func(i int) int { return sp.Elec[i+1].Degeneracy }))
-	} else {
-		addLabeled("Θel", ground+" only")
-	}
-	if sp.BoilingK > 0 {
-		addLabeled("Tb", report.Sig(sp.BoilingK, 5)+" K at 1 atm")
-	}
 }

@@ -20,6 +20,9 @@ type StateReport struct {
 	Gauge    bool   // the pressure was typed as gauge
 	Cautions []mixtures.Caution
 	Notes    []mixtures.StateNote
+	// Anatomy, when not nil, is each species taken apart (see
+	// SpeciesAnatomy), written after the species.
+	Anatomy []SpeciesAnatomy
 }
 
 // CheckFinite refuses a state with a non-finite figure, naming it, so
@@ -143,6 +146,9 @@ func WriteStateText(w io.Writer, r *StateReport) error {
 	}
 	sp.Write(w)
 	fmt.Fprintf(w, "  μᵢ = μᵢ°(T) + RT ln(xᵢP/P°), on the scale of the elements at 0 K\n\n")
+	if r.Anatomy != nil {
+		writeAnatomyText(w, r.Anatomy)
+	}
 
 	WriteNotes(w, r.Notes)
 	fmt.Fprintln(w)
@@ -187,6 +193,13 @@ func WriteStateJSON(w io.Writer, r *StateReport) error {
 	j.stateFields(r.State, r.Gauge, "  ")
 	j.buf = append(j.buf, ",\n"...)
 	j.realGas(r.State, "  ")
+	if r.Anatomy != nil {
+		j.buf = append(j.buf, ",\n"...)
+		var err error
+		if j.buf, err = appendAnatomyJSON(j.buf, r.Anatomy, "  "); err != nil {
+			return err
+		}
+	}
 	// The lists are left out when empty, as a reader of the file expects
 	// of an optional section.
 	if lines := CautionLines(r.Cautions); len(lines) > 0 {
@@ -214,10 +227,10 @@ func WriteStateCSV(w io.Writer, r *StateReport) error {
 	}
 	cw := csv.NewWriter(w)
 	row := make([]string, 0, 64)
-	if err := cw.Write(CSVHeader(row, r.State)); err != nil {
+	if err := cw.Write(anatomyCSVHeader(CSVHeader(row, r.State), r.Anatomy)); err != nil {
 		return err
 	}
-	if err := cw.Write(CSVRow(row[:0], r.State, r.Gauge)); err != nil {
+	if err := cw.Write(anatomyCSVRow(CSVRow(row[:0], r.State, r.Gauge), r.Anatomy)); err != nil {
 		return err
 	}
 	cw.Flush()
