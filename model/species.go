@@ -186,8 +186,9 @@ type Species struct {
 	// anharmonicDeferred, when set, makes them on first use instead.
 	anharmonicDeferred *deferredLevels
 	vibModesHindered   []vibTerm
-	distortionPerK     float64 // ln q_rot gains distortionPerK·T (see distortion.go)
-	spinBase           string  // the species a spin modification derives from, "" if none
+	vibReplacedBy      []string // per Vib mode: what replaces it when summed (VibReplacedBy)
+	distortionPerK     float64  // ln q_rot gains distortionPerK·T (see distortion.go)
+	spinBase           string   // the species a spin modification derives from, "" if none
 	// lnElecG0Levels is ln of the ground state's multiplicity in the
 	// level sum (0 for ²Π, whose spin components are levels of their own).
 	lnElecG0Levels float64

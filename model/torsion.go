@@ -183,17 +183,21 @@ func (lv *rovibLevels) torsionTerms(tempK, lnT float64) Terms {
 // prepareTorsions checks the torsions and builds their levels, and the
 // list of vibrational modes that remain harmonic beside them.
 func (sp *Species) prepareTorsions() error {
-	sp.torsionLevels, sp.vibModesHindered = nil, nil
+	sp.torsionLevels, sp.vibModesHindered, sp.vibReplacedBy = nil, nil, nil
 	if len(sp.Torsions) == 0 && len(sp.Ladders) == 0 {
 		return nil
 	}
+	sp.vibReplacedBy = make([]string, len(sp.Vib))
 	if len(sp.Torsions) > maxTorsions {
 		return Errorf("model", "%s: %d torsions; want at most %d", sp.Formula, len(sp.Torsions), maxTorsions)
 	}
 	if sp.Rotor != Nonlinear {
 		return Errorf("model", "%s: hindered internal rotations and level ladders need a nonlinear molecule", sp.Formula)
 	}
-	left := append([]VibMode(nil), sp.Vib...)
+	left := make([]int, len(sp.Vib)) // indices into Vib of the modes not yet replaced
+	for i := range left {
+		left[i] = i
+	}
 	for _, tor := range sp.Torsions {
 		if !barrierRange.contains(tor.BarrierCm) || !torsionFRange.contains(tor.FCm) || !foldRange.contains(float64(tor.Fold)) || !sigmaRange.contains(float64(tor.Symmetry)) || tor.Symmetry > tor.Fold {
 			return Errorf("model", "%s: torsion V0 %g cm⁻¹, F %g cm⁻¹, n %d, σ %d: want %s, %s, %s, and σ from 1 to n", sp.Formula, tor.BarrierCm, tor.FCm, tor.Fold, tor.Symmetry, barrierRange, torsionFRange, foldRange)
@@ -205,15 +209,12 @@ func (sp *Species) prepareTorsions() error {
 				return Errorf("model", "%s: torsion term V %g cm⁻¹, n %d: want %s, %s, and n a multiple of σ %d", sp.Formula, t.Cm, t.Fold, termRange, foldRange, tor.Symmetry)
 			}
 		}
-		found := false
-		for i, v := range left {
-			if v.WavenumberPerCm == tor.ReplacesCm && v.Degeneracy == 1 {
-				left = append(left[:i], left[i+1:]...)
-				found = true
-				break
-			}
+		i := slices.IndexFunc(left, func(j int) bool { v := sp.Vib[j]; return v.WavenumberPerCm == tor.ReplacesCm && v.Degeneracy == 1 })
+		if i >= 0 {
+			sp.vibReplacedBy[left[i]] = "hindered rotor"
+			left = slices.Delete(left, i, i+1)
 		}
-		if !found {
+		if i < 0 {
 			return Errorf("model", "%s: torsion replaces %g cm⁻¹, which vib_cm does not list as a single mode", sp.Formula, tor.ReplacesCm)
 		}
 		sp.torsionLevels = append(sp.torsionLevels, tor.levels())
@@ -225,17 +226,30 @@ func (sp *Species) prepareTorsions() error {
 		if !dissocRange.contains(sp.DissociationCm) {
 			return Errorf("model", "%s: a ladder needs D0_cm, %s, where its continuation stops", sp.Formula, dissocRange)
 		}
-		i := slices.IndexFunc(left, func(v VibMode) bool { return v.WavenumberPerCm == l.ReplacesCm && v.Degeneracy == 1 })
+		i := slices.IndexFunc(left, func(j int) bool { v := sp.Vib[j]; return v.WavenumberPerCm == l.ReplacesCm && v.Degeneracy == 1 })
 		if i < 0 {
 			return Errorf("model", "%s: ladder replaces %g cm⁻¹, which vib_cm does not list as a single mode", sp.Formula, l.ReplacesCm)
 		}
+		sp.vibReplacedBy[left[i]] = "level ladder"
 		left = slices.Delete(left, i, i+1)
 		sp.torsionLevels = append(sp.torsionLevels, l.levels(sp.DissociationCm))
 	}
-	for _, v := range left {
+	for _, j := range left {
+		v := sp.Vib[j]
 		sp.vibModesHindered = addVibTerm(sp.vibModesHindered, WavenumberToKelvin(v.WavenumberPerCm), v.Degeneracy)
 	}
 	return nil
+}
+
+// VibReplacedBy says, for mode i of Vib, what stands for it when the
+// levels are summed (the default treatment): "hindered rotor" for a
+// torsion, "level ladder" for a mode given by its levels, "" for a
+// harmonic mode.
+func (sp *Species) VibReplacedBy(i int) string {
+	if i < 0 || i >= len(sp.vibReplacedBy) || !sp.summedLevels(Treatment{}) {
+		return ""
+	}
+	return sp.vibReplacedBy[i]
 }
 
 // hinderedVibration returns the vibrational terms with the torsions as

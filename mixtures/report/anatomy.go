@@ -48,10 +48,12 @@ type FactorFigures struct {
 	Treatment  string  `json:"treatment,omitempty"`
 }
 
-// Level is a characteristic temperature with its degeneracy.
+// Level is a characteristic temperature with its degeneracy, and, for a
+// vibrational mode that the summed levels replace, what stands for it.
 type Level struct {
 	K          float64 `json:"K"`
 	Degeneracy int     `json:"degeneracy"`
+	ReplacedBy string  `json:"replaced_by,omitempty"`
 }
 
 // AnatomyOf takes one species term of a state apart.
@@ -68,14 +70,14 @@ func AnatomyOf(t *mixtures.SpeciesTerm) SpeciesAnatomy {
 		a.OverRigidHarmonic = &FactorFigures{SJPerMolK: tr.DeltaSJPerMolK, CpJPerMolK: tr.DeltaCpJPerMolK}
 	}
 	for _, k := range sp.RotThetaK() {
-		a.ThetaRot = append(a.ThetaRot, Level{k, 1})
+		a.ThetaRot = append(a.ThetaRot, Level{K: k, Degeneracy: 1})
 	}
 	for i, k := range sp.VibThetaK() {
-		a.ThetaVib = append(a.ThetaVib, Level{k, sp.Vib[i].Degeneracy})
+		a.ThetaVib = append(a.ThetaVib, Level{K: k, Degeneracy: sp.Vib[i].Degeneracy, ReplacedBy: sp.VibReplacedBy(i)})
 	}
 	el := sp.ElecThetaK()
 	for i := 1; i < len(el); i++ {
-		a.ThetaEl = append(a.ThetaEl, Level{el[i], sp.Elec[i].Degeneracy})
+		a.ThetaEl = append(a.ThetaEl, Level{K: el[i], Degeneracy: sp.Elec[i].Degeneracy})
 	}
 	return a
 }
@@ -92,13 +94,17 @@ func Anatomy(s *mixtures.State) []SpeciesAnatomy {
 // Species returns the species taken apart.
 func (a *SpeciesAnatomy) Species() *model.Species { return a.species }
 
-// ThetaList writes levels as "1234 K" lists: "2.75, 3.1 ×2 K".
+// ThetaList writes levels as a list: "2.75, 3.1 ×2, 97.84 (hindered
+// rotor) K".
 func ThetaList(levels []Level) string {
 	parts := make([]string, len(levels))
 	for i, l := range levels {
 		parts[i] = Sig(l.K, 4)
 		if l.Degeneracy > 1 {
 			parts[i] += fmt.Sprintf(" ×%d", l.Degeneracy)
+		}
+		if l.ReplacedBy != "" {
+			parts[i] += " (" + l.ReplacedBy + ")"
 		}
 	}
 	return strings.Join(parts, ", ") + " K"

@@ -19,7 +19,7 @@ import (
 // sum adds, which is that treatment's S and Cp less the rigid rotor's at
 // the same state.
 func TestAnatomyShares(t *testing.T) {
-	m := mustMixture(t, "SiH4 4%, H2O 1%, C2F6 1%, n-C4H10 2%, N2 bal", 1.4e5)
+	m := mustMixture(t, "SiH4 4%, H2O 1%, C2F6 1%, n-C4H10 2%, NH3 1%, N2 bal", 1.4e5)
 	s, err := m.State(450, 1.4e5, mixtures.Options{})
 	if err != nil {
 		t.Fatal(err)
@@ -54,6 +54,15 @@ func TestAnatomyShares(t *testing.T) {
 			t.Errorf("%s reports nothing over the rigid rotor", a.Name)
 		case d != nil && (math.Abs(d.SJPerMolK-dS) > 1e-9 || math.Abs(d.CpJPerMolK-dCp) > 1e-9):
 			t.Errorf("%s over the rigid rotor: %+v, the two states differ by S %.6g, Cp %.6g", a.Name, *d, dS, dCp)
+		}
+		replaced := 0
+		for _, l := range a.ThetaVib {
+			if l.ReplacedBy != "" {
+				replaced++
+			}
+		}
+		if want := len(term.Species.Torsions) + len(term.Species.Ladders); replaced != want {
+			t.Errorf("%s: %d modes marked replaced, want %d (its torsions and ladders)", a.Name, replaced, want)
 		}
 		if len(a.ThetaVib) != len(term.Species.Vib) || len(a.ThetaRot) != len(term.Species.RotConstPerCm) {
 			t.Errorf("%s: %d Θvib and %d Θrot, want %d and %d", a.Name, len(a.ThetaVib), len(a.ThetaRot), len(term.Species.Vib), len(term.Species.RotConstPerCm))
