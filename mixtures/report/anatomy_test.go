@@ -136,3 +136,45 @@ func TestAnatomyOutputs(t *testing.T) {
 		}
 	}
 }
+
+// TestCatalogModes: the species JSON lists its modes and levels, marking
+// those the summed levels replace, as the text does.
+func TestCatalogModes(t *testing.T) {
+	sp, _ := model.Builtin().Lookup("C2F6")
+	var buf bytes.Buffer
+	if err := WriteSpeciesJSON(&buf, sp, true, 1e5, []float64{298.15}); err != nil {
+		t.Fatal(err)
+	}
+	var doc struct {
+		Vib []struct {
+			Cm         float64 `json:"cm"`
+			Degeneracy int     `json:"degeneracy"`
+			ReplacedBy string  `json:"replaced_by"`
+		} `json:"vib_cm"`
+		Elec []struct {
+			Cm float64 `json:"cm"`
+		} `json:"elec_cm"`
+	}
+	if err := json.Unmarshal(buf.Bytes(), &doc); err != nil {
+		t.Fatal(err)
+	}
+	if len(doc.Vib) != len(sp.Vib) || len(doc.Elec) != len(sp.Elec) {
+		t.Fatalf("%d modes and %d levels, want %d and %d", len(doc.Vib), len(doc.Elec), len(sp.Vib), len(sp.Elec))
+	}
+	for i, v := range doc.Vib {
+		want := ""
+		if v.Cm == 68 {
+			want = "hindered rotor"
+		}
+		if v.ReplacedBy != want || v.Degeneracy != sp.Vib[i].Degeneracy {
+			t.Errorf("mode %g cm⁻¹: %+v, want replaced_by %q", v.Cm, v, want)
+		}
+	}
+	var txt bytes.Buffer
+	if err := WriteSpecies(&txt, sp, true, 1e5, []float64{298.15}); err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(txt.String(), "68 cm⁻¹  (Θ = 97.837 K, summed as a hindered rotor)") {
+		t.Errorf("catalog text does not mark the torsion:\n%s", txt.String())
+	}
+}

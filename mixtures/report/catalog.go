@@ -142,7 +142,11 @@ func WriteSpecies(w io.Writer, sp *model.Species, builtin bool, stdPa float64, t
 		if v.Degeneracy > 1 {
 			deg = fmt.Sprintf(" ×%d", v.Degeneracy)
 		}
-		d.Row(label, fmt.Sprintf("%s cm⁻¹%s  (Θ = %s K)", Short(v.WavenumberPerCm, 7), deg, Sig(sp.VibThetaK()[i], 5)))
+		by := ""
+		if r := sp.VibReplacedBy(i); r != "" {
+			by = ", summed as a " + r
+		}
+		d.Row(label, fmt.Sprintf("%s cm⁻¹%s  (Θ = %s K%s)", Short(v.WavenumberPerCm, 7), deg, Sig(sp.VibThetaK()[i], 5), by))
 	}
 	for i, e := range sp.Elec {
 		label, theta := "", ""
@@ -289,6 +293,8 @@ func WriteSpeciesJSON(w io.Writer, sp *model.Species, builtin bool, stdPa float6
 		catalogEntry
 		RotConstPerCm []float64         `json:"rot_cm,omitempty"`
 		Symmetry      int               `json:"symmetry_number,omitempty"`
+		Vib           []modeDoc         `json:"vib_cm"`
+		Elec          []modeDoc         `json:"elec_cm"`
 		BoilingK      float64           `json:"boiling_K,omitempty"`
 		CriticalK     float64           `json:"critical_temperature_K,omitempty"`
 		CriticalPa    float64           `json:"critical_pressure_Pa,omitempty"`
@@ -308,6 +314,13 @@ func WriteSpeciesJSON(w io.Writer, sp *model.Species, builtin bool, stdPa float6
 		omega := sp.Acentric
 		doc.Acentric = &omega
 	}
+	doc.Vib, doc.Elec = []modeDoc{}, []modeDoc{}
+	for i, v := range sp.Vib {
+		doc.Vib = append(doc.Vib, modeDoc{Cm: v.WavenumberPerCm, Degeneracy: v.Degeneracy, ReplacedBy: sp.VibReplacedBy(i)})
+	}
+	for _, e := range sp.Elec {
+		doc.Elec = append(doc.Elec, modeDoc{Cm: e.EnergyPerCm, Degeneracy: e.Degeneracy})
+	}
 	if base, ok := sp.SpinVariantOf(); ok && base != sp.Formula {
 		doc.SpinBase = base
 	}
@@ -325,6 +338,15 @@ func WriteSpeciesJSON(w io.Writer, sp *model.Species, builtin bool, stdPa float6
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	return enc.Encode(doc)
+}
+
+// modeDoc is a vibrational mode or an electronic level in the JSON of a
+// species: its wavenumber (or energy) in cm⁻¹, its degeneracy, and, for a
+// mode the summed levels replace, what stands for it.
+type modeDoc struct {
+	Cm         float64 `json:"cm"`
+	Degeneracy int     `json:"degeneracy"`
+	ReplacedBy string  `json:"replaced_by,omitempty"`
 }
 
 // WriteSpeciesCSV writes one species' standard-state table as CSV.
