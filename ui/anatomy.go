@@ -116,6 +116,18 @@ func (p *anatomyPane) render() []string {
 	t := p.c.Text
 	var lines []string
 	add := func(l string) { lines = append(lines, l) }
+	// addHanging wraps text to the pane, its first line after indent and
+	// the others after indent and two spaces more.
+	addHanging := func(style func(...string) string, indent, text string) {
+		for i, l := range report.Wrap(t(text), p.w-len(indent)-2) {
+			if i > 0 {
+				l = strings.Repeat(" ", len(indent)+2) + l
+			} else {
+				l = indent + l
+			}
+			add(style(l))
+		}
+	}
 	addWrapped := func(style func(...string) string, indent, text string) {
 		for i, l := range report.Wrap(t(text), p.w-len(indent)) {
 			if i > 0 {
@@ -165,12 +177,12 @@ func (p *anatomyPane) render() []string {
 	addWrapped(s.Muted.Render, "", "* Cp = Cv + R: the R, the P dV work of heating at constant pressure, is booked with translation.")
 
 	add("")
-	addWrapped(s.Label.Render, "", "Treatment: "+a.Treatment)
+	addHanging(s.Label.Render, "", "Treatment: "+a.Treatment)
 	for _, f := range a.Factors {
-		addWrapped(s.Muted.Render, "  ", f.Name+": "+f.Treatment)
+		addHanging(s.Muted.Render, "  ", f.Name+": "+f.Treatment)
 	}
 	if line := a.OverRigidHarmonicLine(); line != "" {
-		addWrapped(s.Muted.Render, "  ", line)
+		addHanging(s.Muted.Render, "  ", line)
 	}
 
 	add("")
