@@ -198,6 +198,17 @@ func (sp *Species) prepareTorsions() error {
 	for i := range left {
 		left[i] = i
 	}
+	// take marks the first single mode at cm not yet replaced as replaced
+	// by what; false if there is none.
+	take := func(cm float64, by string) bool {
+		i := slices.IndexFunc(left, func(j int) bool { v := sp.Vib[j]; return v.WavenumberPerCm == cm && v.Degeneracy == 1 })
+		if i < 0 {
+			return false
+		}
+		sp.vibReplacedBy[left[i]] = by
+		left = slices.Delete(left, i, i+1)
+		return true
+	}
 	for _, tor := range sp.Torsions {
 		if !barrierRange.contains(tor.BarrierCm) || !torsionFRange.contains(tor.FCm) || !foldRange.contains(float64(tor.Fold)) || !sigmaRange.contains(float64(tor.Symmetry)) || tor.Symmetry > tor.Fold {
 			return Errorf("model", "%s: torsion V0 %g cm⁻¹, F %g cm⁻¹, n %d, σ %d: want %s, %s, %s, and σ from 1 to n", sp.Formula, tor.BarrierCm, tor.FCm, tor.Fold, tor.Symmetry, barrierRange, torsionFRange, foldRange)
@@ -209,12 +220,7 @@ func (sp *Species) prepareTorsions() error {
 				return Errorf("model", "%s: torsion term V %g cm⁻¹, n %d: want %s, %s, and n a multiple of σ %d", sp.Formula, t.Cm, t.Fold, termRange, foldRange, tor.Symmetry)
 			}
 		}
-		i := slices.IndexFunc(left, func(j int) bool { v := sp.Vib[j]; return v.WavenumberPerCm == tor.ReplacesCm && v.Degeneracy == 1 })
-		if i >= 0 {
-			sp.vibReplacedBy[left[i]] = "hindered rotor"
-			left = slices.Delete(left, i, i+1)
-		}
-		if i < 0 {
+		if !take(tor.ReplacesCm, "hindered rotor") {
 			return Errorf("model", "%s: torsion replaces %g cm⁻¹, which vib_cm does not list as a single mode", sp.Formula, tor.ReplacesCm)
 		}
 		sp.torsionLevels = append(sp.torsionLevels, tor.levels())
@@ -226,12 +232,9 @@ func (sp *Species) prepareTorsions() error {
 		if !dissocRange.contains(sp.DissociationCm) {
 			return Errorf("model", "%s: a ladder needs D0_cm, %s, where its continuation stops", sp.Formula, dissocRange)
 		}
-		i := slices.IndexFunc(left, func(j int) bool { v := sp.Vib[j]; return v.WavenumberPerCm == l.ReplacesCm && v.Degeneracy == 1 })
-		if i < 0 {
+		if !take(l.ReplacesCm, "level ladder") {
 			return Errorf("model", "%s: ladder replaces %g cm⁻¹, which vib_cm does not list as a single mode", sp.Formula, l.ReplacesCm)
 		}
-		sp.vibReplacedBy[left[i]] = "level ladder"
-		left = slices.Delete(left, i, i+1)
 		sp.torsionLevels = append(sp.torsionLevels, l.levels(sp.DissociationCm))
 	}
 	for _, j := range left {
