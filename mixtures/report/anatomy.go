@@ -91,12 +91,9 @@ func Anatomy(s *mixtures.State) []SpeciesAnatomy {
 	return out
 }
 
-// Species returns the species taken apart.
-func (a *SpeciesAnatomy) Species() *model.Species { return a.species }
-
-// ThetaList writes levels as a list: "2.75, 3.1 ×2, 97.84 (hindered
+// thetaList writes levels as a list: "2.75, 3.1 ×2, 97.84 (hindered
 // rotor) K".
-func ThetaList(levels []Level) string {
+func thetaList(levels []Level) string {
 	parts := make([]string, len(levels))
 	for i, l := range levels {
 		parts[i] = Sig(l.K, 4)
@@ -116,14 +113,14 @@ func (a *SpeciesAnatomy) RotorLine() string {
 	if len(a.ThetaRot) == 0 {
 		return "none: an atom does not rotate"
 	}
-	return fmt.Sprintf("%s (%s, σ = %d)", ThetaList(a.ThetaRot), a.species.Rotor, a.species.Symmetry)
+	return fmt.Sprintf("%s (%s, σ = %d)", thetaList(a.ThetaRot), a.species.Rotor, a.species.Symmetry)
 }
 
 func (a *SpeciesAnatomy) VibLine() string {
 	if len(a.ThetaVib) == 0 {
 		return "none: no vibration"
 	}
-	return ThetaList(a.ThetaVib)
+	return thetaList(a.ThetaVib)
 }
 
 func (a *SpeciesAnatomy) ElecLine() string {
@@ -131,7 +128,7 @@ func (a *SpeciesAnatomy) ElecLine() string {
 	if len(a.ThetaEl) == 0 {
 		return ground + " only"
 	}
-	return ground + "; then " + ThetaList(a.ThetaEl)
+	return ground + "; then " + thetaList(a.ThetaEl)
 }
 
 // OverRigidHarmonicLine says what the treatment adds, or "" when it is
@@ -141,11 +138,11 @@ func (a *SpeciesAnatomy) OverRigidHarmonicLine() string {
 	if d == nil {
 		return ""
 	}
-	return "over the rigid rotor and harmonic oscillator: S " + Signed(d.SJPerMolK, 3) + ", Cp " + Signed(d.CpJPerMolK, 3) + " J/(mol·K)"
+	return "over the rigid rotor and harmonic oscillator: S " + signed(d.SJPerMolK, 3) + ", Cp " + signed(d.CpJPerMolK, 3) + " J/(mol·K)"
 }
 
-// Signed formats a difference with its sign.
-func Signed(x float64, decimals int) string {
+// signed formats a difference with its sign.
+func signed(x float64, decimals int) string {
 	f := Fixed(x, decimals)
 	if !strings.HasPrefix(f, "-") {
 		f = "+" + f
