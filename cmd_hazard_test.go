@@ -43,6 +43,8 @@ func TestHazardJSON(t *testing.T) {
 		{"SiH4 1%, N2 bal", "flammable_in_air", false}, // at most 1/LFL = 1/1.37 <= 1
 		{"SiH4 1%, N2 bal", "flammability_sum_at_most", 1 / 1.37},
 		{"SiH4 1%, N2 bal", "flammability_sum", nil},
+		{"SiH4 2%, N2 bal", "flammability_sum_at_least", 0.02}, // A'/100: no Tci reaches 100 %
+		{"SiH4 100%", "flammable_in_air", true},                // above 100/100 = 1: a flammable gas burns undiluted
 		{"PH3 1%, HCl 5%, N2 bal", "ghs_inhalation_category", 3.0},
 		{"CH4 85%, C2H6 10%, C3H8 5%", "ufl_percent", 14.28689},
 	}

@@ -124,6 +124,7 @@ type hazardJSON struct {
 	FlammableInAir         *bool    `json:"flammable_in_air"`
 	FlammabilitySum        *float64 `json:"flammability_sum"`
 	FlammabilitySumPartial *float64 `json:"flammability_sum_known_part"`
+	FlammabilitySumAtLeast *float64 `json:"flammability_sum_at_least"`
 	FlammabilitySumAtMost  *float64 `json:"flammability_sum_at_most"`
 	Oxidizers              []string `json:"oxidizers"`
 	Oxidizing              *bool    `json:"oxidizing"`
@@ -195,6 +196,7 @@ func WriteHazardJSON(w io.Writer, rep *HazardReport) error {
 		j.FlammabilitySum = fptr(r.FlamSum)
 	} else {
 		j.FlammabilitySumPartial = fptr(r.FlamSum)
+		j.FlammabilitySumAtLeast = fptr(r.FlamSumMin)
 		if r.FlamSumMaxKnown {
 			j.FlammabilitySumAtMost = fptr(r.FlamSumMax)
 		}

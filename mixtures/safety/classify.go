@@ -20,7 +20,7 @@ type Part struct {
 const (
 	MethodLeChatelier = "Le Chatelier's rule over the flammable components (Zabetakis, US Bureau of Mines Bulletin 627, 1965)"
 	MethodISOFlam     = "ISO 10156 calculation: flammable in air when the sum of A'i/Tci (inert gases as nitrogen equivalents, Ki) exceeds 1"
-	MethodTciBound    = "A missing Tci taken at its least, the gas's LFL in air: a mix of the gas in nitrogen below its LFL stays below it in any amount of air (a bound zmix applies; not part of ISO 10156)"
+	MethodTciBound    = "A missing Tci bounded by the gas's LFL in air below and 100 % above: a mix of the gas in nitrogen below its LFL stays below it in any amount of air, and a flammable gas burns in air undiluted (bounds zmix applies; not part of ISO 10156)"
 	MethodISOOx       = "ISO 10156 calculation: more oxidizing than air when the sum of xi*Ci exceeds 0.235"
 	MethodGHSTox      = "GHS additivity formula, 100/LC50mix = sum of Ci/LC50i, 4 h rat LC50 (UN GHS chapter 3.1)"
 )
@@ -73,11 +73,14 @@ type Result struct {
 	FlammableNoLimits      []string // flammable components with no LFL/UFL
 
 	// ISO 10156, flammable in air. FlamKnown is false when the answer
-	// depends on a missing Tci; FlamSum then holds the known part, and
-	// FlamSumMax, when FlamSumMaxKnown, the sum with each missing Tci
-	// replaced by the gas's LFL, which no Tci can be below.
+	// depends on a missing Tci; FlamSum then holds the known part,
+	// FlamSumMin the sum with each missing Tci at 100 %, which no Tci
+	// reaches (the sum is above it), and FlamSumMax, when
+	// FlamSumMaxKnown, the sum with each missing Tci replaced by the
+	// gas's LFL, which no Tci can be below.
 	FlamSum         float64
 	FlamSumKnown    bool
+	FlamSumMin      float64
 	FlamSumMax      float64
 	FlamSumMaxKnown bool
 	FlamKnown       bool
@@ -153,7 +156,7 @@ func Classify(parts []Part) Result {
 	methods := []string{}
 	if len(r.Flammables) > 0 {
 		methods = append(methods, MethodLeChatelier, MethodISOFlam)
-		if len(r.NoTci) > 0 && r.FlamSumMaxKnown && !r.FlamInAir {
+		if len(r.NoTci) > 0 && (r.FlamSumMaxKnown && !r.FlamInAir || r.FlamInAir && r.FlamSum <= 1) {
 			methods = append(methods, MethodTciBound)
 		}
 	}
@@ -257,6 +260,7 @@ func (r *Result) isoFlammable(parts []Part, cite func(*model.Species, string)) {
 		share := 100 * p.X / (fuel + diluent) // A'i, %
 		if sp.Safety.TciPct == 0 {
 			r.NoTci = append(r.NoTci, sp.Formula)
+			r.FlamSumMin += share / 100
 			if sp.Safety.LFLPct > 0 {
 				r.FlamSumMax += share / sp.Safety.LFLPct
 			} else {
@@ -266,12 +270,21 @@ func (r *Result) isoFlammable(parts []Part, cite func(*model.Species, string)) {
 		}
 		cite(sp, "tci_pct")
 		r.FlamSum += share / sp.Safety.TciPct
+		r.FlamSumMin += share / sp.Safety.TciPct
 		r.FlamSumMax += share / sp.Safety.TciPct
 	}
 	r.FlamSumKnown = len(r.NoTci) == 0
 	r.FlamInAir = r.FlamSum > 1
 	// A missing Tci only adds to the sum: above 1 the answer stands.
 	r.FlamKnown = r.FlamSumKnown || r.FlamInAir
+	// Nor can a missing Tci reach 100 %: a flammable gas burns in air
+	// undiluted, so a mix of it in nitrogen that is not flammable in air
+	// holds less than all of it. Each missing term A'i/Tci is therefore
+	// above A'i/100, and a sum that reaches 1 so is above 1: pure silane,
+	// whose Tci no source here gives, is flammable in air.
+	if !r.FlamKnown && r.FlamSumMin >= 1 {
+		r.FlamKnown, r.FlamInAir = true, true
+	}
 	// Nor can a missing Tci be below the gas's LFL in air: a mix of the
 	// gas with nitrogen that holds less of it than its LFL stays below
 	// the LFL however much air is added, so it is not flammable in air.
@@ -391,15 +404,16 @@ func (r *Result) FlamVerdict() string {
 	var s string
 	switch {
 	case !r.FlamKnown && r.FlamSumMaxKnown:
-		s = fmt.Sprintf("not known: no Tci for %s; the sum of A'i/Tci lies between %.3g and %.3g (a missing Tci taken at its least, the LFL)", strings.Join(r.NoTci, ", "), r.FlamSum, r.FlamSumMax)
-	case !r.FlamKnown && r.FlamSum == 0:
-		s = "not known: no Tci for " + strings.Join(r.NoTci, ", ")
+		s = fmt.Sprintf("not known: no Tci for %s; the sum of A'i/Tci lies between %.3g and %.3g (a missing Tci taken at 100 %% and at its least, the LFL)", strings.Join(r.NoTci, ", "), r.FlamSumMin, r.FlamSumMax)
 	case !r.FlamKnown:
-		s = fmt.Sprintf("not known: no Tci for %s (the others sum to %.3g)", strings.Join(r.NoTci, ", "), r.FlamSum)
+		s = fmt.Sprintf("not known: no Tci for %s; the sum of A'i/Tci is above %.3g (a missing Tci taken at 100 %%)", strings.Join(r.NoTci, ", "), r.FlamSumMin)
 	case r.FlamInAir:
 		s = fmt.Sprintf("FLAMMABLE IN AIR, sum of A'i/Tci = %.3g > 1", r.FlamSum)
-		if !r.FlamSumKnown {
+		switch {
+		case !r.FlamSumKnown && r.FlamSum > 1:
 			s = fmt.Sprintf("FLAMMABLE IN AIR, sum of A'i/Tci at least %.3g > 1 (no Tci for %s)", r.FlamSum, strings.Join(r.NoTci, ", "))
+		case !r.FlamSumKnown:
+			s = fmt.Sprintf("FLAMMABLE IN AIR, sum of A'i/Tci above %.3g >= 1 (no Tci for %s: taken at 100 %%, which a flammable gas's Tci is below)", r.FlamSumMin, strings.Join(r.NoTci, ", "))
 		}
 	case !r.FlamSumKnown:
 		s = fmt.Sprintf("not flammable in air, sum of A'i/Tci at most %.3g <= 1 (no Tci for %s: taken at its least, the LFL)", r.FlamSumMax, strings.Join(r.NoTci, ", "))
