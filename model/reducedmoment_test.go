@@ -16,11 +16,12 @@ import (
 // again and checks both, so that a changed structure or constant cannot
 // drift from the other.
 //
-// The reduced moment of a top is Pitzer's (J. Chem. Phys. 10, 428 (1942),
-// from memory): the kinetic energy of the internal rotation with the
-// molecule's translation and overall rotation removed (zero linear and
-// angular momentum), which is the Schur complement of the rotations in
-// the kinetic-energy matrix. For a top whose centre of mass lies off the
+// The reduced moment of a top is Pitzer's (J. Chem. Phys. 14, 239 (1946);
+// for several tops, Kilpatrick and Pitzer, J. Chem. Phys. 17, 1064
+// (1949); both from memory): the kinetic energy of the internal rotation
+// with the molecule's translation and overall rotation removed (zero
+// linear and angular momentum), which is the Schur complement of the
+// rotations in the kinetic-energy matrix. For a top whose centre of mass lies off the
 // axis, as n-butane's ethyl groups do, it is far below I_top/2.
 
 // isotopeMassU are the masses of ¹²C (exact, by definition of u) and ¹H
