@@ -72,6 +72,11 @@ func (g *globalOpts) catalogue() (*model.Catalogue, error) {
 	return cat, nil
 }
 
+// helpAsked, when set (by a test), sees the flag set of a command asked
+// for --help, so that its usage text can be checked against the flags it
+// takes.
+var helpAsked func(*flag.FlagSet)
+
 func newFlagSet(name string) *flag.FlagSet {
 	fs := flag.NewFlagSet(name, flag.ContinueOnError)
 	fs.SetOutput(io.Discard) // errors are reported as one line by the caller
@@ -87,6 +92,9 @@ func parseFlags(fs *flag.FlagSet, args []string, interleave bool) ([]string, err
 	for {
 		if err := fs.Parse(args); err != nil {
 			if errors.Is(err, flag.ErrHelp) {
+				if helpAsked != nil {
+					helpAsked(fs)
+				}
 				return nil, errHelp
 			}
 			return nil, flagError(fs, err)

@@ -86,6 +86,10 @@ func (a *app) cmdHelp(g *globalOpts, args []string) error {
 		usageMain(a.stdout)
 		return nil
 	case 1:
+		if h := args[0]; h == "--help" || h == "-help" || h == "-h" || h == "--h" {
+			usageHelp(a.stdout)
+			return nil
+		}
 		c, ok := lookupCommand(args[0])
 		if !ok {
 			return badInput("no help on %s; the commands are %s", model.Quote(args[0]), commandNames())

@@ -749,3 +749,28 @@ func isASCII(s string) bool {
 	}
 	return true
 }
+
+// TestUsageNamesEveryFlag: each command's --help names every flag the
+// command takes, so that a flag added to a command cannot be left out of
+// its help.
+func TestUsageNamesEveryFlag(t *testing.T) {
+	var seen *flag.FlagSet
+	helpAsked = func(fs *flag.FlagSet) { seen = fs }
+	defer func() { helpAsked = nil }()
+	for _, c := range commands {
+		seen = nil
+		code, stdout, stderr := zmix(t, c.name, "--help")
+		if code != 0 {
+			t.Errorf("zmix %s --help: exit %d, %s", c.name, code, stderr)
+			continue
+		}
+		if seen == nil {
+			continue // a command with no flags of its own (help)
+		}
+		seen.VisitAll(func(f *flag.Flag) {
+			if !strings.Contains(stdout, "--"+f.Name) {
+				t.Errorf("zmix %s --help does not name --%s", c.name, f.Name)
+			}
+		})
+	}
+}

@@ -23,14 +23,15 @@ var unitsHelp = "Units:\n" +
 const blendHelp = `Blend text: "SPECIES AMOUNT" items separated by , ; or new lines. An amount is
   a mole fraction (0.21), mol % (21% or 21 mol%), ppm or ppb by moles, a mass
   fraction (0.3 kg/kg), mass % (30 wt% or 30 mass%), a partial pressure
-  (0.2 bar), or bal for the one balance species. Isomers, which share a
-  formula, take a prefix: ` + model.IsomerPrefixes + `, as in n-C4H10.
+  (0.2 bar), or bal for the one balance species; a species alone, as the
+  whole blend, is the pure gas. Isomers, which share a formula, take a
+  prefix: ` + model.IsomerPrefixes + `, as in n-C4H10.
   --blend @FILE reads a saved blend file; its temperature, pressure and
   standard pressure are then the defaults of --temp, --pres and --std.
 `
 
 func usageState(w io.Writer) {
-	io.WriteString(w, `Usage: zmix state --blend SPEC --temp T --pres P [--std 1bar|1atm] [--json | --csv]
+	io.WriteString(w, `Usage: zmix state --blend SPEC --temp T --pres P [--std 1bar|1atm] [--json | --csv] [--anatomy]
 
 Prints the full readout of a blend at one temperature and pressure: molar
 mass, density, Cp, Cv, γ, speed of sound, H, U, S, G and A per mole and per
@@ -46,6 +47,9 @@ Flags:
   --json           one JSON object (keys in the README), with the cautions
   --csv            a header row and one row; cautions go to stderr
   --all-notes      list every validity figure, not only the cautions
+  --anatomy        take each species apart: the S and Cp of translation,
+                   rotation, vibration and electronic levels, their treatment
+                   and the characteristic temperatures (the Anatomy pane)
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 
@@ -93,7 +97,7 @@ Examples:
 }
 
 func usageCatalog(w io.Writer) {
-	io.WriteString(w, `Usage: zmix catalog [FORMULA] [--std 1bar|1atm] [--temps LIST] [--species FILE]
+	io.WriteString(w, `Usage: zmix catalog [FORMULA] [--std 1bar|1atm] [--temps LIST] [--json | --csv] [--species FILE]
 
 Without FORMULA, lists every species: formula, name, molar mass, rotor kind
 and hazard classes. With FORMULA, shows that species' data with its sources,
@@ -104,6 +108,8 @@ Flags:
   --std P°         standard pressure of the table: 1bar (default) or 1atm
   --temps LIST     the table's temperatures, e.g. "300, 600, 900 K"
                    (default 100, 200, 298.15, 500, 1000, 1500, 2000, 3000 K)
+  --json           the list, or the species' data, sources and table, as JSON
+  --csv            the list, or the species' table, as CSV
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

@@ -32,6 +32,8 @@ Flags:
                    flammable_in_air, flammability_sum, oxidizing,
                    oxidizing_sum, lc50_ppm, ghs_inhalation_category,
                    sources and more (null: does not apply, or not known)
+  --csv            every figure of the JSON in a long table of four
+                   columns: section, row, name, value
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 
@@ -78,6 +80,8 @@ Flags:
                    fractions
   --json           one JSON object: o2_percent (the worst), species with
                    peak_ppm and percent_of_lfl, model, and more
+  --csv            every figure of the JSON in a long table of four
+                   columns: section, row, name, value
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 
