@@ -750,10 +750,14 @@ func isASCII(s string) bool {
 	return true
 }
 
-// TestUsageNamesEveryFlag: each command's --help names every flag the
-// command takes, so that a flag added to a command cannot be left out of
-// its help.
+// TestUsageNamesEveryFlag: each command's --help, and the README, name
+// every flag the command takes, so that a flag added to a command cannot
+// be left out of its help or of the user's document.
 func TestUsageNamesEveryFlag(t *testing.T) {
+	readme, err := os.ReadFile("README.md")
+	if err != nil {
+		t.Fatal(err)
+	}
 	var seen *flag.FlagSet
 	helpAsked = func(fs *flag.FlagSet) { seen = fs }
 	defer func() { helpAsked = nil }()
@@ -770,6 +774,9 @@ func TestUsageNamesEveryFlag(t *testing.T) {
 		seen.VisitAll(func(f *flag.Flag) {
 			if !strings.Contains(stdout, "--"+f.Name) {
 				t.Errorf("zmix %s --help does not name --%s", c.name, f.Name)
+			}
+			if !bytes.Contains(readme, []byte("--"+f.Name)) {
+				t.Errorf("the README does not name --%s of zmix %s", f.Name, c.name)
 			}
 		})
 	}
