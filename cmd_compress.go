@@ -96,9 +96,10 @@ Flags:
   --intercool T    the temperature between stages (default the inlet's)
   --rate R         the flow, for the power (see zmix flow --help for units)
   --json           one JSON object: outlet_temperature_K,
-  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
                    isentropic_outlet_temperature_K, work_J_mol, work_J_kg,
                    power_W (with --rate), stages (a list), ...
+  --csv            CSV: one row per figure (section, row, name, value), as in
+                   the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

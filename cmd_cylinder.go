@@ -5,6 +5,7 @@ import (
 	"strings"
 
 	"zmix/mixtures/process"
+	"zmix/mixtures/report"
 	"zmix/model"
 )
 
@@ -139,11 +140,13 @@ Flags:
   --mass M         mass of gas: kg, g or lb, or
   --amount N       amount of gas: mol or kmol
   --to-temp T2     a later temperature, for the pressure it brings
-  --ref NAME       reference of the standard volume: `+process.ReferenceForms+`
+  --ref NAME       `+strings.Join(report.Wrap("reference of the standard volume: "+process.ReferenceForms, 61), "\n                   ")+`
   --recipe R       pressure or weight
   --rated PR       the cylinder's rated pressure: a fill above it is refused
-  --json           one JSON object: amount_mol, mass_kg, z, pressure_Pa, ref_m3, steps, ...
-  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
+  --json           one JSON object: amount_mol, mass_kg, z, pressure_Pa,
+                   ref_m3, steps, ...
+  --csv            CSV: one row per figure (section, row, name, value), as in
+                   the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

@@ -88,12 +88,14 @@ makes a low-ppm mixture from a parent cylinder, or a fab dilutes exhaust.
 Flags:
   --blend SPEC     the parent, as text or @FILE (required)
   --with SPEC      the diluent, as text or @FILE (required)
-  --target T       "SPECIES LEVEL" (ppm, ppb, %, fraction), or with --ratio the species
+  --target T       "SPECIES LEVEL" (ppm, ppb, %, fraction), or with --ratio
+                   the species
   --ratio R        moles of diluent per mole of parent
   --rate R         the parent's flow (see zmix flow --help for units)
   --json           one JSON object: diluent_per_parent_mol_mol, final_level,
-  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
                    dilution_factor, species, ...
+  --csv            CSV: one row per figure (section, row, name, value), as in
+                   the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

@@ -101,8 +101,9 @@ Flags:
   --pres P         the line pressure, for actual volumes
   --ref NAME       the reference of standard volumes (default normal)
   --json           one JSON object: mol_s, kg_s, ref_m3_s, ref_temperature_K,
-  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
                    ref_pressure_Pa, actual_m3_s, gas_correction_factor, ...
+  --csv            CSV: one row per figure (section, row, name, value), as in
+                   the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

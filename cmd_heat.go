@@ -59,8 +59,10 @@ Flags:
   --to-temp T2     outlet temperature (required)
   --pres P         the pressure (required unless the file has one)
   --rate R         the flow, for the duty as a power (see zmix flow --help)
-  --json           one JSON object: duty_J_mol, duty_J_kg, duty_W (with --rate), ...
-  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
+  --json           one JSON object: duty_J_mol, duty_J_kg, duty_W (with
+                   --rate), ...
+  --csv            CSV: one row per figure (section, row, name, value), as in
+                   the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

@@ -116,8 +116,10 @@ Flags:
                    flow, separated by semicolons; give two or more
   --pres P         the mixing pressure (required)
   --json           one JSON object: outlet_temperature_K, rate_mol_s,
-  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
-                   entropy_generation_W_K, species (as in state), outlet, streams
+                   entropy_generation_W_K, species (as in state), outlet,
+                   streams
+  --csv            CSV: one row per figure (section, row, name, value), as in
+                   the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

@@ -147,8 +147,9 @@ Flags:
   --temp T         the gas temperature in the volume
   --pres P         the pressure in the volume during a flow purge
   --json           one JSON object: cycles (swing), time_s and
-  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
                    volume_exchanges (flow), final_level, ...
+  --csv            CSV: one row per figure (section, row, name, value), as in
+                   the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

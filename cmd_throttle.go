@@ -65,8 +65,10 @@ Flags:
   --pres P1        inlet pressure (required unless the file has one)
   --to-pres P2     outlet pressure (required)
   --ideal          the ideal gas instead of the real gas
-  --json           one JSON object: outlet_temperature_K, delta_T_K, mean_jt_K_per_Pa, ...
-  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
+  --json           one JSON object: outlet_temperature_K, delta_T_K,
+                   mean_jt_K_per_Pa, ...
+  --csv            CSV: one row per figure (section, row, name, value), as in
+                   the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

@@ -86,12 +86,16 @@ source). The result lists the composition, u, U (k = 2) and the part of
 u from the masses, the purities and the molar masses.
 
 Flags:
-  --add GAS        one parent gas: "MASS [± U] [of] GAS" (repeat, one per parent)
-  --mass-u U       standard uncertainty of each weighed mass: %s (required)
+  --add GAS        one parent gas: "MASS [± U] [of] GAS" (repeat, one per
+                   parent)
+  --mass-u U       standard uncertainty of each weighed mass: %s
+                   (required)
   --atomic-weight A  an element's atomic weight and its standard uncertainty,
-                   "Ar 39.9478 +- 0.0002" (g/mol), instead of IUPAC's (repeatable)
+                   "Ar 39.9478 +- 0.0002" (g/mol), instead of IUPAC's
+                   (repeatable)
   --json           one JSON object: parents, composition, budget, ...
-  --csv            CSV: one row per figure (section, row, name, value), as in the JSON
+  --csv            CSV: one row per figure (section, row, name, value), as in
+                   the JSON
   --species FILE   merge a species file over the catalogue (repeatable)
   --ascii          plain ASCII text (also ZMIX_ASCII=1)
 

@@ -14,6 +14,7 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+	"unicode/utf8"
 
 	"zmix/mixtures"
 	"zmix/mixtures/report"
@@ -779,5 +780,27 @@ func TestUsageNamesEveryFlag(t *testing.T) {
 				t.Errorf("the README does not name --%s of zmix %s", f.Name, c.name)
 			}
 		})
+	}
+}
+
+// TestUsageFlagsFit80: the flag lists of every command's help fit 80
+// columns, a flag's description continuing under it; usage lines and
+// examples, which are commands to copy whole, may run longer.
+func TestUsageFlagsFit80(t *testing.T) {
+	for _, c := range commands {
+		_, stdout, _ := zmix(t, c.name, "--help")
+		inFlags := false
+		for _, l := range strings.Split(stdout, "\n") {
+			switch {
+			case strings.HasPrefix(l, "Flags"):
+				inFlags = true
+				continue
+			case l == "":
+				inFlags = false
+			}
+			if inFlags && utf8.RuneCountInString(l) > 80 {
+				t.Errorf("zmix %s --help: a flag line of %d columns: %q", c.name, utf8.RuneCountInString(l), l)
+			}
+		}
 	}
 }
