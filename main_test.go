@@ -785,10 +785,14 @@ func TestUsageNamesEveryFlag(t *testing.T) {
 
 // TestUsageFlagsFit80: the flag lists of every command's help fit 80
 // columns, a flag's description continuing under it; usage lines and
-// examples, which are commands to copy whole, may run longer.
+// examples, which are commands to copy whole, may run longer. No help
+// holds a formatting slip.
 func TestUsageFlagsFit80(t *testing.T) {
 	for _, c := range commands {
 		_, stdout, _ := zmix(t, c.name, "--help")
+		if strings.Contains(stdout, "%!") {
+			t.Errorf("zmix %s --help holds a formatting slip (%%!): a %% in text given to Fprintf", c.name)
+		}
 		inFlags := false
 		for _, l := range strings.Split(stdout, "\n") {
 			switch {
