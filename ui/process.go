@@ -98,7 +98,7 @@ var processKinds = []processKind{
 }
 
 // weighedParentHint says how a parent weighed in is typed.
-const weighedParentHint = "MASS [+- U] [of] GAS: 25.1 g CO2, 412 g N2 with O2 <5ppm, H2O 3ppm +-1ppm, or a premix CH4 2.5% +-0.002%, N2 bal; empty: none"
+const weighedParentHint = "MASS [+- U] [of] GAS: 25.1 g CO2, 412 g N2 with O2 <5ppm, H2O 3ppm +-1ppm, or a premix CH4 2.5% +-0.002%, N2 bal (by mass: 2.5 wt%); empty: none"
 
 // processPathPoints is how finely a path is sampled for the plot.
 const processPathPoints = 60
