@@ -280,6 +280,9 @@ func (p *recipePane) pick() {
 	p.mode = recipeBrowse
 	if len(p.hits) == 0 {
 		p.msg = fmt.Sprintf("no species matches %q; try a formula (SiH4) or a name (silane)", p.search.value())
+		if p.absent != "" {
+			p.msg = p.absent
+		}
 		return
 	}
 	sp := p.hits[p.hit]

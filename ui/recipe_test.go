@@ -232,8 +232,8 @@ func TestRecipeSearchSaysWhyAbsent(t *testing.T) {
 		t.Fatalf("hits for C4F8 = %d; view:\n%s", len(p.hits), p.View())
 	}
 	recipeKeys(p, b, "enter")
-	if len(b.entries) != 4 {
-		t.Errorf("enter on no hits added a row: %d entries", len(b.entries))
+	if len(b.entries) != 4 || !strings.Contains(p.msg, "not in the built-in") {
+		t.Errorf("enter on no hits: %d entries, remark %q; want 4 and the reason", len(b.entries), p.msg)
 	}
 }
 
