@@ -108,12 +108,14 @@ func TestRecalledStandardValues(t *testing.T) {
 // R[2x²e^−x(1+2e^−x) − (2x e^−x)²]/(1+2e^−x)² = 2.5 J/(mol·K) to Cp° at
 // x = 1.13: the harmonic row's tolerances are that share (the model is
 // 6.2 low in S°, 6.7 % in Cp°). Summed, the C–C torsion is a rotor over
-// a three-term potential with the anti and gauche wells (V1, V2, V3 from
-// recalled well and barrier energies) and Pitzer's reduced moment of the
-// ethyl top (10.84 u·Å², see reducedmoment_test.go), which brings S° to
-// 0.8 J/(mol·K) high and Cp° within 1 %; the 1.0 allows the recalled
-// potential. (With I_top/2, 18.46 u·Å², as the ethyl groups' off-axis
-// motion is left out, S° was 2.95 high.)
+// the published six-term potential with the anti and gauche wells
+// (Herrebout et al. 1995, read from the CCCBDB n-butane page) and
+// Pitzer's reduced moment of the ethyl top (10.84 u·Å², see
+// reducedmoment_test.go), which brings S° to 0.83 J/(mol·K) high and Cp°
+// within 1 %; the 1.0 allows the recalled methyl barrier and the anti
+// conformer's rotational constants taken for all three wells. (With
+// I_top/2, 18.46 u·Å², as the ethyl groups' off-axis motion is left out,
+// S° was 2.95 high.)
 func TestRecalledButanes(t *testing.T) {
 	harmonic := Treatment{Levels: LevelsRigidHarmonic}
 	tests := []struct {

@@ -53,8 +53,9 @@ var (
 	torsionFRange = numRange{"internal rotational constant F", 0.01, 100, "cm⁻¹", false}
 	foldRange     = numRange{"torsional fold n", 1, 6, "", true}
 	maxTorsions   = 6
-	// maxTorsionTerms bounds the further Fourier terms of one torsion.
-	maxTorsionTerms = 4
+	// maxTorsionTerms bounds the further Fourier terms of one torsion:
+	// n-butane's published C–C potential has six terms, V1 to V6.
+	maxTorsionTerms = 5
 )
 
 // torsionBasisM is the largest |m| of the basis: eigenvalues well below
