@@ -16,7 +16,7 @@ import (
 	"zmix/model"
 )
 
-// Config is what main.go hands the workbench.
+// Config is what the commands (package ui/cli) hand the workbench.
 type Config struct {
 	Catalogue *model.Catalogue
 	BlendFile string // open this blend file instead of the saved state
