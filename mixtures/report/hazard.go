@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"slices"
 	"strings"
 
 	"zmix/mixtures"
@@ -52,6 +53,7 @@ func HazardLines(r *safety.Result) [][2]string {
 		}
 		add("as stored", r.Stored.String())
 		add("ISO 10156 flammability", r.FlamVerdict())
+		add("autoignition", r.Ignition.Verdict())
 		if len(r.NotDiluents) > 0 {
 			add("not counted as diluents", strings.Join(r.NotDiluents, ", ")+" (no Ki: conservative)")
 		}
@@ -79,8 +81,57 @@ func WriteHazardText(w io.Writer, rep *HazardReport) error {
 		t.Row(row[0], row[1])
 	}
 	t.Write(w)
+	writeSpeciesFigures(w, r.Figures)
 	writeSafetyFooter(w, r.Recalled, r.Sources)
 	return nil
+}
+
+// writeSpeciesFigures writes each component's safety figures, so that a
+// verdict can be traced to the numbers behind it.
+func writeSpeciesFigures(w io.Writer, figs []safety.SpeciesFigures) {
+	if !slices.ContainsFunc(figs, func(f safety.SpeciesFigures) bool { return f.Flammable || f.Oxidizer || f.Toxic }) {
+		return // no figure of any component applies
+	}
+	fmt.Fprintln(w, "\nSpecies figures (? not in the catalogue, - does not apply)")
+	t := NewTable("  ", Left, Right, Right, Right, Right, Right, Right, Right)
+	t.Row("", "x", "LFL-UFL", "autoign.", "Tci", "Ki", "Ci", "LC50 4 h")
+	t.Row("", "%", "% in air", "°C", "% in N2", "", "", "ppm")
+	for _, f := range figs {
+		cell := func(applies bool, v float64, format func(float64) string) string {
+			switch {
+			case !applies:
+				return "-"
+			case v <= 0:
+				return "?"
+			}
+			return format(v)
+		}
+		short := func(n int) func(float64) string { return func(v float64) string { return Short(v, n) } }
+		limits := "-"
+		if f.Flammable {
+			limits = "?"
+			if f.LFLPct > 0 {
+				limits = Short(f.LFLPct, 3) + "-" + Short(f.UFLPct, 3)
+			}
+		}
+		lc50 := cell(f.Toxic, f.LC50FourHourPPM, short(4))
+		if f.LC50Converted {
+			lc50 += "*"
+		}
+		t.Row(f.Formula, Sig(100*f.X, 4), limits,
+			cell(f.Flammable, f.AutoIgnitionK, func(k float64) string { return Fixed(k-model.ZeroCelsiusK, 0) }),
+			cell(f.Flammable, f.TciPct, short(3)),
+			cell(f.Diluent, f.Ki, short(3)),
+			cell(f.Oxidizer, f.Ci, short(3)),
+			lc50)
+	}
+	t.Write(w)
+	for _, f := range figs {
+		if f.LC50Converted {
+			fmt.Fprintln(w, "  * a 1 h LC50, halved to 4 h as GHS prescribes")
+			break
+		}
+	}
 }
 
 // writeSafetyFooter ends a safety readout (hazard, release): whether it
@@ -111,35 +162,67 @@ func writeSafetyFooter(w io.Writer, recalled bool, sources []string) {
 // hazardJSON is the JSON of `zmix hazard`; a null is a figure that does
 // not apply or is not known, and "notes" says which.
 type hazardJSON struct {
-	Blend                  string   `json:"blend"`
-	Flammable              []string `json:"flammable"`
-	FuelPercent            float64  `json:"fuel_percent"`
-	LFLPercent             *float64 `json:"lfl_percent"`
-	UFLPercent             *float64 `json:"ufl_percent"`
-	FuelLFLPercent         *float64 `json:"fuel_lfl_percent"`
-	FuelUFLPercent         *float64 `json:"fuel_ufl_percent"`
-	AirToLFL               *float64 `json:"air_volumes_to_lfl"`
-	AsStored               string   `json:"as_stored"`
-	InsideRangeAsStored    *bool    `json:"inside_flammable_range_as_stored"`
-	FlammableInAir         *bool    `json:"flammable_in_air"`
-	FlammabilitySum        *float64 `json:"flammability_sum"`
-	FlammabilitySumPartial *float64 `json:"flammability_sum_known_part"`
-	FlammabilitySumAtLeast *float64 `json:"flammability_sum_at_least"`
-	FlammabilitySumAtMost  *float64 `json:"flammability_sum_at_most"`
-	Oxidizers              []string `json:"oxidizers"`
-	Oxidizing              *bool    `json:"oxidizing"`
-	OxidizingSum           *float64 `json:"oxidizing_sum"`
-	Toxic                  []string `json:"toxic"`
-	LC50PPM                *float64 `json:"lc50_ppm"`
-	GHSCategory            *int     `json:"ghs_inhalation_category"`
-	UnknownToxicityPercent float64  `json:"unknown_toxicity_percent"`
-	LC50HalvedFrom1h       []string `json:"lc50_converted_from_1h"`
-	Pyrophoric             []string `json:"pyrophoric"`
-	Corrosive              []string `json:"corrosive"`
-	Recalled               bool     `json:"rests_on_recalled_figures"`
-	Notes                  []string `json:"notes"`
-	Sources                []string `json:"sources"`
-	Screening              string   `json:"screening"`
+	Blend                  string              `json:"blend"`
+	Flammable              []string            `json:"flammable"`
+	FuelPercent            float64             `json:"fuel_percent"`
+	LFLPercent             *float64            `json:"lfl_percent"`
+	UFLPercent             *float64            `json:"ufl_percent"`
+	FuelLFLPercent         *float64            `json:"fuel_lfl_percent"`
+	FuelUFLPercent         *float64            `json:"fuel_ufl_percent"`
+	AirToLFL               *float64            `json:"air_volumes_to_lfl"`
+	AsStored               string              `json:"as_stored"`
+	InsideRangeAsStored    *bool               `json:"inside_flammable_range_as_stored"`
+	FlammableInAir         *bool               `json:"flammable_in_air"`
+	FlammabilitySum        *float64            `json:"flammability_sum"`
+	FlammabilitySumPartial *float64            `json:"flammability_sum_known_part"`
+	FlammabilitySumAtLeast *float64            `json:"flammability_sum_at_least"`
+	FlammabilitySumAtMost  *float64            `json:"flammability_sum_at_most"`
+	Oxidizers              []string            `json:"oxidizers"`
+	Oxidizing              *bool               `json:"oxidizing"`
+	OxidizingSum           *float64            `json:"oxidizing_sum"`
+	Toxic                  []string            `json:"toxic"`
+	LC50PPM                *float64            `json:"lc50_ppm"`
+	GHSCategory            *int                `json:"ghs_inhalation_category"`
+	UnknownToxicityPercent float64             `json:"unknown_toxicity_percent"`
+	LC50HalvedFrom1h       []string            `json:"lc50_converted_from_1h"`
+	AutoignitionLowestK    *float64            `json:"autoignition_lowest_K"`
+	AutoignitionSpecies    *string             `json:"autoignition_lowest_species"`
+	TemperatureClass       *string             `json:"temperature_class"`
+	Pyrophoric             []string            `json:"pyrophoric"`
+	Corrosive              []string            `json:"corrosive"`
+	Species                []hazardSpeciesJSON `json:"species"`
+	Recalled               bool                `json:"rests_on_recalled_figures"`
+	Notes                  []string            `json:"notes"`
+	Sources                []string            `json:"sources"`
+	Screening              string              `json:"screening"`
+}
+
+// hazardSpeciesJSON is one component's figures; null is a figure the
+// catalogue does not hold or that does not apply (the three flags say
+// which apply).
+type hazardSpeciesJSON struct {
+	Formula          string   `json:"formula"`
+	MoleFraction     float64  `json:"mole_fraction"`
+	Flammable        bool     `json:"flammable"`
+	Oxidizer         bool     `json:"oxidizer"`
+	Toxic            bool     `json:"toxic"`
+	LFLPercent       *float64 `json:"lfl_percent"`
+	UFLPercent       *float64 `json:"ufl_percent"`
+	AutoignitionK    *float64 `json:"autoignition_K"`
+	TciPercent       *float64 `json:"tci_percent"`
+	Ki               *float64 `json:"ki"`
+	Ci               *float64 `json:"ci"`
+	LC50PPM4h        *float64 `json:"lc50_ppm_4h"`
+	LC50HalvedFrom1h bool     `json:"lc50_converted_from_1h"`
+}
+
+// known is a figure for the JSON: null when it does not apply or is not
+// held (zero).
+func known(applies bool, v float64) *float64 {
+	if !applies || v <= 0 {
+		return nil
+	}
+	return fptr(v)
 }
 
 func fptr(x float64) *float64 {
@@ -176,6 +259,29 @@ func WriteHazardJSON(w io.Writer, rep *HazardReport) error {
 		Notes:                  nonNil(r.Summary()),
 		Sources:                nonNil(r.Sources),
 		Screening:              ScreeningLine,
+	}
+	j.Species = []hazardSpeciesJSON{}
+	for _, f := range r.Figures {
+		j.Species = append(j.Species, hazardSpeciesJSON{
+			Formula: f.Formula, MoleFraction: f.X,
+			Flammable: f.Flammable, Oxidizer: f.Oxidizer, Toxic: f.Toxic,
+			LFLPercent:       known(f.Flammable, f.LFLPct),
+			UFLPercent:       known(f.Flammable, f.UFLPct),
+			AutoignitionK:    known(f.Flammable, f.AutoIgnitionK),
+			TciPercent:       known(f.Flammable, f.TciPct),
+			Ki:               known(f.Diluent, f.Ki),
+			Ci:               known(f.Oxidizer, f.Ci),
+			LC50PPM4h:        known(f.Toxic, f.LC50FourHourPPM),
+			LC50HalvedFrom1h: f.LC50Converted,
+		})
+	}
+	if ig := r.Ignition; ig.LowestK > 0 && len(ig.Pyrophoric) == 0 {
+		j.AutoignitionLowestK = fptr(ig.LowestK)
+		sp := ig.Species
+		j.AutoignitionSpecies = &sp
+		if class, ok := ig.Class(); ok {
+			j.TemperatureClass = &class
+		}
 	}
 	if r.LimitsKnown {
 		j.FuelLFLPercent, j.FuelUFLPercent = fptr(r.FuelLFLPct), fptr(r.FuelUFLPct)

@@ -104,7 +104,14 @@ type Result struct {
 	NoLC50        []string // toxic components with no LC50
 	Converted     []string // components whose 1 h LC50 was halved
 
-	// Sources lists every figure used, with its source, and the methods.
+	// Ignition is the autoignition screen of the flammable components.
+	Ignition Ignition
+
+	// Figures are each component's figures, in the blend's order.
+	Figures []SpeciesFigures
+
+	// Sources lists every figure used or shown, with its source, and the
+	// methods.
 	Sources []string
 	// Recalled is true when a figure used was recalled, not read.
 	Recalled bool
@@ -149,6 +156,8 @@ func Classify(parts []Part) Result {
 	r.isoFlammable(parts, cite)
 	r.isoOxidizing(parts, cite)
 	r.ghsToxicity(parts, cite)
+	r.ignition(parts, cite)
+	r.figures(parts, cite)
 	for s := range used {
 		r.Sources = append(r.Sources, s)
 	}
@@ -158,6 +167,9 @@ func Classify(parts []Part) Result {
 		methods = append(methods, MethodLeChatelier, MethodISOFlam)
 		if len(r.NoTci) > 0 && (r.FlamSumMaxKnown && !r.FlamInAir || r.FlamInAir && r.FlamSum <= 1) {
 			methods = append(methods, MethodTciBound)
+		}
+		if r.Ignition.LowestK > 0 && len(r.Ignition.Pyrophoric) == 0 {
+			methods = append(methods, MethodLowestAIT, MethodTClass)
 		}
 	}
 	if len(r.Oxidizers) > 0 {
@@ -386,6 +398,7 @@ func (r *Result) Summary() []string {
 		}
 		out = append(out, "As stored: "+r.Stored.String()+".")
 		out = append(out, "ISO 10156 flammability: "+r.FlamVerdict()+".")
+		out = append(out, "Autoignition: "+r.Ignition.Verdict()+".")
 	}
 	if len(r.Oxidizers) > 0 {
 		out = append(out, "ISO 10156 oxidizing power: "+r.OxVerdict()+".")

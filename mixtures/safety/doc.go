@@ -75,6 +75,22 @@
 // others with that share stated, and, once the unknown share reaches 10 %,
 // the left side becomes (100 − C_unknown)/LC50_mix.
 //
+// # Autoignition and temperature class
+//
+// A blend's own autoignition temperature is seldom measured; the screen
+// takes the lowest figure among its flammable components, which errs on
+// the side of caution (common practice), and names whose it is. That
+// figure places the blend in a temperature class of IEC 60079-20-1 (T1
+// above 450 °C, T2 above 300 °C, T3 above 200 °C, T4 above 135 °C, T5
+// above 100 °C, T6 above 85 °C; from memory), the class of the hottest
+// surface that equipment in the gas may have; a figure on a bound falls in
+// the stricter class. A flammable component with no figure leaves the
+// lowest "at most" and the class "or stricter"; a pyrophoric one ignites
+// in air at room temperature, and no class applies. The catalogue's
+// figures are NFPA 325's, which may differ from the standard's own
+// listing by tens of degrees, since the test methods differ: the site's
+// hazardous-area classification decides.
+//
 // # Release into a room: the well-mixed model
 //
 // A room of volume V, a released standard volume Q of blend (or a rate q)

@@ -47,6 +47,13 @@ func TestHazardJSON(t *testing.T) {
 		{"SiH4 100%", "flammable_in_air", true},                // above 100/100 = 1: a flammable gas burns undiluted
 		{"PH3 1%, HCl 5%, N2 bal", "ghs_inhalation_category", 3.0},
 		{"CH4 85%, C2H6 10%, C3H8 5%", "ufl_percent", 14.28689},
+		// The lowest autoignition figure, propane's 450 °C (NFPA 325, from
+		// memory), not above T1's 450 °C: T2.
+		{"CH4 85%, C2H6 10%, C3H8 5%", "autoignition_lowest_K", 723.0},
+		{"CH4 85%, C2H6 10%, C3H8 5%", "autoignition_lowest_species", "C3H8"},
+		{"CH4 85%, C2H6 10%, C3H8 5%", "temperature_class", "T2"},
+		{"CH4 90%, C2H4 10%", "temperature_class", nil},   // no figure for C2H4: undecided
+		{"SiH4 2%, N2 bal", "autoignition_lowest_K", nil}, // pyrophoric
 	}
 	for _, c := range cases {
 		got := hazardJSONOf(t, c.blend)[c.key]
@@ -60,6 +67,34 @@ func TestHazardJSON(t *testing.T) {
 		if got != c.want {
 			t.Errorf("%s: %s = %v, want %v", c.blend, c.key, got, c.want)
 		}
+	}
+}
+
+// TestHazardSpeciesJSON checks each component's figures in the JSON: in
+// the blend's order, null where a figure does not apply, the LC50 on its
+// 4 h basis.
+func TestHazardSpeciesJSON(t *testing.T) {
+	obj := hazardJSONOf(t, "NH3 5%, N2 bal")
+	list, ok := obj["species"].([]any)
+	if !ok || len(list) != 2 {
+		t.Fatalf("species = %v, want two entries", obj["species"])
+	}
+	nh3, n2 := list[0].(map[string]any), list[1].(map[string]any)
+	if nh3["formula"] != "NH3" || nh3["mole_fraction"] != 0.05 || nh3["flammable"] != true || nh3["toxic"] != true {
+		t.Errorf("NH3 entry %v", nh3)
+	}
+	// The 4 h LC50 is the one the blend's own figure rests on: with one
+	// toxic component, LC50_mix = LC50_i/x_i (GHS additivity).
+	lc50, _ := nh3["lc50_ppm_4h"].(float64)
+	mix, _ := obj["lc50_ppm"].(float64)
+	if lc50 <= 0 || mix < lc50/0.05*0.9999 || mix > lc50/0.05*1.0001 {
+		t.Errorf("NH3 lc50_ppm_4h %v with the blend's lc50_ppm %v; want the blend's = x⁻¹ × the species'", nh3["lc50_ppm_4h"], obj["lc50_ppm"])
+	}
+	if nh3["ki"] != nil || nh3["ci"] != nil {
+		t.Errorf("NH3: ki %v, ci %v; want null, a fuel is neither diluent nor oxidizer", nh3["ki"], nh3["ci"])
+	}
+	if n2["ki"] != 1.0 || n2["lfl_percent"] != nil || n2["autoignition_K"] != nil {
+		t.Errorf("N2 entry %v; want ki 1 (ISO 10156's reference inert) and no flammability figures", n2)
 	}
 }
 
