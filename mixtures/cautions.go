@@ -122,7 +122,8 @@ func SafetyParts(m *Mixture) []safety.Part {
 }
 
 // flammableCite is the flammability figures a Flammable caution cites:
-// the blend's limits in air and its ISO 10156 result (package safety).
+// the blend's limits in air, its ISO 10156 result and its autoignition
+// screen (package safety).
 func flammableCite(r *safety.Result) string {
 	var lim string
 	switch {
@@ -134,6 +135,9 @@ func flammableCite(r *safety.Result) string {
 		lim = "Flammable " + r.BlendRange() + " (Le Chatelier)"
 	}
 	s := lim + "; ISO 10156: " + r.FlamVerdict() + "."
+	if len(r.Ignition.Pyrophoric) == 0 { // else the Pyrophoric caution says more
+		s += " Autoignition: " + r.Ignition.Verdict() + "."
+	}
 	if r.Recalled {
 		s += " These rest on recalled figures: check the SDS."
 	}

@@ -94,3 +94,26 @@ func TestDeferLineAndFormat(t *testing.T) {
 		t.Errorf("caution without species: %q", got)
 	}
 }
+
+// TestFlammableCautionCitesIgnition: the Flammable caution cites the
+// autoignition screen of package safety, except where a pyrophoric
+// component has its own caution. Forming gas takes hydrogen's 500 °C
+// (773 K, NFPA 325, from memory): T1.
+func TestFlammableCautionCitesIgnition(t *testing.T) {
+	for _, c := range []struct {
+		blend, want string
+		cites       bool
+	}{
+		{"H2 5%, N2 bal", "Autoignition: lowest of the components 500 °C (773 K, H2): temperature class T1", true},
+		{"SiH4 2%, N2 bal", "Autoignition", false},
+	} {
+		for _, ca := range Cautions(mustMixture(t, c.blend, atmPa), atmPa) {
+			if ca.Title != "Flammable" {
+				continue
+			}
+			if strings.Contains(ca.Text, c.want) != c.cites {
+				t.Errorf("%s: Flammable caution %q; citing %q: want %v", c.blend, ca.Text, c.want, c.cites)
+			}
+		}
+	}
+}
