@@ -7,6 +7,8 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/charmbracelet/lipgloss"
+
 	"zmix/mixtures"
 	"zmix/model"
 )
@@ -310,6 +312,23 @@ func TestSetpointFitsNarrow(t *testing.T) {
 		sp := r.panes[1]
 		if above, below := sp.More(); above || below {
 			t.Errorf("%dx%d: Setpoint hides lines (above %v, below %v):\n%s", size[0], size[1], above, below, r.View())
+		}
+	}
+}
+
+// At the narrowest workbench (64 columns) the tab row cannot name every
+// pane: the others keep their numbers and the focused one its name, so
+// that the focus never falls off the end of the row.
+func TestTabRowKeepsFocusInSight(t *testing.T) {
+	for _, w := range []int{minWidth, 80, 120} {
+		r := testRoot(t, w, 24, testRootOpts{})
+		for id := range r.panes {
+			walk(t, r, []string{fmt.Sprint(id + 1)})
+			bar := r.tabBar()
+			want := fmt.Sprintf("[%d %s]", id+1, paneID(id).name())
+			if !strings.Contains(bar, want) || lipgloss.Width(bar) > w {
+				t.Errorf("%d columns, pane %d: tab row %q (width %d); want %q in it", w, id+1, bar, lipgloss.Width(bar), want)
+			}
 		}
 	}
 }

@@ -48,26 +48,40 @@ func (r *root) tooSmallView() string {
 }
 
 func (r *root) tabBar() string {
+	left := r.tabs(false)
+	if lipgloss.Width(left) > r.width {
+		// Too narrow for every name: the other tabs keep their numbers,
+		// so that the focused one, named, is never cut off.
+		left = r.tabs(true)
+	}
+	if in := r.b.in; in.Valid() {
+		right := r.c.Text(report.Short(in.TempK, 6) + " K · " + r.b.presShown(in.PresPa))
+		if gap := r.width - lipgloss.Width(left) - lipgloss.Width(right) - 1; gap >= 2 {
+			return left + strings.Repeat(" ", gap) + r.c.Styles.Muted.Render(right) + " "
+		}
+	}
+	return fitLine(left, r.width)
+}
+
+// tabs is the tab row's left part: every pane's number and name, or with
+// compact only the focused pane's name.
+func (r *root) tabs(compact bool) string {
 	s := r.c.Styles
 	var sb strings.Builder
 	sb.WriteString(s.Title.Render("zmix"))
 	sb.WriteString(s.Muted.Render(r.c.Text(" ·")))
 	for id := range r.panes {
 		label := fmt.Sprintf("%d %s", id+1, paneID(id).name())
-		if paneID(id) == r.focus {
+		switch {
+		case paneID(id) == r.focus:
 			sb.WriteString(s.TabActive.Render(" [" + label + "]"))
-		} else {
+		case compact:
+			sb.WriteString(s.Tab.Render(fmt.Sprintf(" %d", id+1)))
+		default:
 			sb.WriteString(s.Tab.Render("  " + label + " "))
 		}
 	}
-	left := sb.String()
-	if in := r.b.in; in.Valid() {
-		right := r.c.Text(report.Short(in.TempK, 6) + " K · " + r.b.presShown(in.PresPa))
-		if gap := r.width - lipgloss.Width(left) - lipgloss.Width(right) - 1; gap >= 2 {
-			return left + strings.Repeat(" ", gap) + s.Muted.Render(right) + " "
-		}
-	}
-	return fitLine(left, r.width)
+	return sb.String()
 }
 
 // paneTitle is a pane's frame title: its number and its own title.
