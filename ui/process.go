@@ -74,6 +74,7 @@ var processKinds = []processKind{
 	}},
 	{key: "release", name: "release", fields: []processField{
 		{key: "amount", label: "amount", def: "2 Nm3", hint: "released at once, or in all with a rate: mol, kg, lb, Nm3, SL, Sm3, scf, m3 at 20 °C"},
+		{key: "cylinder", label: "or cylinder", def: "", hint: "in place of the amount, a cylinder's water volume (50 L): its contents at the setpoint's T and P, less what stays at 1 atm"},
 		{key: "rate", label: "or rate", def: "", hint: "a continuous release: SLPM, Nm3/h, kg/h, ...; empty: all at once"},
 		{key: "room", label: "room", def: "30 m3", hint: "room volume: m3, L or ft3"},
 		{key: "ach", label: "air changes/h", def: "", hint: "ventilation; empty: none"},
@@ -614,7 +615,8 @@ func (p *processPane) calculate() (process.Result, string, error) {
 		res, err := w.Solve()
 		return res, strings.Join(gases, "  +  ") + " weighed in", err
 	case "release":
-		res, err := process.RoomRelease{Mixture: mix, Amount: p.value("amount"), Rate: p.value("rate"), Room: p.value("room"), ACH: p.value("ach")}.Solve()
+		res, err := process.RoomRelease{Mixture: mix, Amount: p.value("amount"), Rate: p.value("rate"), Room: p.value("room"), ACH: p.value("ach"),
+			Cylinder: p.value("cylinder"), FillTempK: t, FillPresPa: pres}.Solve()
 		if err != nil {
 			return nil, "", err
 		}

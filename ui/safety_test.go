@@ -53,9 +53,34 @@ func TestProcessPaneRelease(t *testing.T) {
 			t.Errorf("release screen lacks %q:\n%s", s, v)
 		}
 	}
-	// A room typed wrong names the field.
-	p.keys(t, "down", "down", "enter", "ctrl+u", "l", "o", "t", "s", "enter")
+	// A room typed wrong names the field (amount, cylinder, rate, room).
+	p.keys(t, "down", "down", "down", "enter", "ctrl+u", "l", "o", "t", "s", "enter")
 	if p.result != nil || !strings.Contains(p.err, "room") {
 		t.Errorf("bad room: result %v, error %q", p.result != nil, p.err)
+	}
+}
+
+// In place of the amount, a cylinder's contents at the setpoint's T and
+// P, as the model gives them; with the amount too, the pane says to give
+// one.
+func TestProcessPaneReleaseCylinder(t *testing.T) {
+	p, b := testProcess(t, false, 90, 30)
+	for p.current().key != "release" {
+		p.keys(t, "right")
+	}
+	p.keys(t, "down", "enter", "5", "0", " ", "L", "enter")
+	if p.result != nil || !strings.Contains(p.err, "give one") {
+		t.Errorf("amount and cylinder: result %v, error %q", p.result != nil, p.err)
+	}
+	p.keys(t, "up", "enter", "ctrl+u", "enter")
+	if p.result == nil {
+		t.Fatalf("no result: %s", p.err)
+	}
+	want, err := process.RoomRelease{Mixture: b.in.Mixture, Cylinder: "50 L", Room: "30 m3", FillTempK: b.in.TempK, FillPresPa: b.in.PresPa}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got, ok := process.Lookup(p.result, "q"); !ok || got.SI != want.Release.AmountM3 || !(got.SI > 0) {
+		t.Errorf("pane released %v m3, model %g", got.SI, want.Release.AmountM3)
 	}
 }

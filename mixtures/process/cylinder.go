@@ -347,3 +347,34 @@ func unitList(units map[string]float64) string {
 	slices.Sort(keys)
 	return strings.Join(keys, ", ")
 }
+
+// CylinderRelease is what a cylinder gives up when it empties into a room:
+// its contents at the fill pressure less what stays in it at the ambient
+// 1 atm, both at the fill temperature and each with the blend's real-gas
+// Z. The gas cools as it leaves and warms back to the room; for the
+// room's air only the amount counts.
+type CylinderRelease struct {
+	Full        *CylinderResult // the contents as filled
+	LeftMol     float64         // what stays at 1 atm
+	ReleasedMol float64
+}
+
+// Release solves c (given by its pressure) and the amount it releases
+// down to 1 atm.
+func (c Cylinder) Release() (*CylinderRelease, error) {
+	if !(c.PresPa > atmPa) || c.MassKg != 0 || c.AmountMol != 0 {
+		return nil, model.Errorf("process", "fill pressure %.4g bar: want a pressure above the ambient 1 atm", c.PresPa/1e5)
+	}
+	c.Recipe, c.ToTempK = "", 0
+	full, err := c.Solve()
+	if err != nil {
+		return nil, err
+	}
+	var s mixtures.State
+	z, err := cylinderGas(c.Mixture, &s, c.TempK, atmPa)
+	if err != nil {
+		return nil, err
+	}
+	left := atmPa * c.VolumeM3 / (z * model.GasConstant * c.TempK)
+	return &CylinderRelease{Full: full, LeftMol: left, ReleasedMol: full.AmountMol - left}, nil
+}

@@ -146,3 +146,50 @@ func TestThrottle(t *testing.T) {
 		t.Error("a throttle that raises the pressure is accepted")
 	}
 }
+
+// TestCylinderRelease: a cylinder empties to 1 atm, so it releases its
+// contents less what 1 atm leaves in it, each with the blend's Z.
+func TestCylinderRelease(t *testing.T) {
+	// N2, 50 L at 200 bar and 20 °C: Z ≈ 1.02 (NIST WebBook, from
+	// memory), about 400 mol in all.
+	mix := mixOf(t, "N2 100%")
+	c := Cylinder{Mixture: mix, VolumeM3: 0.05, TempK: 293.15, PresPa: 200e5}
+	r, err := c.Release()
+	if err != nil {
+		t.Fatal(err)
+	}
+	full, err := c.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Full.AmountMol != full.AmountMol || math.Abs(r.Full.Z/1.02-1) > 0.01 {
+		t.Errorf("contents %g mol, Z %.4f; want the cylinder's %g mol and Z 1.02 ± 1 %%", r.Full.AmountMol, r.Full.Z, full.AmountMol)
+	}
+	// What stays: 1 atm in 50 L at 20 °C, Z within 1e-3 of 1 there.
+	if ideal := model.StdPressureAtmPa * 0.05 / (model.GasConstant * 293.15); math.Abs(r.LeftMol/ideal-1) > 1e-3 {
+		t.Errorf("left %g mol, want %g (ideal gas at 1 atm) within 0.1 %%", r.LeftMol, ideal)
+	}
+	if math.Abs(r.ReleasedMol-(r.Full.AmountMol-r.LeftMol)) > 1e-12*r.Full.AmountMol {
+		t.Errorf("released %g ≠ full %g − left %g", r.ReleasedMol, r.Full.AmountMol, r.LeftMol)
+	}
+	// At 2 bar the gas is near ideal: (P − 1 atm)V/(RT) within 0.1 %.
+	low := Cylinder{Mixture: mix, VolumeM3: 0.05, TempK: 293.15, PresPa: 2e5}
+	lr, err := low.Release()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want := (2e5 - model.StdPressureAtmPa) * 0.05 / (model.GasConstant * 293.15); math.Abs(lr.ReleasedMol/want-1) > 1e-3 {
+		t.Errorf("2 bar: released %g mol, want %g (ideal gas) within 0.1 %%", lr.ReleasedMol, want)
+	}
+	// Refused: a fill at or below the ambient, a fill given by mass, and a
+	// liquefied gas.
+	for _, bad := range []Cylinder{
+		{Mixture: mix, VolumeM3: 0.05, TempK: 293.15, PresPa: 0.9e5},
+		{Mixture: mix, VolumeM3: 0.05, TempK: 293.15, MassKg: 10},
+		{Mixture: mixOf(t, "CO2 100%"), VolumeM3: 0.05, TempK: 293.15, PresPa: 100e5},
+	} {
+		if _, err := bad.Release(); err == nil {
+			t.Errorf("%+v: released, want a refusal", bad)
+		}
+	}
+}

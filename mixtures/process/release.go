@@ -1,6 +1,7 @@
 package process
 
 import (
+	"fmt"
 	"math"
 	"strings"
 
@@ -18,6 +19,11 @@ type RoomRelease struct {
 	// Amount and Rate as typed; one or both. Room is a volume; ACH the
 	// air changes per hour ("" for none).
 	Amount, Rate, Room, ACH string
+	// Cylinder, in place of Amount, is a cylinder's water volume as
+	// typed: it releases its contents at (FillTempK, FillPresPa) less
+	// what stays at 1 atm (Cylinder.Release).
+	Cylinder              string
+	FillTempK, FillPresPa float64
 }
 
 // MaxACH bounds the air changes an hour: a few hundred is already a fume
@@ -80,6 +86,7 @@ func (rr RoomRelease) Solve() (*ReleaseResult, error) {
 		rel.Parts = append(rel.Parts, safety.Part{Species: c.Species, X: c.X})
 	}
 	var err error
+	cylNote := ""
 	if strings.TrimSpace(rr.Room) == "" {
 		return nil, model.Errorf("process", "room: give the room volume with a unit (%s), e.g. 60 m3", VolumeUnits)
 	}
@@ -87,8 +94,24 @@ func (rr RoomRelease) Solve() (*ReleaseResult, error) {
 		return nil, model.Errorf("process", "room: %w", err)
 	}
 	m := rr.Mixture.MolarMassKgPerMol
-	if strings.TrimSpace(rr.Amount) == "" && strings.TrimSpace(rr.Rate) == "" {
-		return nil, model.Errorf("process", "give an amount (released at once) or a rate (a continuous release), e.g. 2 Nm3 or 10 SLPM")
+	if strings.TrimSpace(rr.Amount) == "" && strings.TrimSpace(rr.Rate) == "" && strings.TrimSpace(rr.Cylinder) == "" {
+		return nil, model.Errorf("process", "give an amount (released at once), a cylinder or a rate (a continuous release), e.g. 2 Nm3, 50 L or 10 SLPM")
+	}
+	if strings.TrimSpace(rr.Cylinder) != "" {
+		if strings.TrimSpace(rr.Amount) != "" {
+			return nil, model.Errorf("process", "an amount and a cylinder both give what is released; give one")
+		}
+		vol, err := ParseCylinderQuantity("volume", rr.Cylinder)
+		if err != nil {
+			return nil, model.Errorf("process", "cylinder: %w", err)
+		}
+		cr, err := Cylinder{Mixture: rr.Mixture, VolumeM3: vol, TempK: rr.FillTempK, PresPa: rr.FillPresPa}.Release()
+		if err != nil {
+			return nil, model.Errorf("process", "cylinder: %w", err)
+		}
+		rel.AmountM3 = safety.GasM3AtRoom(cr.ReleasedMol)
+		cylNote = fmt.Sprintf("a %.4g L cylinder at %.4g bar abs and %.5g K holds %.4g mol (Z %.4g); %.3g mol stay at 1 atm, %.4g mol are released",
+			vol*1e3, rr.FillPresPa/1e5, rr.FillTempK, cr.Full.AmountMol, cr.Full.Z, cr.LeftMol, cr.ReleasedMol)
 	}
 	if strings.TrimSpace(rr.Amount) != "" {
 		q, err := safety.ParseAmount(rr.Amount)
@@ -116,7 +139,11 @@ func (rr RoomRelease) Solve() (*ReleaseResult, error) {
 	if math.IsInf(rel.AmountM3, 0) || math.IsInf(rel.RateM3PerS, 0) || math.IsInf(rel.VentM3PerS, 0) {
 		return nil, model.Errorf("process", "the amount, rate or ventilation is too large to compute with")
 	}
-	return newReleaseResult(rel), nil
+	res := newReleaseResult(rel)
+	if cylNote != "" {
+		res.note(cylNote)
+	}
+	return res, nil
 }
 
 // ParseACH reads air changes per hour, 0 to MaxACH ("6" or "6/h").

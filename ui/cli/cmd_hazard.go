@@ -22,7 +22,7 @@ func (a *app) cmdHazard(g *globalOpts, args []string) error {
 	if err := parseOnlyFlags(fs, "hazard", args); err != nil {
 		return err
 	}
-	src, parts, err := safetyBlend(g, fs, blendSpec, presText)
+	src, _, parts, err := safetyBlend(g, fs, blendSpec, presText)
 	if err != nil {
 		return err
 	}
@@ -34,27 +34,27 @@ func (a *app) cmdHazard(g *globalOpts, args []string) error {
 }
 
 // safetyBlend reads the blend of a safety command (hazard, release) into
-// species and mole fractions; a blend file's pressure is --pres's default.
-func safetyBlend(g *globalOpts, fs *flag.FlagSet, blendSpec, presText string) (*blendSource, []safety.Part, error) {
+// its mixture and its parts: species and mole fractions.
+func safetyBlend(g *globalOpts, fs *flag.FlagSet, blendSpec, presText string) (*blendSource, *mixtures.Mixture, []safety.Part, error) {
 	src, err := readBlend(blendSpec)
 	if err != nil {
-		return nil, nil, err
+		return nil, nil, nil, err
 	}
 	cat, err := g.catalogue()
 	if err != nil {
-		return nil, nil, err
+		return nil, nil, nil, err
 	}
-	parts, err := blendParts(cat, src, src.pick(flagsGiven(fs), "pres", presText))
+	mix, err := safetyMixture(cat, src, src.pick(flagsGiven(fs), "pres", presText))
 	if err != nil {
-		return nil, nil, err
+		return nil, nil, nil, err
 	}
-	return src, parts, nil
+	return src, mix, mixtures.SafetyParts(mix), nil
 }
 
-// blendParts resolves a blend into species and mole fractions for the
-// safety calculations. They need no pressure, unless amounts are partial
-// pressures: then the total is --pres, or their sum.
-func blendParts(cat *model.Catalogue, src *blendSource, presText string) ([]safety.Part, error) {
+// safetyMixture resolves a blend for the safety calculations. They need
+// no pressure, unless amounts are partial pressures: then the total is
+// --pres, or their sum.
+func safetyMixture(cat *model.Catalogue, src *blendSource, presText string) (*mixtures.Mixture, error) {
 	presPa := float64(mixtures.AtmospherePa)
 	if strings.TrimSpace(presText) != "" || src.blend.HasPartialPressures() {
 		p, err := totalPressure(src, presText)
@@ -67,5 +67,5 @@ func blendParts(cat *model.Catalogue, src *blendSource, presText string) ([]safe
 	if err != nil {
 		return nil, badInput("--blend: %v", model.UserMessage(err))
 	}
-	return mixtures.SafetyParts(mix), nil
+	return mix, nil
 }

@@ -1,10 +1,12 @@
 package cli
 
 import (
+	"fmt"
 	"io"
 	"math"
 	"strings"
 
+	"zmix/mixtures"
 	"zmix/mixtures/process"
 	"zmix/mixtures/report"
 	"zmix/mixtures/safety"
@@ -14,9 +16,13 @@ import (
 func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix release")
 	var blendSpec, presText, amountText, rateText, roomText, achText, ventText string
+	var cylText, fillText, fillTempText string
 	var outFmt formatFlags
 	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&amountText, "amount", "", "the amount `Q` released: 2 Nm3, 5 kg, 300 scf, 40 mol")
+	fs.StringVar(&cylText, "cylinder", "", "a cylinder's water volume `V` (50L): its contents, less what stays at 1 atm, are released")
+	fs.StringVar(&fillText, "fill", "", "the cylinder's fill pressure `P` with a unit (150bar, 2200psig)")
+	fs.StringVar(&fillTempText, "fill-temp", "", "the cylinder's temperature `T` (default 20C, the room's)")
 	fs.StringVar(&rateText, "rate", "", "a continuous release `R`: 10 SLPM, 2 Nm3/h, 0.1 kg/h")
 	fs.StringVar(&roomText, "room", "", "the room volume `V`: 60 m3, 2000 ft3")
 	fs.StringVar(&achText, "ach", "", "ventilation in air changes per hour `N`")
@@ -27,7 +33,7 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	if err := parseOnlyFlags(fs, "release", args); err != nil {
 		return err
 	}
-	src, parts, err := safetyBlend(g, fs, blendSpec, presText)
+	src, mix, parts, err := safetyBlend(g, fs, blendSpec, presText)
 	if err != nil {
 		return err
 	}
@@ -43,8 +49,20 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 		molarMass += p.X * p.Species.MolarMassKgPerMol
 	}
 	var what []string
-	if strings.TrimSpace(amountText) == "" && strings.TrimSpace(rateText) == "" {
-		return badInput("give --amount (released at once) or --rate (a continuous release), e.g. --amount 2Nm3 or --rate 10SLPM")
+	cylinder := strings.TrimSpace(cylText) != "" || strings.TrimSpace(fillText) != "" || strings.TrimSpace(fillTempText) != ""
+	if strings.TrimSpace(amountText) == "" && strings.TrimSpace(rateText) == "" && !cylinder {
+		return badInput("give --amount (released at once), --cylinder with --fill (a cylinder's contents) or --rate (a continuous release), e.g. --amount 2Nm3 or --rate 10SLPM")
+	}
+	if cylinder {
+		if strings.TrimSpace(amountText) != "" {
+			return badInput("--amount and --cylinder both give the amount released; give one")
+		}
+		mol, text, err := cylinderContents(mix, cylText, fillText, fillTempText)
+		if err != nil {
+			return err
+		}
+		rel.AmountM3 = safety.GasM3AtRoom(mol)
+		what = append(what, text)
 	}
 	if strings.TrimSpace(amountText) != "" {
 		q, err := safety.ParseAmount(amountText)
@@ -98,4 +116,38 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 		func(w io.Writer) error { return report.WriteReleaseJSON(w, rep) },
 		func(w io.Writer) error { return report.WriteReleaseCSV(w, rep) },
 		func(w io.Writer) error { return report.WriteReleaseText(w, rep) })
+}
+
+// cylinderContents is what a cylinder of water volume volText filled to
+// fillText at fillTempText (default the room's 20 °C) releases down to
+// 1 atm, with the blend's real-gas Z, and how the readout names it.
+func cylinderContents(mix *mixtures.Mixture, volText, fillText, fillTempText string) (float64, string, error) {
+	vol, err := cylinderQuantity("--cylinder", "volume", volText, true)
+	if err != nil {
+		return 0, "", err
+	}
+	if strings.TrimSpace(fillText) == "" {
+		return 0, "", badInput("--fill is missing; give the cylinder's pressure with a unit, e.g. --fill 150bar or --fill 2200psig")
+	}
+	p, err := parsePressure("--fill", fillText)
+	if err != nil {
+		return 0, "", err
+	}
+	tempK := safety.RoomTempK
+	if strings.TrimSpace(fillTempText) != "" {
+		t, err := parseTemperature("--fill-temp", fillTempText)
+		if err != nil {
+			return 0, "", err
+		}
+		tempK = t.kelvin
+	}
+	c := process.Cylinder{Mixture: mix, VolumeM3: vol, TempK: tempK, PresPa: p.Pa}
+	r, err := c.Release()
+	if err != nil {
+		return 0, "", badInput("--cylinder %s at --fill %s: %v (for a liquefied gas, give the weight of its contents with --amount)", model.Quote(volText), model.Quote(fillText), model.UserMessage(err))
+	}
+	text := fmt.Sprintf("the contents of a %s cylinder at %s and %s (%s mol, Z %s; %s mol stay at 1 atm)",
+		strings.TrimSpace(volText), strings.TrimSpace(fillText), report.Short(tempK-model.ZeroCelsiusK, 4)+" °C",
+		report.Short(r.ReleasedMol, 4), report.Short(r.Full.Z, 4), report.Short(r.LeftMol, 3))
+	return r.ReleasedMol, text, nil
 }

@@ -68,11 +68,44 @@ func TestReleaseCommand(t *testing.T) {
 		{"release", "--blend", "N2 bal", "--room", "30m3", "--amount", "1kg", "--ach", "lots"},
 		{"release", "--blend", "N2 bal", "--room", "30m3", "--amount", "1kg", "--vent", "3 kg/h"},
 		{"release", "--blend", "N2 bal", "--room", "30m3", "--amount", "1kg", "--ach", "2", "--vent", "3m3/h"},
+		{"release", "--blend", "N2 bal", "--room", "30m3", "--cylinder", "50L"},
+		{"release", "--blend", "N2 bal", "--room", "30m3", "--fill", "200bar"},
+		{"release", "--blend", "N2 bal", "--room", "30m3", "--cylinder", "50L", "--fill", "200bar", "--amount", "1kg"},
+		{"release", "--blend", "N2 bal", "--room", "30m3", "--cylinder", "50L", "--fill", "0.5bar"},
+		{"release", "--blend", "N2 bal", "--room", "30m3", "--cylinder", "-5L", "--fill", "200bar"},
+		{"release", "--blend", "N2 bal", "--room", "30m3", "--cylinder", "50L", "--fill", "200bar", "--fill-temp", "-300C"},
+		{"release", "--blend", "CO2 bal", "--room", "30m3", "--cylinder", "50L", "--fill", "100bar"}, // liquefied
 	} {
 		code, stdout, stderr := zmix(t, args...)
 		if code != 2 || stdout != "" {
 			t.Errorf("zmix %q: exit %d, stdout %q", args, code, stdout)
 		}
 		checkOneLineError(t, stderr)
+	}
+}
+
+// TestReleaseCylinder: a cylinder's contents, as the cylinder calculation
+// gives them less what stays at 1 atm, release as that amount would.
+func TestReleaseCylinder(t *testing.T) {
+	cyl := releaseJSONOf(t, "--blend", "N2 100%", "--cylinder", "50L", "--fill", "200bar", "--room", "40m3")
+	code, stdout, stderr := zmix(t, "cylinder", "--blend", "N2 100%", "--volume", "50L", "--temp", "20C", "--pres", "200bar", "--json")
+	if code != 0 {
+		t.Fatalf("zmix cylinder: exit %d, %s", code, stderr)
+	}
+	var c struct {
+		AmountMol float64 `json:"amount_mol"`
+	}
+	if err := json.Unmarshal([]byte(stdout), &c); err != nil {
+		t.Fatalf("zmix cylinder --json: %v\n%s", err, stdout)
+	}
+	full := c.AmountMol
+	left := 101325 * 0.05 / (8.314462618 * 293.15) // ideal at 1 atm: Z there is 1 within 1e-3
+	want := (full - left) * 8.314462618 * 293.15 / 101325
+	if got, _ := cyl["released_m3"].(float64); full == 0 || math.Abs(got/want-1) > 1e-3 {
+		t.Errorf("released_m3 %v, want %g: the cylinder's %g mol less %g mol at 1 atm", cyl["released_m3"], want, full, left)
+	}
+	warm := releaseJSONOf(t, "--blend", "N2 100%", "--cylinder", "50L", "--fill", "200bar", "--fill-temp", "50C", "--room", "40m3")
+	if w, _ := warm["released_m3"].(float64); !(w < want) {
+		t.Errorf("a warmer cylinder at the same pressure holds less: %v, want below %g", warm["released_m3"], want)
 	}
 }

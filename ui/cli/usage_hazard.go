@@ -47,8 +47,8 @@ Examples:
 }
 
 func usageRelease(w io.Writer) {
-	io.WriteString(w, `Usage: zmix release --blend SPEC (--amount Q | --rate R) --room V
-                    [--ach N | --vent FLOW] [--pres P] [--json]
+	io.WriteString(w, `Usage: zmix release --blend SPEC (--amount Q | --cylinder V --fill P | --rate R)
+                    --room V [--ach N | --vent FLOW] [--pres P] [--json]
 
 What a release of the blend does to a room, by the well-mixed model
 (common practice for oxygen-deficiency and gas-release assessments): the
@@ -56,10 +56,13 @@ gas is taken as spread through the room at once.
   --amount alone   released at once: the oxygen left by the two common
                    closed forms, a closed room (gas added, 20.9 % V/(V+Q))
                    and room air displaced (20.9 % exp(-Q/V)), and the lower
+  --cylinder       a cylinder's contents released at once: what it holds at
+                   --fill less what stays at 1 atm, with the real-gas Z
+                   (as zmix cylinder); a liquefied gas goes by --amount
   --rate           a continuous release: the steady state with the
                    ventilation, the time constant V/(q+v), the time to
                    19.5 % O2 and the time course; with --amount too, the
-                   release stops when that amount is out
+                   release stops when that amount (or cylinder) is out
 Each species' peak is given in ppm; a flammable one as % of its LFL,
 against the alarm points of 10 % and 25 % LFL (common practice); a toxic
 one against its 4 h LC50, GHS category and any exposure limit in the
@@ -71,6 +74,9 @@ Flags:
   --blend SPEC     the blend, as text or @FILE (required)
   --amount Q       mol, kmol; kg, g, lb; Nm3, SL (0 °C), Sm3 (15 °C),
                    scf (60 °F); m3 or L of gas at 20 °C and 1 atm
+  --cylinder V     a cylinder's water volume: L, m3, ft3
+  --fill P         its fill pressure with a unit: 150bar, 2200psig
+  --fill-temp T    its temperature (default 20C, the room's)
   --rate R         a flow: mol/s, kg/h, Nm3/h, SLPM, sccm, SCFH, SCFM;
                    actual m3/h, L/min, ACFM taken at 20 °C and 1 atm
   --room V         room volume: m3, L, ft3 (required)
@@ -90,5 +96,6 @@ Examples:
   zmix release --blend "H2 5%, N2 bal" --rate 20SLPM --room 60m3 --ach 6
   zmix release --blend "PH3 1%, N2 bal" --amount 50SL --room 200m3 --json
   zmix release --blend "Ar 100%" --rate 30Nm3/h --amount 9Nm3 --room 25m3 --vent 100m3/h
+  zmix release --blend "N2 100%" --cylinder 50L --fill 200bar --room 40m3
 `)
 }
