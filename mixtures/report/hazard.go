@@ -96,17 +96,18 @@ func writeSpeciesFigures(w io.Writer, figs []safety.SpeciesFigures) {
 	t := NewTable("  ", Left, Right, Right, Right, Right, Right, Right, Right)
 	t.Row("", "x", "LFL-UFL", "autoign.", "Tci", "Ki", "Ci", "LC50 4 h")
 	t.Row("", "%", "% in air", "°C", "% in N2", "", "", "ppm")
-	for _, f := range figs {
-		cell := func(applies bool, v float64, format func(float64) string) string {
-			switch {
-			case !applies:
-				return "-"
-			case v <= 0:
-				return "?"
-			}
-			return format(v)
+	cell := func(applies bool, v float64, format func(float64) string) string {
+		switch {
+		case !applies:
+			return "-"
+		case v <= 0:
+			return "?"
 		}
-		short := func(n int) func(float64) string { return func(v float64) string { return Short(v, n) } }
+		return format(v)
+	}
+	short := func(n int) func(float64) string { return func(v float64) string { return Short(v, n) } }
+	celsius := func(k float64) string { return Fixed(k-model.ZeroCelsiusK, 0) }
+	for _, f := range figs {
 		limits := "-"
 		if f.Flammable {
 			limits = "?"
@@ -119,7 +120,7 @@ func writeSpeciesFigures(w io.Writer, figs []safety.SpeciesFigures) {
 			lc50 += "*"
 		}
 		t.Row(f.Formula, Sig(100*f.X, 4), limits,
-			cell(f.Flammable, f.AutoIgnitionK, func(k float64) string { return Fixed(k-model.ZeroCelsiusK, 0) }),
+			cell(f.Flammable, f.AutoIgnitionK, celsius),
 			cell(f.Flammable, f.TciPct, short(3)),
 			cell(f.Diluent, f.Ki, short(3)),
 			cell(f.Oxidizer, f.Ci, short(3)),
