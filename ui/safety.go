@@ -3,6 +3,8 @@ package ui
 import (
 	"strings"
 
+	"github.com/charmbracelet/lipgloss"
+
 	"zmix/mixtures"
 	"zmix/mixtures/report"
 	"zmix/mixtures/safety"
@@ -147,5 +149,20 @@ func hazardDetail(c *Common, hz *safety.Result, w int) []string {
 			out = append(out, "  "+s.Muted.Render(l))
 		}
 	}
-	return append(out, "")
+	out = append(out, "")
+	// Each component's figures, where the overlay is wide enough for the
+	// table: it is not wrapped, which would tear its columns apart.
+	table := report.SpeciesFigureLines(hz.Figures)
+	fits := true
+	for i, l := range table {
+		table[i] = c.Text(l)
+		fits = fits && lipgloss.Width(table[i]) <= w
+	}
+	if len(table) > 0 && fits {
+		out = append(out, s.Caution.Render(table[0]))
+		out = append(append(out, table[1:]...), "")
+	} else if len(table) > 0 {
+		out = append(out, s.Muted.Render(c.Text("(zmix hazard lists each component's figures)")), "")
+	}
+	return out
 }

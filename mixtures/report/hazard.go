@@ -89,13 +89,23 @@ func WriteHazardText(w io.Writer, rep *HazardReport) error {
 // writeSpeciesFigures writes each component's safety figures, so that a
 // verdict can be traced to the numbers behind it.
 func writeSpeciesFigures(w io.Writer, figs []safety.SpeciesFigures) {
-	if !slices.ContainsFunc(figs, func(f safety.SpeciesFigures) bool { return f.Flammable || f.Oxidizer || f.Toxic }) {
-		return // no figure of any component applies
+	lines := SpeciesFigureLines(figs)
+	if len(lines) == 0 {
+		return
 	}
-	fmt.Fprintln(w, "\nSpecies figures (? not in the catalogue, - does not apply)")
-	t := NewTable("  ", Left, Right, Right, Right, Right, Right, Right, Right)
-	t.Row("", "x", "LFL-UFL", "autoign.", "Tci", "Ki", "Ci", "LC50 4 h")
-	t.Row("", "%", "% in air", "°C", "% in N2", "", "", "ppm")
+	fmt.Fprintln(w)
+	for _, l := range lines {
+		fmt.Fprintln(w, l)
+	}
+}
+
+// SpeciesFigureLines is the table of each component's safety figures,
+// with its heading and footnote, for zmix hazard and the workbench's
+// safety details; none when no figure applies to any component.
+func SpeciesFigureLines(figs []safety.SpeciesFigures) []string {
+	if !slices.ContainsFunc(figs, func(f safety.SpeciesFigures) bool { return f.Flammable || f.Oxidizer || f.Toxic }) {
+		return nil // no figure of any component applies
+	}
 	cell := func(applies bool, v float64, format func(float64) string) string {
 		switch {
 		case !applies:
@@ -107,6 +117,10 @@ func writeSpeciesFigures(w io.Writer, figs []safety.SpeciesFigures) {
 	}
 	short := func(n int) func(float64) string { return func(v float64) string { return Short(v, n) } }
 	celsius := func(k float64) string { return Fixed(k-model.ZeroCelsiusK, 0) }
+	t := NewTable("  ", Left, Right, Right, Right, Right, Right, Right, Right)
+	t.Row("", "x", "LFL-UFL", "autoign.", "Tci", "Ki", "Ci", "LC50 4 h")
+	t.Row("", "%", "% in air", "°C", "% in N2", "", "", "ppm")
+	converted := false
 	for _, f := range figs {
 		limits := "-"
 		if f.Flammable {
@@ -118,6 +132,7 @@ func writeSpeciesFigures(w io.Writer, figs []safety.SpeciesFigures) {
 		lc50 := cell(f.Toxic, f.LC50FourHourPPM, short(4))
 		if f.LC50Converted {
 			lc50 += "*"
+			converted = true
 		}
 		t.Row(f.Formula, Sig(100*f.X, 4), limits,
 			cell(f.Flammable, f.AutoIgnitionK, celsius),
@@ -126,13 +141,13 @@ func writeSpeciesFigures(w io.Writer, figs []safety.SpeciesFigures) {
 			cell(f.Oxidizer, f.Ci, short(3)),
 			lc50)
 	}
-	t.Write(w)
-	for _, f := range figs {
-		if f.LC50Converted {
-			fmt.Fprintln(w, "  * a 1 h LC50, halved to 4 h as GHS prescribes")
-			break
-		}
+	var b strings.Builder
+	t.Write(&b)
+	lines := append([]string{"Species figures (? not in the catalogue, - does not apply)"}, strings.Split(strings.TrimRight(b.String(), "\n"), "\n")...)
+	if converted {
+		lines = append(lines, "  * a 1 h LC50, halved to 4 h as GHS prescribes")
 	}
+	return lines
 }
 
 // writeSafetyFooter ends a safety readout (hazard, release): whether it
