@@ -44,10 +44,7 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	if rel.RoomM3, err = process.ParseVolume(roomText); err != nil {
 		return badInput("--room: %v", err)
 	}
-	molarMass := 0.0
-	for _, p := range parts {
-		molarMass += p.X * p.Species.MolarMassKgPerMol
-	}
+	molarMass := mix.MolarMassKgPerMol
 	var what []string
 	cylinder := strings.TrimSpace(cylText) != "" || strings.TrimSpace(fillText) != "" || strings.TrimSpace(fillTempText) != ""
 	if strings.TrimSpace(amountText) == "" && strings.TrimSpace(rateText) == "" && !cylinder {
