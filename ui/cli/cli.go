@@ -202,6 +202,29 @@ func pickFormat(asJSON, asCSV bool) (outputFormat, error) {
 // formatFlags are the --json and --csv flags of a command whose result is
 // nested (the process, hazard and release commands); their CSV is the
 // long table of report.WriteFlatCSV.
+// nestedFlags are the flags the commands with a nested result share: the
+// blend, --json and --csv, and the global flags. A command adds its own
+// to fs before parse.
+type nestedFlags struct {
+	fs    *flag.FlagSet
+	name  string
+	blend string
+	out   formatFlags
+}
+
+// newNestedFlags makes the flag set of zmix name, with the blend flag
+// described by blendUsage.
+func newNestedFlags(g *globalOpts, name, blendUsage string) *nestedFlags {
+	c := &nestedFlags{fs: newFlagSet("zmix " + name), name: name}
+	c.fs.StringVar(&c.blend, "blend", "", blendUsage)
+	c.out.register(c.fs)
+	g.register(c.fs, false)
+	return c
+}
+
+// parse reads args, which hold flags only.
+func (c *nestedFlags) parse(args []string) error { return parseOnlyFlags(c.fs, c.name, args) }
+
 type formatFlags struct{ json, csv bool }
 
 func (f *formatFlags) register(fs *flag.FlagSet) {

@@ -9,10 +9,9 @@ import (
 )
 
 func (a *app) cmdCompress(g *globalOpts, args []string) error {
-	fs := newFlagSet("zmix compress")
-	var blendSpec, tempText, presText, toText, effText, stagesText, coolText, rateText string
-	var outFmt formatFlags
-	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	cmd := newNestedFlags(g, "compress", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	fs := cmd.fs
+	var tempText, presText, toText, effText, stagesText, coolText, rateText string
 	fs.StringVar(&tempText, "temp", "", "inlet temperature `T` with a unit")
 	fs.StringVar(&presText, "pres", "", "inlet pressure `P` with a unit")
 	fs.StringVar(&toText, "to", "", "outlet pressure `P2`; below --pres makes an expander")
@@ -20,12 +19,10 @@ func (a *app) cmdCompress(g *globalOpts, args []string) error {
 	fs.StringVar(&stagesText, "stages", "", "number of compression stages `N`, equal pressure ratios (default 1)")
 	fs.StringVar(&coolText, "intercool", "", "temperature `T` the gas is cooled to between stages (default the inlet's)")
 	fs.StringVar(&rateText, "rate", "", "the flow `\"VALUE UNIT\"`, for the power")
-	outFmt.register(fs)
-	g.register(fs, false)
-	if err := parseOnlyFlags(fs, "compress", args); err != nil {
+	if err := cmd.parse(args); err != nil {
 		return err
 	}
-	src, t1, p1, err := inletConditions(fs, blendSpec, tempText, presText)
+	src, t1, p1, err := inletConditions(fs, cmd.blend, tempText, presText)
 	if err != nil {
 		return err
 	}
@@ -70,7 +67,7 @@ func (a *app) cmdCompress(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(src.label(), res, outFmt, g.ascii)
+	return a.printProcess(src.label(), res, cmd.out, g.ascii)
 }
 
 func usageCompress(w io.Writer) {

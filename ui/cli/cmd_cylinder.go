@@ -10,10 +10,9 @@ import (
 )
 
 func (a *app) cmdCylinder(g *globalOpts, args []string) error {
-	fs := newFlagSet("zmix cylinder")
-	var blendSpec, volText, tempText, presText, massText, amountText, toText, refText, recipe, ratedText string
-	var outFmt formatFlags
-	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	cmd := newNestedFlags(g, "cylinder", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	fs := cmd.fs
+	var volText, tempText, presText, massText, amountText, toText, refText, recipe, ratedText string
 	fs.StringVar(&volText, "volume", "", "the cylinder's water volume `V` (50L, 0.05m3)")
 	fs.StringVar(&tempText, "temp", "", "the gas temperature `T` with a unit")
 	fs.StringVar(&presText, "pres", "", "the fill pressure `P` with a unit")
@@ -23,12 +22,10 @@ func (a *app) cmdCylinder(g *globalOpts, args []string) error {
 	fs.StringVar(&refText, "ref", "normal", "the reference condition `NAME` of the standard volume")
 	fs.StringVar(&recipe, "recipe", "", "a fill recipe: `pressure` or weight")
 	fs.StringVar(&ratedText, "rated", "", "the cylinder's rated pressure `PR`: a fill above it is refused")
-	outFmt.register(fs)
-	g.register(fs, false)
-	if err := parseOnlyFlags(fs, "cylinder", args); err != nil {
+	if err := cmd.parse(args); err != nil {
 		return err
 	}
-	src, err := readBlend(blendSpec)
+	src, err := readBlend(cmd.blend)
 	if err != nil {
 		return err
 	}
@@ -95,7 +92,7 @@ func (a *app) cmdCylinder(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(src.label(), res, outFmt, g.ascii)
+	return a.printProcess(src.label(), res, cmd.out, g.ascii)
 }
 
 // cylinderQuantity parses a volume, mass or amount flag; an empty

@@ -9,20 +9,17 @@ import (
 )
 
 func (a *app) cmdDilute(g *globalOpts, args []string) error {
-	fs := newFlagSet("zmix dilute")
-	var blendSpec, withSpec, targetText, ratioText, rateText string
-	var outFmt formatFlags
-	fs.StringVar(&blendSpec, "blend", "", "the parent blend: `SPEC` text, or @FILE")
+	cmd := newNestedFlags(g, "dilute", "the parent blend: `SPEC` text, or @FILE")
+	fs := cmd.fs
+	var withSpec, targetText, ratioText, rateText string
 	fs.StringVar(&withSpec, "with", "", "the diluent: a pure gas or a second blend, `SPEC` text or @FILE")
 	fs.StringVar(&targetText, "target", "", "the level to reach, `\"SPECIES LEVEL\"`, e.g. \"SiH4 50ppm\"")
 	fs.StringVar(&ratioText, "ratio", "", "instead of --target: moles of diluent per mole of parent, `R`; then --target names only the species (\"SiH4\")")
 	fs.StringVar(&rateText, "rate", "", "the parent's flow `\"VALUE UNIT\"`, for the diluent and total flows")
-	outFmt.register(fs)
-	g.register(fs, false)
-	if err := parseOnlyFlags(fs, "dilute", args); err != nil {
+	if err := cmd.parse(args); err != nil {
 		return err
 	}
-	parentSrc, err := readBlend(blendSpec)
+	parentSrc, err := readBlend(cmd.blend)
 	if err != nil {
 		return err
 	}
@@ -71,7 +68,7 @@ func (a *app) cmdDilute(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(parentSrc.label()+"  diluted with  "+diluentB.Text, res, outFmt, g.ascii)
+	return a.printProcess(parentSrc.label()+"  diluted with  "+diluentB.Text, res, cmd.out, g.ascii)
 }
 
 func usageDilute(w io.Writer) {

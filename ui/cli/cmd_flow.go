@@ -7,20 +7,17 @@ import (
 )
 
 func (a *app) cmdFlow(g *globalOpts, args []string) error {
-	fs := newFlagSet("zmix flow")
-	var blendSpec, rateText, tempText, presText, refText string
-	var outFmt formatFlags
-	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	cmd := newNestedFlags(g, "flow", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	fs := cmd.fs
+	var rateText, tempText, presText, refText string
 	fs.StringVar(&rateText, "rate", "", "the flow `\"VALUE UNIT\"`: mol/s, kmol/h, kg/h, lb/h, m3/h, L/min, ACFM, Nm3/h, Sm3/h, SLPM, sccm, SCFH, SCFM")
 	fs.StringVar(&tempText, "temp", "", "the line temperature `T`, for actual volumes")
 	fs.StringVar(&presText, "pres", "", "the line pressure `P`, for actual volumes")
 	fs.StringVar(&refText, "ref", "", "the reference of standard volumes: `normal` (default), 15C, 20C, 60F, or \"T, P\"")
-	outFmt.register(fs)
-	g.register(fs, false)
-	if err := parseOnlyFlags(fs, "flow", args); err != nil {
+	if err := cmd.parse(args); err != nil {
 		return err
 	}
-	src, err := readBlend(blendSpec)
+	src, err := readBlend(cmd.blend)
 	if err != nil {
 		return err
 	}
@@ -68,7 +65,7 @@ func (a *app) cmdFlow(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(src.label(), res, outFmt, g.ascii)
+	return a.printProcess(src.label(), res, cmd.out, g.ascii)
 }
 
 const rateHelp = `Rates: "VALUE UNIT"

@@ -12,22 +12,19 @@ import (
 )
 
 func (a *app) cmdHazard(g *globalOpts, args []string) error {
-	fs := newFlagSet("zmix hazard")
-	var blendSpec, presText string
-	var outFmt formatFlags
-	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	cmd := newNestedFlags(g, "hazard", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	fs := cmd.fs
+	var presText string
 	fs.StringVar(&presText, "pres", "", "total pressure `P`, needed only to turn partial pressures into fractions")
-	outFmt.register(fs)
-	g.register(fs, false)
-	if err := parseOnlyFlags(fs, "hazard", args); err != nil {
+	if err := cmd.parse(args); err != nil {
 		return err
 	}
-	src, _, parts, err := safetyBlend(g, fs, blendSpec, presText)
+	src, _, parts, err := safetyBlend(g, fs, cmd.blend, presText)
 	if err != nil {
 		return err
 	}
 	rep := &report.HazardReport{Label: src.label(), Result: safety.Classify(parts)}
-	return a.printNested(outFmt, g.ascii,
+	return a.printNested(cmd.out, g.ascii,
 		func(w io.Writer) error { return report.WriteHazardJSON(w, rep) },
 		func(w io.Writer) error { return report.WriteHazardCSV(w, rep) },
 		func(w io.Writer) error { return report.WriteHazardText(w, rep) })

@@ -6,20 +6,17 @@ import (
 )
 
 func (a *app) cmdHeat(g *globalOpts, args []string) error {
-	fs := newFlagSet("zmix heat")
-	var blendSpec, tempText, toText, presText, rateText string
-	var outFmt formatFlags
-	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	cmd := newNestedFlags(g, "heat", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	fs := cmd.fs
+	var tempText, toText, presText, rateText string
 	fs.StringVar(&tempText, "temp", "", "inlet temperature `T1` with a unit")
 	fs.StringVar(&toText, "to-temp", "", "outlet temperature `T2` with a unit")
 	fs.StringVar(&presText, "pres", "", "the constant pressure `P`")
 	fs.StringVar(&rateText, "rate", "", "the flow `\"VALUE UNIT\"`, for the duty as a power")
-	outFmt.register(fs)
-	g.register(fs, false)
-	if err := parseOnlyFlags(fs, "heat", args); err != nil {
+	if err := cmd.parse(args); err != nil {
 		return err
 	}
-	src, t1, p, err := inletConditions(fs, blendSpec, tempText, presText)
+	src, t1, p, err := inletConditions(fs, cmd.blend, tempText, presText)
 	if err != nil {
 		return err
 	}
@@ -42,7 +39,7 @@ func (a *app) cmdHeat(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(src.label(), res, outFmt, g.ascii)
+	return a.printProcess(src.label(), res, cmd.out, g.ascii)
 }
 
 func usageHeat(w io.Writer) {

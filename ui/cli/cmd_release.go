@@ -14,11 +14,10 @@ import (
 )
 
 func (a *app) cmdRelease(g *globalOpts, args []string) error {
-	fs := newFlagSet("zmix release")
-	var blendSpec, presText, amountText, rateText, roomText, achText, ventText string
+	cmd := newNestedFlags(g, "release", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	fs := cmd.fs
+	var presText, amountText, rateText, roomText, achText, ventText string
 	var cylText, fillText, fillTempText string
-	var outFmt formatFlags
-	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&amountText, "amount", "", "the amount `Q` released: 2 Nm3, 5 kg, 300 scf, 40 mol")
 	fs.StringVar(&cylText, "cylinder", "", "a cylinder's water volume `V` (50L): its contents, less what stays at 1 atm, are released")
 	fs.StringVar(&fillText, "fill", "", "the cylinder's fill pressure `P` with a unit (150bar, 2200psig)")
@@ -28,12 +27,10 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	fs.StringVar(&achText, "ach", "", "ventilation in air changes per hour `N`")
 	fs.StringVar(&ventText, "vent", "", "ventilation as a flow `FLOW`: 360 m3/h, 200 ACFM")
 	fs.StringVar(&presText, "pres", "", "total pressure `P`, only to turn partial pressures into fractions")
-	outFmt.register(fs)
-	g.register(fs, false)
-	if err := parseOnlyFlags(fs, "release", args); err != nil {
+	if err := cmd.parse(args); err != nil {
 		return err
 	}
-	src, mix, parts, err := safetyBlend(g, fs, blendSpec, presText)
+	src, mix, parts, err := safetyBlend(g, fs, cmd.blend, presText)
 	if err != nil {
 		return err
 	}
@@ -109,7 +106,7 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 		return badInput("the amount, rate or ventilation is too large to compute with")
 	}
 	rep := &report.ReleaseReport{Label: src.label(), Release: rel, Result: rel.Solve(), What: strings.Join(what, " "), Vent: vent}
-	return a.printNested(outFmt, g.ascii,
+	return a.printNested(cmd.out, g.ascii,
 		func(w io.Writer) error { return report.WriteReleaseJSON(w, rep) },
 		func(w io.Writer) error { return report.WriteReleaseCSV(w, rep) },
 		func(w io.Writer) error { return report.WriteReleaseText(w, rep) })

@@ -7,21 +7,18 @@ import (
 )
 
 func (a *app) cmdThrottle(g *globalOpts, args []string) error {
-	fs := newFlagSet("zmix throttle")
-	var blendSpec, tempText, presText, toText string
+	cmd := newNestedFlags(g, "throttle", "the blend: `SPEC` text, or @FILE for a saved blend file")
+	fs := cmd.fs
+	var tempText, presText, toText string
 	var ideal bool
-	var outFmt formatFlags
-	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&tempText, "temp", "", "inlet temperature `T1` with a unit")
 	fs.StringVar(&presText, "pres", "", "inlet pressure `P1`")
 	fs.StringVar(&toText, "to-pres", "", "outlet pressure `P2`")
 	fs.BoolVar(&ideal, "ideal", false, "use the ideal gas (the throttle is then isothermal)")
-	outFmt.register(fs)
-	g.register(fs, false)
-	if err := parseOnlyFlags(fs, "throttle", args); err != nil {
+	if err := cmd.parse(args); err != nil {
 		return err
 	}
-	src, t1, p1, err := inletConditions(fs, blendSpec, tempText, presText)
+	src, t1, p1, err := inletConditions(fs, cmd.blend, tempText, presText)
 	if err != nil {
 		return err
 	}
@@ -47,7 +44,7 @@ func (a *app) cmdThrottle(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(src.label(), res, outFmt, g.ascii)
+	return a.printProcess(src.label(), res, cmd.out, g.ascii)
 }
 
 func usageThrottle(w io.Writer) {
