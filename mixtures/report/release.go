@@ -18,6 +18,22 @@ type ReleaseReport struct {
 	Result  safety.ReleaseResult
 	What    string // the release as typed: "2 Nm3 at once", "10 SLPM"
 	Vent    string // the ventilation as typed; "" for none
+	// Cylinder, when the amount is a cylinder's contents, is how it was
+	// found; nil otherwise.
+	Cylinder *ReleaseCylinder
+}
+
+// ReleaseCylinder is a cylinder whose contents are the amount released:
+// what it holds at its fill, with the real-gas Z, less what stays at
+// 1 atm.
+type ReleaseCylinder struct {
+	VolumeM3      float64 `json:"volume_m3"`
+	FillPresPa    float64 `json:"fill_pressure_Pa"`
+	FillTempK     float64 `json:"fill_temperature_K"`
+	Z             float64 `json:"z"`
+	ContentsMol   float64 `json:"contents_mol"`
+	LeftAt1AtmMol float64 `json:"left_at_1_atm_mol"`
+	ReleasedMol   float64 `json:"released_mol"`
 }
 
 // alarmText places a peak % of LFL against the common alarm points.
@@ -198,6 +214,7 @@ type releaseJSON struct {
 	Recalled            bool                 `json:"rests_on_recalled_figures"`
 	Sources             []string             `json:"sources"`
 	Screening           string               `json:"screening"`
+	Cylinder            *ReleaseCylinder     `json:"cylinder"`
 }
 
 // WriteReleaseJSON writes the release as one JSON object; volumes are at
@@ -216,6 +233,7 @@ func WriteReleaseJSON(w io.Writer, rep *ReleaseReport) error {
 		Recalled:   res.Recalled,
 		Sources:    releaseSources(rep),
 		Screening:  ScreeningLine,
+		Cylinder:   rep.Cylinder,
 	}
 	if r.AmountM3 > 0 {
 		j.ReleasedM3 = fptr(r.AmountM3)

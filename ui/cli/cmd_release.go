@@ -43,6 +43,7 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	}
 	molarMass := mix.MolarMassKgPerMol
 	var what []string
+	var cyl *report.ReleaseCylinder
 	cylinder := strings.TrimSpace(cylText) != "" || strings.TrimSpace(fillText) != "" || strings.TrimSpace(fillTempText) != ""
 	if strings.TrimSpace(amountText) == "" && strings.TrimSpace(rateText) == "" && !cylinder {
 		return badInput("give --amount (released at once), --cylinder with --fill (a cylinder's contents) or --rate (a continuous release), e.g. --amount 2Nm3 or --rate 10SLPM")
@@ -51,12 +52,13 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 		if strings.TrimSpace(amountText) != "" {
 			return badInput("--amount and --cylinder both give the amount released; give one")
 		}
-		mol, text, err := cylinderContents(mix, cylText, fillText, fillTempText)
+		cr, text, err := cylinderContents(mix, cylText, fillText, fillTempText)
 		if err != nil {
 			return err
 		}
-		rel.AmountM3 = safety.GasM3AtRoom(mol)
+		rel.AmountM3 = safety.GasM3AtRoom(cr.ReleasedMol)
 		what = append(what, text)
+		cyl = cr
 	}
 	if strings.TrimSpace(amountText) != "" {
 		q, err := safety.ParseAmount(amountText)
@@ -105,7 +107,7 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 	if math.IsInf(rel.AmountM3, 0) || math.IsInf(rel.RateM3PerS, 0) || math.IsInf(rel.VentM3PerS, 0) {
 		return badInput("the amount, rate or ventilation is too large to compute with")
 	}
-	rep := &report.ReleaseReport{Label: src.label(), Release: rel, Result: rel.Solve(), What: strings.Join(what, " "), Vent: vent}
+	rep := &report.ReleaseReport{Label: src.label(), Release: rel, Result: rel.Solve(), What: strings.Join(what, " "), Vent: vent, Cylinder: cyl}
 	return a.printNested(cmd.out, g.ascii,
 		func(w io.Writer) error { return report.WriteReleaseJSON(w, rep) },
 		func(w io.Writer) error { return report.WriteReleaseCSV(w, rep) },
@@ -115,33 +117,34 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 // cylinderContents is what a cylinder of water volume volText filled to
 // fillText at fillTempText (default the room's 20 °C) releases down to
 // 1 atm, with the blend's real-gas Z, and how the readout names it.
-func cylinderContents(mix *mixtures.Mixture, volText, fillText, fillTempText string) (float64, string, error) {
+func cylinderContents(mix *mixtures.Mixture, volText, fillText, fillTempText string) (*report.ReleaseCylinder, string, error) {
 	vol, err := cylinderQuantity("--cylinder", "volume", volText, true)
 	if err != nil {
-		return 0, "", err
+		return nil, "", err
 	}
 	if strings.TrimSpace(fillText) == "" {
-		return 0, "", badInput("--fill is missing; give the cylinder's pressure with a unit, e.g. --fill 150bar or --fill 2200psig")
+		return nil, "", badInput("--fill is missing; give the cylinder's pressure with a unit, e.g. --fill 150bar or --fill 2200psig")
 	}
 	p, err := parsePressure("--fill", fillText)
 	if err != nil {
-		return 0, "", err
+		return nil, "", err
 	}
 	tempK := safety.RoomTempK
 	if strings.TrimSpace(fillTempText) != "" {
 		t, err := parseTemperature("--fill-temp", fillTempText)
 		if err != nil {
-			return 0, "", err
+			return nil, "", err
 		}
 		tempK = t.kelvin
 	}
 	c := process.Cylinder{Mixture: mix, VolumeM3: vol, TempK: tempK, PresPa: p.Pa}
 	r, err := c.Release()
 	if err != nil {
-		return 0, "", badInput("--cylinder %s at --fill %s: %v (for a liquefied gas, give the weight of its contents with --amount)", model.Quote(volText), model.Quote(fillText), model.UserMessage(err))
+		return nil, "", badInput("--cylinder %s at --fill %s: %v (for a liquefied gas, give the weight of its contents with --amount)", model.Quote(volText), model.Quote(fillText), model.UserMessage(err))
 	}
 	text := fmt.Sprintf("the contents of a %s cylinder at %s and %s (%s mol, Z %s; %s mol stay at 1 atm)",
 		strings.TrimSpace(volText), strings.TrimSpace(fillText), report.Short(tempK-model.ZeroCelsiusK, 4)+" °C",
 		report.Short(r.ReleasedMol, 4), report.Short(r.Full.Z, 4), report.Short(r.LeftMol, 3))
-	return r.ReleasedMol, text, nil
+	return &report.ReleaseCylinder{VolumeM3: vol, FillPresPa: p.Pa, FillTempK: tempK, Z: r.Full.Z,
+		ContentsMol: r.Full.AmountMol, LeftAt1AtmMol: r.LeftMol, ReleasedMol: r.ReleasedMol}, text, nil
 }

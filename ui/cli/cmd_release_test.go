@@ -104,6 +104,13 @@ func TestReleaseCylinder(t *testing.T) {
 	if got, _ := cyl["released_m3"].(float64); full == 0 || math.Abs(got/want-1) > 1e-3 {
 		t.Errorf("released_m3 %v, want %g: the cylinder's %g mol less %g mol at 1 atm", cyl["released_m3"], want, full, left)
 	}
+	c2, _ := cyl["cylinder"].(map[string]any)
+	if got, _ := c2["released_mol"].(float64); math.Abs(got/(full-left)-1) > 1e-3 || c2["contents_mol"] != full {
+		t.Errorf("cylinder %v; want contents_mol %g (zmix cylinder's) and released_mol %g", c2, full, full-left)
+	}
+	if plain := releaseJSONOf(t, "--blend", "N2 100%", "--amount", "1 kg", "--room", "40m3"); plain["cylinder"] != nil {
+		t.Errorf("cylinder %v with --amount; want null", plain["cylinder"])
+	}
 	warm := releaseJSONOf(t, "--blend", "N2 100%", "--cylinder", "50L", "--fill", "200bar", "--fill-temp", "50C", "--room", "40m3")
 	if w, _ := warm["released_m3"].(float64); !(w < want) {
 		t.Errorf("a warmer cylinder at the same pressure holds less: %v, want below %g", warm["released_m3"], want)
