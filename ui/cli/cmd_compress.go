@@ -97,9 +97,7 @@ Flags:
                    power_W (with --rate), stages (a list), ...
   --csv            CSV: one row per figure (section, row, name, value), as in
                    the JSON
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 `+unitsHelp+"\n"+blendHelp+`
 Examples:
   zmix compress --blend "N2 78.08%, O2 20.95%, Ar 0.93%, CO2 0.04%" --temp 300K --pres 1bar --to 10bar

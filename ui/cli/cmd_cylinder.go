@@ -144,9 +144,7 @@ Flags:
                    ref_m3, steps, ...
   --csv            CSV: one row per figure (section, row, name, value), as in
                    the JSON
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 `+unitsHelp+"\n"+blendHelp+`
 Examples:
   zmix cylinder --blend "H2 100%" --volume 50L --temp 15C --pres 200bar --to-temp 50C

@@ -93,9 +93,7 @@ Flags:
                    dilution_factor, species, ...
   --csv            CSV: one row per figure (section, row, name, value), as in
                    the JSON
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 Examples:
   zmix dilute --blend "SiH4 2%, N2 bal" --with "N2 1" --target "SiH4 50ppm" --rate "20 sccm"
   zmix dilute --blend "NH3 1000ppm, N2 bal" --with "N2 1" --target NH3 --ratio 9

@@ -101,9 +101,7 @@ Flags:
                    ref_pressure_Pa, actual_m3_s, gas_correction_factor, ...
   --csv            CSV: one row per figure (section, row, name, value), as in
                    the JSON
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 `+rateHelp+"\n"+referenceHelp+"\n"+unitsHelp+`
 Examples:
   zmix flow --blend "N2 1" --rate "120 Nm3/h" --temp 25C --pres 8barg

@@ -60,9 +60,7 @@ Flags:
                    --rate), ...
   --csv            CSV: one row per figure (section, row, name, value), as in
                    the JSON
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 `+unitsHelp+"\n"+blendHelp+`
 Examples:
   zmix heat --blend "N2 1" --temp 25C --to-temp 400C --pres 1atm --rate "300 Nm3/h"

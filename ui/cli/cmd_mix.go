@@ -120,9 +120,7 @@ Flags:
                    streams
   --csv            CSV: one row per figure (section, row, name, value), as in
                    the JSON
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 An actual-volume flow is read at the stream's temperature and the mixing
 pressure. To find the flow of a diluent for a target level, see zmix dilute.
 

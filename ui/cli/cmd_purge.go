@@ -150,9 +150,7 @@ Flags:
                    volume_exchanges (flow), final_level, ...
   --csv            CSV: one row per figure (section, row, name, value), as in
                    the JSON
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 A purge gas short of oxygen is an asphyxiant: vent to a safe place, and
 never enter a purged vessel without confined-space entry procedures.
 

@@ -66,9 +66,7 @@ Flags:
                    mean_jt_K_per_Pa, ...
   --csv            CSV: one row per figure (section, row, name, value), as in
                    the JSON
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 `+unitsHelp+"\n"+blendHelp+`
 Examples:
   zmix throttle --blend "N2 1" --temp 20C --pres 200bar --to-pres 5bar

@@ -96,9 +96,7 @@ Flags:
   --json           one JSON object: parents, composition, budget, ...
   --csv            CSV: one row per figure (section, row, name, value), as in
                    the JSON
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 Examples:
   zmix weighed --add "25.103 g CO2" --add "475.2 g N2" --mass-u 2mg
   zmix weighed --add "12.0391 g of CH4 2.503%% +-0.002%%, N2 bal" --add "498.77 g N2 with O2 <5ppm, H2O 3ppm +-1ppm" --mass-u 3mg --json

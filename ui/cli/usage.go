@@ -12,6 +12,12 @@ import (
 // The help of each command, written out so that it can carry examples and
 // the accepted forms; the flag package's generated text has neither.
 
+// sharedFlagsHelp ends every command's flag list: the flags
+// globalOpts.register adds to each.
+const sharedFlagsHelp = `  --species FILE   merge a species file over the catalogue (repeatable)
+  --ascii          plain ASCII text (also ZMIX_ASCII=1)
+`
+
 // unitsHelp lists the units from the engine's own lists, so that help
 // cannot fall behind what the parser accepts.
 var unitsHelp = "Units:\n" +
@@ -50,9 +56,7 @@ Flags:
   --anatomy        take each species apart: the S and Cp of translation,
                    rotation, vibration and electronic levels, their treatment
                    and the characteristic temperatures (the Anatomy pane)
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 `+unitsHelp+"\n"+blendHelp+`
 Examples:
   zmix state --blend "N2 78.08%, O2 20.95%, Ar 0.93%, CO2 0.04%" --temp 25C --pres 1atm
@@ -82,9 +86,7 @@ Flags:
   --std P°         standard pressure of μ°: 1bar (default) or 1atm
   --json           a JSON list of state objects, one per point
   --csv            a header row, then one row per point; cautions go to stderr
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 A unit written only after the end applies to the start too: 300..1500K,
 1..50 bar. Both ends of a pressure range are gauge or both absolute.
 
@@ -110,9 +112,7 @@ Flags:
                    (default 100, 200, 298.15, 500, 1000, 1500, 2000, 3000 K)
   --json           the list, or the species' data, sources and table, as JSON
   --csv            the list, or the species' table, as CSV
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 Species are addressed by formula (CO2); a name (carbon dioxide) or another
 letter case also finds them.
 

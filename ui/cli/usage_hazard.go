@@ -34,9 +34,7 @@ Flags:
                    sources and more (null: does not apply, or not known)
   --csv            every figure of the JSON in a long table of four
                    columns: section, row, name, value
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 `+blendHelp+`
 Examples:
   zmix hazard --blend "H2 10%, N2 bal"
@@ -88,9 +86,7 @@ Flags:
                    peak_ppm and percent_of_lfl, model, and more
   --csv            every figure of the JSON in a long table of four
                    columns: section, row, name, value
-  --species FILE   merge a species file over the catalogue (repeatable)
-  --ascii          plain ASCII text (also ZMIX_ASCII=1)
-
+`+sharedFlagsHelp+`
 Examples:
   zmix release --blend "N2 100%" --amount 10Nm3 --room 40m3
   zmix release --blend "H2 5%, N2 bal" --rate 20SLPM --room 60m3 --ach 6
