@@ -1,6 +1,7 @@
 package process
 
 import (
+	"errors"
 	"math"
 	"sync"
 
@@ -283,8 +284,12 @@ func (w *stateWork) stage(g Gas, t1, p1, p2, eta float64) (Stage, error) {
 		}
 		return w.sLast - s1, w.cpLast / tempK, nil
 	}, guess)
+	if errors.Is(err, errOutOfRange) {
+		return Stage{}, model.Errorf("process", "the isentropic outlet from %.6g K at %.6g bar to %.6g bar would lie outside the model's %g K to %g K; want a pressure ratio nearer 1",
+			t1, p1/1e5, p2/1e5, model.MinTempK, model.MaxTempK)
+	}
 	if err != nil {
-		return Stage{}, model.Errorf("process", "the isentropic outlet from %g K, %g Pa to %g Pa: %v", t1, p1, p2, err)
+		return Stage{}, model.Errorf("process", "the isentropic outlet from %.6g K at %.6g bar to %.6g bar: %v", t1, p1/1e5, p2/1e5, err)
 	}
 	h2s, s2 := w.at(t2s)
 	var h2 float64

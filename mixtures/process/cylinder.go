@@ -305,36 +305,30 @@ func (r *CylinderResult) recipe(c Cylinder, mix *mixtures.Mixture) error {
 
 // ParseCylinderQuantity reads "50 L", "0.05 m3", "10 kg", "500 g",
 // "120 mol" into SI (m³, kg, mol), checking the unit is of the kind
-// wanted ("volume", "mass" or "amount").
+// wanted ("volume", "mass" or "amount"). A volume is read as ParseVolume
+// reads any other; a mass is at most 1e9 kg and an amount 1e12 mol, so
+// that a slip of the exponent is refused rather than computed.
 func ParseCylinderQuantity(kind, text string) (float64, error) {
-	units := map[string]map[string]float64{
-		"volume": {"L": 1e-3, "l": 1e-3, "m3": 1, "m³": 1, "ft3": 0.028316846592},
-		"mass":   {"kg": 1, "g": 1e-3, "lb": 0.45359237},
-		"amount": {"mol": 1, "kmol": 1e3},
-	}[kind]
-	f := strings.Fields(strings.TrimSpace(text))
-	num, unit := "", ""
-	switch len(f) {
-	case 1:
-		i := strings.IndexFunc(f[0], func(r rune) bool {
-			return !(r >= '0' && r <= '9' || r == '.' || r == 'e' || r == 'E' || r == '+' || r == '-')
-		})
-		if i <= 0 {
-			return 0, model.Errorf("process", "%s %s: want a number and a unit (%s)", kind, model.Quote(text), unitList(units))
-		}
-		num, unit = f[0][:i], f[0][i:]
-	case 2:
-		num, unit = f[0], f[1]
-	default:
+	if kind == "volume" {
+		return ParseVolume(text)
+	}
+	if err := tooLong("a "+kind, text); err != nil {
+		return 0, err
+	}
+	units, most, mostText := map[string]float64{"kg": 1, "g": 1e-3, "lb": 0.45359237}, 1e9, "1e9 kg"
+	if kind == "amount" {
+		units, most, mostText = map[string]float64{"mol": 1, "kmol": 1e3}, 1e12, "1e12 mol"
+	}
+	x, unit, ok := splitValue(strings.TrimSpace(text))
+	if !ok || unit == "" {
 		return 0, model.Errorf("process", "%s %s: want a number and a unit (%s)", kind, model.Quote(text), unitList(units))
 	}
 	scale, ok := units[unit]
 	if !ok {
 		return 0, model.Errorf("process", "%s %s: unknown unit %s; want %s", kind, model.Quote(text), model.Quote(unit), unitList(units))
 	}
-	x, err := strconv.ParseFloat(num, 64)
-	if err != nil || !(x > 0) || math.IsInf(x, 0) {
-		return 0, model.Errorf("process", "%s %s: want a number above 0", kind, model.Quote(text))
+	if v := x * scale; !(v > 0) || v > most {
+		return 0, model.Errorf("process", "%s %s: want a number above 0 and at most %s", kind, model.Quote(text), mostText)
 	}
 	return x * scale, nil
 }

@@ -112,15 +112,23 @@ func TestParseCylinderQuantity(t *testing.T) {
 		want       float64
 	}{
 		{"volume", "50L", 0.05}, {"volume", "0.05 m3", 0.05}, {"mass", "500 g", 0.5}, {"amount", "2kmol", 2000},
+		{"volume", "1e9 m3", 1e9}, {"mass", "1e9 kg", 1e9}, {"amount", "1e12 mol", 1e12}, // the bounds themselves
+		{"volume", "1.5 ft3", 1.5 * 0.028316846592}, // ft = 0.3048 m exactly (international foot)
 	} {
 		got, err := ParseCylinderQuantity(tt.kind, tt.text)
 		if err != nil || math.Abs(got/tt.want-1) > 1e-12 {
 			t.Errorf("%s %q = %g, %v; want %g", tt.kind, tt.text, got, err, tt.want)
 		}
 	}
-	for _, bad := range []string{"", "50", "50 kg", "-3 L", "x L"} {
-		if _, err := ParseCylinderQuantity("volume", bad); err == nil {
-			t.Errorf("volume %q accepted", bad)
+	for _, bad := range []struct{ kind, text string }{
+		{"volume", ""}, {"volume", "50"}, {"volume", "50 kg"}, {"volume", "-3 L"}, {"volume", "x L"},
+		{"volume", "1e300 L"}, {"volume", "1.1e9 m3"}, {"mass", "2e9 kg"}, {"mass", "0 g"}, {"mass", "5 L"},
+		{"amount", "2e9 kmol"}, {"amount", "NaN mol"}, {"amount", "10"},
+	} {
+		if v, err := ParseCylinderQuantity(bad.kind, bad.text); err == nil {
+			t.Errorf("%s %q accepted as %g", bad.kind, bad.text, v)
+		} else if msg := model.UserMessage(err); !strings.Contains(msg, bad.kind) || strings.Contains(msg, "\n") {
+			t.Errorf("%s %q: error %q, want one line naming the %s", bad.kind, bad.text, msg, bad.kind)
 		}
 	}
 }

@@ -73,7 +73,9 @@ func TestParseErrors(t *testing.T) {
 		{"rate zero", "0 kg/h", "above zero", func(s string) error { _, err := ParseRate(s); return err }},
 		{"rate negative", "-3 kg/h", "above zero", func(s string) error { _, err := ParseRate(s); return err }},
 		{"rate NaN", "NaN kg/h", "want a number", func(s string) error { _, err := ParseRate(s); return err }},
-		{"rate huge", "1e308 kmol/s", "finite", func(s string) error { _, err := ParseRate(s); return err }},
+		{"rate huge", "1e308 kmol/s", "at most 1e12 kmol/s", func(s string) error { _, err := ParseRate(s); return err }},
+		{"rate past the bound", "1.5e12 SLPM", "at most 1e12 SLPM", func(s string) error { _, err := ParseRate(s); return err }},
+		{"volume past the bound", "1e300 L", "at most 1e9 m3", func(s string) error { _, err := ParseVolume(s); return err }},
 		{"rate long", strings.Repeat("9", 300) + " kg/h", "at most 200", func(s string) error { _, err := ParseRate(s); return err }},
 		{"stream two fields", "N2 1; 300K", "BLEND; T; RATE", func(s string) error { _, err := ParseStream(s); return err }},
 		{"stream no blend", " ; 300K; 1 mol/s", "blend is missing", func(s string) error { _, err := ParseStream(s); return err }},
@@ -118,8 +120,8 @@ func FuzzParseRate(f *testing.F) {
 			}
 			return
 		}
-		if !(r.Value > 0) || math.IsInf(r.Value*r.Unit.SI, 0) {
-			t.Fatalf("ParseRate(%q) = %+v: want a finite rate above zero", s, r)
+		if !(r.Value > 0) || r.Value > MaxRateValue {
+			t.Fatalf("ParseRate(%q) = %+v: want a rate above zero and at most MaxRateValue", s, r)
 		}
 	})
 }
@@ -175,7 +177,7 @@ func FuzzParseOthers(f *testing.F) {
 		}
 		if v, err := ParseVolume(s); err != nil {
 			oneLine("ParseVolume", err)
-		} else if !(v > 0) || math.IsInf(v, 0) {
+		} else if !(v > 0) || v > MaxVolumeM3 {
 			t.Fatalf("ParseVolume(%q) = %g", s, v)
 		}
 		if e, err := ParseEfficiency(s); err != nil {

@@ -1,7 +1,6 @@
 package process
 
 import (
-	"math"
 	"strconv"
 	"strings"
 
@@ -106,8 +105,13 @@ const VolumeUnits = "m3, L, ft3"
 
 var volumeUnits = map[string]float64{"m3": 1, "l": 1e-3, "litre": 1e-3, "liter": 1e-3, "ft3": cubicFoot, "cf": cubicFoot}
 
+// MaxVolumeM3 bounds every volume zmix reads (a room, a vessel, a
+// cylinder): a cubic kilometre, far beyond any of them, so that a slip of
+// the exponent (1e300 L) is refused rather than computed.
+const MaxVolumeM3 = 1e9
+
 // ParseVolume reads a volume with its unit ("2.5 m3", "50 L", "12 ft3")
-// and returns m³; it must be finite and above zero.
+// and returns m³; it must be above zero and at most MaxVolumeM3.
 func ParseVolume(s string) (float64, error) {
 	if err := tooLong("a volume", s); err != nil {
 		return 0, err
@@ -121,8 +125,8 @@ func ParseVolume(s string) (float64, error) {
 		return 0, model.Errorf("process", "volume %s: unknown unit %s; want %s", model.Quote(s), model.Quote(unit), VolumeUnits)
 	}
 	v := x * size
-	if !(v > 0) || math.IsInf(v, 0) {
-		return 0, model.Errorf("process", "volume %s: want a finite volume above zero", model.Quote(s))
+	if !(v > 0) || v > MaxVolumeM3 {
+		return 0, model.Errorf("process", "volume %s: want a volume above zero and at most 1e9 m3", model.Quote(s))
 	}
 	return v, nil
 }

@@ -62,6 +62,22 @@ func TestCompressionBelowConstantGamma(t *testing.T) {
 	}
 }
 
+// A pressure ratio whose isentropic outlet leaves the model's temperature
+// range is refused in one line that names the pressures in bar and what
+// to change, not in pascals with a solver's wording.
+func TestCompressionOutsideTheModel(t *testing.T) {
+	_, err := Compression{Mixture: mixOf(t, dryAir), InletTempK: 293.15, InletPresPa: 1e5, OutletPresPa: 1e35}.Solve()
+	msg := model.UserMessage(err)
+	for _, want := range []string{"1 bar", "1e+30 bar", "outside the model", "pressure ratio nearer 1"} {
+		if !strings.Contains(msg, want) {
+			t.Errorf("error %q, want it to hold %q", msg, want)
+		}
+	}
+	if strings.Contains(msg, "Pa") || strings.Contains(msg, "\n") {
+		t.Errorf("error %q: want one line in bar", msg)
+	}
+}
+
 // Heating duties against NIST-JANAF H° − H°(298.15 K).
 func TestHeatingJANAF(t *testing.T) {
 	cases := []struct {

@@ -1,7 +1,6 @@
 package process
 
 import (
-	"math"
 	"strconv"
 	"strings"
 	"unicode/utf8"
@@ -156,9 +155,15 @@ type Rate struct {
 	Text  string // as typed
 }
 
+// MaxRateValue bounds the number of a rate in its own unit, as the
+// released amounts of the safety package are bounded: far beyond any
+// plant's flow in any unit, so that a slip of the exponent (1e300 kg/h)
+// is refused rather than computed.
+const MaxRateValue = 1e12
+
 // ParseRate reads a flow with its unit: "120 Nm3/h", "2.5 kg/h",
 // "500 sccm". Superscript ³ and "m^3" are accepted for m3. A rate must
-// be finite and above zero.
+// be above zero and at most MaxRateValue in its unit.
 func ParseRate(s string) (Rate, error) {
 	if err := tooLong("a rate", s); err != nil {
 		return Rate{}, err
@@ -176,8 +181,8 @@ func ParseRate(s string) (Rate, error) {
 		}
 		return Rate{}, model.Errorf("process", "rate %s: unknown unit %s; want %s", model.Quote(s), model.Quote(unitText), RateUnits)
 	}
-	if !(x > 0) || math.IsInf(x*u.SI, 0) {
-		return Rate{}, model.Errorf("process", "rate %s: want a finite flow above zero", model.Quote(s))
+	if !(x > 0) || x > MaxRateValue {
+		return Rate{}, model.Errorf("process", "rate %s: want a flow above zero and at most 1e12 %s", model.Quote(s), unitText)
 	}
 	return Rate{Value: x, Unit: u, Text: text}, nil
 }
