@@ -61,7 +61,7 @@ func NormaliseAmounts(amounts []string) ([]string, error) {
 // keeps the unit text after it as typed. Every fraction unit is a pure
 // scale, so this scales the amount.
 func scaleAmountText(text string, k float64) (string, error) {
-	x, unit, err := splitNumberRaw(strings.TrimSpace(text))
+	x, unit, err := model.LeadingNumber(strings.TrimSpace(text))
 	if err != nil {
 		return "", model.KindErrorf("mixtures", ErrValue, "amount %s: %v", model.Quote(text), err)
 	}

@@ -40,34 +40,8 @@ func SplitNumber(s string) (float64, string, error) { return splitNumber(s) }
 
 // splitNumber splits "25 °C" or "1.5bar" into the number and the unit text.
 func splitNumber(s string) (float64, string, error) {
-	x, rest, err := splitNumberRaw(strings.TrimSpace(s))
+	x, rest, err := model.LeadingNumber(strings.TrimSpace(s))
 	return x, strings.TrimSpace(rest), err
-}
-
-// splitNumberRaw reads the number that leads s and returns the rest of s
-// untouched, spacing included.
-func splitNumberRaw(s string) (float64, string, error) {
-	end := 0
-	for end < len(s) {
-		c := s[end]
-		if (c >= '0' && c <= '9') || c == '.' || c == '-' || c == '+' ||
-			((c == 'e' || c == 'E') && end > 0 && end+1 < len(s) && (s[end+1] == '-' || s[end+1] == '+' || (s[end+1] >= '0' && s[end+1] <= '9'))) {
-			end++
-			continue
-		}
-		break
-	}
-	if end == 0 {
-		return 0, "", errors.New("no number")
-	}
-	x, err := strconv.ParseFloat(s[:end], 64)
-	if errors.Is(err, strconv.ErrRange) && math.IsInf(x, 0) {
-		return 0, "", errors.New(model.Quote(s[:end]) + " is too large a number to compute with (beyond 1.8e308)")
-	}
-	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
-		return 0, "", errors.New(model.Quote(s[:end]) + " is not a number")
-	}
-	return x, s[end:], nil
 }
 
 // ParseTemperature reads a temperature with its unit ("300 K", "25 C",

@@ -1,6 +1,8 @@
 package model
 
 import (
+	"errors"
+	"math"
 	"strconv"
 	"strings"
 	"unicode"
@@ -69,4 +71,34 @@ func Printable(s string) string {
 		}
 	}
 	return b.String()
+}
+
+// LeadingNumber reads the finite number that leads s ("25" of "25 °C",
+// "1.5" of "1.5bar", "1e5" of "1e5Pa") and returns it with the rest of s
+// untouched, spacing included. Every reader of a value with a unit, in
+// every package, takes its number this way, so that "1e5", "+3" and
+// ".5" mean the same wherever they are typed. The error says why, in
+// words that fit after the value's own name.
+func LeadingNumber(s string) (float64, string, error) {
+	end := 0
+	for end < len(s) {
+		c := s[end]
+		if (c >= '0' && c <= '9') || c == '.' || c == '-' || c == '+' ||
+			((c == 'e' || c == 'E') && end > 0 && end+1 < len(s) && (s[end+1] == '-' || s[end+1] == '+' || (s[end+1] >= '0' && s[end+1] <= '9'))) {
+			end++
+			continue
+		}
+		break
+	}
+	if end == 0 {
+		return 0, "", errors.New("no number")
+	}
+	x, err := strconv.ParseFloat(s[:end], 64)
+	if errors.Is(err, strconv.ErrRange) && math.IsInf(x, 0) {
+		return 0, "", errors.New(Quote(s[:end]) + " is too large a number to compute with (beyond 1.8e308)")
+	}
+	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
+		return 0, "", errors.New(Quote(s[:end]) + " is not a number")
+	}
+	return x, s[end:], nil
 }

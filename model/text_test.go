@@ -41,3 +41,27 @@ func TestPrintable(t *testing.T) {
 		}
 	}
 }
+
+// LeadingNumber keeps the rest of the text as it was, spacing included,
+// and takes "1e5" as a number but the "e" of "5eV" or "2 e" as text.
+func TestLeadingNumber(t *testing.T) {
+	for _, c := range []struct {
+		in, rest string
+		x        float64
+	}{
+		{"25 °C", " °C", 25}, {"1.5bar", "bar", 1.5}, {"1e5Pa", "Pa", 1e5}, {"+3 K", " K", 3},
+		{".5 L", " L", 0.5}, {"-2E-3", "", -2e-3}, {"5eV", "eV", 5}, {"2 e", " e", 2},
+	} {
+		x, rest, err := LeadingNumber(c.in)
+		if err != nil || x != c.x || rest != c.rest {
+			t.Errorf("LeadingNumber(%q) = %g, %q, %v; want %g, %q", c.in, x, rest, err, c.x, c.rest)
+		}
+	}
+	for _, in := range []string{"", " 5", "kg", "NaN", "Inf K", "1e400 Pa", "--3", "."} {
+		if x, rest, err := LeadingNumber(in); err == nil {
+			t.Errorf("LeadingNumber(%q) = %g, %q; want an error", in, x, rest)
+		} else if strings.Contains(err.Error(), "\n") {
+			t.Errorf("LeadingNumber(%q): error %q, want one line", in, err)
+		}
+	}
+}

@@ -305,30 +305,38 @@ func (r *CylinderResult) recipe(c Cylinder, mix *mixtures.Mixture) error {
 
 // ParseCylinderQuantity reads "50 L", "0.05 m3", "10 kg", "500 g",
 // "120 mol" into SI (m³, kg, mol), checking the unit is of the kind
-// wanted ("volume", "mass" or "amount"). A volume is read as ParseVolume
-// reads any other; a mass is at most 1e9 kg and an amount 1e12 mol, so
-// that a slip of the exponent is refused rather than computed.
+// wanted ("volume", "mass" or "amount"). Volumes and masses are read as
+// every other volume and mass is (ParseVolume, the weighing's units); a
+// mass is at most 1e9 kg and an amount 1e12 mol, so that a slip of the
+// exponent is refused rather than computed.
 func ParseCylinderQuantity(kind, text string) (float64, error) {
-	if kind == "volume" {
+	switch kind {
+	case "volume":
 		return ParseVolume(text)
+	case "mass":
+		kg, err := parseMassKg(text)
+		if err != nil {
+			return 0, err
+		}
+		if !(kg > 0) || kg > 1e9 {
+			return 0, model.Errorf("process", "mass %s: want a number above 0 and at most 1e9 kg", model.Quote(text))
+		}
+		return kg, nil
 	}
-	if err := tooLong("a "+kind, text); err != nil {
+	if err := tooLong("an amount", text); err != nil {
 		return 0, err
 	}
-	units, most, mostText := map[string]float64{"kg": 1, "g": 1e-3, "lb": 0.45359237}, 1e9, "1e9 kg"
-	if kind == "amount" {
-		units, most, mostText = map[string]float64{"mol": 1, "kmol": 1e3}, 1e12, "1e12 mol"
-	}
+	units := map[string]float64{"mol": 1, "kmol": 1e3}
 	x, unit, ok := splitValue(strings.TrimSpace(text))
 	if !ok || unit == "" {
-		return 0, model.Errorf("process", "%s %s: want a number and a unit (%s)", kind, model.Quote(text), unitList(units))
+		return 0, model.Errorf("process", "amount %s: want a number and a unit (%s)", model.Quote(text), unitList(units))
 	}
 	scale, ok := units[unit]
 	if !ok {
-		return 0, model.Errorf("process", "%s %s: unknown unit %s; want %s", kind, model.Quote(text), model.Quote(unit), unitList(units))
+		return 0, model.Errorf("process", "amount %s: unknown unit %s; want %s", model.Quote(text), model.Quote(unit), unitList(units))
 	}
-	if v := x * scale; !(v > 0) || v > most {
-		return 0, model.Errorf("process", "%s %s: want a number above 0 and at most %s", kind, model.Quote(text), mostText)
+	if v := x * scale; !(v > 0) || v > 1e12 {
+		return 0, model.Errorf("process", "amount %s: want a number above 0 and at most 1e12 mol", model.Quote(text))
 	}
 	return x * scale, nil
 }

@@ -23,28 +23,46 @@ const maxParentChars = 1000
 // have no ±.
 var plusMinus = strings.NewReplacer("+/-", "±", "+-", "±")
 
-// weighedMassUnits are the units of a weighed mass and its uncertainty.
-var weighedMassUnits = map[string]float64{"kg": 1, "g": 1e-3, "mg": 1e-6, "lb": 0.45359237}
+// massUnits are the units of every mass the process calculations read:
+// a weighed mass and its uncertainty, a cylinder's contents by weight.
+var massUnits = map[string]float64{"kg": 1, "g": 1e-3, "mg": 1e-6, "lb": 0.45359237}
 
-// WeighedMassUnits lists them, for messages and help.
-const WeighedMassUnits = "kg, g, mg, lb"
+// MassUnits lists them, for messages and help; WeighedMassUnits is the
+// same list under the name the weighing help uses.
+const (
+	MassUnits        = "kg, g, mg, lb"
+	WeighedMassUnits = MassUnits
+)
 
-// ParseWeighedMass reads a mass with its unit ("2.5 mg", "25.103g") in
-// kg; it must be finite and 0 or more.
-func ParseWeighedMass(s string) (float64, error) {
+// parseMassKg reads a mass with its unit ("2.5 mg", "25.103g") in kg,
+// any finite number; the callers bound it.
+func parseMassKg(s string) (float64, error) {
 	if err := tooLongN("a mass", s, maxInputChars); err != nil {
 		return 0, err
 	}
 	x, unit, err := mixtures.SplitNumber(s)
 	if err != nil {
-		return 0, model.Errorf("process", "mass %s: want a number and a unit (%s), e.g. 25.103 g", model.Quote(s), WeighedMassUnits)
+		return 0, model.Errorf("process", "mass %s: want a number and a unit (%s), e.g. 25.103 g", model.Quote(s), MassUnits)
 	}
-	scale, ok := weighedMassUnits[strings.ToLower(unit)]
+	scale, ok := massUnits[strings.ToLower(unit)]
 	if !ok {
-		return 0, model.Errorf("process", "mass %s: unknown unit %s; want %s", model.Quote(s), model.Quote(unit), WeighedMassUnits)
+		return 0, model.Errorf("process", "mass %s: unknown unit %s; want %s", model.Quote(s), model.Quote(unit), MassUnits)
 	}
 	kg := x * scale
-	if !(kg >= 0) || math.IsInf(kg, 0) {
+	if math.IsNaN(kg) || math.IsInf(kg, 0) {
+		return 0, model.Errorf("process", "mass %s: want a number and a unit (%s), e.g. 25.103 g", model.Quote(s), MassUnits)
+	}
+	return kg, nil
+}
+
+// ParseWeighedMass reads a mass with its unit ("2.5 mg", "25.103g") in
+// kg; it must be finite and 0 or more.
+func ParseWeighedMass(s string) (float64, error) {
+	kg, err := parseMassKg(s)
+	if err != nil {
+		return 0, err
+	}
+	if !(kg >= 0) {
 		return 0, model.Errorf("process", "mass %s: want a finite mass of 0 or more", model.Quote(s))
 	}
 	return kg, nil

@@ -1,8 +1,6 @@
 package safety
 
 import (
-	"math"
-	"strconv"
 	"strings"
 	"unicode/utf8"
 
@@ -62,15 +60,9 @@ func ParseAmount(s string) (Amount, error) {
 		return Amount{}, model.Errorf("safety", "an amount of %d characters; want at most %d", n, maxAmountChars)
 	}
 	text := strings.TrimSpace(s)
-	i := strings.IndexFunc(text, func(r rune) bool {
-		return !(r >= '0' && r <= '9' || r == '.' || r == 'e' || r == 'E' || r == '+' || r == '-')
-	})
-	num, unit := text, ""
-	if i >= 0 {
-		num, unit = text[:i], strings.TrimSpace(text[i:])
-	}
-	x, err := strconv.ParseFloat(num, 64)
-	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
+	x, rest, err := model.LeadingNumber(text)
+	unit := strings.TrimSpace(rest)
+	if err != nil {
 		return Amount{}, model.Errorf("safety", "amount %s: want a number and a unit (%s), e.g. 2 Nm3", model.Quote(s), AmountUnits)
 	}
 	u, ok := amountUnits[strings.ToLower(strings.NewReplacer("³", "3", "^3", "3", " ", "").Replace(unit))]
