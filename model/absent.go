@@ -19,6 +19,37 @@ var absentSpecies = []struct {
 	},
 }
 
+// mixtureNames are mixtures a person may type where a species goes, each
+// with what to write instead: zmix does not carry a mixture as a species,
+// since its figures would then hide which species are in it.
+var mixtureNames = []struct {
+	names []string
+	what  string
+}{
+	{
+		names: []string{"air", "dry air", "dry-air"},
+		// Dry air by volume, rounded (the US Standard Atmosphere 1976 gives
+		// N2 78.084, O2 20.9476, Ar 0.934 %; CO2 is about 420 ppm today),
+		// from memory. The README's first example is the same blend.
+		what: "air is a mixture, not a species: write its components, e.g. N2 78.08%, O2 20.95%, Ar 0.93%, CO2 0.04% " +
+			"(dry air, rounded), and scale them for a blend in air",
+	},
+}
+
+// MixtureHint says what to write instead when key names a mixture (air)
+// rather than a species.
+func MixtureHint(key string) (string, bool) {
+	key = strings.TrimSpace(key)
+	for _, m := range mixtureNames {
+		for _, n := range m.names {
+			if strings.EqualFold(n, key) {
+				return m.what, true
+			}
+		}
+	}
+	return "", false
+}
+
 // AbsentHint returns the reason a species that key names is missing, if
 // it is one of absentSpecies and c does not carry it (a species file may
 // have added it).
@@ -38,10 +69,13 @@ func (c *Catalogue) AbsentHint(key string) (string, bool) {
 }
 
 // UnknownHint says what to do about key, a species c does not carry: the
-// isomers to choose from, why a known gas is missing, or the nearest
-// names ("did you mean …?"); "" when none of these apply, so that the
+// components of a mixture typed as a species (air), the isomers to
+// choose from, why a known gas is missing, or the nearest names ("did you mean …?"); "" when none of these apply, so that the
 // caller adds its own default.
 func (c *Catalogue) UnknownHint(key string) string {
+	if h, ok := MixtureHint(key); ok {
+		return h
+	}
 	if h, ok := c.IsomerHint(key); ok {
 		return h
 	}
