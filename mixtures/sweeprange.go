@@ -116,6 +116,37 @@ func (r Range) Sweep(steps int, logGrid bool) Sweep {
 	return Sweep{Var: r.Var, From: r.From, To: r.To, Steps: steps, Log: logGrid || r.Var == SweepPressure}
 }
 
+// PointsForStep returns the number of points, end points included, that
+// spaces the sweep s by the step typed, a temperature difference ("50 K",
+// "50 C", "90 F"), for the message that answers a step typed where the
+// number of points goes. ok is false for a pressure or ln T grid (not
+// evenly spaced in the variable), or where no whole number of points
+// gives that step.
+func (s Sweep) PointsForStep(step string) (n int, ok bool) {
+	if s.Var != SweepTemperature || s.Log {
+		return 0, false
+	}
+	x, unit, err := splitNumber(step)
+	if err != nil || !(x > 0) {
+		return 0, false
+	}
+	var deltaK float64
+	switch strings.TrimPrefix(strings.ToLower(unit), "°") {
+	case "k", "c", "degc":
+		deltaK = x
+	case "f", "r", "degf", "degr":
+		deltaK = x * 5 / 9
+	default:
+		return 0, false
+	}
+	f := math.Abs(s.To-s.From)/deltaK + 1
+	r := math.Round(f)
+	if math.Abs(f-r) > 1e-6*r || r < 2 || r > MaxSweepSteps {
+		return 0, false
+	}
+	return int(r), true
+}
+
 // ParseSteps reads a number of points, end points included: a whole
 // number from 2 to MaxSweepSteps, its digits optionally grouped by
 // spaces, commas or underscores ("20 000"), or written exactly as a

@@ -102,6 +102,29 @@ func TestParseSteps(t *testing.T) {
 	}
 }
 
+// A step typed where the number of points goes maps back to the count
+// only on an evenly spaced temperature grid, and only where it divides
+// the range; a degree Fahrenheit is 5/9 K (by definition).
+func TestPointsForStep(t *testing.T) {
+	linear := Sweep{Var: SweepTemperature, From: 300, To: 400}
+	for _, c := range []struct {
+		sw   Sweep
+		step string
+		n    int
+		ok   bool
+	}{
+		{linear, "50K", 3, true}, {linear, "50 °C", 3, true}, {linear, "18F", 11, true}, {linear, "100 K", 2, true},
+		{Sweep{Var: SweepTemperature, From: 400, To: 300}, "25K", 5, true},
+		{linear, "30K", 0, false}, {linear, "200K", 0, false}, {linear, "0K", 0, false}, {linear, "1bar", 0, false},
+		{Sweep{Var: SweepTemperature, From: 300, To: 400, Log: true}, "50K", 0, false},
+		{Sweep{Var: SweepPressure, From: 1e5, To: 1e6, Log: true}, "1K", 0, false},
+	} {
+		if n, ok := c.sw.PointsForStep(c.step); n != c.n || ok != c.ok {
+			t.Errorf("%+v PointsForStep(%q) = %d, %v; want %d, %v", c.sw, c.step, n, ok, c.n, c.ok)
+		}
+	}
+}
+
 func TestSplitNumber(t *testing.T) {
 	for in, want := range map[string]struct {
 		x    float64

@@ -385,15 +385,40 @@ func parseStd(text string) (mixtures.StdPressure, error) {
 }
 
 // stepsFlag is --steps: a whole number of points, end points included.
-type stepsFlag struct{ n int }
+// A value that reads as a temperature or pressure (50K, 1bar) is a step
+// typed where the count goes; it is kept in step, for
+// the command to answer with the number of points it means once the
+// range is known.
+type stepsFlag struct {
+	n    int
+	step string
+}
 
 func (s *stepsFlag) String() string { return strconv.Itoa(s.n) }
 
 func (s *stepsFlag) Set(v string) error {
-	n, err := mixtures.ParseSteps(strings.TrimSpace(v))
+	v = strings.TrimSpace(v)
+	n, err := mixtures.ParseSteps(v)
 	if err != nil {
+		if _, tErr := mixtures.ParseTemperature(v); tErr == nil {
+			s.step = v
+			return nil
+		}
+		if _, pErr := mixtures.ParsePressure(v); pErr == nil {
+			s.step = v
+			return nil
+		}
 		return fmt.Errorf("want a whole number of points from 2 to %d, end points included", mixtures.MaxSweepSteps)
 	}
-	s.n = n
+	s.n, s.step = n, ""
 	return nil
+}
+
+// stepError answers a step typed for --steps: the number of points that
+// gives that step over sw, where there is one.
+func (s *stepsFlag) stepError(sw mixtures.Sweep) error {
+	if n, ok := sw.PointsForStep(s.step); ok {
+		return badInput("--steps %s: a number of points, end points included, not a step; a step of %s over this range is --steps %d", model.Quote(s.step), s.step, n)
+	}
+	return badInput("--steps %s: a number of points, end points included, not a step: want a whole number from 2 to %d", model.Quote(s.step), mixtures.MaxSweepSteps)
 }

@@ -31,7 +31,7 @@ func (a *app) cmdSweep(g *globalOpts, args []string) error {
 	fs := newFlagSet("zmix sweep")
 	var blendSpec, tempText, presText, stdText string
 	var asJSON, asCSV, logGrid bool
-	steps := stepsFlag{defaultSweepSteps}
+	steps := stepsFlag{n: defaultSweepSteps}
 	fs.StringVar(&blendSpec, "blend", "", "the blend: `SPEC` text, or @FILE for a saved blend file")
 	fs.StringVar(&tempText, "temp", "", "temperature: a range `A..B` to sweep (300..1500K), or the fixed value of a pressure sweep")
 	fs.StringVar(&presText, "pres", "", "pressure: a range `A..B` to sweep (1..50bar), or the fixed value of a temperature sweep")
@@ -72,6 +72,9 @@ func (a *app) cmdSweep(g *globalOpts, args []string) error {
 	}
 	if err != nil {
 		return err
+	}
+	if steps.step != "" {
+		return steps.stepError(cfg.sweep)
 	}
 	if err := cfg.sweep.Check(); err != nil {
 		return badInput("%v", err)

@@ -81,7 +81,8 @@ Flags:
   --blend SPEC     the blend, as text or @FILE (required)
   --temp A..B|T    the temperature range, or the fixed temperature
   --pres A..B|P    the pressure range, or the fixed pressure
-  --steps N        number of points, end points included (default 11)
+  --steps N        number of points, end points included (default 11); a
+                   step typed here (50K) is answered with the count it means
   --log            evenly spaced in ln T
   --std P°         standard pressure of μ°: 1bar (default) or 1atm
   --json           a JSON list of state objects, one per point
