@@ -68,18 +68,25 @@ func (c *Catalogue) AbsentHint(key string) (string, bool) {
 	return "", false
 }
 
+// NotCarriedHint says why key, which c does not carry, will not be
+// offered under a look-alike name: it names a mixture (air), or a gas
+// the catalogue is known to lack (AbsentHint).
+func (c *Catalogue) NotCarriedHint(key string) (string, bool) {
+	if h, ok := MixtureHint(key); ok {
+		return h, true
+	}
+	return c.AbsentHint(key)
+}
+
 // UnknownHint says what to do about key, a species c does not carry: the
 // components of a mixture typed as a species (air), the isomers to
 // choose from, why a known gas is missing, or the nearest names ("did you mean …?"); "" when none of these apply, so that the
 // caller adds its own default.
 func (c *Catalogue) UnknownHint(key string) string {
-	if h, ok := MixtureHint(key); ok {
-		return h
-	}
 	if h, ok := c.IsomerHint(key); ok {
 		return h
 	}
-	if h, ok := c.AbsentHint(key); ok {
+	if h, ok := c.NotCarriedHint(key); ok {
 		return h
 	}
 	if sug := c.Suggest(key, 3); len(sug) > 0 {

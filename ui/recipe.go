@@ -260,9 +260,9 @@ func (p *recipePane) findHits() {
 	if len(p.hits) > 0 || strings.TrimSpace(q) == "" {
 		return
 	}
-	// A gas the catalogue is known to lack says why, rather than offering
-	// a look-alike.
-	if why, ok := p.c.Catalogue.AbsentHint(q); ok {
+	// A gas the catalogue is known to lack, or a mixture typed as a
+	// species (air), says why, rather than offering a look-alike.
+	if why, ok := p.c.Catalogue.NotCarriedHint(q); ok {
 		p.absent = why
 		return
 	}

@@ -237,6 +237,17 @@ func TestRecipeSearchSaysWhyAbsent(t *testing.T) {
 	}
 }
 
+// "air" is a mixture, not a species: the search says so and gives its
+// components, rather than offering argon as the nearest name.
+func TestRecipeSearchSaysAirIsAMixture(t *testing.T) {
+	p, b := testRecipe(t)
+	recipeKeys(p, b, "a")
+	recipeType(p, b, "air")
+	if len(p.hits) != 0 || !strings.Contains(p.View(), "mixture, not a species") || !strings.Contains(p.View(), "O2 20.95%") {
+		t.Fatalf("hits for air = %d; view:\n%s", len(p.hits), p.View())
+	}
+}
+
 // The new row's amount is ready to type; enter on an empty amount asks for
 // one and keeps the field open; after the amount, the row stays marked;
 // esc on a new row takes it back out.
