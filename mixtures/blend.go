@@ -386,39 +386,43 @@ func (b *Blend) SumPartialPa() (sumPa float64, all bool) {
 // below is the rounding of amounts that already make 100 %.
 const balanceMin = 1e-12
 
-// lookup finds each item's species in cat.
-func (b *Blend) lookup(cat *model.Catalogue) ([]*model.Species, error) {
-	out := make([]*model.Species, len(b.Items))
+// lookup finds what each item stands for in cat: a species, or a named
+// mixture's components.
+func (b *Blend) lookup(cat *model.Catalogue) ([]itemParts, error) {
+	out := make([]itemParts, len(b.Items))
 	for i, it := range b.Items {
-		sp, ok := cat.Lookup(it.Key)
+		parts, missing, ok := partsOf(cat, it.Key)
 		if !ok {
 			detail := cat.UnknownHint(it.Key)
+			if missing != "" {
+				detail = fmt.Sprintf("%s is a named mixture whose component %s is not in the catalogue", model.Printable(it.Key), missing)
+			}
 			if detail == "" {
 				detail = "not in the catalogue"
 			}
 			return nil, &BlendError{Text: b.Text, Token: it.Key, Offset: it.Offset, Index: it.Index, Origin: it.Origin, Err: ErrUnknownSpecies, Detail: detail}
 		}
-		out[i] = sp
+		out[i] = parts
 	}
 	return out, nil
 }
 
 // Resolve looks the species up in cat and turns the amounts into mole
 // fractions at total pressure presPa (used only by partial pressures).
-// Species listed more than once are merged; species of zero amount are
-// dropped.
+// Species listed more than once, on their own or in a named mixture
+// (air), are merged; species of zero amount are dropped.
 func (b *Blend) Resolve(cat *model.Catalogue, presPa float64) (*Mixture, error) {
 	type entry struct {
-		sp   *model.Species
+		itemParts
 		item Item
 	}
-	species, err := b.lookup(cat)
+	resolved, err := b.lookup(cat)
 	if err != nil {
 		return nil, err
 	}
 	entries := make([]entry, len(b.Items))
 	for i, it := range b.Items {
-		entries[i] = entry{species[i], it}
+		entries[i] = entry{resolved[i], it}
 	}
 	whole := func(err error, detail string) error {
 		return &BlendError{Text: b.Text, Offset: -1, Index: -1, Err: err, Detail: detail}
@@ -429,7 +433,7 @@ func (b *Blend) Resolve(cat *model.Catalogue, presPa float64) (*Mixture, error) 
 	var sumX, sumXM, sumW, sumWOverM float64
 	bal := -1
 	for i, e := range entries {
-		m := e.sp.MolarMassKgPerMol
+		m := e.molarMassKgPerMol
 		switch e.item.Amount.Basis {
 		case MoleFraction:
 			sumX += e.item.Amount.Value
@@ -457,7 +461,7 @@ func (b *Blend) Resolve(cat *model.Catalogue, presPa float64) (*Mixture, error) 
 	var molarMass float64 // M̄ of the blend
 	switch {
 	case bal >= 0:
-		mb := entries[bal].sp.MolarMassKgPerMol
+		mb := entries[bal].molarMassKgPerMol
 		denom := 1 - sumW + sumWOverM*mb
 		molarMass = (sumXM + (1-sumX)*mb) / denom
 		xBal := 1 - sumX - molarMass*sumWOverM
@@ -490,9 +494,11 @@ func (b *Blend) Resolve(cat *model.Catalogue, presPa float64) (*Mixture, error) 
 		}
 	}
 
-	// Mole fraction of each entry; NewMixture merges repeated species.
+	// Mole fraction of each entry, shared among its parts; NewMixture
+	// merges repeated species.
 	comps := make([]Component, 0, len(entries))
-	for _, e := range entries {
+	items := make([]ItemShare, len(entries))
+	for i, e := range entries {
 		var x float64
 		a := e.item.Amount
 		switch a.Basis {
@@ -501,13 +507,21 @@ func (b *Blend) Resolve(cat *model.Catalogue, presPa float64) (*Mixture, error) 
 		case PartialPres:
 			x = a.Value / presPa
 		case MassFraction:
-			x = a.Value * molarMass / e.sp.MolarMassKgPerMol
+			x = a.Value * molarMass / e.molarMassKgPerMol
 		case Balance:
 			x = math.Max(0, 1-sumX-molarMass*sumWOverM)
 		}
-		comps = append(comps, Component{Species: e.sp, X: x})
+		items[i] = ItemShare{Key: e.item.Key, X: x}
+		for _, part := range e.parts {
+			comps = append(comps, Component{Species: part.Species, X: x * part.X})
+		}
 	}
-	return NewMixture(comps)
+	m, err := NewMixture(comps)
+	if err != nil {
+		return nil, err
+	}
+	m.Items = items
+	return m, nil
 }
 
 // NewMixture builds a mixture from mole amounts (any positive scale),

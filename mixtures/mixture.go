@@ -2,6 +2,7 @@ package mixtures
 
 import (
 	"math"
+	"strings"
 	"sync"
 
 	"zmix/mixtures/realgas"
@@ -13,6 +14,11 @@ import (
 type Mixture struct {
 	Components        []Component
 	MolarMassKgPerMol float64
+	// Items are the items of the blend it was resolved from, in the
+	// blend's order, each with its mole fraction before repeated species
+	// were merged and a named mixture (air) was shared among its
+	// components; nil for a mixture not made from a blend.
+	Items []ItemShare
 
 	// Set by NewMixture, once, for every state: ln xᵢ of each component
 	// and the ideal mixing entropy −R Σ xᵢ ln xᵢ, which depend on the
@@ -23,6 +29,25 @@ type Mixture struct {
 	// made when a state first asks for its real-gas figures: a process
 	// balance on the ideal gas makes mixtures it never asks.
 	real *lazyRealGas
+}
+
+// ItemShare is one blend item's mole fraction in the mixture: Key as the
+// blend names it ("N2", "nitrogen", "air").
+type ItemShare struct {
+	Key string
+	X   float64
+}
+
+// ItemFraction returns the mole fraction the blend items named key make
+// together (case does not matter), and whether any does.
+func (m *Mixture) ItemFraction(key string) (float64, bool) {
+	x, found := 0.0, false
+	for _, it := range m.Items {
+		if strings.EqualFold(it.Key, strings.TrimSpace(key)) {
+			x, found = x+it.X, true
+		}
+	}
+	return x, found
 }
 
 // lazyRealGas makes a composition's real-gas constants once, on request;

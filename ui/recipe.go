@@ -2,6 +2,7 @@ package ui
 
 import (
 	"fmt"
+	"slices"
 	"strings"
 
 	"github.com/charmbracelet/bubbles/key"
@@ -43,7 +44,7 @@ type recipePane struct {
 	added  bool   // the row being edited was just added by the search
 	field  recipeField
 	search field
-	hits   []*model.Species
+	hits   []searchHit
 	hit    int
 	// absent is why the catalogue lacks the gas a query names (c-C4F8),
 	// when it is one it is known to lack.
@@ -252,23 +253,43 @@ func (p *recipePane) stopNaming(keep bool) {
 	p.amount.setWidth(p.amountWidth())
 }
 
-// findHits searches the catalogue for the query; when nothing matches, it
-// offers the nearest names instead, as the commands' "did you mean" does.
+// searchHit is one line of the species search: a catalogue species, or
+// a named mixture (air), which blend text takes as one item.
+type searchHit struct {
+	Formula, Name string
+}
+
+// findHits searches the catalogue for the query, with the named mixtures
+// whose names start with it first; when nothing matches, it offers the
+// nearest names instead, as the commands' "did you mean" does.
 func (p *recipePane) findHits() {
 	q := p.search.value()
-	p.hits, p.hit, p.nearest, p.absent = p.c.Catalogue.Search(q), 0, false, ""
-	if len(p.hits) > 0 || strings.TrimSpace(q) == "" {
+	p.hits, p.hit, p.nearest, p.absent = nil, 0, false, ""
+	if strings.TrimSpace(q) == "" {
 		return
 	}
-	// A gas the catalogue is known to lack, or a mixture typed as a
-	// species (air), says why, rather than offering a look-alike.
-	if why, ok := p.c.Catalogue.NotCarriedHint(q); ok {
+	if key := strings.ToLower(strings.TrimSpace(q)); len(key) >= 2 {
+		for _, m := range mixtures.AllNamedMixtures() {
+			if strings.HasPrefix(m.Name, key) {
+				p.hits = append(p.hits, searchHit{m.Name, m.Short})
+			}
+		}
+	}
+	for _, sp := range p.c.Catalogue.Search(q) {
+		p.hits = append(p.hits, searchHit{sp.Formula, sp.Name})
+	}
+	if len(p.hits) > 0 {
+		return
+	}
+	// A gas the catalogue is known to lack says why, rather than offering
+	// a look-alike.
+	if why, ok := p.c.Catalogue.AbsentHint(q); ok {
 		p.absent = why
 		return
 	}
 	for _, f := range p.c.Catalogue.Suggest(q, 3) {
 		if sp, ok := p.c.Catalogue.Lookup(f); ok {
-			p.hits = append(p.hits, sp)
+			p.hits = append(p.hits, searchHit{sp.Formula, sp.Name})
 		}
 	}
 	p.nearest = len(p.hits) > 0
@@ -393,6 +414,16 @@ func (p *recipePane) refresh() {
 	}
 	if len(p.b.entries) == 0 {
 		lines = append(lines, s.Muted.Render("  (no species: press a to add one)"))
+	}
+	// What a named mixture in the recipe (air) is taken to be.
+	var named []string
+	for _, e := range p.b.entries {
+		if m, ok := mixtures.LookupNamedMixture(e.Species); ok && !slices.Contains(named, m.Name) {
+			named = append(named, m.Name)
+			for _, l := range report.Wrap(p.c.Text(m.Name+" = "+m.Title), p.w-2) {
+				lines = append(lines, s.Muted.Render("  "+l))
+			}
+		}
 	}
 	if p.b.blendErr != "" {
 		for _, l := range report.Wrap(p.c.Text(p.b.blendErr), p.w-2) {

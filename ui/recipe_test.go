@@ -237,14 +237,30 @@ func TestRecipeSearchSaysWhyAbsent(t *testing.T) {
 	}
 }
 
-// "air" is a mixture, not a species: the search says so and gives its
-// components, rather than offering argon as the nearest name.
-func TestRecipeSearchSaysAirIsAMixture(t *testing.T) {
+// "air" is offered first by the search, as a named mixture; its row
+// shows its own share, and the blend holds its components.
+func TestRecipeSearchOffersAir(t *testing.T) {
 	p, b := testRecipe(t)
 	recipeKeys(p, b, "a")
-	recipeType(p, b, "air")
-	if len(p.hits) != 0 || !strings.Contains(p.View(), "mixture, not a species") || !strings.Contains(p.View(), "O2 20.95%") {
-		t.Fatalf("hits for air = %d; view:\n%s", len(p.hits), p.View())
+	recipeType(p, b, "ai")
+	if len(p.hits) == 0 || p.hits[0].Formula != "air" || !strings.Contains(p.View(), "dry air (N2, O2, Ar, CO2)") {
+		t.Fatalf("hits for ai = %v, want air first; view:\n%s", p.hits, p.View())
+	}
+	recipeKeys(p, b, "enter")
+	recipeType(p, b, "10%")
+	recipeKeys(p, b, "enter")
+	if e := b.entries[p.sel]; e.Species != "air" || e.Amount != "10%" {
+		t.Fatalf("after adding air: marked row %+v", e)
+	}
+	if x, ok := b.moleFraction("air"); !ok || x != 0.10 {
+		t.Errorf("air row: x = %g, %v; want its own 0.1", x, ok)
+	}
+	found := false
+	for _, c := range b.in.Mixture.Components {
+		found = found || c.Species.Formula == "O2"
+	}
+	if !found || !strings.Contains(p.View(), "0.1000") || !strings.Contains(p.View(), "air = dry air: O2 20.946 %") {
+		t.Errorf("air in the recipe: O2 in the blend %v; view:\n%s", found, p.View())
 	}
 }
 

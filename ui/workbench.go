@@ -226,6 +226,11 @@ func (b *bench) moleFraction(key string) (float64, bool) {
 	if b.in.Mixture == nil {
 		return 0, false
 	}
+	// The row's own share, as the blend's items give it: air's row shows
+	// air, not the O2 and N2 it brings to other rows.
+	if x, ok := b.in.Mixture.ItemFraction(key); ok {
+		return x, true
+	}
 	sp, ok := b.cat.Lookup(key)
 	if !ok {
 		return 0, false

@@ -7,6 +7,7 @@ import (
 	"fmt"
 	"io"
 	"io/fs"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -299,7 +300,10 @@ func openBlendFile(prefix, path string) (*blendSource, error) {
 }
 
 // label is how the blend is named in a readout.
-func (s *blendSource) label() string {
+func (s *blendSource) label() string { return s.plainLabel() + namedNote(s.blend) }
+
+// plainLabel is the label without the named mixtures' note.
+func (s *blendSource) plainLabel() string {
 	if s.file == nil {
 		return s.blend.Text
 	}
@@ -308,6 +312,22 @@ func (s *blendSource) label() string {
 		return fmt.Sprintf("%s  [%s: %s]", text, s.path, s.file.Name)
 	}
 	return fmt.Sprintf("%s  [%s]", text, s.path)
+}
+
+// namedNote says what the named mixtures (air) the blends hold were
+// taken to be, each once, for the end of a label: what "air" means goes
+// with the blend wherever it is shown. It is "" when they hold none.
+func namedNote(blends ...*mixtures.Blend) string {
+	var notes []string
+	for _, b := range blends {
+		if n := b.NamedNote(); n != "" && !slices.Contains(notes, n) {
+			notes = append(notes, n)
+		}
+	}
+	if len(notes) == 0 {
+		return ""
+	}
+	return "  [" + strings.Join(notes, "; ") + "]"
 }
 
 // fileValue returns the value saved in the blend file for a condition, or

@@ -811,3 +811,30 @@ func TestUsageFlagsFit80(t *testing.T) {
 		}
 	}
 }
+
+// "air" in blend text is dry air's components, and every readout that
+// names the blend says what air was taken to be, once.
+func TestAirInBlendText(t *testing.T) {
+	const note = "[air = dry air: O2 20.946 %, Ar 0.934 %, CO2 0.04 %, N2 bal (US Standard Atmosphere 1976, CO2 updated; from memory)]"
+	code, out, stderr := zmix(t, "state", "--blend", "CO2 5%, air bal", "--temp", "20C", "--pres", "1atm")
+	if code != 0 || !strings.Contains(out, "Blend  CO2 5%, air bal  "+note) {
+		t.Fatalf("state with air: exit %d, stderr %q; output:\n%s", code, stderr, out)
+	}
+	for _, sp := range []string{"  N2 ", "  O2 ", "  Ar ", "  CO2 "} {
+		if !strings.Contains(out, sp) {
+			t.Errorf("state with air: no species line %q", sp)
+		}
+	}
+	code, out, _ = zmix(t, "dilute", "--blend", "CH4 2.5%, air bal", "--with", "air", "--target", "CH4 1%")
+	if code != 0 || strings.Count(out, note) != 1 {
+		t.Errorf("dilute air with air: exit %d, the note %d times, want once:\n%s", code, strings.Count(out, note), out)
+	}
+	code, out, _ = zmix(t, "mix", "--stream", "air; 25C; 100 Nm3/h", "--stream", "CO2 1; 80C; 20 kg/h", "--pres", "1.2bar")
+	if code != 0 || !strings.Contains(out, "Mixing  air  +  CO2 1  "+note) {
+		t.Errorf("mix with air: exit %d:\n%s", code, out)
+	}
+	code, out, _ = zmix(t, "state", "--blend", "N2 79%, O2 21%", "--temp", "20C", "--pres", "1atm")
+	if code != 0 || strings.Contains(out, "dry air") {
+		t.Errorf("a blend without air has the note:\n%s", out)
+	}
+}

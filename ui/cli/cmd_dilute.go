@@ -68,7 +68,7 @@ func (a *app) cmdDilute(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(parentSrc.label()+"  diluted with  "+diluentB.Text, res, cmd.out, g.ascii)
+	return a.printProcess(parentSrc.plainLabel()+"  diluted with  "+diluentB.Text+namedNote(parentSrc.blend, diluentB), res, cmd.out, g.ascii)
 }
 
 func usageDilute(w io.Writer) {

@@ -53,6 +53,7 @@ func (a *app) cmdMix(g *globalOpts, args []string) error {
 	}
 	mx := process.Mixing{PresPa: p.Pa}
 	labels := make([]string, len(streams))
+	blends := make([]*mixtures.Blend, len(streams))
 	for i, text := range streams {
 		flag := fmt.Sprintf("--stream %d", i+1)
 		spec, err := process.ParseStream(text)
@@ -71,14 +72,14 @@ func (a *app) cmdMix(g *globalOpts, args []string) error {
 		if err != nil {
 			return badInput("%s: %v", flag, err)
 		}
-		labels[i] = spec.BlendText
+		labels[i], blends[i] = spec.BlendText, b
 		mx.Streams = append(mx.Streams, process.Stream{Label: spec.BlendText, Mixture: mix, TempK: spec.TempK, RateMolPerSec: n})
 	}
 	res, err := mx.Solve()
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(strings.Join(labels, "  +  "), res, outFmt, g.ascii)
+	return a.printProcess(strings.Join(labels, "  +  ")+namedNote(blends...), res, outFmt, g.ascii)
 }
 
 // streamBlend reads a stream's blend: text, or @FILE for a blend file.

@@ -118,7 +118,7 @@ func (a *app) cmdPurge(g *globalOpts, args []string) error {
 	if err != nil {
 		return processFailed(err)
 	}
-	return a.printProcess(startB.Text+"  purged with  "+purgeB.Text, res, outFmt, g.ascii)
+	return a.printProcess(startB.Text+"  purged with  "+purgeB.Text+namedNote(startB, purgeB), res, outFmt, g.ascii)
 }
 
 func usagePurge(w io.Writer) {
