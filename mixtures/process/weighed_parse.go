@@ -179,6 +179,13 @@ func parsePart(cat *model.Catalogue, it string) (ParentPart, mixtures.Basis, err
 	}
 	sp, ok := cat.Lookup(fields[0])
 	if !ok {
+		if m, named := mixtures.LookupNamedMixture(fields[0]); named {
+			// A weighed parent's composition is its certificate's, with
+			// its uncertainties, not the atmosphere's (synthetic air
+			// holds no argon).
+			return ParentPart{}, 0, model.Errorf("process", "%s stands for %s in blend text; a weighed parent gives the composition its certificate states, with uncertainties, e.g. \"500 g of N2 79.5%% ±0.1%%, O2 bal\"",
+				model.Quote(fields[0]), m.Short)
+		}
 		hint := cat.UnknownHint(fields[0])
 		if hint == "" {
 			hint = "it is not in the catalogue"

@@ -308,6 +308,7 @@ func TestParseParent(t *testing.T) {
 		{"25 furlongs CO2", "unknown unit"},
 		{"0 g CO2", "above 0"},
 		{"25 g Unobtainium", "unknown species"},
+		{"500 g air", "a weighed parent gives the composition its certificate states"},
 		{"25 g N2 with O2 0.2 bar", "by moles (mol/mol, %, ppm, ppb) or by mass"},
 		{"25 g N2 with O2 5wt%, Ar 3ppm", "all by moles (%, ppm) or all by mass"},
 		{"25 g CH4 2 wt% ± 10ppm, N2 bal", "on one basis"},
