@@ -415,12 +415,13 @@ func (p *recipePane) refresh() {
 	if len(p.b.entries) == 0 {
 		lines = append(lines, s.Muted.Render("  (no species: press a to add one)"))
 	}
-	// What a named mixture in the recipe (air) is taken to be.
+	// What a named mixture in the recipe (air) is, in a line; its shares
+	// are the Properties pane's species rows, its source the README.
 	var named []string
 	for _, e := range p.b.entries {
 		if m, ok := mixtures.LookupNamedMixture(e.Species); ok && !slices.Contains(named, m.Name) {
 			named = append(named, m.Name)
-			for _, l := range report.Wrap(p.c.Text(m.Name+" = "+m.Title), p.w-2) {
+			for _, l := range report.Wrap(p.c.Text(m.Name+" = "+m.Short), p.w-2) {
 				lines = append(lines, s.Muted.Render("  "+l))
 			}
 		}
