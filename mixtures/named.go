@@ -36,7 +36,7 @@ type NamedMixture struct {
 // (the 1976 table's 0.0314 % is out of date); N2 the balance, 78.080 %,
 // which takes in the traces (Ne, He, Kr, Xe, CH4, H2: under 25 ppm in
 // all) so that air is not called flammable for its 2 ppm of methane. Its
-// molar mass, 28.965 g/mol, is ISO 2533's 28.9644 g/mol (from memory)
+// molar mass, 28.966 g/mol, is ISO 2533's 28.9644 g/mol (from memory)
 // within the CO2 update (TestNamedAir).
 var namedMixtures = []NamedMixture{{
 	Name:  "air",

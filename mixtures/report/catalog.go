@@ -9,6 +9,7 @@ import (
 	"strconv"
 	"strings"
 
+	"zmix/mixtures"
 	"zmix/model"
 )
 
@@ -63,7 +64,85 @@ func WriteCatalogList(w io.Writer, cat *model.Catalogue) {
 			fmt.Fprintln(w, l)
 		}
 	}
+	var named []string
+	for _, m := range mixtures.AllNamedMixtures() {
+		named = append(named, m.Name+" ("+m.Short+")")
+	}
+	if len(named) > 0 {
+		fmt.Fprintln(w)
+		for _, l := range Wrap("Named mixtures, which blend text takes as one item: "+strings.Join(named, ", ")+".", 78) {
+			fmt.Fprintln(w, l)
+		}
+	}
 	fmt.Fprintln(w, "\nzmix catalog FORMULA shows one species' data, sources and standard-state table.")
+}
+
+// NamedMixtureParts is a named mixture resolved in a catalogue: each
+// part's species and mole fraction, and the molar mass.
+type NamedMixtureParts struct {
+	Mixture           mixtures.NamedMixture
+	Parts             []mixtures.Component
+	MolarMassKgPerMol float64
+}
+
+// ResolveNamedMixture resolves m in cat, as blend text would.
+func ResolveNamedMixture(cat *model.Catalogue, m mixtures.NamedMixture) (NamedMixtureParts, error) {
+	b, err := mixtures.ParseBlend(m.Name)
+	if err != nil {
+		return NamedMixtureParts{}, err
+	}
+	mix, err := b.Resolve(cat, model.StdPressureAtmPa)
+	if err != nil {
+		return NamedMixtureParts{}, err
+	}
+	return NamedMixtureParts{Mixture: m, Parts: mix.Components, MolarMassKgPerMol: mix.MolarMassKgPerMol}, nil
+}
+
+// WriteNamedMixture writes what zmix catalog NAME gives for a named
+// mixture: what it is, its parts and its molar mass.
+func WriteNamedMixture(w io.Writer, r NamedMixtureParts) {
+	fmt.Fprintf(w, "%s: a named mixture, not a species; blend text shares an item of it among its parts\n", r.Mixture.Name)
+	for _, l := range Wrap(r.Mixture.Title, 76) {
+		fmt.Fprintln(w, "  "+l)
+	}
+	fmt.Fprintln(w, "\n  species   x mol/mol")
+	for _, c := range r.Parts {
+		fmt.Fprintf(w, "  %-8s  %s\n", model.Printable(c.Species.Formula), strconv.FormatFloat(c.X, 'f', 6, 64))
+	}
+	fmt.Fprintf(w, "\n  molar mass  %s g/mol\n", Sig(r.MolarMassKgPerMol*1000, 6))
+	fmt.Fprintln(w, "\nzmix catalog FORMULA shows each part's data, sources and standard-state table.")
+}
+
+// WriteNamedMixtureJSON writes the same as one JSON object.
+func WriteNamedMixtureJSON(w io.Writer, r NamedMixtureParts) error {
+	type part struct {
+		Formula string  `json:"formula"`
+		X       float64 `json:"x"`
+	}
+	out := struct {
+		Name              string  `json:"name"`
+		NamedMixture      bool    `json:"named_mixture"`
+		Title             string  `json:"title"`
+		Parts             []part  `json:"parts"`
+		MolarMassKgPerMol float64 `json:"molar_mass_kg_mol"`
+	}{Name: r.Mixture.Name, NamedMixture: true, Title: r.Mixture.Title, MolarMassKgPerMol: r.MolarMassKgPerMol}
+	for _, c := range r.Parts {
+		out.Parts = append(out.Parts, part{c.Species.Formula, c.X})
+	}
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	return enc.Encode(out)
+}
+
+// WriteNamedMixtureCSV writes a header row and one row per part.
+func WriteNamedMixtureCSV(w io.Writer, r NamedMixtureParts) error {
+	cw := csv.NewWriter(w)
+	cw.Write([]string{"formula", "x"})
+	for _, c := range r.Parts {
+		cw.Write([]string{c.Species.Formula, strconv.FormatFloat(c.X, 'g', -1, 64)})
+	}
+	cw.Flush()
+	return cw.Error()
 }
 
 // catalogueFieldLabels names the catalogue file's fields in display order,

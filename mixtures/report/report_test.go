@@ -340,7 +340,8 @@ func TestCatalogListNamesSpinModifications(t *testing.T) {
 	var b bytes.Buffer
 	WriteCatalogList(&b, model.Builtin())
 	flat := strings.Join(strings.Fields(b.String()), " ")
-	for _, want := range []string{"Spin modifications, by name: eH2 (equilibrium hydrogen)", "pH2 (para hydrogen)", "oD2 (ortho deuterium)"} {
+	for _, want := range []string{"Spin modifications, by name: eH2 (equilibrium hydrogen)", "pH2 (para hydrogen)", "oD2 (ortho deuterium)",
+		"Named mixtures, which blend text takes as one item: air (dry air (N2, O2, Ar, CO2))."} {
 		if !strings.Contains(flat, want) {
 			t.Errorf("the list lacks %q:\n%s", want, b.String())
 		}

@@ -838,3 +838,31 @@ func TestAirInBlendText(t *testing.T) {
 		t.Errorf("a blend without air has the note:\n%s", out)
 	}
 }
+
+// zmix catalog air says what the named mixture is, in each format.
+func TestCatalogNamedMixture(t *testing.T) {
+	code, out, stderr := zmix(t, "catalog", "air")
+	if code != 0 || !strings.Contains(out, "air: a named mixture, not a species") || !strings.Contains(out, "molar mass  28.9664 g/mol") || !strings.Contains(out, "O2        0.209460") {
+		t.Fatalf("catalog air: exit %d, stderr %q:\n%s", code, stderr, out)
+	}
+	code, out, _ = zmix(t, "catalog", "Air", "--json")
+	var got struct {
+		Name         string `json:"name"`
+		NamedMixture bool   `json:"named_mixture"`
+		Parts        []struct {
+			Formula string  `json:"formula"`
+			X       float64 `json:"x"`
+		} `json:"parts"`
+	}
+	if err := json.Unmarshal([]byte(out), &got); code != 0 || err != nil || !got.NamedMixture || got.Name != "air" || len(got.Parts) != 4 || got.Parts[1].Formula != "O2" || got.Parts[1].X != 0.20946 {
+		t.Errorf("catalog air --json: exit %d, %v, %+v", code, err, got)
+	}
+	code, out, _ = zmix(t, "catalog", "air", "--csv")
+	if code != 0 || !strings.HasPrefix(out, "formula,x\nN2,0.7808\n") {
+		t.Errorf("catalog air --csv: exit %d:\n%s", code, out)
+	}
+	code, out, _ = zmix(t, "catalog")
+	if flat := strings.Join(strings.Fields(out), " "); code != 0 || !strings.Contains(flat, "Named mixtures, which blend text takes as one item: air (dry air (N2, O2, Ar, CO2)).") {
+		t.Errorf("catalog list does not name air:\n%s", out)
+	}
+}

@@ -63,6 +63,24 @@ func (a *app) cmdCatalog(g *globalOpts, args []string) error {
 			return ioFailure(err)
 		}
 	} else {
+		if m, named := mixtures.LookupNamedMixture(rest[0]); named {
+			r, err := report.ResolveNamedMixture(cat, m)
+			if err != nil {
+				return badInput("%s: %s", model.Quote(rest[0]), model.UserMessage(err))
+			}
+			switch format {
+			case formatJSON:
+				err = report.WriteNamedMixtureJSON(&out, r)
+			case formatCSV:
+				err = report.WriteNamedMixtureCSV(&out, r)
+			default:
+				report.WriteNamedMixture(page(&out, g.ascii), r)
+			}
+			if err != nil {
+				return ioFailure(err)
+			}
+			return a.emit(&out)
+		}
 		sp, ok := cat.Lookup(rest[0])
 		if !ok {
 			const more = "zmix catalog lists every species, and --species FILE adds others"
