@@ -120,3 +120,16 @@ func (b *Blend) NamedNote() string {
 	}
 	return strings.Join(notes, "; ")
 }
+
+// CheckNamesFree refuses a catalogue in which a species (from a species
+// file) goes by a named mixture's name, which blend text would read as
+// the mixture: the species could never be reached, without a word.
+func CheckNamesFree(cat *model.Catalogue) error {
+	for _, m := range namedMixtures {
+		if sp, ok := cat.Lookup(m.Name); ok {
+			return model.Errorf("mixtures", "species %s (%s) goes by the name %s, which blend text keeps for %s; give it another formula and name",
+				model.Quote(sp.Formula), model.Printable(sp.Name), model.Quote(m.Name), m.Short)
+		}
+	}
+	return nil
+}

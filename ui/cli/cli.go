@@ -68,6 +68,9 @@ func (g *globalOpts) catalogue() (*model.Catalogue, error) {
 			}
 			return nil, badInput("--species %s: %v", path, err)
 		}
+		if err := mixtures.CheckNamesFree(next); err != nil {
+			return nil, badInput("--species %s: %s", path, model.UserMessage(err))
+		}
 		cat = next
 	}
 	return cat, nil

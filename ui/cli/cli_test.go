@@ -866,3 +866,17 @@ func TestCatalogNamedMixture(t *testing.T) {
 		t.Errorf("catalog list does not name air:\n%s", out)
 	}
 }
+
+// A species file may not give a species the name blend text keeps for a
+// named mixture: "air" would never reach it.
+func TestSpeciesFileCannotTakeAir(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "lump.cat")
+	text := "[N2O3]\nname = Air\nrotor = nonlinear\nrot_cm = 0.4 0.15 0.1 | test fixture\nvib_cm = 1000x3 900x3 800x3 | test fixture\ndHf0_kJ = 0 | test fixture\n"
+	if err := os.WriteFile(path, []byte(text), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	code, _, stderr := zmix(t, "state", "--species", path, "--blend", "air", "--temp", "20C", "--pres", "1atm")
+	if code != 2 || !strings.Contains(stderr, `goes by the name "air", which blend text keeps for dry air`) || strings.Count(stderr, "\n") != 1 {
+		t.Errorf("species file naming air: exit %d, stderr %q", code, stderr)
+	}
+}
