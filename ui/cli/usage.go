@@ -31,7 +31,8 @@ const blendHelp = `Blend text: "SPECIES AMOUNT" items separated by , ; or new li
   fraction (0.3 kg/kg), mass % (30 wt% or 30 mass%), a partial pressure
   (0.2 bar), or bal for the one balance species; a species alone, as the
   whole blend, is the pure gas. Isomers, which share a formula, take a
-  prefix: ` + model.IsomerPrefixes + `, as in n-C4H10.
+  prefix: ` + model.IsomerPrefixes + `, as in n-C4H10. air is one item
+  standing for dry air (N2, O2, Ar, CO2): CH4 2.5%, air bal.
   --blend @FILE reads a saved blend file; its temperature, pressure and
   standard pressure are then the defaults of --temp, --pres and --std.
 `
