@@ -166,7 +166,7 @@ func FuzzParseTarget(f *testing.F) {
 // The smaller parsers: volume, efficiency and reference condition. Each
 // gives a value in range or one line of error.
 func FuzzParseOthers(f *testing.F) {
-	for _, s := range []string{"2.5 m3", "50 L", "12 ft3", "0.8", "80%", "normal", "15C", "25C, 1 bar", "", "-1 L", "1e400 m3", "120%"} {
+	for _, s := range []string{"2.5 m3", "50 L", "12 ft3", "0.8", "80%", "normal", "15C", "25C, 1 bar", "", "-1 L", "1e400 m3", "120%", "10 kg", "2 kmol", "3 mg"} {
 		f.Add(s)
 	}
 	f.Fuzz(func(t *testing.T, s string) {
@@ -179,6 +179,13 @@ func FuzzParseOthers(f *testing.F) {
 			oneLine("ParseVolume", err)
 		} else if !(v > 0) || v > MaxVolumeM3 {
 			t.Fatalf("ParseVolume(%q) = %g", s, v)
+		}
+		for _, kind := range []string{"volume", "mass", "amount"} {
+			if v, err := ParseCylinderQuantity(kind, s); err != nil {
+				oneLine("ParseCylinderQuantity", err)
+			} else if !(v > 0) || v > 1e12 {
+				t.Fatalf("ParseCylinderQuantity(%s, %q) = %g", kind, s, v)
+			}
 		}
 		if e, err := ParseEfficiency(s); err != nil {
 			oneLine("ParseEfficiency", err)
