@@ -155,8 +155,8 @@ func DefaultKeyMap() *KeyMap {
 			Bottom:   key.NewBinding(key.WithKeys("end", "G"), key.WithHelp("end", "bottom: last line")),
 		},
 		Process: ProcessKeys{
-			PrevKind: key.NewBinding(key.WithKeys("left", "["), key.WithHelp("←/[", "process: previous one")),
-			NextKind: key.NewBinding(key.WithKeys("right", "]"), key.WithHelp("→/]", "process: next one (flow, compress, heat, mix, dilute, purge)")),
+			PrevKind: key.NewBinding(key.WithKeys("left", "["), key.WithHelp("←/[", "process: previous one in the row at the top")),
+			NextKind: key.NewBinding(key.WithKeys("right", "]"), key.WithHelp("→/]", "process: next one in the row at the top")),
 			Up:       key.NewBinding(key.WithKeys("up", "k"), key.WithHelp("↑/k", "up: previous field")),
 			Down:     key.NewBinding(key.WithKeys("down", "j"), key.WithHelp("↓/j", "down: next field")),
 			Edit:     key.NewBinding(key.WithKeys("enter", "e"), key.WithHelp("enter/e", "edit: type the field, or switch its choice")),
