@@ -511,7 +511,7 @@ func (b *Blend) Resolve(cat *model.Catalogue, presPa float64) (*Mixture, error) 
 		case Balance:
 			x = math.Max(0, 1-sumX-molarMass*sumWOverM)
 		}
-		items[i] = ItemShare{Key: e.item.Key, X: x}
+		items[i] = ItemShare{Key: e.item.Key, X: x, Named: e.named, Parts: e.parts}
 		for _, part := range e.parts {
 			comps = append(comps, Component{Species: part.Species, X: x * part.X})
 		}

@@ -32,10 +32,14 @@ type Mixture struct {
 }
 
 // ItemShare is one blend item's mole fraction in the mixture: Key as the
-// blend names it ("N2", "nitrogen", "air").
+// blend names it ("N2", "nitrogen", "air"); Named, the named mixture it
+// stands for ("air"), or "" for a species; Parts, its species with their
+// fractions of the item (one part of 1 for a species).
 type ItemShare struct {
-	Key string
-	X   float64
+	Key   string
+	X     float64
+	Named string
+	Parts []Component
 }
 
 // ItemFraction returns the mole fraction the blend items named key make

@@ -66,6 +66,7 @@ func AllNamedMixtures() []NamedMixture { return namedMixtures }
 type itemParts struct {
 	parts             []Component
 	molarMassKgPerMol float64
+	named             string // the named mixture's name, "" for a species
 }
 
 // partsOf resolves a key: a named mixture, whose every component must be
@@ -84,7 +85,7 @@ func partsOf(cat *model.Catalogue, key string) (parts itemParts, missing string,
 		}
 		return itemParts{parts: []Component{{Species: sp, X: 1}}, molarMassKgPerMol: sp.MolarMassKgPerMol}, "", true
 	}
-	out := itemParts{parts: make([]Component, 0, len(m.Parts))}
+	out := itemParts{parts: make([]Component, 0, len(m.Parts)), named: m.Name}
 	for _, p := range m.Parts {
 		sp, ok := cat.Lookup(p.Formula)
 		if !ok {

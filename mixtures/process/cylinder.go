@@ -241,20 +241,62 @@ func (c Cylinder) Solve() (*CylinderResult, error) {
 	return r, nil
 }
 
+// fillParent is one gas filled in one step: a pure species, or a named
+// mixture (air) from its own supply, with the share of the blend each of
+// its species makes.
+type fillParent struct {
+	label string
+	parts []mixtures.Component // X: the species' share of the whole blend
+	x     float64              // the parent's share of the blend
+}
+
+// fillParents are the parent gases of mix: its blend's items, each
+// species once (a species given twice is one parent, air one parent of
+// its own), or, for a mixture not made from a blend, its components.
+func fillParents(mix *mixtures.Mixture) []fillParent {
+	var out []fillParent
+	if len(mix.Items) == 0 {
+		for _, c := range mix.Components {
+			out = append(out, fillParent{label: c.Species.Formula, parts: []mixtures.Component{c}, x: c.X})
+		}
+		return out
+	}
+	for _, it := range mix.Items {
+		if it.X <= 0 {
+			continue
+		}
+		label := it.Named
+		if label == "" {
+			label = it.Parts[0].Species.Formula
+		}
+		i := slices.IndexFunc(out, func(p fillParent) bool { return p.label == label })
+		if i < 0 {
+			out = append(out, fillParent{label: label})
+			i = len(out) - 1
+		}
+		out[i].x += it.X
+		for _, part := range it.Parts {
+			out[i].parts = append(out[i].parts, mixtures.Component{Species: part.Species, X: it.X * part.X})
+		}
+	}
+	return out
+}
+
 // recipe builds the fill steps: the parent gases in rising order of
 // amount, the largest (the balance) last, each step's pressure and Z from
 // the gases in the cylinder so far (common practice: the minor gases go
-// in first so that the balance gas stirs them in).
+// in first so that the balance gas stirs them in). A named mixture (air)
+// is one parent, filled from its own supply.
 func (r *CylinderResult) recipe(c Cylinder, mix *mixtures.Mixture) error {
-	comps := slices.Clone(mix.Components)
-	slices.SortStableFunc(comps, func(a, b mixtures.Component) int { return cmp.Compare(a.X, b.X) })
+	parents := fillParents(mix)
+	slices.SortStableFunc(parents, func(a, b fillParent) int { return cmp.Compare(a.x, b.x) })
 	var so mixtures.State
 	var sofar []mixtures.Component
 	cum := 0.0
 	var table [][]Value
 	var labels []string
-	for _, comp := range comps {
-		sofar = append(sofar, mixtures.Component{Species: comp.Species, X: comp.X})
+	for _, parent := range parents {
+		sofar = append(sofar, parent.parts...)
 		sub, err := mixtures.NewMixture(sofar)
 		if err != nil {
 			return err
@@ -271,25 +313,33 @@ func (r *CylinderResult) recipe(c Cylinder, mix *mixtures.Mixture) error {
 		if _, err := cylinderGas(sub, &so, c.TempK, p); err != nil {
 			return err
 		}
-		// A gas added as a pure parent must not condense in its line, nor
-		// in the cylinder at this step.
-		if sat := realgas.VapourPressure(comp.Species, c.TempK); !sat.Supercritical && sat.Method != realgas.NoMethod && sat.Pa > 0 {
-			for _, t := range so.Species {
-				if t.Species == comp.Species && t.PartialPresPa >= sat.Pa {
-					return model.Errorf("process", "recipe: %s at %.4g bar in the cylinder is above its vapour pressure at the fill temperature (%.4g bar, %s): it would condense; refused", comp.Species.Formula, t.PartialPresPa/1e5, sat.Pa/1e5, sat.Method)
+		// A gas added as a parent must not condense in its line, nor in
+		// the cylinder at this step.
+		addKg := 0.0
+		for _, comp := range parent.parts {
+			addKg += r.AmountMol * comp.X * comp.Species.MolarMassKgPerMol
+			if sat := realgas.VapourPressure(comp.Species, c.TempK); !sat.Supercritical && sat.Method != realgas.NoMethod && sat.Pa > 0 {
+				for _, t := range so.Species {
+					if t.Species == comp.Species && t.PartialPresPa >= sat.Pa {
+						return model.Errorf("process", "recipe: %s at %.4g bar in the cylinder is above its vapour pressure at the fill temperature (%.4g bar, %s): it would condense; refused", comp.Species.Formula, t.PartialPresPa/1e5, sat.Pa/1e5, sat.Method)
+					}
 				}
 			}
 		}
-		addKg := r.AmountMol * comp.X * comp.Species.MolarMassKgPerMol
 		cum += addKg
-		st := FillStep{Species: comp.Species.Formula, AddedMol: r.AmountMol * comp.X, AddedKg: addKg, CumulativeKg: cum,
+		st := FillStep{Species: parent.label, AddedMol: r.AmountMol * parent.x, AddedKg: addKg, CumulativeKg: cum,
 			PresPa: p, GaugePa: p - atmPa, Z: z}
 		r.Steps = append(r.Steps, st)
-		labels = append(labels, comp.Species.Formula)
+		labels = append(labels, parent.label)
 		if c.Recipe == "weight" {
 			table = append(table, []Value{{figStepN, st.AddedMol}, {figStepKg, st.AddedKg}, {figStepCum, st.CumulativeKg}})
 		} else {
 			table = append(table, []Value{{figStepN, st.AddedMol}, {figStepP, st.PresPa}, {figStepG, st.GaugePa}, {figStepZ, st.Z}})
+		}
+	}
+	for _, parent := range parents {
+		if m, ok := mixtures.LookupNamedMixture(parent.label); ok && len(parent.parts) > 1 {
+			r.note(m.Name + " is filled as one parent gas of its stated composition (" + m.Short + "); a synthetic air's certificate may differ (it holds no argon), which zmix weighed takes from the masses weighed in")
 		}
 	}
 	title := "Fill by partial pressure, in this order, at " + strconv.FormatFloat(c.TempK, 'g', 5, 64) + " K"

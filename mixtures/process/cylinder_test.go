@@ -2,6 +2,7 @@ package process
 
 import (
 	"math"
+	"slices"
 	"strings"
 	"testing"
 
@@ -51,6 +52,35 @@ func TestCylinderWarming(t *testing.T) {
 
 // The partial-pressure recipe adds up: the last step reaches the fill
 // pressure, the amounts sum to the contents, the minor gas goes first.
+// A blend with air is filled with air as one parent, after the minor
+// gases, and an O2 given on its own as well is its own step; the steps'
+// amounts and masses add up to the contents.
+func TestCylinderRecipeWithAir(t *testing.T) {
+	r, err := Cylinder{Mixture: mixOf(t, "CH4 2.5%, O2 5%, air bal"), VolumeM3: 0.01, TempK: 293.15, PresPa: 150e5, Recipe: "weight"}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	var labels []string
+	sumMol := 0.0
+	for _, s := range r.Steps {
+		labels = append(labels, s.Species)
+		sumMol += s.AddedMol
+	}
+	if strings.Join(labels, " ") != "CH4 O2 air" {
+		t.Fatalf("steps %v, want CH4 O2 air", labels)
+	}
+	if got := r.Steps[2].AddedMol / r.AmountMol; math.Abs(got-0.925) > 1e-12 {
+		t.Errorf("air step: %.6f of the contents, want 0.925", got)
+	}
+	last := r.Steps[len(r.Steps)-1]
+	if math.Abs(sumMol/r.AmountMol-1) > 1e-12 || math.Abs(last.CumulativeKg/r.MassKg-1) > 1e-12 {
+		t.Errorf("steps hold %g of the moles and %g of the mass", sumMol/r.AmountMol, last.CumulativeKg/r.MassKg)
+	}
+	if !slices.ContainsFunc(r.Notes(), func(n string) bool { return strings.Contains(n, "air is filled as one parent gas") }) {
+		t.Errorf("notes %q: want the one on air as a parent", r.Notes())
+	}
+}
+
 func TestCylinderRecipe(t *testing.T) {
 	r, err := Cylinder{Mixture: mixOf(t, "CH4 2.5%, CO2 5%, N2 bal"), VolumeM3: 0.01, TempK: 293.15, PresPa: 150e5, Recipe: "pressure"}.Solve()
 	if err != nil {
