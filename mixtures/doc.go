@@ -41,7 +41,9 @@
 // (0.2 bar, 150 Pa), or "bal" for the one balance species. Amounts that
 // sum to 100 % within 0.05 % are renormalised. A species listed twice is
 // one species: its amounts add, and it adds no mixing entropy. A species
-// alone, as the whole blend ("N2"), is the pure gas.
+// alone, as the whole blend ("N2"), is the pure gas. A named mixture
+// (air, see named.go) is one item whose amount is shared among its
+// species: "CH4 2.5%, air bal".
 //
 // Blend text is one front end: NewBlend builds the same Blend from
 // (species, amount) items, such as recipe rows or blend-file components,
