@@ -18,10 +18,15 @@ const (
 	MassFraction              // w, also from mass %
 	PartialPres               // a partial pressure in Pa
 	Balance                   // whatever is left
+	// DewPointTemp is a partial pressure given as the temperature at which
+	// the species condenses (a frost point, over ice, for water below its
+	// triple point): Value is that temperature in K, and Resolve turns it
+	// into the species' saturation pressure there.
+	DewPointTemp
 )
 
 // Amount is one parsed amount: Value is a fraction (0..1) for the
-// fraction bases and Pa for PartialPres.
+// fraction bases, Pa for PartialPres and K for DewPointTemp.
 type Amount struct {
 	Basis Basis
 	Value float64
@@ -76,6 +81,7 @@ var (
 	ErrTwoBalances    = errors.New("more than one balance species")
 	ErrNotFinite      = errors.New("amount is not a finite number")
 	ErrTooLong        = errors.New("entry too long")
+	ErrNoDewPoint     = errors.New("no dew point")
 )
 
 // BlendError points at the offending item of a blend, by its index among
@@ -138,7 +144,7 @@ func (e *BlendError) Unwrap() error { return e.Err }
 // that sum to 100 % within 0.05 % are taken as complete and renormalised.
 const sumTolerance = 5e-4
 
-const amountForms = "a mole fraction (0.21), mol % (21%), ppm, ppb, mass fraction (0.3 kg/kg), mass % (30 wt%), a partial pressure (0.2 bar), or bal"
+const amountForms = "a mole fraction (0.21), mol % (21%), ppm, ppb, mass fraction (0.3 kg/kg), mass % (30 wt%), a partial pressure (0.2 bar), a dew point (dew -40C), or bal"
 
 // ParseBlend reads blend text such as "SiH4 2%, H2 500ppm, N2 bal": items
 // separated by commas, semicolons or new lines, each a species and an
@@ -304,6 +310,13 @@ func parseAmount(s string) (Amount, *BlendError) {
 	if low := strings.ToLower(trimmed); low == "bal" || low == "balance" {
 		return Amount{Basis: Balance}, nil
 	}
+	if rest, ok := cutDewPoint(trimmed); ok {
+		tK, err := ParseTemperature(rest)
+		if err != nil {
+			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %s: a dew point wants a temperature with a unit after dew, e.g. dew -40C: %s", model.Quote(s), model.UserMessage(err))}
+		}
+		return Amount{DewPointTemp, tK}, nil
+	}
 	// The unit keeps its case for pressureUnit, which must tell MPa from mPa.
 	x, typedUnit, err := splitNumber(trimmed)
 	unit := strings.ToLower(typedUnit)
@@ -344,7 +357,7 @@ func parseAmount(s string) (Amount, *BlendError) {
 			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %s is too large to compute with; want %s", model.Quote(s), amountForms)}
 		}
 	}
-	if a.Basis != PartialPres && a.Value > 1+1e-12 {
+	if (a.Basis == MoleFraction || a.Basis == MassFraction) && a.Value > 1+1e-12 {
 		return Amount{}, &BlendError{Err: ErrOver100, Detail: fmt.Sprintf("%s alone is more than 100 %%", model.Quote(s))}
 	}
 	return a, nil
@@ -361,7 +374,7 @@ type Component struct {
 // so that the total pressure changes the mole fractions.
 func (b *Blend) HasPartialPressures() bool {
 	for _, it := range b.Items {
-		if it.Amount.Basis == PartialPres {
+		if it.Amount.Basis == PartialPres || it.Amount.Basis == DewPointTemp {
 			return true
 		}
 	}
@@ -369,7 +382,9 @@ func (b *Blend) HasPartialPressures() bool {
 }
 
 // SumPartialPa returns the sum of the partial pressures given, and whether
-// every amount is a partial pressure (so that the sum is the total).
+// every amount is a partial pressure (so that the sum is the total). A
+// dew point is not counted: its pressure needs the species, so a blend
+// with one needs its total pressure given.
 func (b *Blend) SumPartialPa() (sumPa float64, all bool) {
 	all = true
 	for _, it := range b.Items {
@@ -426,6 +441,19 @@ func (b *Blend) Resolve(cat *model.Catalogue, presPa float64) (*Mixture, error) 
 	}
 	whole := func(err error, detail string) error {
 		return &BlendError{Text: b.Text, Offset: -1, Index: -1, Err: err, Detail: detail}
+	}
+	// A dew point is the species' saturation pressure at that
+	// temperature: from here on it is a partial pressure.
+	for i, e := range entries {
+		if e.item.Amount.Basis != DewPointTemp {
+			continue
+		}
+		pa, err := dewPointPa(e.itemParts, e.item.Amount.Value)
+		if err != nil {
+			it := e.item
+			return nil, &BlendError{Text: b.Text, Token: it.Key, Offset: it.Offset, Index: it.Index, Origin: it.Origin, Err: ErrNoDewPoint, Detail: err.Error()}
+		}
+		entries[i].item.Amount = Amount{PartialPres, pa}
 	}
 
 	// Mole-fraction items (X), mass-fraction items (W) and the balance:

@@ -55,6 +55,8 @@ func FuzzParseBlend(f *testing.F) {
 	f.Add("N2 1e-300 Pa, O2 bal", 1e-320)
 	f.Add("CO2 5%, air bal, O2 1 wt%", 1e5)
 	f.Add("air 0.5 bar, AIR 50%", 1e5)
+	f.Add("H2O dew -40C, air bal", 8e5)
+	f.Add("H2O dew point 400 C, N2 dew 70 K, He bal", 1e5)
 	cat := testCatalogue(f)
 	f.Fuzz(func(t *testing.T, text string, presPa float64) {
 		b, err := ParseBlend(text)

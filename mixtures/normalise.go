@@ -34,7 +34,7 @@ func NormaliseAmounts(amounts []string) ([]string, error) {
 		switch a.Basis {
 		case Balance:
 			return nil, ErrNormaliseBalance
-		case PartialPres:
+		case PartialPres, DewPointTemp:
 			return nil, ErrNormalisePartial
 		}
 		if basis >= 0 && a.Basis != basis {

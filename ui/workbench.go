@@ -247,7 +247,7 @@ func (b *bench) moleFraction(key string) (float64, bool) {
 var (
 	errNormBalance = errors.New("normalise: the recipe has a balance species, which already closes it to 100 %; clear the balance first (b)")
 	errNormMixed   = errors.New("normalise: the amounts mix mole and mass bases; write them all on one basis first")
-	errNormPartial = errors.New("normalise: partial pressures are absolute amounts and cannot be scaled; write them as fractions first")
+	errNormPartial = errors.New("normalise: partial pressures and dew points are absolute amounts and cannot be scaled; write them as fractions first")
 	errNormBad     = errors.New("normalise: fix the entries marked in red first")
 	errNormEmpty   = errors.New("normalise: nothing to scale: every amount is zero")
 )

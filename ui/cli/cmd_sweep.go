@@ -105,7 +105,7 @@ func (cfg *sweepConfig) pressureSweep(rangeText, tempText string) error {
 		return badInput("--pres: %v", err)
 	}
 	if cfg.src.blend.HasPartialPressures() {
-		return badInput("--blend gives partial pressures, which fix the total; a pressure sweep needs amounts as fractions (%%, ppm, mass %%, bal)")
+		return badInput("--blend gives partial pressures or dew points, which fix the total; a pressure sweep needs amounts as fractions (%%, ppm, mass %%, bal)")
 	}
 	if strings.TrimSpace(tempText) == "" {
 		return badInput("--temp is missing; a pressure sweep holds the temperature fixed: give it with a unit (%s), e.g. --temp 25C", mixtures.TemperatureUnits)

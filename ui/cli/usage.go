@@ -29,10 +29,11 @@ var unitsHelp = "Units:\n" +
 const blendHelp = `Blend text: "SPECIES AMOUNT" items separated by , ; or new lines. An amount is
   a mole fraction (0.21), mol % (21% or 21 mol%), ppm or ppb by moles, a mass
   fraction (0.3 kg/kg), mass % (30 wt% or 30 mass%), a partial pressure
-  (0.2 bar), or bal for the one balance species; a species alone, as the
-  whole blend, is the pure gas. Isomers, which share a formula, take a
-  prefix: ` + model.IsomerPrefixes + `, as in n-C4H10. air is one item
-  standing for dry air (N2, O2, Ar, CO2): CH4 2.5%, air bal.
+  (0.2 bar), a dew point (dew -40C: the partial pressure that condenses
+  there, over ice below 0 C for water), or bal for the one balance species;
+  a species alone, as the whole blend, is the pure gas. Isomers, which share
+  a formula, take a prefix: ` + model.IsomerPrefixes + `, as in n-C4H10.
+  air is one item standing for dry air (N2, O2, Ar, CO2): CH4 2.5%, air bal.
   --blend @FILE reads a saved blend file; its temperature, pressure and
   standard pressure are then the defaults of --temp, --pres and --std.
 `
