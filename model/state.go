@@ -171,6 +171,14 @@ func (sp *Species) fill(s *State, tempK, presPa float64, tr Treatment) {
 
 func (sp *Species) fillLn(s *State, tempK, lnT, presPa, lnP float64, tr Treatment) {
 	s.TempK, s.PresPa = tempK, presPa
+	if sp.Rotor == Atom && len(sp.elecThetaK) == 1 {
+		// An atom with one electronic level (the noble gases): translation
+		// and a constant ln g₀, under every treatment.
+		trans := sp.translation(lnT, lnP)
+		s.Trans, s.Rot, s.Vib, s.Elec = trans, Terms{}, Terms{}, Terms{LnQ: sp.lnElecG0}
+		sp.fillTotals(s, tempK, Terms{LnQ: trans.LnQ + sp.lnElecG0, U: trans.U, Cv: trans.Cv})
+		return
+	}
 	var invT float64 // 1/T: one division, shared by every factor that needs it
 	if sp.Rotor != Atom || len(sp.elecThetaK) > 1 {
 		invT = 1 / tempK
@@ -205,11 +213,15 @@ func (sp *Species) fillLn(s *State, tempK, lnT, presPa, lnP float64, tr Treatmen
 		}
 		s.Elec = sp.electronic(invT, tr.Electronic)
 	}
-	tot := Terms{
+	sp.fillTotals(s, tempK, Terms{
 		LnQ: s.Trans.LnQ + s.Rot.LnQ + s.Vib.LnQ + s.Elec.LnQ,
 		U:   s.Trans.U + s.Rot.U + s.Vib.U + s.Elec.U,
 		Cv:  s.Trans.Cv + s.Rot.Cv + s.Vib.Cv + s.Elec.Cv,
-	}
+	})
+}
+
+// fillTotals writes the molar properties that the total terms give.
+func (sp *Species) fillTotals(s *State, tempK float64, tot Terms) {
 	r := GasConstant
 	rt := r * tempK
 	s.CvJPerMolK = r * tot.Cv

@@ -48,3 +48,26 @@ func TestTreatments(t *testing.T) {
 		}
 	}
 }
+
+// A noble-gas atom is translation and ln g₀ under every treatment: its
+// state does not move with the treatment asked for (the fill takes a
+// short path for it), and its Cp is (5/2)R exactly.
+func TestAtomStateUnderEveryTreatment(t *testing.T) {
+	ar := mustSpecies(t, "Ar")
+	want, err := ar.State(812.5, 2.5e5)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, tr := range []Treatment{
+		{Rotation: RotationSummed}, {Rotation: RotationClassical}, {Vibration: VibrationFrozen},
+		{Electronic: ElectronicGroundOnly}, {Levels: LevelsSummed}, {Levels: LevelsRigidHarmonic},
+	} {
+		if got, _ := ar.StateWith(812.5, 2.5e5, tr); got != want {
+			t.Errorf("Ar under %+v: %+v, want %+v", tr, got, want)
+		}
+	}
+	// Cp = (5/2)R: translation's 3/2 R, the P dV work's R (exact).
+	if math.Abs(want.CpJPerMolK-2.5*GasConstant) > 1e-12 || want.Rot != (Terms{}) || want.Vib != (Terms{}) {
+		t.Errorf("Ar: Cp %v, rotation %+v, vibration %+v", want.CpJPerMolK, want.Rot, want.Vib)
+	}
+}
