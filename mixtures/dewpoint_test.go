@@ -89,3 +89,28 @@ func TestDewPointAmountRefused(t *testing.T) {
 		t.Errorf("normalising a dew point: %v", err)
 	}
 }
+
+// The relative humidity is the water's partial pressure over its
+// saturation pressure at T: 10 °C dew point air at 25 °C holds
+// 1.2282/3.1699 = 38.75 % (IAPWS-95 tables, from memory); below 0.01 °C
+// over ice; none without water or above water's critical temperature.
+func TestRelativeHumidity(t *testing.T) {
+	var s State
+	mustMixture(t, "H2O dew 10C, N2 bal", 1e5).Fill(&s, 298.15, 1e5, Options{})
+	if h := RelativeHumidity(&s); !h.Known || h.OverIce || math.Abs(h.Percent-100*1228.2/3169.9) > 0.01 {
+		t.Errorf("10 °C dew point at 25 °C: %+v, want 38.75 %% over water", h)
+	}
+	mustMixture(t, "H2O dew -40C, N2 bal", 8e5).Fill(&s, 263.15, 8e5, Options{})
+	want := 100 * realgas.WaterSublimationPa(233.15) / realgas.WaterSublimationPa(263.15)
+	if h := RelativeHumidity(&s); !h.Known || !h.OverIce || math.Abs(h.Percent/want-1) > 1e-12 {
+		t.Errorf("-40 °C frost point at -10 °C: %+v, want %.4f %% over ice", h, want)
+	}
+	mustMixture(t, "H2O 5%, N2 bal", 1e5).Fill(&s, 700, 1e5, Options{})
+	if h := RelativeHumidity(&s); h.Known {
+		t.Errorf("water above its critical temperature: %+v, want none", h)
+	}
+	mustMixture(t, "N2 79%, O2 21%", 1e5).Fill(&s, 300, 1e5, Options{})
+	if h := RelativeHumidity(&s); h.Known {
+		t.Errorf("dry air: %+v, want none", h)
+	}
+}

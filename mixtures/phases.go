@@ -52,3 +52,32 @@ func condensationNote(t *SpeciesTerm, tempK float64) (n model.Note, ok bool) {
 
 // paText writes a pressure in a note, to four digits.
 func paText(pa float64) string { return model.PressureNoteText(pa, 4) }
+
+// Humidity is the relative humidity of the water in a state: its partial
+// pressure over the saturation pressure at the state's temperature,
+// over liquid water from the triple point to the critical point and over
+// ice below it (IAPWS equations).
+type Humidity struct {
+	Known   bool    // the blend holds water, at a temperature with a saturation pressure
+	Percent float64 // 100 pH2O/psat
+	OverIce bool
+	PartPa  float64 // the water's partial pressure
+	SatPa   float64 // its saturation pressure at the state's T
+}
+
+// RelativeHumidity is the relative humidity of the water in s, if any.
+// Above 100 % the water condenses; the dew point says where.
+func RelativeHumidity(s *State) Humidity {
+	for i := range s.Species {
+		t := &s.Species[i]
+		if t.Species.Formula != "H2O" {
+			continue
+		}
+		sat := realgas.VapourPressure(t.Species, s.TempK)
+		if sat.Supercritical || !(sat.Pa > 0) {
+			return Humidity{}
+		}
+		return Humidity{Known: true, Percent: 100 * t.PartialPresPa / sat.Pa, OverIce: sat.Frost, PartPa: t.PartialPresPa, SatPa: sat.Pa}
+	}
+	return Humidity{}
+}

@@ -111,6 +111,21 @@ func DewPointLine(st *mixtures.State, dp realgas.DewPoint) [2]string {
 	return [2]string{label, Temperature(dp.TempK) + " at the line pressure, " + where + " (" + model.Printable(how) + ")"}
 }
 
+// HumidityLine is the relative humidity of the blend's water as a label
+// and a value, with the pressures it is the ratio of; ok is false when the
+// blend holds no water or the state has no saturation pressure for it.
+func HumidityLine(h mixtures.Humidity) ([2]string, bool) {
+	if !h.Known {
+		return [2]string{}, false
+	}
+	over := "over water"
+	if h.OverIce {
+		over = "over ice"
+	}
+	return [2]string{"relative humidity", Sig(h.Percent, 4) + " % " + over + " (H2O at " + Sig(h.PartPa/1000, 4) + " kPa of " +
+		Sig(h.SatPa/1000, 4) + " kPa at T, IAPWS)"}, true
+}
+
 // writeRealGasText writes the section of the text readout.
 func writeRealGasText(w io.Writer, st *mixtures.State) {
 	fmt.Fprintln(w, "Real gas, beside the ideal-gas figures above")
@@ -120,6 +135,9 @@ func writeRealGasText(w io.Writer, st *mixtures.State) {
 	}
 	dp := DewPointLine(st, mixtures.DewPoint(st))
 	t.Row(dp[0], dp[1])
+	if rh, ok := HumidityLine(mixtures.RelativeHumidity(st)); ok {
+		t.Row(rh[0], rh[1])
+	}
 	t.Write(w)
 	for _, r := range realGasRemarks(st) {
 		WriteWrapped(w, "  ", "    ", r)
@@ -131,7 +149,9 @@ func writeRealGasText(w io.Writer, st *mixtures.State) {
 // figures in SI units and the model's name, or null when not known; then
 // the dew point at the line pressure: dew_point_K (null when nothing can
 // condense at any temperature the catalogue covers), dew_point_species,
-// dew_point_kind ("dew" or "frost") and dew_point_method.
+// dew_point_kind ("dew" or "frost") and dew_point_method; and
+// relative_humidity_percent of the blend's water (null without water, or
+// above water's critical temperature).
 func (j *jsonWriter) realGas(st *mixtures.State, indent string) {
 	j.realGasObject(st, indent)
 	dp := mixtures.DewPoint(st)
@@ -163,6 +183,13 @@ func (j *jsonWriter) realGas(st *mixtures.State, indent string) {
 	j.buf = append(j.buf, ",\n"...)
 	j.key(indent, "dew_point_method")
 	j.buf = appendJSONString(j.buf, method)
+	j.buf = append(j.buf, ",\n"...)
+	j.key(indent, "relative_humidity_percent")
+	if h := mixtures.RelativeHumidity(st); h.Known {
+		j.float(h.Percent)
+	} else {
+		j.buf = append(j.buf, "null"...)
+	}
 }
 
 func (j *jsonWriter) realGasObject(st *mixtures.State, indent string) {
