@@ -235,6 +235,7 @@ func (p *propertiesPane) oneColumn(rows []readoutRow, add func(string)) {
 		add(strings.TrimRight(line, " "))
 	}
 	p.realGasLine(add)
+	p.dewPointLines(add)
 	p.mixingLine(lw, vw, add)
 }
 
@@ -256,6 +257,7 @@ func (p *propertiesPane) twoColumns(rows []readoutRow, add func(string)) {
 		add(strings.TrimRight(line, " "))
 	}
 	p.realGasLine(add)
+	p.dewPointLines(add)
 	p.mixingLine(lw+8, vw, add)
 }
 
@@ -304,6 +306,38 @@ func (p *propertiesPane) realGasLine(add func(string)) {
 		line += s.Muted.Render(t(model))
 	}
 	add(line)
+}
+
+// dewPointLines give the blend's dew (or frost) point at the line
+// pressure and the relative humidity of its water, as zmix state's
+// real-gas section does, when it has them: where a cooler pipe or a
+// compression would condense it.
+func (p *propertiesPane) dewPointLines(add func(string)) {
+	s := p.c.Styles
+	t := p.c.Text
+	st := &p.b.state
+	var lines [][2]string
+	if dp := mixtures.DewPoint(st); dp.Known {
+		lines = append(lines, report.DewPointShort(st, dp))
+	}
+	if rh, ok := report.HumidityShort(mixtures.RelativeHumidity(st)); ok {
+		// One line with the dew point where it fits.
+		if n := len(lines); n > 0 && lipgloss.Width(t(lines[n-1][0]+" "+lines[n-1][1]+"; "+rh[0]+" "+rh[1])) <= p.w {
+			lines[n-1][1] += "; " + rh[0] + " " + rh[1]
+		} else {
+			lines = append(lines, rh)
+		}
+	}
+	for _, l := range lines {
+		label := l[0] + " "
+		for i, w := range report.Wrap(t(l[1]), max(p.w-len(label), 20)) {
+			if i == 0 {
+				add(s.Label.Render(label) + s.Value.Render(w))
+			} else {
+				add(strings.Repeat(" ", len(label)) + s.Value.Render(w))
+			}
+		}
+	}
 }
 
 func (p *propertiesPane) speciesTable(add func(string)) {

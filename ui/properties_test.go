@@ -133,3 +133,28 @@ func TestPropertiesShowsStaleState(t *testing.T) {
 		t.Errorf("no notice that the readout is the last valid state:\n%s", p.View())
 	}
 }
+
+// The pane gives the dew point at the line pressure and the water's
+// relative humidity, the figures of zmix state's real-gas section, on one
+// line where it fits; a blend that cannot condense has neither.
+func TestPropertiesDewPointAndHumidity(t *testing.T) {
+	p, b := testProps(t, 100, 40)
+	b.loadFile(&mixtures.BlendFile{Format: mixtures.BlendFormat, Components: []mixtures.FileComponent{
+		{Species: "H2O", Amount: "dew 10C"}, {Species: "air", Amount: "bal"}}, Temperature: "25 C", Pressure: "1 atm"})
+	b.update()
+	p.Sync()
+	st := engineState(t, "H2O dew 10C, air bal", 298.15, 101325)
+	dp := report.DewPointShort(&st, mixtures.DewPoint(&st))
+	rh, _ := report.HumidityShort(mixtures.RelativeHumidity(&st))
+	want := strings.Join(strings.Fields("dew point "+dp[1]+"; RH "+rh[1]), " ") // the pane wraps, one space between words
+	if !strings.Contains(dp[1], "283.15 K") || !strings.Contains(rh[1], "38.74 % over water") || !strings.Contains(p.View(), want) {
+		t.Fatalf("want %q in the pane:\n%s", want, p.View())
+	}
+	b.loadFile(&mixtures.BlendFile{Format: mixtures.BlendFormat, Components: []mixtures.FileComponent{
+		{Species: "He", Amount: "bal"}}, Temperature: "25 C", Pressure: "1 atm"})
+	b.update()
+	p.Sync()
+	if v := p.View(); strings.Contains(v, "dew point") || strings.Contains(v, "RH ") {
+		t.Errorf("helium has a dew point line:\n%s", v)
+	}
+}

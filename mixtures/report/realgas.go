@@ -89,6 +89,17 @@ func realGasRemarks(st *mixtures.State) []string {
 // DewPointLine is the blend's dew point at the line pressure as a label
 // and a value, with the margin to the state's temperature and its method.
 func DewPointLine(st *mixtures.State, dp realgas.DewPoint) [2]string {
+	return dewPointLine(st, dp, " at the line pressure")
+}
+
+// DewPointShort is DewPointLine for a pane's one line: the same figures
+// without the words "at the line pressure", which the pane's heading
+// implies.
+func DewPointShort(st *mixtures.State, dp realgas.DewPoint) [2]string {
+	return dewPointLine(st, dp, "")
+}
+
+func dewPointLine(st *mixtures.State, dp realgas.DewPoint, at string) [2]string {
 	if !dp.Known {
 		return [2]string{"dew point", "none: " + dp.Why}
 	}
@@ -97,9 +108,9 @@ func DewPointLine(st *mixtures.State, dp realgas.DewPoint) [2]string {
 		label = "frost point"
 	}
 	margin := st.TempK - dp.TempK
-	where := Short(math.Abs(margin), 3) + " K below T"
+	margin3 := Short(math.Abs(margin), 3) + " K below T"
 	if margin <= 0 {
-		where = "T is " + Short(-margin, 3) + " K below it: the blend condenses"
+		margin3 = "T is " + Short(-margin, 3) + " K below it: the blend condenses"
 	}
 	how := strings.Join(dp.Species, ", ")
 	if dp.Raoult {
@@ -108,7 +119,7 @@ func DewPointLine(st *mixtures.State, dp realgas.DewPoint) [2]string {
 	if dp.Rough {
 		how += "; rough: a vapour pressure from Trouton's rule"
 	}
-	return [2]string{label, Temperature(dp.TempK) + " at the line pressure, " + where + " (" + model.Printable(how) + ")"}
+	return [2]string{label, Temperature(dp.TempK) + at + ", " + margin3 + " (" + model.Printable(how) + ")"}
 }
 
 // HumidityLine is the relative humidity of the blend's water as a label
@@ -124,6 +135,20 @@ func HumidityLine(h mixtures.Humidity) ([2]string, bool) {
 	}
 	return [2]string{"relative humidity", Sig(h.Percent, 4) + " % " + over + " (H2O at " + Sig(h.PartPa/1000, 4) + " kPa of " +
 		Sig(h.SatPa/1000, 4) + " kPa at T, IAPWS)"}, true
+}
+
+// HumidityShort is HumidityLine for a pane's one line: the figure and
+// over what.
+func HumidityShort(h mixtures.Humidity) ([2]string, bool) {
+	l, ok := HumidityLine(h)
+	if !ok {
+		return l, false
+	}
+	over := "over water"
+	if h.OverIce {
+		over = "over ice"
+	}
+	return [2]string{"RH", Sig(h.Percent, 4) + " % " + over}, true
 }
 
 // writeRealGasText writes the section of the text readout.
