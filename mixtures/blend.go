@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"strconv"
 	"strings"
 	"unicode/utf8"
 
@@ -151,6 +152,12 @@ const amountForms = "a mole fraction (0.21), mol % (21%), ppm, ppb, mass fractio
 // amount. A species written alone, as the blend's only item ("N2"), is the
 // pure gas: it reads as "N2 bal". It is a front end to NewBlend.
 func ParseBlend(text string) (*Blend, error) {
+	// A comma between digits is a decimal comma or a thousands separator
+	// that would split an item in two, "N2 79,0 %" into "N2 79" and "0 %":
+	// say so rather than report the halves.
+	if tok, off, ok := digitComma(text); ok {
+		return nil, &BlendError{Text: text, Token: tok, Offset: off, Index: -1, Err: ErrSyntax, Detail: digitCommaDetail(tok)}
+	}
 	var items []BlendItem
 	var offsets, lengths []int
 	lone := itemCount(text) == 1
@@ -185,6 +192,31 @@ func ParseBlend(text string) (*Blend, error) {
 		return nil, err
 	}
 	return b, nil
+}
+
+func isDigit(c byte) bool { return c >= '0' && c <= '9' }
+
+// digitComma finds the first number in s with a comma between digits
+// ("79,0", "1,000") and returns it with its offset.
+func digitComma(s string) (token string, offset int, ok bool) {
+	for i := 1; i+1 < len(s); i++ {
+		if s[i] != ',' || !isDigit(s[i-1]) || !isDigit(s[i+1]) {
+			continue
+		}
+		j, k := i-1, i+1
+		for j > 0 && (isDigit(s[j-1]) || s[j-1] == '.' || s[j-1] == ',') {
+			j--
+		}
+		for k+1 < len(s) && (isDigit(s[k+1]) || s[k+1] == '.' || s[k+1] == ',') {
+			k++
+		}
+		return s[j : k+1], j, true
+	}
+	return "", 0, false
+}
+
+func digitCommaDetail(token string) string {
+	return fmt.Sprintf("the comma in %s: write decimals with a point (79.0) and numbers without thousands separators (1000 ppm); in blend text a comma separates items", model.Quote(token))
 }
 
 // itemCount returns how many non-blank items blend text holds.
@@ -310,6 +342,25 @@ func parseAmount(s string) (Amount, *BlendError) {
 	if low := strings.ToLower(trimmed); low == "bal" || low == "balance" {
 		return Amount{Basis: Balance}, nil
 	}
+	if tok, _, ok := digitComma(trimmed); ok {
+		return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %s: %s", model.Quote(s), digitCommaDetail(tok))}
+	}
+	// Two ways a certificate writes an amount that blend text does not
+	// compute with: a detection limit and an uncertainty.
+	if strings.HasPrefix(trimmed, "<") {
+		return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %s is a detection limit, not an amount: give the amount to compute with, e.g. %s for the most there can be",
+			model.Quote(s), model.Quote(strings.TrimSpace(strings.TrimPrefix(trimmed, "<"))))}
+	}
+	if i := strings.IndexAny(trimmed, "±"); i >= 0 || strings.Contains(trimmed, "+/-") || strings.Contains(trimmed, "+-") {
+		value := trimmed
+		for _, pm := range []string{"±", "+/-", "+-"} {
+			if k := strings.Index(value, pm); k >= 0 {
+				value = strings.TrimSpace(value[:k])
+			}
+		}
+		return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %s carries an uncertainty, which blend text does not use: give the value alone (%s); zmix weighed propagates uncertainties",
+			model.Quote(s), model.Quote(value))}
+	}
 	if rest, ok := cutDewPoint(trimmed); ok {
 		tK, err := ParseTemperature(rest)
 		if err != nil {
@@ -358,7 +409,12 @@ func parseAmount(s string) (Amount, *BlendError) {
 		}
 	}
 	if (a.Basis == MoleFraction || a.Basis == MassFraction) && a.Value > 1+1e-12 {
-		return Amount{}, &BlendError{Err: ErrOver100, Detail: fmt.Sprintf("%s alone is more than 100 %%", model.Quote(s))}
+		detail := fmt.Sprintf("%s alone is more than 100 %%", model.Quote(s))
+		if unit == "" && x <= 100 {
+			detail += fmt.Sprintf("; a bare number is a mole fraction (%s for %s %%): write %s%% for a percentage",
+				strconv.FormatFloat(x/100, 'g', -1, 64), strconv.FormatFloat(x, 'g', -1, 64), strconv.FormatFloat(x, 'g', -1, 64))
+		}
+		return Amount{}, &BlendError{Err: ErrOver100, Detail: detail}
 	}
 	return a, nil
 }

@@ -237,6 +237,13 @@ func TestBlendErrors(t *testing.T) {
 		{"two species alone", "N2, O2", 1e5, ErrSyntax, "N2", "whole blend"},
 		{"amount not a number", "N2 lots, O2 21%", 1e5, ErrSyntax, "N2 lots", "lots"},
 		{"partial pressure without total", "O2 0.2 bar, N2 bal", 0, ErrSyntax, "", "total pressure"},
+		// As certificates and European keyboards write amounts.
+		{"decimal comma", "N2 79,0 %; O2 21,0 %", 1e5, ErrSyntax, "79,0", "decimals with a point"},
+		{"thousands separator", "CO 1,000 ppm, N2 bal", 1e5, ErrSyntax, "1,000", "without thousands separators"},
+		{"bare percentage", "N2 79, O2 21", 1e5, ErrOver100, "N2 79", "write 79% for a percentage"},
+		{"detection limit", "O2 <5ppm, N2 bal", 1e5, ErrSyntax, "O2 <5ppm", `e.g. "5ppm" for the most there can be`},
+		{"uncertainty", "O2 5ppm ±1ppm, N2 bal", 1e5, ErrSyntax, "O2 5ppm ±1ppm", `give the value alone ("5ppm")`},
+		{"ASCII uncertainty", "O2 5 ppm +/- 1 ppm, N2 bal", 1e5, ErrSyntax, "O2 5 ppm +/- 1 ppm", `give the value alone ("5 ppm")`},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
