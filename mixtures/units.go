@@ -41,6 +41,15 @@ func SplitNumber(s string) (float64, string, error) { return splitNumber(s) }
 // splitNumber splits "25 °C" or "1.5bar" into the number and the unit text.
 func splitNumber(s string) (float64, string, error) {
 	x, rest, err := model.LeadingNumber(strings.TrimSpace(s))
+	if err == nil && len(rest) > 1 && rest[0] == ',' && rest[1] >= '0' && rest[1] <= '9' {
+		// "1,5 bar": a decimal comma, which would read as 1 and a unit ",5 bar".
+		n := len(s) - len(rest)
+		for n < len(s) && (s[n] == ',' || s[n] >= '0' && s[n] <= '9') {
+			n++
+		}
+		t := strings.TrimSpace(s[:n])
+		return 0, "", errors.New(model.Quote(t) + " has a decimal comma; write it with a point, " + model.Quote(strings.Replace(t, ",", ".", 1)))
+	}
 	return x, strings.TrimSpace(rest), err
 }
 
@@ -53,7 +62,8 @@ func ParseTemperature(s string) (float64, error) {
 		return 0, model.KindErrorf("mixtures", ErrValue, "temperature %s: %v; want a number and a unit: %s", model.Quote(s), err, TemperatureUnits)
 	}
 	var k float64
-	switch strings.TrimPrefix(strings.ToLower(unit), "°") {
+	// "deg C" and "° C" read as "degC" and "°C".
+	switch strings.TrimPrefix(strings.ToLower(strings.ReplaceAll(unit, " ", "")), "°") {
 	case "k":
 		k = x
 	case "c", "degc":
@@ -84,16 +94,27 @@ var pressureUnitTable = []struct {
 	sizePa    float64
 	suffixes  bool // accepts NAMEg (gauge) and NAMEa (absolute)
 	helpGauge bool // named among the gauge forms in PressureUnits
+	aliases   []string
 }{
-	{"Pa", 1, false, false},
-	{"kPa", 1e3, true, true},
-	{"MPa", 1e6, true, true},
-	{"GPa", 1e9, false, false}, // for the dense-gas limits of the real-gas models
-	{"bar", 1e5, true, true},
-	{"mbar", 100, true, true},
-	{"atm", model.StdPressureAtmPa, false, false},
-	{"Torr", model.StdPressureAtmPa / 760.0, false, false},
-	{"psi", poundPerSqInchPa, true, true},
+	{"Pa", 1, false, false, nil},
+	{"hPa", 100, false, false, nil},
+	{"kPa", 1e3, true, true, nil},
+	{"MPa", 1e6, true, true, nil},
+	{"GPa", 1e9, false, false, nil}, // for the dense-gas limits of the real-gas models
+	{"bar", 1e5, true, true, nil},
+	{"mbar", 100, true, true, nil},
+	{"atm", model.StdPressureAtmPa, false, false, nil},
+	{"Torr", model.StdPressureAtmPa / 760.0, false, false, nil},
+	// The conventional millimetre and inch of mercury: a column of
+	// 13 595.1 kg/m³ under 9.806 65 m/s², 133.322 387 415 Pa and
+	// 3386.388 640 341 Pa (from memory; the Torr differs from the mmHg
+	// by 1.4e-7 of itself).
+	{"mmHg", 133.322387415, false, false, nil},
+	{"inHg", 3386.388640341, false, false, nil},
+	{"psi", poundPerSqInchPa, true, true, nil},
+	// The kilogram-force per square centimetre (the technical atmosphere,
+	// 98 066.5 Pa exactly), still on older plants' gauges.
+	{"kgf/cm2", 98066.5, true, true, []string{"kg/cm2", "kgf/cm²", "kg/cm²"}},
 }
 
 // PressureUnitNames returns every pressure unit word accepted, absolute
@@ -126,24 +147,50 @@ func pressureUnitsText() string {
 // gauge; ok is false for words that are not pressure units. Case does not
 // matter, except that "mPa" is refused (see ambiguousPressureUnit).
 func pressureUnit(unit string) (sizePa float64, gauge, ok bool) {
+	i, gauge, ok := lookupPressureUnit(unit)
+	if !ok {
+		return 0, false, false
+	}
+	return pressureUnitTable[i].sizePa, gauge, true
+}
+
+// lookupPressureUnit finds a unit word's row of pressureUnitTable, by its
+// name or an alias, bare or with a gauge or absolute mark.
+func lookupPressureUnit(unit string) (row int, gauge, ok bool) {
+	unit = plainPressureUnit(unit)
 	if ambiguousPressureUnit(unit) != "" {
 		return 0, false, false
 	}
-	for _, u := range pressureUnitTable {
-		if strings.EqualFold(unit, u.name) {
-			return u.sizePa, false, true
-		}
-		if !u.suffixes || len(unit) != len(u.name)+1 || !strings.EqualFold(unit[:len(u.name)], u.name) {
-			continue
-		}
-		switch unit[len(u.name)] {
-		case 'g', 'G':
-			return u.sizePa, true, true
-		case 'a', 'A':
-			return u.sizePa, false, true
+	for i, u := range pressureUnitTable {
+		for _, name := range append([]string{u.name}, u.aliases...) {
+			if strings.EqualFold(unit, name) {
+				return i, false, true
+			}
+			if !u.suffixes || len(unit) != len(name)+1 || !strings.EqualFold(unit[:len(name)], name) {
+				continue
+			}
+			switch unit[len(name)] {
+			case 'g', 'G':
+				return i, true, true
+			case 'a', 'A':
+				return i, false, true
+			}
 		}
 	}
 	return 0, false, false
+}
+
+// plainPressureUnit writes the gauge and absolute marks of drawings and
+// datasheets as the suffix this package reads: "bar(g)", "bar (g)" and
+// "bar g" are barg, "kPa(a)" is kPaa.
+func plainPressureUnit(unit string) string {
+	u := strings.ReplaceAll(unit, " ", "")
+	for _, mark := range []string{"(g)", "(G)", "(a)", "(A)"} {
+		if strings.HasSuffix(u, mark) {
+			return strings.TrimSuffix(u, mark) + mark[1:2]
+		}
+	}
+	return u
 }
 
 // ambiguousPressureUnit explains why a unit is refused for its case, or
@@ -171,7 +218,7 @@ func ParsePressure(s string) (Pressure, error) {
 	if unit == "" {
 		return Pressure{}, model.KindErrorf("mixtures", ErrValue, "pressure %s has no unit; want one of %s (e.g. %g bar)", model.Quote(s), PressureUnits, x)
 	}
-	if why := ambiguousPressureUnit(unit); why != "" {
+	if why := ambiguousPressureUnit(plainPressureUnit(unit)); why != "" {
 		return Pressure{}, model.KindErrorf("mixtures", ErrValue, "pressure %s: %s; want %s", model.Quote(s), why, PressureUnits)
 	}
 	size, gauge, ok := pressureUnit(unit)
@@ -281,16 +328,12 @@ func PressureUnitOf(text string) (PressureUnit, bool) {
 	if err != nil {
 		return PressureUnit{}, false
 	}
-	size, gauge, ok := pressureUnit(unit)
+	i, gauge, ok := lookupPressureUnit(unit)
 	if !ok {
 		return PressureUnit{}, false
 	}
-	for _, u := range pressureUnitTable {
-		if strings.EqualFold(unit, u.name) || u.suffixes && len(unit) == len(u.name)+1 && strings.EqualFold(unit[:len(u.name)], u.name) {
-			return PressureUnit{key: u.name, SizePa: size, Gauge: gauge}, true
-		}
-	}
-	return PressureUnit{}, false
+	u := pressureUnitTable[i]
+	return PressureUnit{key: u.name, SizePa: u.sizePa, Gauge: gauge}, true
 }
 
 // Reading returns the same unit read as gauge or as absolute.

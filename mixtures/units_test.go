@@ -36,6 +36,8 @@ func TestParseTemperature(t *testing.T) {
 		{"25 °C", 298.15, 1e-12, "definition"},
 		{"25°C", 298.15, 1e-12, "definition"},
 		{"25 degC", 298.15, 1e-12, "definition"},
+		{"25 deg C", 298.15, 1e-12, "definition"},
+		{"25 ° C", 298.15, 1e-12, "definition"},
 		{"0.01 C", 273.16, 1e-12, "triple point of water, 273.16 K (definition of the old kelvin)"},
 		{"-40 C", 233.15, 1e-12, "definition"},
 		{"-273.14 C", 0.01, 1e-9, "definition"},
@@ -122,6 +124,20 @@ func TestParsePressure(t *testing.T) {
 		{"0 psig", atmPa, true, 0, "definition"},
 		{"10 psig", atmPa + 10*psiPa, true, 1e-7, "NIST SP 811, from memory"},
 		{"100 kPag", atmPa + 1e5, true, 0, "definition"},
+		// The marks of drawings and datasheets.
+		{"2.5 bar(g)", atmPa + 2.5e5, true, 1e-15, "definition"},
+		{"2.5 bar g", atmPa + 2.5e5, true, 1e-15, "definition"},
+		{"150 kPa(a)", 1.5e5, false, 0, "definition"},
+		{"1013.25 hPa", atmPa, false, 1e-15, "SI prefix"},
+		// The conventional mmHg is 13.5951 g/cm³ × 9.80665 m/s² × 1 mm
+		// (from memory): 760 of them are 1 atm to 1.4e-7.
+		{"760 mmHg", atmPa, false, 2e-7, "conventional mmHg, from memory"},
+		{"29.9213 inHg", atmPa, false, 2e-6, "conventional inHg (25.4 mmHg), from memory"},
+		// kgf/cm² = 9.80665 N / 1e-4 m² exactly (standard gravity, CGPM 1901).
+		{"1 kgf/cm2", 98066.5, false, 0, "definition"},
+		{"1 kg/cm²", 98066.5, false, 0, "definition"},
+		{"5 kgf/cm2g", atmPa + 5*98066.5, true, 1e-15, "definition"},
+		{"5 kg/cm2(g)", atmPa + 5*98066.5, true, 1e-15, "definition"},
 	}
 	for _, c := range cases {
 		got, err := ParsePressure(c.in)
@@ -158,6 +174,9 @@ func TestParsePressureErrors(t *testing.T) {
 		// mPa would be millipascal; read as MPa it would be 10⁹ times off.
 		{"5 mPa", "MPa"},
 		{"5 mpa", "MPa"},
+		{"5 mPa(g)", "MPa"},
+		// A decimal comma would read as 1 and a unit ",5 bar".
+		{"1,5 bar", `"1,5" has a decimal comma; write it with a point, "1.5"`},
 	}
 	for _, c := range cases {
 		_, err := ParsePressure(c.in)
@@ -285,6 +304,9 @@ func TestPressureUnitOf(t *testing.T) {
 		{"250 mbarg", false, 126325, 1263.25, "mbar abs", 1e-12},
 		{"1000 Pa", true, 1000, -100325, "Pa gauge", 1e-12},
 		{"1 atm", true, 101325, 0, "atm gauge", 1e-12},
+		{"2.5 bar(g)", true, 351325, 2.5, "barg", 1e-12},
+		{"5 kg/cm2(g)", true, 5*98066.5 + 101325, 5, "kgf/cm2g", 1e-12},
+		{"760 mmHg", false, 101325, 760, "mmHg", 2e-7},
 	} {
 		u, ok := PressureUnitOf(c.text)
 		if !ok {

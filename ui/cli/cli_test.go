@@ -548,7 +548,7 @@ func TestHelp(t *testing.T) {
 	// The help lists every unit the parser accepts, from the engine's own
 	// list (issue 7, item 19: kPag and bara worked but were not listed).
 	flat := strings.Join(strings.Fields(stdout), " ")
-	for _, unit := range []string{mixtures.TemperatureUnits, mixtures.PressureUnits, "Pa, kPa, MPa, GPa, bar, mbar, atm, Torr, psi", "psia", "bara", "kPag", "MPag", "barg", "psig"} {
+	for _, unit := range []string{mixtures.TemperatureUnits, mixtures.PressureUnits, "Pa, hPa, kPa, MPa, GPa, bar, mbar, atm, Torr, mmHg, inHg, psi, kgf/cm2", "psia", "bara", "kPag", "MPag", "barg", "psig", "kgf/cm2g", "bar(g)"} {
 		if !strings.Contains(flat, unit) {
 			t.Errorf("state --help lacks the units %q", unit)
 		}

@@ -23,8 +23,9 @@ const sharedFlagsHelp = `  --species FILE   merge a species file over the catalo
 var unitsHelp = "Units:\n" +
 	"  temperature  " + mixtures.TemperatureUnits + ": 300K, 25C, 77 F, 540 R\n" +
 	"  pressure     " + strings.Join(report.Wrap(mixtures.PressureUnits, 64), "\n               ") + "\n" +
-	"               e.g. 1atm, 14.7 psia, 2 barg; a gauge pressure is read as\n" +
-	"               101325 Pa above the value and flagged as gauge in the output\n"
+	"               e.g. 1atm, 14.7 psia, 2 barg (or bar(g), bar g); a gauge\n" +
+	"               pressure is read as 101325 Pa above the value and flagged\n" +
+	"               as gauge in the output\n"
 
 const blendHelp = `Blend text: "SPECIES AMOUNT" items separated by , ; or new lines. An amount is
   a mole fraction (0.21), mol % (21% or 21 mol%), ppm or ppb by moles, a mass
