@@ -42,13 +42,15 @@ func SplitNumber(s string) (float64, string, error) { return splitNumber(s) }
 func splitNumber(s string) (float64, string, error) {
 	x, rest, err := model.LeadingNumber(strings.TrimSpace(s))
 	if err == nil && len(rest) > 1 && rest[0] == ',' && rest[1] >= '0' && rest[1] <= '9' {
-		// "1,5 bar": a decimal comma, which would read as 1 and a unit ",5 bar".
+		// "1,5 bar" or "1,000 SLPM", which would read as 1 and a unit
+		// ",5 bar".
 		n := len(s) - len(rest)
 		for n < len(s) && (s[n] == ',' || s[n] >= '0' && s[n] <= '9') {
 			n++
 		}
 		t := strings.TrimSpace(s[:n])
-		return 0, "", errors.New(model.Quote(t) + " has a decimal comma; write it with a point, " + model.Quote(strings.Replace(t, ",", ".", 1)))
+		// Not guessed: "1,5" is 1.5 in much of Europe, "1,000" is 1000.
+		return 0, "", errors.New(model.Quote(t) + " has a comma in it: write decimals with a point (1.5) and numbers without thousands separators (1000)")
 	}
 	return x, strings.TrimSpace(rest), err
 }

@@ -176,7 +176,8 @@ func TestParsePressureErrors(t *testing.T) {
 		{"5 mpa", "MPa"},
 		{"5 mPa(g)", "MPa"},
 		// A decimal comma would read as 1 and a unit ",5 bar".
-		{"1,5 bar", `"1,5" has a decimal comma; write it with a point, "1.5"`},
+		{"1,5 bar", `"1,5" has a comma in it: write decimals with a point (1.5) and numbers without thousands separators (1000)`},
+		{"1,013 mbar", `"1,013" has a comma in it`},
 	}
 	for _, c := range cases {
 		_, err := ParsePressure(c.in)

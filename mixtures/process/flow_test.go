@@ -28,6 +28,15 @@ func TestFlowConversions(t *testing.T) {
 		{"Sm3/h at 15 C", "23.6449 Sm3/h", Reference{}, 1000.0 / 3600, 23.6449 / 3600 * 273.15 / 288.15, 1e-5},
 		// 1 lb/h is 0.45359237 kg/h, exact by definition of the pound.
 		{"lb/h", "1 lb/h", RefNormal, 0.45359237 / 3600 / n2.MolarMassKgPerMol, 0.45359237 / 3600 / n2.MolarMassKgPerMol * 22.41396954e-3, 1e-9},
+		{"lb/hr reads as lb/h", "1 lb/hr", RefNormal, 0.45359237 / 3600 / n2.MolarMassKgPerMol, 0.45359237 / 3600 / n2.MolarMassKgPerMol * 22.41396954e-3, 1e-9},
+		{"t/h is 1000 kg/h", "1 t/h", RefNormal, 1000.0 / 3600 / n2.MolarMassKgPerMol, 1000.0 / 3600 / n2.MolarMassKgPerMol * 22.41396954e-3, 1e-9},
+		{"slm is SLPM", "1 slm", RefNormal, 1e-3 / 60 / 22.41396954e-3, 1e-3 / 60, 1e-9},
+		{"Nm3/hr", "22.41396954 Nm3/hr", RefNormal, 1000.0 / 3600, 22.41396954 / 3600, 1e-9},
+		{"Nm3/d", "24 Nm3/d", RefNormal, 1.0 / 3600 / 22.41396954e-3, 1.0 / 3600, 1e-9},
+		{"Nm3/min", "1 Nm3/min", RefNormal, 1.0 / 60 / 22.41396954e-3, 1.0 / 60, 1e-9},
+		// 1 MMSCFD: 10⁶ ft³ a day (ft = 0.3048 m exactly) at 60 °F and
+		// 14.696 psia: p V/(R T) with the exact R.
+		{"MMSCFD", "1 MMSCFD", Ref60F, 14.696 * 6894.757293168361 * 1e6 * 0.028316846592 / (8.314462618 * (60 + 459.67) * 5 / 9) / 86400, 1e6 * 0.028316846592 / 86400, 1e-9},
 	}
 	for _, c := range cases {
 		r, err := ParseRate(c.rate)

@@ -111,6 +111,7 @@ type RateUnit struct {
 
 const (
 	perHour   = 1.0 / 3600
+	perDay    = 1.0 / 86400
 	perMinute = 1.0 / 60
 	cubicFoot = 0.3048 * 0.3048 * 0.3048 // m³, exact
 	pound     = 0.45359237               // kg, exact
@@ -125,28 +126,36 @@ var rateUnits = map[string]RateUnit{
 	"kmol/s":  {Name: "kmol/s", Basis: BasisMolar, SI: 1000},
 	"kg/s":    {Name: "kg/s", Basis: BasisMass, SI: 1},
 	"kg/h":    {Name: "kg/h", Basis: BasisMass, SI: perHour},
+	"kg/min":  {Name: "kg/min", Basis: BasisMass, SI: perMinute},
+	"t/h":     {Name: "t/h", Basis: BasisMass, SI: 1000 * perHour},
 	"g/s":     {Name: "g/s", Basis: BasisMass, SI: 1e-3},
 	"g/min":   {Name: "g/min", Basis: BasisMass, SI: 1e-3 * perMinute},
 	"lb/h":    {Name: "lb/h", Basis: BasisMass, SI: pound * perHour},
 	"lb/min":  {Name: "lb/min", Basis: BasisMass, SI: pound * perMinute},
 	"m3/s":    {Name: "m3/s", Basis: BasisActual, SI: 1},
 	"m3/h":    {Name: "m3/h", Basis: BasisActual, SI: perHour},
+	"m3/min":  {Name: "m3/min", Basis: BasisActual, SI: perMinute},
 	"l/min":   {Name: "L/min", Basis: BasisActual, SI: 1e-3 * perMinute},
 	"l/s":     {Name: "L/s", Basis: BasisActual, SI: 1e-3},
 	"acfm":    {Name: "ACFM", Basis: BasisActual, SI: cubicFoot * perMinute},
 	"acfh":    {Name: "ACFH", Basis: BasisActual, SI: cubicFoot * perHour},
 	"nm3/h":   {Name: "Nm3/h", Basis: BasisStandard, SI: perHour, Ref: &RefNormal, RefSet: true},
 	"nm3/s":   {Name: "Nm3/s", Basis: BasisStandard, SI: 1, Ref: &RefNormal, RefSet: true},
+	"nm3/min": {Name: "Nm3/min", Basis: BasisStandard, SI: perMinute, Ref: &RefNormal, RefSet: true},
+	"nm3/d":   {Name: "Nm3/d", Basis: BasisStandard, SI: perDay, Ref: &RefNormal, RefSet: true},
 	"sm3/h":   {Name: "Sm3/h", Basis: BasisStandard, SI: perHour, Ref: &RefISO},
 	"sm3/s":   {Name: "Sm3/s", Basis: BasisStandard, SI: 1, Ref: &RefISO},
+	"sm3/d":   {Name: "Sm3/d", Basis: BasisStandard, SI: perDay, Ref: &RefISO},
 	"slpm":    {Name: "SLPM", Basis: BasisStandard, SI: 1e-3 * perMinute, Ref: &RefNormal},
+	"slm":     {Name: "slm", Basis: BasisStandard, SI: 1e-3 * perMinute, Ref: &RefNormal}, // the fab's spelling of SLPM
 	"sccm":    {Name: "sccm", Basis: BasisStandard, SI: 1e-6 * perMinute, Ref: &RefNormal},
 	"scfh":    {Name: "SCFH", Basis: BasisStandard, SI: cubicFoot * perHour, Ref: &Ref60F, RefSet: true},
 	"scfm":    {Name: "SCFM", Basis: BasisStandard, SI: cubicFoot * perMinute, Ref: &Ref60F, RefSet: true},
+	"mmscfd":  {Name: "MMSCFD", Basis: BasisStandard, SI: 1e6 * cubicFoot * perDay, Ref: &Ref60F, RefSet: true},
 }
 
 // RateUnits lists the accepted flow units, for messages and help.
-const RateUnits = "mol/s, mol/min, mol/h, kmol/h; kg/s, kg/h, g/s, g/min, lb/h, lb/min; actual m3/s, m3/h, L/min, L/s, ACFM, ACFH; standard Nm3/h, Sm3/h, SLPM, sccm, SCFH, SCFM"
+const RateUnits = "mol/s, mol/min, mol/h, kmol/h; kg/s, kg/min, kg/h, t/h, g/s, g/min, lb/h, lb/min; actual m3/s, m3/min, m3/h, L/min, L/s, ACFM, ACFH; standard Nm3/h, Nm3/min, Nm3/d, Sm3/h, Sm3/d, SLPM (slm), sccm, SCFH, SCFM, MMSCFD; /hr reads as /h"
 
 // Rate is a parsed flow with its unit.
 type Rate struct {
@@ -169,11 +178,14 @@ func ParseRate(s string) (Rate, error) {
 		return Rate{}, err
 	}
 	text := strings.TrimSpace(s)
-	x, unitText, ok := splitValue(text)
-	if !ok {
-		return Rate{}, model.Errorf("process", "rate %s: want a number and a unit, e.g. 120 Nm3/h; the units are %s", model.Quote(s), RateUnits)
+	x, unitText, err := mixtures.SplitNumber(text)
+	if err != nil {
+		return Rate{}, model.Errorf("process", "rate %s: %v; want a number and a unit, e.g. 120 Nm3/h; the units are %s", model.Quote(s), err, RateUnits)
 	}
 	key := strings.ToLower(strings.NewReplacer("³", "3", "^3", "3", " ", "").Replace(unitText))
+	if k, ok := strings.CutSuffix(key, "/hr"); ok {
+		key = k + "/h" // lb/hr, Nm3/hr
+	}
 	u, ok := rateUnits[key]
 	if !ok {
 		if unitText == "" {
