@@ -85,6 +85,10 @@ func TestParseErrors(t *testing.T) {
 		{"rate huge", "1e308 kmol/s", "at most 1e12 kmol/s", func(s string) error { _, err := ParseRate(s); return err }},
 		{"rate past the bound", "1.5e12 SLPM", "at most 1e12 SLPM", func(s string) error { _, err := ParseRate(s); return err }},
 		{"volume past the bound", "1e300 L", "at most 1e9 m3", func(s string) error { _, err := ParseVolume(s); return err }},
+		{"sides without a unit", "6 x 4 x 3", "one length unit after the last", func(s string) error { _, err := ParseVolume(s); return err }},
+		{"sides with two units", "6 x 4 m x 3 m", "one length unit after the last", func(s string) error { _, err := ParseVolume(s); return err }},
+		{"two negative sides", "-6 x 4 x -3 m", "each side above zero", func(s string) error { _, err := ParseVolume(s); return err }},
+		{"sides in yards", "6 x 4 x 3 yd", "unknown length unit", func(s string) error { _, err := ParseVolume(s); return err }},
 		{"rate long", strings.Repeat("9", 300) + " kg/h", "at most 200", func(s string) error { _, err := ParseRate(s); return err }},
 		{"stream two fields", "N2 1; 300K", "BLEND; T; RATE", func(s string) error { _, err := ParseStream(s); return err }},
 		{"stream no blend", " ; 300K; 1 mol/s", "blend is missing", func(s string) error { _, err := ParseStream(s); return err }},
@@ -207,4 +211,21 @@ func FuzzParseOthers(f *testing.F) {
 			t.Fatalf("ParseReference(%q) = %+v", s, r)
 		}
 	})
+}
+
+// Volumes as a unit or as a room's three sides; ft = 0.3048 m exactly
+// (international foot).
+func TestParseVolume(t *testing.T) {
+	ft3 := 0.3048 * 0.3048 * 0.3048
+	for _, c := range []struct {
+		in   string
+		want float64
+	}{
+		{"2.5 m3", 2.5}, {"2.5 m³", 2.5}, {"50 L", 0.05}, {"12 ft3", 12 * ft3},
+		{"6 x 4 x 3 m", 72}, {"6x4x3m", 72}, {"20 × 15 × 10 ft", 3000 * ft3}, {"300 X 200 X 250 cm", 15},
+	} {
+		if got, err := ParseVolume(c.in); err != nil || math.Abs(got/c.want-1) > 1e-12 {
+			t.Errorf("ParseVolume(%q) = %g, %v; want %g m³", c.in, got, err, c.want)
+		}
+	}
 }

@@ -110,11 +110,21 @@ var volumeUnits = map[string]float64{"m3": 1, "l": 1e-3, "litre": 1e-3, "liter":
 // the exponent (1e300 L) is refused rather than computed.
 const MaxVolumeM3 = 1e9
 
-// ParseVolume reads a volume with its unit ("2.5 m3", "50 L", "12 ft3")
-// and returns m³; it must be above zero and at most MaxVolumeM3.
+// ParseVolume reads a volume with its unit ("2.5 m3", "50 L", "12 ft3"),
+// or a room's three sides with a length unit ("6 x 4 x 3 m", "20x15x10
+// ft"), and returns m³; it must be above zero and at most MaxVolumeM3.
 func ParseVolume(s string) (float64, error) {
 	if err := tooLong("a volume", s); err != nil {
 		return 0, err
+	}
+	if v, ok, err := parseSides(s); ok {
+		if err != nil {
+			return 0, err
+		}
+		if !(v > 0) || v > MaxVolumeM3 {
+			return 0, model.Errorf("process", "volume %s: want a volume above zero and at most 1e9 m3", model.Quote(s))
+		}
+		return v, nil
 	}
 	x, unit, ok := splitValue(strings.TrimSpace(s))
 	if !ok {
@@ -129,6 +139,37 @@ func ParseVolume(s string) (float64, error) {
 		return 0, model.Errorf("process", "volume %s: want a volume above zero and at most 1e9 m3", model.Quote(s))
 	}
 	return v, nil
+}
+
+// lengthUnits are the units of a room's sides, in m.
+var lengthUnits = map[string]float64{"m": 1, "ft": 0.3048, "cm": 0.01, "mm": 0.001}
+
+// parseSides reads "A x B x C UNIT" (x, X or ×, the unit after the last
+// side): ok says the text has that shape, err what is wrong with it.
+func parseSides(s string) (m3 float64, ok bool, err error) {
+	parts := strings.FieldsFunc(strings.ToLower(s), func(r rune) bool { return r == 'x' || r == '×' })
+	if len(parts) != 3 {
+		return 0, false, nil
+	}
+	v := 1.0
+	for i, p := range parts {
+		x, unit, splitErr := mixtures.SplitNumber(p)
+		if splitErr != nil || (i < 2) != (unit == "") {
+			return 0, true, model.Errorf("process", "volume %s: want three sides and one length unit after the last, e.g. 6 x 4 x 3 m", model.Quote(s))
+		}
+		if !(x > 0) {
+			return 0, true, model.Errorf("process", "volume %s: want each side above zero", model.Quote(s))
+		}
+		if i == 2 {
+			size, known := lengthUnits[unit]
+			if !known {
+				return 0, true, model.Errorf("process", "volume %s: unknown length unit %s; want m, cm, mm or ft, e.g. 6 x 4 x 3 m", model.Quote(s), model.Quote(unit))
+			}
+			v *= size * size * size
+		}
+		v *= x
+	}
+	return v, true, nil
 }
 
 // ParseEfficiency reads an efficiency as a fraction or a percentage

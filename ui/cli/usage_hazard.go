@@ -77,7 +77,8 @@ Flags:
   --fill-temp T    its temperature (default 20C, the room's)
   --rate R         a flow: mol/s, kg/h, Nm3/h, SLPM, sccm, SCFH, SCFM;
                    actual m3/h, L/min, ACFM taken at 20 °C and 1 atm
-  --room V         room volume: m3, L, ft3 (required)
+  --room V         room volume: m3, L, ft3, or its sides, "6 x 4 x 3 m"
+                   (required)
   --ach N          ventilation, air changes per hour (default none)
   --vent FLOW      ventilation as a volume flow, e.g. 360 m3/h
   --pres P         total pressure, only to turn partial pressures into
@@ -88,7 +89,7 @@ Flags:
                    columns: section, row, name, value
 `+sharedFlagsHelp+`
 Examples:
-  zmix release --blend "N2 100%" --amount 10Nm3 --room 40m3
+  zmix release --blend "N2 100%" --amount 10Nm3 --room "6 x 4 x 3 m"
   zmix release --blend "H2 5%, N2 bal" --rate 20SLPM --room 60m3 --ach 6
   zmix release --blend "PH3 1%, N2 bal" --amount 50SL --room 200m3 --json
   zmix release --blend "Ar 100%" --rate 30Nm3/h --amount 9Nm3 --room 25m3 --vent 100m3/h
