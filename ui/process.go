@@ -76,7 +76,7 @@ var processKinds = []processKind{
 		{key: "amount", label: "amount", def: "2 Nm3", hint: "released at once, or in all with a rate: mol, kg, lb, Nm3, SL, Sm3, scf, m3 at 20 °C"},
 		{key: "cylinder", label: "or cylinder", def: "", hint: "in place of the amount, a cylinder's water volume (50 L): its contents at the setpoint's T and P, less what stays at 1 atm"},
 		{key: "rate", label: "or rate", def: "", hint: "a continuous release: SLPM, Nm3/h, kg/h, ...; empty: all at once"},
-		{key: "room", label: "room", def: "30 m3", hint: "room volume: m3, L or ft3"},
+		{key: "room", label: "room", def: "30 m3", hint: "room volume: m3, L or ft3, or its sides, 6 x 4 x 3 m"},
 		{key: "ach", label: "air changes/h", def: "", hint: "ventilation; empty: none"},
 	}},
 	{key: "throttle", name: "throttle", fields: []processField{
