@@ -229,3 +229,23 @@ func TestParseVolume(t *testing.T) {
 		}
 	}
 }
+
+// Air changes per hour as the trade writes them; a change a minute is 60
+// an hour.
+func TestParseACH(t *testing.T) {
+	for _, c := range []struct {
+		in   string
+		want float64
+	}{{"6", 6}, {"6/h", 6}, {"6 /hr", 6}, {"6 ACH", 6}, {"6 h-1", 6}, {"0.1/min", 6}, {"0", 0}, {"1000", 1000}} {
+		if got, err := ParseACH(c.in); err != nil || math.Abs(got-c.want) > 1e-12 {
+			t.Errorf("ParseACH(%q) = %g, %v; want %g", c.in, got, err, c.want)
+		}
+	}
+	for _, bad := range []string{"six", "-1", "1001", "20/min", "6 m3/h", "", "NaN"} {
+		if got, err := ParseACH(bad); err == nil {
+			t.Errorf("ParseACH(%q) = %g, want an error", bad, got)
+		} else if msg := model.UserMessage(err); !strings.Contains(msg, "from 0 to 1000") {
+			t.Errorf("ParseACH(%q): %q", bad, msg)
+		}
+	}
+}

@@ -146,13 +146,19 @@ func (rr RoomRelease) Solve() (*ReleaseResult, error) {
 	return res, nil
 }
 
-// ParseACH reads air changes per hour, 0 to MaxACH ("6" or "6/h").
+// achUnits are the ways the trade writes air changes per hour after the
+// number, and their size in changes per hour.
+var achUnits = map[string]float64{"": 1, "/h": 1, "/hr": 1, "ach": 1, "h-1": 1, "h⁻¹": 1, "perhour": 1, "/min": 60}
+
+// ParseACH reads air changes per hour, 0 to MaxACH: "6", "6/h", "6 ACH",
+// "6 h-1", or "0.1/min".
 func ParseACH(s string) (float64, error) {
 	x, unit, ok := splitValue(strings.TrimSpace(s))
-	if !ok || x < 0 || x > MaxACH || (unit != "" && unit != "/h") {
-		return 0, model.Errorf("process", "air changes per hour %s: want a number from 0 to %d, e.g. 6", model.Quote(s), MaxACH)
+	size, known := achUnits[strings.ToLower(strings.ReplaceAll(unit, " ", ""))]
+	if !ok || !known || !(x*size >= 0) || x*size > MaxACH {
+		return 0, model.Errorf("process", "air changes per hour %s: want a number from 0 to %d, e.g. 6 (6/h and 6 ACH read too)", model.Quote(s), MaxACH)
 	}
-	return x, nil
+	return x * size, nil
 }
 
 func newReleaseResult(rel safety.Release) *ReleaseResult {

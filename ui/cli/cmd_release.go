@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"strconv"
 	"strings"
 
 	"zmix/mixtures"
@@ -90,7 +91,7 @@ func (a *app) cmdRelease(g *globalOpts, args []string) error {
 			return badInput("--ach: %v", err)
 		}
 		rel.VentM3PerS = n * rel.RoomM3 / 3600
-		vent = strings.TrimSpace(achText) + " air changes per hour"
+		vent = strconv.FormatFloat(n, 'g', -1, 64) + " air changes per hour"
 	case strings.TrimSpace(ventText) != "":
 		r, err := process.ParseRate(ventText)
 		if err != nil {

@@ -79,7 +79,8 @@ Flags:
                    actual m3/h, L/min, ACFM taken at 20 °C and 1 atm
   --room V         room volume: m3, L, ft3, or its sides, "6 x 4 x 3 m"
                    (required)
-  --ach N          ventilation, air changes per hour (default none)
+  --ach N          ventilation, air changes per hour: 6, 6/h, 6 ACH
+                   (default none)
   --vent FLOW      ventilation as a volume flow, e.g. 360 m3/h
   --pres P         total pressure, only to turn partial pressures into
                    fractions
