@@ -6,6 +6,7 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"unicode"
 	"unicode/utf8"
 
 	"zmix/model"
@@ -184,7 +185,22 @@ func ParseBlend(text string) (*Blend, error) {
 			return nil, &BlendError{Text: text, Token: trimmed, Offset: off, Index: len(items), Err: ErrSyntax,
 				Detail: "want SPECIES AMOUNT, where AMOUNT is " + amountForms + " (a species alone is the pure gas only when it is the whole blend)"}
 		}
-		items = append(items, BlendItem{Species: fields[0], Amount: strings.Join(fields[1:], " ")})
+		// A species named in words ("nitrous oxide 5%") runs up to the
+		// first word an amount starts with; with none, the first word is
+		// the species and the amount's own error says what is wrong.
+		k := 1
+		for k < len(fields) && !amountStart(fields[k]) {
+			k++
+		}
+		if k == len(fields) {
+			k = 1
+		}
+		species := fields[0]
+		if k > 1 {
+			// As typed, spacing kept, so that the item's key indexes the text.
+			species = strings.TrimSpace(trimmed[:fieldOffset(trimmed, k)])
+		}
+		items = append(items, BlendItem{Species: species, Amount: strings.Join(fields[k:], " ")})
 		offsets, lengths = append(offsets, off), append(lengths, len(trimmed))
 	}
 	b, err := newBlend(text, items, offsets, lengths)
@@ -195,6 +211,33 @@ func ParseBlend(text string) (*Blend, error) {
 }
 
 func isDigit(c byte) bool { return c >= '0' && c <= '9' }
+
+// fieldOffset is the byte offset in s of its k-th whitespace-separated
+// field (0-based), or len(s) when it has fewer.
+func fieldOffset(s string, k int) int {
+	n, inField := 0, false
+	for i, r := range s {
+		space := unicode.IsSpace(r)
+		if !space && !inField {
+			if n == k {
+				return i
+			}
+			n++
+		}
+		inField = !space
+	}
+	return len(s)
+}
+
+// amountStart reports whether a word of blend text can start an amount:
+// a number, a detection limit, "bal" or a dew point.
+func amountStart(word string) bool {
+	if c := word[0]; isDigit(c) || c == '.' || c == '+' || c == '-' || c == '<' {
+		return true
+	}
+	w := strings.ToLower(word)
+	return w == "bal" || w == "balance" || strings.HasPrefix(w, "dew")
+}
 
 // digitComma finds the first number in s with a comma between digits
 // ("79,0", "1,000") and returns it with its offset.

@@ -284,6 +284,27 @@ func TestBlendErrors(t *testing.T) {
 	}
 }
 
+// A species named in words runs up to the first word an amount starts
+// with, whatever the spacing; the same blend by formula resolves the same.
+func TestSpeciesNamedInWords(t *testing.T) {
+	for _, c := range []struct{ words, formulas string }{
+		{"nitrous oxide 5%, N2 bal", "N2O 5%, N2 bal"},
+		{"sulfur  hexafluoride 1 ppm, nitrogen bal", "SF6 1ppm, N2 bal"},
+		{"water vapour dew 10C, N2 bal", "H2O dew 10C, N2 bal"},
+		{"hydrogen chloride 0.2 bar, N2 balance", "HCl 0.2 bar, N2 bal"},
+	} {
+		a, b := mustMixture(t, c.words, 1e5), mustMixture(t, c.formulas, 1e5)
+		if len(a.Components) != len(b.Components) {
+			t.Fatalf("%q: %d components, %q: %d", c.words, len(a.Components), c.formulas, len(b.Components))
+		}
+		for i := range a.Components {
+			if a.Components[i].Species != b.Components[i].Species || math.Abs(a.Components[i].X-b.Components[i].X) > 1e-15 {
+				t.Errorf("%q: component %d %s %g, want %s %g", c.words, i, a.Components[i].Species.Formula, a.Components[i].X, b.Components[i].Species.Formula, b.Components[i].X)
+			}
+		}
+	}
+}
+
 // A species listed twice is one species: the merged blend equals the one
 // written with the sum, and mixing a gas with itself adds no entropy.
 func TestDuplicatesMerge(t *testing.T) {

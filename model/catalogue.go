@@ -99,8 +99,10 @@ func (c *Catalogue) Lookup(key string) (*Species, bool) {
 	if sp, ok := c.byFormula[key]; ok {
 		return sp, true
 	}
+	// A name in words matches whatever the spacing between them.
+	words := strings.Join(strings.Fields(key), " ")
 	for _, sp := range c.species {
-		if strings.EqualFold(sp.Formula, key) || strings.EqualFold(sp.Name, key) {
+		if strings.EqualFold(sp.Formula, key) || strings.EqualFold(sp.Name, words) {
 			return sp, true
 		}
 	}

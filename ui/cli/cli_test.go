@@ -882,3 +882,16 @@ func TestSpeciesFileCannotTakeAir(t *testing.T) {
 		t.Errorf("species file naming air: exit %d, stderr %q", code, stderr)
 	}
 }
+
+// zmix catalog takes a name in words without quotes; words that are not
+// one name are several species, refused as before.
+func TestCatalogNameInWords(t *testing.T) {
+	code, out, stderr := zmix(t, "catalog", "nitrous", "oxide")
+	if code != 0 || !strings.HasPrefix(out, "N2O  nitrous oxide") {
+		t.Errorf("catalog nitrous oxide: exit %d, stderr %q:\n%.200s", code, stderr, out)
+	}
+	code, _, stderr = zmix(t, "catalog", "N2", "O2")
+	if code != 2 || !strings.Contains(stderr, "one species at a time; got N2 O2") {
+		t.Errorf("catalog N2 O2: exit %d, stderr %q", code, stderr)
+	}
+}

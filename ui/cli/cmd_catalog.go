@@ -28,8 +28,11 @@ func (a *app) cmdCatalog(g *globalOpts, args []string) error {
 	if err != nil {
 		return err
 	}
-	if len(rest) > 1 {
-		return badInput("one species at a time; got %s (zmix catalog lists them all)", strings.Join(rest, " "))
+	// Words may be one name typed without quotes (zmix catalog nitrous
+	// oxide); if they are not, they are several species.
+	several := len(rest) > 1
+	if several {
+		rest = []string{strings.Join(rest, " ")}
 	}
 	format, err := pickFormat(asJSON, asCSV)
 	if err != nil {
@@ -82,6 +85,9 @@ func (a *app) cmdCatalog(g *globalOpts, args []string) error {
 			return a.emit(&out)
 		}
 		sp, ok := cat.Lookup(rest[0])
+		if !ok && several {
+			return badInput("one species at a time; got %s (zmix catalog lists them all)", rest[0])
+		}
 		if !ok {
 			const more = "zmix catalog lists every species, and --species FILE adds others"
 			hint := cat.UnknownHint(rest[0])
