@@ -23,10 +23,11 @@ type NamedPart struct {
 
 // NamedMixture is a mixture blend text may name as one item.
 type NamedMixture struct {
-	Name  string // the name blend text uses
-	Short string // what it is, in a few words, for search lists
-	Title string // what it is, with its composition and source
-	Parts []NamedPart
+	Name    string   // the name blend text uses
+	Aliases []string // other names it answers to
+	Short   string   // what it is, in a few words, for search lists
+	Title   string   // what it is, with its composition and source
+	Parts   []NamedPart
 }
 
 // namedMixtures are the named mixtures blend text knows.
@@ -39,10 +40,11 @@ type NamedMixture struct {
 // molar mass, 28.966 g/mol, is ISO 2533's 28.9644 g/mol (from memory)
 // within the CO2 update (TestNamedAir).
 var namedMixtures = []NamedMixture{{
-	Name:  "air",
-	Short: "dry air (N2, O2, Ar, CO2)",
-	Title: "dry air: O2 20.946 %, Ar 0.934 %, CO2 0.04 %, N2 bal (US Standard Atmosphere 1976, CO2 updated; from memory)",
-	Parts: []NamedPart{{"N2", 1 - 0.20946 - 0.00934 - 0.0004}, {"O2", 0.20946}, {"Ar", 0.00934}, {"CO2", 0.0004}},
+	Name:    "air",
+	Aliases: []string{"dry air"},
+	Short:   "dry air (N2, O2, Ar, CO2)",
+	Title:   "dry air: O2 20.946 %, Ar 0.934 %, CO2 0.04 %, N2 bal (US Standard Atmosphere 1976, CO2 updated; from memory)",
+	Parts:   []NamedPart{{"N2", 1 - 0.20946 - 0.00934 - 0.0004}, {"O2", 0.20946}, {"Ar", 0.00934}, {"CO2", 0.0004}},
 }}
 
 // LookupNamedMixture returns the named mixture key names, if any (case
@@ -52,6 +54,11 @@ func LookupNamedMixture(key string) (NamedMixture, bool) {
 	for _, m := range namedMixtures {
 		if strings.EqualFold(m.Name, key) {
 			return m, true
+		}
+		for _, a := range m.Aliases {
+			if strings.EqualFold(a, strings.Join(strings.Fields(key), " ")) {
+				return m, true
+			}
 		}
 	}
 	return NamedMixture{}, false
@@ -127,9 +134,11 @@ func (b *Blend) NamedNote() string {
 // the mixture: the species could never be reached, without a word.
 func CheckNamesFree(cat *model.Catalogue) error {
 	for _, m := range namedMixtures {
-		if sp, ok := cat.Lookup(m.Name); ok {
-			return model.Errorf("mixtures", "species %s (%s) goes by the name %s, which blend text keeps for %s; give it another formula and name",
-				model.Quote(sp.Formula), model.Printable(sp.Name), model.Quote(m.Name), m.Short)
+		for _, name := range append([]string{m.Name}, m.Aliases...) {
+			if sp, ok := cat.Lookup(name); ok {
+				return model.Errorf("mixtures", "species %s (%s) goes by the name %s, which blend text keeps for %s; give it another formula and name",
+					model.Quote(sp.Formula), model.Printable(sp.Name), model.Quote(name), m.Short)
+			}
 		}
 	}
 	return nil

@@ -38,7 +38,7 @@ func TestNamedAir(t *testing.T) {
 	if got := air.MolarMassKgPerMol * 1000; math.Abs(got-28.96442) > 0.003 {
 		t.Errorf("M(air) = %.5f g/mol, want 28.964 ± 0.003 (ISO 2533)", got)
 	}
-	for _, text := range []string{"AIR", " air 100%", "Air 1", "air bal"} {
+	for _, text := range []string{"AIR", " air 100%", "Air 1", "air bal", "dry air bal", "Dry  Air 1"} {
 		if m := mustMixture(t, text, 1e5); math.Abs(xOf(m, "O2")-0.20946) > 1e-12 {
 			t.Errorf("%q: x(O2) = %g, want air's 0.20946", text, xOf(m, "O2"))
 		}
