@@ -25,10 +25,30 @@ const (
 	sweepRangeForms = rangeForms + "; the number of points is given on its own (--steps N, or the points field)"
 )
 
+// LooksLikeRange reports whether s was meant as a range but not written
+// in the range syntax: "300 to 900 K", "300-900 K". (An ellipsis,
+// "300…900 K", as editors write "...", reads as ".." in ParseRange.)
+func LooksLikeRange(s string) bool {
+	if strings.Contains(s, "..") || strings.Contains(s, "…") {
+		return false
+	}
+	if strings.Contains(strings.ToLower(s), " to ") {
+		return true
+	}
+	// A minus between two digits: 300-900.
+	for i := 1; i+1 < len(s); i++ {
+		if s[i] == '-' && isDigit(s[i-1]) && isDigit(s[i+1]) {
+			return true
+		}
+	}
+	return false
+}
+
 // ParseRange splits "A..B" into its two ends, each with its unit: a unit
 // written on one end only applies to the other too ("300..1500 K" gives
 // "300 K" and "1500 K").
 func ParseRange(s string) (from, to string, err error) {
+	s = strings.ReplaceAll(s, "…", "..")
 	if n := strings.Count(s, ".."); n > 1 {
 		return "", "", model.KindErrorf("mixtures", ErrValue, "range %s has %d parts; %s", model.Quote(s), n+1, rangeForms)
 	}
@@ -62,7 +82,10 @@ type Range struct {
 // ParseSweepRange reads a range of the variable v in the one range
 // syntax. Errors quote what was typed and say what is accepted.
 func ParseSweepRange(v SweepVar, s string) (Range, error) {
-	if n := strings.Count(s, ".."); n > 1 {
+	if LooksLikeRange(s) {
+		return Range{}, model.KindErrorf("mixtures", ErrValue, "range %s: %s", model.Quote(s), rangeForms)
+	}
+	if n := strings.Count(strings.ReplaceAll(s, "…", ".."), ".."); n > 1 {
 		// Most likely a step written into the range, 300..600..900 K.
 		return Range{}, model.KindErrorf("mixtures", ErrValue, "range %s has %d parts; %s", model.Quote(s), n+1, sweepRangeForms)
 	}

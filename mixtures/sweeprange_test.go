@@ -6,6 +6,8 @@ import (
 	"reflect"
 	"strings"
 	"testing"
+
+	"zmix/model"
 )
 
 // Every pressure unit with a gauge form takes it, and the absolute forms
@@ -175,5 +177,27 @@ func TestSweepTableReuse(t *testing.T) {
 	var none *SweepTable
 	if got := none.Reuse(sw, cols); got.Len() != sw.Steps {
 		t.Errorf("Reuse of nil: %d points", got.Len())
+	}
+}
+
+// A range written in words or with a dash is named as a range and told
+// the syntax; an ellipsis, as editors write "...", reads as "..".
+func TestRangeLookalikes(t *testing.T) {
+	for s, want := range map[string]bool{
+		"300 to 900 K": true, "300-900 K": true, "5 TO 10 bar": true,
+		"300..900 K": false, "300…900 K": false, "-40 C": false, "1e-3 bar": false, "25C": false,
+	} {
+		if got := LooksLikeRange(s); got != want {
+			t.Errorf("LooksLikeRange(%q) = %v, want %v", s, got, want)
+		}
+	}
+	for _, s := range []string{"300 to 900 K", "300-900 K"} {
+		if _, err := ParseSweepRange(SweepTemperature, s); err == nil || !strings.Contains(model.UserMessage(err), "want FROM..TO with a unit") {
+			t.Errorf("ParseSweepRange(%q) = %v, want the range syntax named", s, err)
+		}
+	}
+	r, err := ParseSweepRange(SweepTemperature, "300…900 K")
+	if err != nil || r.From != 300 || r.To != 900 {
+		t.Errorf("ParseSweepRange(300…900 K) = %+v, %v; want 300 to 900 K", r, err)
 	}
 }

@@ -102,6 +102,7 @@ func TestBadInput(t *testing.T) {
 		{"sweep a step that fits no count", append([]string{"sweep", "--temp", "300..400K", "--pres", "1bar", "--steps", "30K"}, okBlend...), 2, `--steps "30K": a number of points, end points included, not a step: want a whole number from 2 to 200000`},
 		{"sweep pressure with a dew point", append([]string{"sweep", "--pres", "1..10bar", "--temp", "20C"}, "--blend", "H2O dew 5C, N2 bal"), 2, `--blend gives partial pressures or dew points, which fix the total`},
 		{"state dew point above critical", []string{"state", "--blend", "H2O dew 400C, N2 bal", "--temp", "20C", "--pres", "1bar"}, 2, `blend item "H2O": no dew point: a dew point of 673.15 K for H2O: above its critical temperature (647.1 K) it does not condense; give its amount instead`},
+		{"sweep range in words", []string{"sweep", "--blend", "N2", "--temp", "300 to 900 K", "--pres", "1bar"}, 2, `--temp: range "300 to 900 K": want FROM..TO with a unit, such as 300..900 K`},
 		{"sweep a step on a pressure grid", append([]string{"sweep", "--pres", "1..10bar", "--temp", "300K", "--steps", "1bar"}, okBlend...), 2, `--steps "1bar": a number of points`},
 		{"sweep zero end", append([]string{"sweep", "--temp", "0..400K", "--pres", "1bar"}, okBlend...), 2, "absolute zero"},
 		{"sweep empty range", append([]string{"sweep", "--temp", "300..300K", "--pres", "1bar"}, okBlend...), 2, "two different end points"},

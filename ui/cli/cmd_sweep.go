@@ -48,7 +48,10 @@ func (a *app) cmdSweep(g *globalOpts, args []string) error {
 	if err != nil {
 		return err
 	}
-	tempIsRange, presIsRange := strings.Contains(tempText, ".."), strings.Contains(presText, "..")
+	isRange := func(s string) bool {
+		return strings.Contains(s, "..") || strings.Contains(s, "…") || mixtures.LooksLikeRange(s)
+	}
+	tempIsRange, presIsRange := isRange(tempText), isRange(presText)
 	switch {
 	case tempIsRange && presIsRange:
 		return badInput("--temp %s and --pres %s are both ranges; sweep one and give the other as one value, e.g. --temp 300..1500K --pres 1atm", model.Quote(tempText), model.Quote(presText))
