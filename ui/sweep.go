@@ -207,7 +207,9 @@ func (p *sweepPane) tryApply() bool {
 	vi := p.vi()
 	from, to := p.drafts[vi][0], p.drafts[vi][1]
 	var rangeTyped error
-	if strings.Contains(from, "..") { // a whole range typed at once
+	// A whole range typed at once, in the range syntax or (to be told
+	// it) as "300 to 900 K".
+	if strings.Contains(from, "..") || strings.Contains(from, "…") || mixtures.LooksLikeRange(from) {
 		a, b, err := sweepSplit(vi, from)
 		if err == nil {
 			from, to = a, b

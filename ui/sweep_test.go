@@ -192,6 +192,8 @@ func TestSweepRangeEntry(t *testing.T) {
 		// field, and a step typed into the range says so.
 		{name: "step typed into the range", start: def, from: "300..600..900 K", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "has 3 parts; want FROM..TO"},
 		{name: "unit on the first end", start: def, from: "300 K..900", wantFrom: "300 K", wantTo: "900 K", wantSteps: 200, wantGridFirst: 300},
+		{name: "range in words", start: def, from: "300 to 900 K", wantFrom: "200 K", wantTo: "1500 K", wantSteps: 200, wantErr: "want FROM..TO with a unit"},
+		{name: "range with an ellipsis", start: def, from: "300…900 K", wantFrom: "300 K", wantTo: "900 K", wantSteps: 200, wantGridFirst: 300},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
