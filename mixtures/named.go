@@ -120,7 +120,7 @@ func (b *Blend) NamedMixtures() []NamedMixture {
 }
 
 // NamedNote is the note a readout gives for the named mixtures in b,
-// "air: dry air: O2 20.946 %, …", or "" when there are none.
+// "air = dry air: O2 20.946 %, …", or "" when there are none.
 func (b *Blend) NamedNote() string {
 	var notes []string
 	for _, m := range b.NamedMixtures() {
