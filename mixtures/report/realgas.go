@@ -108,9 +108,9 @@ func dewPointLine(st *mixtures.State, dp realgas.DewPoint, at string) [2]string 
 		label = "frost point"
 	}
 	margin := st.TempK - dp.TempK
-	margin3 := Short(math.Abs(margin), 3) + " K below T"
+	marginText := Short(math.Abs(margin), 3) + " K below T"
 	if margin <= 0 {
-		margin3 = "T is " + Short(-margin, 3) + " K below it: the blend condenses"
+		marginText = "T is " + Short(-margin, 3) + " K below it: the blend condenses"
 	}
 	how := strings.Join(dp.Species, ", ")
 	if dp.Raoult {
@@ -119,7 +119,7 @@ func dewPointLine(st *mixtures.State, dp realgas.DewPoint, at string) [2]string 
 	if dp.Rough {
 		how += "; rough: a vapour pressure from Trouton's rule"
 	}
-	return [2]string{label, Temperature(dp.TempK) + at + ", " + margin3 + " (" + model.Printable(how) + ")"}
+	return [2]string{label, Temperature(dp.TempK) + at + ", " + marginText + " (" + model.Printable(how) + ")"}
 }
 
 // HumidityLine is the relative humidity of the blend's water as a label
@@ -129,26 +129,25 @@ func HumidityLine(h mixtures.Humidity) ([2]string, bool) {
 	if !h.Known {
 		return [2]string{}, false
 	}
-	over := "over water"
-	if h.OverIce {
-		over = "over ice"
-	}
-	return [2]string{"relative humidity", Sig(h.Percent, 4) + " % " + over + " (H2O at " + Sig(h.PartPa/1000, 4) + " kPa of " +
+	return [2]string{"relative humidity", humidityText(h) + " (H2O at " + Sig(h.PartPa/1000, 4) + " kPa of " +
 		Sig(h.SatPa/1000, 4) + " kPa at T, IAPWS)"}, true
 }
 
 // HumidityShort is HumidityLine for a pane's one line: the figure and
 // over what.
 func HumidityShort(h mixtures.Humidity) ([2]string, bool) {
-	l, ok := HumidityLine(h)
-	if !ok {
-		return l, false
+	if !h.Known {
+		return [2]string{}, false
 	}
-	over := "over water"
+	return [2]string{"RH", humidityText(h)}, true
+}
+
+// humidityText is "38.74 % over water" or "4.941 % over ice".
+func humidityText(h mixtures.Humidity) string {
 	if h.OverIce {
-		over = "over ice"
+		return Sig(h.Percent, 4) + " % over ice"
 	}
-	return [2]string{"RH", Sig(h.Percent, 4) + " % " + over}, true
+	return Sig(h.Percent, 4) + " % over water"
 }
 
 // writeRealGasText writes the section of the text readout.
