@@ -239,6 +239,13 @@ func amountStart(word string) bool {
 	return w == "bal" || w == "balance" || strings.HasPrefix(w, "dew")
 }
 
+// CommaInNumber reports whether s holds a comma between digits ("4,5",
+// "1,000"), which blend text refuses with its own message.
+func CommaInNumber(s string) bool {
+	_, _, ok := digitComma(s)
+	return ok
+}
+
 // digitComma finds the first number in s with a comma between digits
 // ("79,0", "1,000") and returns it with its offset.
 func digitComma(s string) (token string, offset int, ok bool) {

@@ -376,7 +376,8 @@ func (b *bench) resolve(presPa float64) *mixtures.Mixture {
 				msg = blendErrText(err)
 			}
 		}
-		if strings.ContainsAny(e.Amount, ",;\n") {
+		// A comma inside a number ("4,5 %") keeps the engine's own message.
+		if strings.ContainsAny(e.Amount, ",;\n") && !mixtures.CommaInNumber(e.Amount) {
 			msg = "one amount per line: remove the , ; or line break"
 		}
 		b.rowErr = append(b.rowErr, msg)

@@ -34,6 +34,7 @@ func TestBenchErrorsInPlace(t *testing.T) {
 		{"under 100 % and no balance", recipe("N2", "50%", "O2", "30%"), -1, "no species is the balance"},
 		{"two balances", recipe("N2", "bal", "Ar", "bal"), 1, "more than one balance"},
 		{"comma in an amount", recipe("N2", "bal", "O2", "2%, Ar 1%"), 1, "one amount per line"},
+		{"decimal comma in an amount", recipe("N2", "bal", "O2", "4,5 %"), 1, `the comma in "4,5": write decimals with a point`},
 		{"empty", nil, -1, "empty"},
 	}
 	for _, c := range cases {
