@@ -59,6 +59,9 @@ func splitNumber(s string) (float64, string, error) {
 // "77°F", "540 R") and returns kelvin. It rejects values at or below
 // absolute zero.
 func ParseTemperature(s string) (float64, error) {
+	if isRangeText(s) {
+		return 0, model.KindErrorf("mixtures", ErrValue, "temperature %s is a range; one value is wanted here (zmix sweep and the Sweep pane take a range)", model.Quote(s))
+	}
 	x, unit, err := splitNumber(s)
 	if err != nil {
 		return 0, model.KindErrorf("mixtures", ErrValue, "temperature %s: %v; want a number and a unit: %s", model.Quote(s), err, TemperatureUnits)
@@ -209,10 +212,20 @@ func ambiguousPressureUnit(unit string) string {
 	return ""
 }
 
+// isRangeText reports whether a value was typed as a range: in the range
+// syntax (300..900 K) or in words (300 to 900 K). A dash between digits
+// is not taken for one here: "3-00 K" is a typo of one value.
+func isRangeText(s string) bool {
+	return strings.Contains(s, "..") || strings.Contains(s, "…") || strings.Contains(strings.ToLower(s), " to ")
+}
+
 // ParsePressure reads a pressure with its unit ("1 bar", "14.7 psia",
 // "2 barg", "760 Torr"). Gauge units add 101 325 Pa. The absolute result
 // must be above 0 Pa.
 func ParsePressure(s string) (Pressure, error) {
+	if isRangeText(s) {
+		return Pressure{}, model.KindErrorf("mixtures", ErrValue, "pressure %s is a range; one value is wanted here (zmix sweep and the Sweep pane take a range)", model.Quote(s))
+	}
 	x, unit, err := splitNumber(s)
 	if err != nil {
 		return Pressure{}, model.KindErrorf("mixtures", ErrValue, "pressure %s: %v; want a number and a unit: %s", model.Quote(s), err, PressureUnits)

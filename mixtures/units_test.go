@@ -178,6 +178,9 @@ func TestParsePressureErrors(t *testing.T) {
 		// A decimal comma would read as 1 and a unit ",5 bar".
 		{"1,5 bar", `"1,5" has a comma in it: write decimals with a point (1.5) and numbers without thousands separators (1000)`},
 		{"1,013 mbar", `"1,013" has a comma in it`},
+		// A range where one value goes points at the sweep.
+		{"1..5 bar", "is a range; one value is wanted here"},
+		{"1 to 5 bar", "is a range; one value is wanted here"},
 	}
 	for _, c := range cases {
 		_, err := ParsePressure(c.in)
