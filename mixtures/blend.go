@@ -185,22 +185,8 @@ func ParseBlend(text string) (*Blend, error) {
 			return nil, &BlendError{Text: text, Token: trimmed, Offset: off, Index: len(items), Err: ErrSyntax,
 				Detail: "want SPECIES AMOUNT, where AMOUNT is " + amountForms + " (a species alone is the pure gas only when it is the whole blend)"}
 		}
-		// A species named in words ("nitrous oxide 5%") runs up to the
-		// first word an amount starts with; with none, the first word is
-		// the species and the amount's own error says what is wrong.
-		k := 1
-		for k < len(fields) && !amountStart(fields[k]) {
-			k++
-		}
-		if k == len(fields) {
-			k = 1
-		}
-		species := fields[0]
-		if k > 1 {
-			// As typed, spacing kept, so that the item's key indexes the text.
-			species = strings.TrimSpace(trimmed[:fieldOffset(trimmed, k)])
-		}
-		items = append(items, BlendItem{Species: species, Amount: strings.Join(fields[k:], " ")})
+		species, amount, _ := SplitSpeciesAmount(trimmed)
+		items = append(items, BlendItem{Species: species, Amount: amount})
 		offsets, lengths = append(offsets, off), append(lengths, len(trimmed))
 	}
 	b, err := newBlend(text, items, offsets, lengths)
@@ -211,6 +197,29 @@ func ParseBlend(text string) (*Blend, error) {
 }
 
 func isDigit(c byte) bool { return c >= '0' && c <= '9' }
+
+// SplitSpeciesAmount splits one item, "SPECIES AMOUNT": a species named
+// in words ("nitrous oxide 5%") runs up to the first word an amount
+// starts with (a number, <, bal, dew), and found says there is one. With
+// none, the first word is the species and the rest the amount, so that
+// the amount's own error says what is wrong ("N2 lots"). The species is
+// as typed, spacing kept, so that it indexes the text.
+func SplitSpeciesAmount(item string) (species, amount string, found bool) {
+	trimmed := strings.TrimSpace(item)
+	fields := strings.Fields(trimmed)
+	if len(fields) == 0 {
+		return "", "", false
+	}
+	k := 1
+	for k < len(fields) && !amountStart(fields[k]) {
+		k++
+	}
+	found = k < len(fields)
+	if !found {
+		k = 1
+	}
+	return strings.TrimSpace(trimmed[:fieldOffset(trimmed, k)]), strings.Join(fields[k:], " "), found
+}
 
 // fieldOffset is the byte offset in s of its k-th whitespace-separated
 // field (0-based), or len(s) when it has fewer.

@@ -119,8 +119,8 @@ func ParseParent(cat *model.Catalogue, s string) (WeighedParent, error) {
 		items = strings.TrimSpace(head) + " bal, " + tail
 	}
 	list := strings.Split(items, ",")
-	if len(list) == 1 && len(strings.Fields(list[0])) == 1 {
-		list[0] += " bal" // a pure gas
+	if _, _, found := mixtures.SplitSpeciesAmount(list[0]); len(list) == 1 && !found {
+		list[0] += " bal" // a pure gas, named by formula or in words
 	}
 	seen := map[string]bool{}
 	var byMole, byMass string // the first item stated on each basis
@@ -173,10 +173,11 @@ func cutMass(s string) (mass, rest string, ok bool) {
 // "SPECIES bal", and says whether the amount is by moles or by mass
 // (mixtures.Balance for the balance, which states neither).
 func parsePart(cat *model.Catalogue, it string) (ParentPart, mixtures.Basis, error) {
-	fields := strings.Fields(it)
-	if len(fields) < 2 {
+	name, amount, _ := mixtures.SplitSpeciesAmount(it)
+	if amount == "" {
 		return ParentPart{}, 0, model.Errorf("process", "item %s: want SPECIES AMOUNT, SPECIES <LIMIT or SPECIES bal", model.Quote(it))
 	}
+	fields := []string{name} // the species, as typed
 	sp, ok := cat.Lookup(fields[0])
 	if !ok {
 		if m, named := mixtures.LookupNamedMixture(fields[0]); named {
@@ -196,7 +197,6 @@ func parsePart(cat *model.Catalogue, it string) (ParentPart, mixtures.Basis, err
 		return ParentPart{}, 0, model.Errorf("process", "%s: its formula is needed for the molar mass: %v", model.Quote(fields[0]), err)
 	}
 	part := ParentPart{Species: sp}
-	amount := strings.TrimSpace(strings.TrimPrefix(it, fields[0]))
 	if low := strings.ToLower(amount); low == "bal" || low == "balance" {
 		part.Balance = true
 		return part, mixtures.Balance, nil

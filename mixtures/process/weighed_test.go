@@ -285,6 +285,9 @@ func TestParseParent(t *testing.T) {
 		{"2.4612 kg +/- 8mg N2 with O2 <5ppm", 2.4612, 8e-6, "N2 with O2 <5ppm", 2, "N2"},
 		{"10 g +- 1 mg of CH4 2.5% +-0.01%, N2 bal", 10e-3, 1e-6, "CH4 2.5% ±0.01%, N2 bal", 2, "N2"},
 		{"1 lb Ar", 0.45359237, -1, "Ar", 1, "Ar"},
+		// Species named in words, pure and in a premix.
+		{"25.103 g nitrous oxide", 25.103e-3, -1, "nitrous oxide", 1, "N2O"},
+		{"10 g of CH4 2.5%, nitrous  oxide bal", 10e-3, -1, "CH4 2.5%, nitrous  oxide bal", 2, "N2O"},
 	} {
 		p, err := ParseParent(cat, tt.in)
 		if err != nil {
