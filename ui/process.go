@@ -493,9 +493,9 @@ func (p *processPane) calculate() (process.Result, string, error) {
 			if err != nil || !(r >= 0) || r > 1e12 {
 				return nil, "", fieldError("ratio", errText("want moles of diluent per mole of recipe, a number from 0 to 1e12"))
 			}
-			sp, ok := p.c.Catalogue.Lookup(strings.Fields(target)[0])
-			if !ok {
-				return nil, "", fieldError("target", errText("unknown species; want a formula such as SiH4"))
+			sp, err := process.ParseTargetSpecies(p.c.Catalogue, target)
+			if err != nil {
+				return nil, "", fieldError("target", err)
 			}
 			d.Species, d.Ratio = sp, r
 		} else {

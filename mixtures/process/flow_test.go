@@ -163,6 +163,13 @@ func FuzzParseTarget(f *testing.F) {
 		f.Add(s)
 	}
 	f.Fuzz(func(t *testing.T, s string) {
+		if sp, err := ParseTargetSpecies(cat, s); err != nil {
+			if msg := model.UserMessage(err); msg == "" || strings.Contains(msg, "\n") {
+				t.Fatalf("ParseTargetSpecies(%q): error %q, want one line", s, msg)
+			}
+		} else if sp == nil {
+			t.Fatalf("ParseTargetSpecies(%q): no species and no error", s)
+		}
 		tg, err := ParseTarget(cat, s)
 		if err != nil {
 			if msg := model.UserMessage(err); msg == "" || strings.Contains(msg, "\n") {
@@ -247,5 +254,29 @@ func TestParseACH(t *testing.T) {
 		} else if msg := model.UserMessage(err); !strings.Contains(msg, "from 0 to 1000") {
 			t.Errorf("ParseACH(%q): %q", bad, msg)
 		}
+	}
+}
+
+// A target names its species by formula or in words; with a ratio the
+// species alone is read, and a level after it is not used.
+func TestParseTargetNames(t *testing.T) {
+	cat := model.Builtin()
+	for _, c := range []struct {
+		in      string
+		formula string
+		x       float64
+	}{{"SiH4 50ppm", "SiH4", 50e-6}, {"nitrous oxide 1%", "N2O", 0.01}, {"silane  2 ppm", "SiH4", 2e-6}} {
+		tg, err := ParseTarget(cat, c.in)
+		if err != nil || tg.Species.Formula != c.formula || math.Abs(tg.X-c.x) > 1e-18 {
+			t.Errorf("ParseTarget(%q) = %+v, %v; want %s at %g", c.in, tg, err, c.formula, c.x)
+		}
+	}
+	for in, want := range map[string]string{"SiH4": "SiH4", "nitrous oxide": "N2O", " Nitrous Oxide ": "N2O", "SiH4 50ppm": "SiH4"} {
+		if sp, err := ParseTargetSpecies(cat, in); err != nil || sp.Formula != want {
+			t.Errorf("ParseTargetSpecies(%q) = %v, %v; want %s", in, sp, err, want)
+		}
+	}
+	if _, err := ParseTargetSpecies(cat, "Xq"); err == nil || !strings.Contains(model.UserMessage(err), "unknown species") {
+		t.Errorf("ParseTargetSpecies(Xq): %v", err)
 	}
 }

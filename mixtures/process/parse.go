@@ -61,19 +61,14 @@ func ParseTarget(cat *model.Catalogue, s string) (Target, error) {
 	if err := tooLong("a target", s); err != nil {
 		return Target{}, err
 	}
-	fields := strings.Fields(s)
-	if len(fields) < 2 {
+	name, level, _ := mixtures.SplitSpeciesAmount(s)
+	if level == "" {
 		return Target{}, model.Errorf("process", "target %s: want %s", model.Quote(s), TargetForm)
 	}
-	sp, ok := cat.Lookup(fields[0])
-	if !ok {
-		hint := cat.UnknownHint(fields[0])
-		if hint == "" {
-			hint = "it is not in the catalogue"
-		}
-		return Target{}, model.Errorf("process", "target %s: unknown species %s; %s", model.Quote(s), model.Quote(fields[0]), hint)
+	sp, err := targetSpecies(cat, s, name)
+	if err != nil {
+		return Target{}, err
 	}
-	level := strings.Join(fields[1:], " ")
 	a, err := mixtures.ParseAmount(level)
 	if err != nil {
 		return Target{}, model.Errorf("process", "target %s: %v", model.Quote(s), err)
@@ -170,6 +165,37 @@ func parseSides(s string) (m3 float64, ok bool, err error) {
 		v *= x
 	}
 	return v, true, nil
+}
+
+// ParseTargetSpecies reads the species of a target given with a ratio
+// instead of a level: "SiH4", "nitrous oxide", or a whole target whose
+// level is not used ("SiH4 50ppm").
+func ParseTargetSpecies(cat *model.Catalogue, s string) (*model.Species, error) {
+	if err := tooLong("a target", s); err != nil {
+		return nil, err
+	}
+	name, _, found := mixtures.SplitSpeciesAmount(s)
+	if !found {
+		name = strings.Join(strings.Fields(s), " ") // the species alone, in words or not
+	}
+	if name == "" {
+		return nil, model.Errorf("process", "target %s: want the species, e.g. SiH4", model.Quote(s))
+	}
+	return targetSpecies(cat, s, name)
+}
+
+// targetSpecies looks a target's species up, with the catalogue's hint
+// when it is unknown.
+func targetSpecies(cat *model.Catalogue, target, name string) (*model.Species, error) {
+	sp, ok := cat.Lookup(name)
+	if !ok {
+		hint := cat.UnknownHint(name)
+		if hint == "" {
+			hint = "it is not in the catalogue"
+		}
+		return nil, model.Errorf("process", "target %s: unknown species %s; %s", model.Quote(target), model.Quote(name), hint)
+	}
+	return sp, nil
 }
 
 // ParseEfficiency reads an efficiency as a fraction or a percentage

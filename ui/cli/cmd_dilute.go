@@ -49,9 +49,9 @@ func (a *app) cmdDilute(g *globalOpts, args []string) error {
 		if err != nil || !(r >= 0) || r > 1e12 {
 			return badInput("--ratio %q: want moles of diluent per mole of parent, a number from 0 to 1e12", ratioText)
 		}
-		sp, ok := cat.Lookup(strings.Fields(targetText)[0])
-		if !ok {
-			return badInput("--target %q: unknown species; want a formula such as SiH4", targetText)
+		sp, err := process.ParseTargetSpecies(cat, targetText)
+		if err != nil {
+			return badInput("--target: %v", err)
 		}
 		d.Species, d.Ratio = sp, r
 	default:
