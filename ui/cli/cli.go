@@ -141,12 +141,32 @@ func flagError(fs *flag.FlagSet, err error) error {
 	// The flag package names flags with one dash; zmix documents two.
 	msg := strings.ReplaceAll(err.Error(), "flag -", "flag --")
 	if name, ok := strings.CutPrefix(msg, "flag provided but not defined: "); ok {
-		return badInput("unknown flag --%s; the flags are %s (see %s --help)", strings.TrimLeft(name, "-"), flagList(fs), fs.Name())
+		name = strings.TrimLeft(name, "-")
+		if near := nearFlag(fs, name); near != "" {
+			return badInput("unknown flag --%s; did you mean --%s? The flags are %s (see %s --help)", name, near, flagList(fs), fs.Name())
+		}
+		return badInput("unknown flag --%s; the flags are %s (see %s --help)", name, flagList(fs), fs.Name())
 	}
 	if name, ok := strings.CutPrefix(msg, "flag needs an argument: "); ok {
 		return badInput("flag --%s needs a value (see %s --help)", strings.TrimLeft(name, "-"), fs.Name())
 	}
 	return badInput("%s (see %s --help)", msg, fs.Name())
+}
+
+// nearFlag returns the one flag of fs that name is the start of, or that
+// is the start of name (--to for --to-pres, --temperature for --temp,
+// --step for --steps), or "" when there is not exactly one.
+func nearFlag(fs *flag.FlagSet, name string) string {
+	var near []string
+	fs.VisitAll(func(f *flag.Flag) {
+		if len(name) >= 2 && (strings.HasPrefix(f.Name, name) || strings.HasPrefix(name, f.Name)) {
+			near = append(near, f.Name)
+		}
+	})
+	if len(near) != 1 {
+		return ""
+	}
+	return near[0]
 }
 
 func flagList(fs *flag.FlagSet) string {

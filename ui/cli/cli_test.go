@@ -79,6 +79,8 @@ func TestBadInput(t *testing.T) {
 		{"temperature without unit", append([]string{"state", "--temp", "300", "--pres", "1bar"}, okBlend...), 2, "K, C (°C), F (°F), R (Rankine)"},
 		{"unknown pressure unit", append([]string{"state", "--temp", "300K", "--pres", "3 furlongs"}, okBlend...), 2, "Torr"},
 		{"unknown flag", []string{"state", "--colour"}, 2, "unknown flag --colour; the flags are"},
+		{"flag spelt out", []string{"state", "--temperature", "20C"}, 2, "unknown flag --temperature; did you mean --temp? The flags are"},
+		{"flag cut short", []string{"throttle", "--to", "1bar"}, 2, "unknown flag --to; did you mean --to-pres? The flags are"},
 		{"flag without value", []string{"state", "--blend"}, 2, "flag --blend needs a value"},
 		{"missing blend", []string{"state", "--temp", "300K", "--pres", "1bar"}, 2, "--blend is missing"},
 		{"missing temperature", append([]string{"state", "--pres", "1bar"}, okBlend...), 2, "--temp is missing"},
