@@ -128,6 +128,7 @@ Flags for every command:
 Examples:
   zmix state --blend "N2 78.08%, O2 20.95%, Ar 0.93%, CO2 0.04%" --temp 25C --pres 1atm
   zmix sweep --blend "SiH4 2%, H2 500ppm, N2 bal" --temp 300..900K --pres 2barg --steps 7
+  zmix state --blend "H2O dew -40C, air bal" --temp 25C --pres 8bar
   zmix catalog SF6
 
 Run zmix COMMAND --help for a command's flags. Exit status: 0 done, 1 a file or
