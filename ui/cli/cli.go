@@ -153,10 +153,25 @@ func flagError(fs *flag.FlagSet, err error) error {
 	return badInput("%s (see %s --help)", msg, fs.Name())
 }
 
+// flagSynonyms are other commands' names for a flag, most likely first.
+var flagSynonyms = map[string][]string{
+	"fill":     {"pres"},
+	"to":       {"to-pres", "to-temp"},
+	"to-pres":  {"to"},
+	"pressure": {"pres"},
+}
+
 // nearFlag returns the one flag of fs that name is the start of, or that
 // is the start of name (--to for --to-pres, --temperature for --temp,
 // --step for --steps), or "" when there is not exactly one.
 func nearFlag(fs *flag.FlagSet, name string) string {
+	// Words one command uses for what another calls otherwise: release's
+	// --fill is cylinder's --pres, throttle's --to-pres compress's --to.
+	for _, alt := range flagSynonyms[name] {
+		if fs.Lookup(alt) != nil {
+			return alt
+		}
+	}
 	var near []string
 	fs.VisitAll(func(f *flag.Flag) {
 		if len(name) >= 2 && (strings.HasPrefix(f.Name, name) || strings.HasPrefix(name, f.Name)) {
