@@ -75,13 +75,38 @@ func init() {
 	}
 }
 
+// lookupCommand finds a command by name, in any letter case (State).
 func lookupCommand(name string) (command, bool) {
 	for _, c := range commands {
-		if c.name == name {
+		if strings.EqualFold(c.name, name) {
 			return c, true
 		}
 	}
 	return command{}, false
+}
+
+// nearCommand returns the one command a mistyped name most likely meant:
+// one sharing its first four letters or more (states, dilution,
+// catalogue), or "catalog" for species; "" when there is no one.
+func nearCommand(name string) string {
+	name = strings.ToLower(name)
+	if name == "species" {
+		return "catalog"
+	}
+	var near []string
+	for _, c := range commands {
+		n := 0
+		for n < len(name) && n < len(c.name) && name[n] == c.name[n] {
+			n++
+		}
+		if n >= 4 {
+			near = append(near, c.name)
+		}
+	}
+	if len(near) != 1 {
+		return ""
+	}
+	return near[0]
 }
 
 func commandNames() string {
@@ -110,6 +135,9 @@ func (a *app) run(args []string) int {
 	}
 	c, ok := lookupCommand(rest[0])
 	if !ok {
+		if near := nearCommand(rest[0]); near != "" {
+			return a.fail("zmix", badInput("unknown command %s; did you mean %s? The commands are %s (zmix --help shows them all)", model.Quote(rest[0]), near, commandNames()))
+		}
 		return a.fail("zmix", badInput("unknown command %s; the commands are %s (zmix --help shows them all)", model.Quote(rest[0]), commandNames()))
 	}
 	err = c.run(a, g, rest[1:])
