@@ -120,6 +120,7 @@ func TestBadInput(t *testing.T) {
 		{"command with an s", []string{"states"}, 2, `unknown command "states"; did you mean state? The commands are`},
 		{"command as a noun", []string{"dilution"}, 2, `unknown command "dilution"; did you mean dilute?`},
 		{"species for catalog", []string{"species"}, 2, `unknown command "species"; did you mean catalog?`},
+		{"help on a mistyped command", []string{"help", "states"}, 2, `no help on "states"; did you mean state?`},
 		{"command in capitals", []string{"STATE", "--blend", "N2", "--temp", "300K"}, 2, "zmix state: --pres is missing"},
 		{"unknown catalog species", []string{"catalog", "CO22"}, 2, "did you mean CO2"},
 		{"two catalog species", []string{"catalog", "CO2", "N2"}, 2, "one species at a time"},

@@ -92,6 +92,9 @@ func (a *app) cmdHelp(g *globalOpts, args []string) error {
 		}
 		c, ok := lookupCommand(args[0])
 		if !ok {
+			if near := nearCommand(args[0]); near != "" {
+				return badInput("no help on %s; did you mean %s? The commands are %s", model.Quote(args[0]), near, commandNames())
+			}
 			return badInput("no help on %s; the commands are %s", model.Quote(args[0]), commandNames())
 		}
 		c.usage(a.stdout)
