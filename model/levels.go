@@ -543,18 +543,31 @@ func (lv *rovibLevels) interval(i int) *[18]float64 {
 
 // at returns the three factors' terms at ln T = lnT (≥ ln tableMinK).
 func (lv *rovibLevels) at(lnT float64) (rot, vib, el Terms) {
+	c, s := lv.intervalAt(lnT)
+	invH := lv.table.invH
+	return hermite(c[0:6], s, invH), hermite(c[6:12], s, invH), hermite(c[12:18], s, invH)
+}
+
+// intervalAt returns the coefficients of the interval holding ln T = lnT
+// and the position s ∈ [0, 1] in it.
+func (lv *rovibLevels) intervalAt(lnT float64) (c *[18]float64, s float64) {
 	t := &lv.table
 	u := (lnT - t.x0) * t.invH
 	i := int(u)
 	if i >= t.n {
 		i = t.n - 1
 	}
-	s := u - float64(i)
-	c := t.coef[i].Load()
-	if c == nil {
+	if c = t.coef[i].Load(); c == nil {
 		c = lv.interval(i)
 	}
-	return hermite(c[0:6], s, t.invH), hermite(c[6:12], s, t.invH), hermite(c[12:18], s, t.invH)
+	return c, u - float64(i)
+}
+
+// firstAt is at for a list whose levels all belong to the first factor
+// (a torsion's): the other two quintics are zero and are not evaluated.
+func (lv *rovibLevels) firstAt(lnT float64) Terms {
+	c, s := lv.intervalAt(lnT)
+	return hermite(c[0:6], s, lv.table.invH)
 }
 
 // hermite evaluates one quintic at s ∈ [0, 1] and returns ln q, U and Cv;

@@ -179,9 +179,10 @@ type Species struct {
 	deferredLevels *deferredLevels
 	deferLevels    bool
 	// torsionLevels and vibModesHindered serve the summed levels of a
-	// molecule with torsions: one level list per torsion, and the modes
-	// left harmonic beside them.
-	torsionLevels []*rovibLevels
+	// molecule with torsions: one level list per set of alike torsions
+	// (or ladders), and the modes left harmonic beside them.
+	torsionLevels []torsionSet
+	torsionKeys   []string     // per torsionLevels entry: the constants it holds (addTorsionSet)
 	anharmonicVib *rovibLevels // the anharmonic vibrational levels
 	// anharmonicDeferred, when set, makes them on first use instead.
 	anharmonicDeferred *deferredLevels

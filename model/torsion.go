@@ -1,6 +1,7 @@
 package model
 
 import (
+	"fmt"
 	"math"
 	"slices"
 
@@ -170,21 +171,43 @@ func (tor Torsion) levels() *rovibLevels {
 	return lv
 }
 
-// torsionTerms returns one torsion's terms at T.
+// torsionTerms returns one torsion's terms at T. Its levels are all of
+// the first factor (classRot0), so the table's other two are not read.
 func (lv *rovibLevels) torsionTerms(tempK, lnT float64) Terms {
 	if tempK < lv.tableMinK {
 		t, _, _ := lv.direct(tempK)
 		return t
 	}
 	lv.once.Do(lv.build)
-	t, _, _ := lv.at(lnT)
-	return t
+	return lv.firstAt(lnT)
+}
+
+// torsionSet is the level list of one torsion or ladder, counted as many
+// times as the molecule has torsions alike in every constant (propane's
+// two methyl rotors), so that their sum or table is taken once.
+type torsionSet struct {
+	levels *rovibLevels
+	count  float64
+}
+
+// addTorsionSet counts one more torsion or ladder whose constants key
+// describes: a key seen before adds to its set, a new one makes the
+// level list.
+func (sp *Species) addTorsionSet(key string, levels func() *rovibLevels) {
+	for i := range sp.torsionLevels {
+		if sp.torsionKeys[i] == key {
+			sp.torsionLevels[i].count++
+			return
+		}
+	}
+	sp.torsionKeys = append(sp.torsionKeys, key)
+	sp.torsionLevels = append(sp.torsionLevels, torsionSet{levels: levels(), count: 1})
 }
 
 // prepareTorsions checks the torsions and builds their levels, and the
 // list of vibrational modes that remain harmonic beside them.
 func (sp *Species) prepareTorsions() error {
-	sp.torsionLevels, sp.vibModesHindered, sp.vibReplacedBy = nil, nil, nil
+	sp.torsionLevels, sp.torsionKeys, sp.vibModesHindered, sp.vibReplacedBy = nil, nil, nil, nil
 	if len(sp.Torsions) == 0 && len(sp.Ladders) == 0 {
 		return nil
 	}
@@ -224,7 +247,9 @@ func (sp *Species) prepareTorsions() error {
 		if !take(tor.ReplacesCm, "hindered rotor") {
 			return Errorf("model", "%s: torsion replaces %g cm⁻¹, which vib_cm does not list as a single mode", sp.Formula, tor.ReplacesCm)
 		}
-		sp.torsionLevels = append(sp.torsionLevels, tor.levels())
+		// Every constant but the mode replaced; %v spells a float
+		// exactly, so only equal constants share.
+		sp.addTorsionSet(fmt.Sprintf("torsion %v %v %d %d %v", tor.BarrierCm, tor.FCm, tor.Fold, tor.Symmetry, tor.More), tor.levels)
 	}
 	for _, l := range sp.Ladders {
 		if err := l.check(sp.Formula); err != nil {
@@ -236,7 +261,7 @@ func (sp *Species) prepareTorsions() error {
 		if !take(l.ReplacesCm, "level ladder") {
 			return Errorf("model", "%s: ladder replaces %g cm⁻¹, which vib_cm does not list as a single mode", sp.Formula, l.ReplacesCm)
 		}
-		sp.torsionLevels = append(sp.torsionLevels, l.levels(sp.DissociationCm))
+		sp.addTorsionSet(fmt.Sprintf("ladder %d %v", l.Symmetry, l.LevelsCm), func() *rovibLevels { return l.levels(sp.DissociationCm) })
 	}
 	for _, j := range left {
 		v := sp.Vib[j]
@@ -260,8 +285,12 @@ func (sp *Species) VibReplacedBy(i int) string {
 // hindered rotors and the other modes harmonic.
 func (sp *Species) hinderedVibration(tempK, invT, lnT float64) Terms {
 	t := vibrationOf(sp.vibModesHindered, invT)
-	for _, lv := range sp.torsionLevels {
-		t = t.add(lv.torsionTerms(tempK, lnT))
+	for _, set := range sp.torsionLevels {
+		tt := set.levels.torsionTerms(tempK, lnT)
+		if set.count != 1 {
+			tt = tt.scale(set.count)
+		}
+		t = t.add(tt)
 	}
 	return t
 }

@@ -2,6 +2,7 @@ package model
 
 import (
 	"math"
+	"slices"
 	"strings"
 	"testing"
 
@@ -162,6 +163,55 @@ func TestTorsionBlocksMatchWholeMatrix(t *testing.T) {
 		for i := range want {
 			if math.Abs(got[i]-want[i]) > 1e-9*(1+math.Abs(want[i])) {
 				t.Fatalf("fold %d: eigenvalue %d = %.12g, want %.12g", tor.Fold, i, got[i], want[i])
+			}
+		}
+	}
+}
+
+// Alike torsions share one level list: propane's two methyl rotors are
+// one set counted twice, n-butane's two methyls one and its C–C torsion
+// another, isobutane's three methyls one. The hindered vibration so taken
+// equals the harmonic modes plus each torsion's own list, built apart
+// from the catalogue's sharing, at temperatures below and above each
+// list's table.
+func TestAlikeTorsionsShareLevels(t *testing.T) {
+	cases := []struct {
+		formula string
+		sets    []float64 // the count of each set, in catalogue order
+	}{
+		{"C2H6", []float64{1}},
+		{"C3H8", []float64{2}},
+		{"n-C4H10", []float64{2, 1}},
+		{"i-C4H10", []float64{3}},
+	}
+	for _, c := range cases {
+		sp := mustSpecies(t, c.formula)
+		var counts []float64
+		for _, set := range sp.torsionLevels {
+			counts = append(counts, set.count)
+		}
+		if !slices.Equal(counts, c.sets) {
+			t.Errorf("%s: sets counted %v, want %v", c.formula, counts, c.sets)
+			continue
+		}
+		apart := make([]*rovibLevels, len(sp.Torsions))
+		for i, tor := range sp.Torsions {
+			apart[i] = tor.levels()
+		}
+		for _, tempK := range []float64{0.5, 5, 60, 298.15, 812.5, 3000} {
+			invT, lnT := 1/tempK, math.Log(tempK)
+			want := vibrationOf(sp.vibModesHindered, invT)
+			for _, lv := range apart {
+				want = want.add(lv.torsionTerms(tempK, lnT))
+			}
+			got := sp.hinderedVibration(tempK, invT, lnT)
+			for _, q := range []struct {
+				name      string
+				got, want float64
+			}{{"ln q", got.LnQ, want.LnQ}, {"U", got.U, want.U}, {"Cv", got.Cv, want.Cv}} {
+				if math.Abs(q.got-q.want) > 1e-12*(1+math.Abs(q.want)) {
+					t.Errorf("%s at %g K: %s = %.15g, want %.15g", c.formula, tempK, q.name, q.got, q.want)
+				}
 			}
 		}
 	}
