@@ -281,7 +281,11 @@ func vibrationOf(modes []vibTerm, invT float64) Terms {
 			em = math.Exp(-x)
 			om = 1 - em
 		}
-		prod *= powInt(om, m.nDeg)
+		if m.nDeg == 1 {
+			prod *= om // most modes: no call and no loop
+		} else {
+			prod *= powInt(om, m.nDeg)
+		}
 		r := x / om  // x/(1 − e^{−x})
 		xe := r * em // x/(e^x − 1)
 		u += m.deg * xe
