@@ -122,7 +122,9 @@
 // rotor levels F m² + V0/2 above those that converge, divided by the
 // torsion's symmetry σ_int, energy zero at its lowest level. It is
 // tabulated like the diatomics' sums and booked with vibration.
-// C2H6's threefold methyl torsion is the one listed so far.
+// Torsions alike in every constant (propane's two methyl tops,
+// isobutane's three) share one level list, counted as many times. The
+// catalogue lists them for C2H6, C3H8, C3H6, C2F6 and the butanes.
 //
 // # Anharmonic vibration of polyatomics
 //
