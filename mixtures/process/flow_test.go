@@ -280,3 +280,44 @@ func TestParseTargetNames(t *testing.T) {
 		t.Errorf("ParseTargetSpecies(Xq): %v", err)
 	}
 }
+
+// Every unit of the table reads by the name help gives it, in any case,
+// and the units message and the standard-volume groups name each once.
+func TestRateUnitsListed(t *testing.T) {
+	var all []string
+	for _, b := range []Basis{BasisMolar, BasisMass, BasisActual, BasisStandard} {
+		names := RateUnitNames(b)
+		if len(names) == 0 {
+			t.Errorf("basis %d lists no unit", b)
+		}
+		all = append(all, names...)
+	}
+	if len(all) != len(rateUnits) {
+		t.Errorf("%d units listed by basis, %d in the table", len(all), len(rateUnits))
+	}
+	inGroups := 0
+	for _, g := range StandardUnitGroups() {
+		inGroups += len(g.Names)
+	}
+	if want := len(RateUnitNames(BasisStandard)); inGroups != want {
+		t.Errorf("standard groups hold %d units, want %d", inGroups, want)
+	}
+	words := strings.FieldsFunc(RateUnits, func(r rune) bool { return r == ',' || r == ';' || r == ' ' })
+	for _, name := range all {
+		for _, typed := range []string{"2.5 " + name, "2.5 " + strings.ToLower(name), "2.5" + strings.ToUpper(name)} {
+			r, err := ParseRate(typed)
+			if err != nil || r.Unit.Name != name || r.Value != 2.5 {
+				t.Errorf("ParseRate(%q) = %+v, %v; want 2.5 %s", typed, r, err, name)
+			}
+		}
+		n := 0
+		for _, w := range words {
+			if w == name {
+				n++
+			}
+		}
+		if n != 1 {
+			t.Errorf("RateUnits names %s %d times, want once: %s", name, n, RateUnits)
+		}
+	}
+}

@@ -1,6 +1,7 @@
 package process
 
 import (
+	"slices"
 	"strconv"
 	"strings"
 	"unicode/utf8"
@@ -117,45 +118,98 @@ const (
 	pound     = 0.45359237               // kg, exact
 )
 
-// rateUnits are the accepted flow units, by lower-case spelling.
-var rateUnits = map[string]RateUnit{
-	"mol/s":   {Name: "mol/s", Basis: BasisMolar, SI: 1},
-	"mol/min": {Name: "mol/min", Basis: BasisMolar, SI: perMinute},
-	"mol/h":   {Name: "mol/h", Basis: BasisMolar, SI: perHour},
-	"kmol/h":  {Name: "kmol/h", Basis: BasisMolar, SI: 1000 * perHour},
-	"kmol/s":  {Name: "kmol/s", Basis: BasisMolar, SI: 1000},
-	"kg/s":    {Name: "kg/s", Basis: BasisMass, SI: 1},
-	"kg/h":    {Name: "kg/h", Basis: BasisMass, SI: perHour},
-	"kg/min":  {Name: "kg/min", Basis: BasisMass, SI: perMinute},
-	"t/h":     {Name: "t/h", Basis: BasisMass, SI: 1000 * perHour},
-	"g/s":     {Name: "g/s", Basis: BasisMass, SI: 1e-3},
-	"g/min":   {Name: "g/min", Basis: BasisMass, SI: 1e-3 * perMinute},
-	"lb/h":    {Name: "lb/h", Basis: BasisMass, SI: pound * perHour},
-	"lb/min":  {Name: "lb/min", Basis: BasisMass, SI: pound * perMinute},
-	"m3/s":    {Name: "m3/s", Basis: BasisActual, SI: 1},
-	"m3/h":    {Name: "m3/h", Basis: BasisActual, SI: perHour},
-	"m3/min":  {Name: "m3/min", Basis: BasisActual, SI: perMinute},
-	"l/min":   {Name: "L/min", Basis: BasisActual, SI: 1e-3 * perMinute},
-	"l/s":     {Name: "L/s", Basis: BasisActual, SI: 1e-3},
-	"acfm":    {Name: "ACFM", Basis: BasisActual, SI: cubicFoot * perMinute},
-	"acfh":    {Name: "ACFH", Basis: BasisActual, SI: cubicFoot * perHour},
-	"nm3/h":   {Name: "Nm3/h", Basis: BasisStandard, SI: perHour, Ref: &RefNormal, RefSet: true},
-	"nm3/s":   {Name: "Nm3/s", Basis: BasisStandard, SI: 1, Ref: &RefNormal, RefSet: true},
-	"nm3/min": {Name: "Nm3/min", Basis: BasisStandard, SI: perMinute, Ref: &RefNormal, RefSet: true},
-	"nm3/d":   {Name: "Nm3/d", Basis: BasisStandard, SI: perDay, Ref: &RefNormal, RefSet: true},
-	"sm3/h":   {Name: "Sm3/h", Basis: BasisStandard, SI: perHour, Ref: &RefISO},
-	"sm3/s":   {Name: "Sm3/s", Basis: BasisStandard, SI: 1, Ref: &RefISO},
-	"sm3/d":   {Name: "Sm3/d", Basis: BasisStandard, SI: perDay, Ref: &RefISO},
-	"slpm":    {Name: "SLPM", Basis: BasisStandard, SI: 1e-3 * perMinute, Ref: &RefNormal},
-	"slm":     {Name: "slm", Basis: BasisStandard, SI: 1e-3 * perMinute, Ref: &RefNormal}, // the fab's spelling of SLPM
-	"sccm":    {Name: "sccm", Basis: BasisStandard, SI: 1e-6 * perMinute, Ref: &RefNormal},
-	"scfh":    {Name: "SCFH", Basis: BasisStandard, SI: cubicFoot * perHour, Ref: &Ref60F, RefSet: true},
-	"scfm":    {Name: "SCFM", Basis: BasisStandard, SI: cubicFoot * perMinute, Ref: &Ref60F, RefSet: true},
-	"mmscfd":  {Name: "MMSCFD", Basis: BasisStandard, SI: 1e6 * cubicFoot * perDay, Ref: &Ref60F, RefSet: true},
+// rateUnitList holds the accepted flow units, in the order help and
+// messages list them; rateUnits finds them by lower-case spelling.
+var rateUnitList = []RateUnit{
+	{Name: "mol/s", Basis: BasisMolar, SI: 1},
+	{Name: "mol/min", Basis: BasisMolar, SI: perMinute},
+	{Name: "mol/h", Basis: BasisMolar, SI: perHour},
+	{Name: "kmol/h", Basis: BasisMolar, SI: 1000 * perHour},
+	{Name: "kmol/s", Basis: BasisMolar, SI: 1000},
+	{Name: "kg/s", Basis: BasisMass, SI: 1},
+	{Name: "kg/min", Basis: BasisMass, SI: perMinute},
+	{Name: "kg/h", Basis: BasisMass, SI: perHour},
+	{Name: "t/h", Basis: BasisMass, SI: 1000 * perHour},
+	{Name: "g/s", Basis: BasisMass, SI: 1e-3},
+	{Name: "g/min", Basis: BasisMass, SI: 1e-3 * perMinute},
+	{Name: "lb/h", Basis: BasisMass, SI: pound * perHour},
+	{Name: "lb/min", Basis: BasisMass, SI: pound * perMinute},
+	{Name: "m3/s", Basis: BasisActual, SI: 1},
+	{Name: "m3/min", Basis: BasisActual, SI: perMinute},
+	{Name: "m3/h", Basis: BasisActual, SI: perHour},
+	{Name: "L/s", Basis: BasisActual, SI: 1e-3},
+	{Name: "L/min", Basis: BasisActual, SI: 1e-3 * perMinute},
+	{Name: "ACFM", Basis: BasisActual, SI: cubicFoot * perMinute},
+	{Name: "ACFH", Basis: BasisActual, SI: cubicFoot * perHour},
+	{Name: "Nm3/s", Basis: BasisStandard, SI: 1, Ref: &RefNormal, RefSet: true},
+	{Name: "Nm3/min", Basis: BasisStandard, SI: perMinute, Ref: &RefNormal, RefSet: true},
+	{Name: "Nm3/h", Basis: BasisStandard, SI: perHour, Ref: &RefNormal, RefSet: true},
+	{Name: "Nm3/d", Basis: BasisStandard, SI: perDay, Ref: &RefNormal, RefSet: true},
+	{Name: "SCFM", Basis: BasisStandard, SI: cubicFoot * perMinute, Ref: &Ref60F, RefSet: true},
+	{Name: "SCFH", Basis: BasisStandard, SI: cubicFoot * perHour, Ref: &Ref60F, RefSet: true},
+	{Name: "MMSCFD", Basis: BasisStandard, SI: 1e6 * cubicFoot * perDay, Ref: &Ref60F, RefSet: true},
+	{Name: "Sm3/s", Basis: BasisStandard, SI: 1, Ref: &RefISO},
+	{Name: "Sm3/h", Basis: BasisStandard, SI: perHour, Ref: &RefISO},
+	{Name: "Sm3/d", Basis: BasisStandard, SI: perDay, Ref: &RefISO},
+	{Name: "SLPM", Basis: BasisStandard, SI: 1e-3 * perMinute, Ref: &RefNormal},
+	{Name: "slm", Basis: BasisStandard, SI: 1e-3 * perMinute, Ref: &RefNormal}, // the fab's spelling of SLPM
+	{Name: "sccm", Basis: BasisStandard, SI: 1e-6 * perMinute, Ref: &RefNormal},
 }
 
-// RateUnits lists the accepted flow units, for messages and help.
-const RateUnits = "mol/s, mol/min, mol/h, kmol/h; kg/s, kg/min, kg/h, t/h, g/s, g/min, lb/h, lb/min; actual m3/s, m3/min, m3/h, L/min, L/s, ACFM, ACFH; standard Nm3/h, Nm3/min, Nm3/d, Sm3/h, Sm3/d, SLPM (slm), sccm, SCFH, SCFM, MMSCFD; /hr reads as /h"
+var rateUnits = func() map[string]RateUnit {
+	m := make(map[string]RateUnit, len(rateUnitList))
+	for _, u := range rateUnitList {
+		m[strings.ToLower(u.Name)] = u
+	}
+	return m
+}()
+
+// RateUnitNames returns the names of the flow units of one basis, in
+// the order help lists them.
+func RateUnitNames(b Basis) []string {
+	var names []string
+	for _, u := range rateUnitList {
+		if u.Basis == b {
+			names = append(names, u.Name)
+		}
+	}
+	return names
+}
+
+// RateUnits lists the accepted flow units, for messages.
+var RateUnits = strings.Join([]string{
+	strings.Join(RateUnitNames(BasisMolar), ", "),
+	strings.Join(RateUnitNames(BasisMass), ", "),
+	"actual " + strings.Join(RateUnitNames(BasisActual), ", "),
+	"standard " + strings.Join(RateUnitNames(BasisStandard), ", "),
+	"/hr reads as /h",
+}, "; ")
+
+// StandardUnitGroups returns the standard-volume units grouped by their
+// reference, in list order, and whether the name fixes the reference
+// (Nm3, SCF) or only gives the default that --ref may change (SLPM, Sm3).
+func StandardUnitGroups() []StandardUnitGroup {
+	var groups []StandardUnitGroup
+	for _, u := range rateUnitList {
+		if u.Basis != BasisStandard {
+			continue
+		}
+		i := slices.IndexFunc(groups, func(g StandardUnitGroup) bool { return g.Ref == *u.Ref && g.Fixed == u.RefSet })
+		if i < 0 {
+			groups = append(groups, StandardUnitGroup{Ref: *u.Ref, Fixed: u.RefSet})
+			i = len(groups) - 1
+		}
+		groups[i].Names = append(groups[i].Names, u.Name)
+	}
+	return groups
+}
+
+// StandardUnitGroup is the standard-volume units that share a reference.
+type StandardUnitGroup struct {
+	Names []string
+	Ref   Reference
+	Fixed bool // fixed by the unit's name; otherwise the default --ref may change
+}
 
 // Rate is a parsed flow with its unit.
 type Rate struct {

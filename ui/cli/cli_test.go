@@ -12,11 +12,13 @@ import (
 	"math/rand/v2"
 	"os"
 	"path/filepath"
+	"slices"
 	"strings"
 	"testing"
 	"unicode/utf8"
 
 	"zmix/mixtures"
+	"zmix/mixtures/process"
 	"zmix/mixtures/report"
 	"zmix/model"
 	"zmix/ui"
@@ -561,6 +563,17 @@ func TestHelp(t *testing.T) {
 	for _, unit := range []string{mixtures.TemperatureUnits, mixtures.PressureUnits, "Pa, hPa, kPa, MPa, GPa, bar, mbar, atm, Torr, mmHg, inHg, psi, kgf/cm2", "psia", "bara", "kPag", "MPag", "barg", "psig", "kgf/cm2g", "bar(g)"} {
 		if !strings.Contains(flat, unit) {
 			t.Errorf("state --help lacks the units %q", unit)
+		}
+	}
+	// And flow --help every flow unit, from the process package's table
+	// (t/h, MMSCFD and slm were read but not listed).
+	_, stdout, _ = zmix(t, "flow", "--help")
+	words := strings.FieldsFunc(stdout, func(r rune) bool { return r == ',' || r == ' ' || r == '\n' })
+	for _, b := range []process.Basis{process.BasisMolar, process.BasisMass, process.BasisActual, process.BasisStandard} {
+		for _, unit := range process.RateUnitNames(b) {
+			if !slices.Contains(words, unit) {
+				t.Errorf("flow --help lacks the unit %s", unit)
+			}
 		}
 	}
 }

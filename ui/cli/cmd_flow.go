@@ -1,9 +1,12 @@
 package cli
 
 import (
+	"fmt"
 	"io"
+	"strings"
 
 	"zmix/mixtures/process"
+	"zmix/mixtures/report"
 )
 
 func (a *app) cmdFlow(g *globalOpts, args []string) error {
@@ -68,13 +71,40 @@ func (a *app) cmdFlow(g *globalOpts, args []string) error {
 	return a.printProcess(src.label(), res, cmd.out, g.ascii)
 }
 
-const rateHelp = `Rates: "VALUE UNIT"
-  molar     mol/s, mol/min, mol/h, kmol/h
-  mass      kg/s, kg/h, g/s, g/min, lb/h, lb/min
-  actual    m3/s, m3/h, L/min, L/s, ACFM, ACFH (at the line's T and P)
-  standard  Nm3/h (0 °C), SCFH and SCFM (60 °F, 14.696 psia): fixed by name;
-            SLPM and sccm (0 °C unless --ref), Sm3/h (15 °C unless --ref)
-`
+// rateHelp lists the flow units from the process package's table, the
+// standard volumes grouped by the reference their name fixes or defaults
+// to, so that a unit added there is listed here too.
+var rateHelp = func() string {
+	var b strings.Builder
+	b.WriteString("Rates: \"VALUE UNIT\"\n")
+	row := func(head, text string) {
+		for i, line := range report.Wrap(text, 66) {
+			if i > 0 {
+				head = ""
+			}
+			fmt.Fprintf(&b, "  %-10s%s\n", head, line)
+		}
+	}
+	row("molar", strings.Join(process.RateUnitNames(process.BasisMolar), ", "))
+	row("mass", strings.Join(process.RateUnitNames(process.BasisMass), ", "))
+	row("actual", strings.Join(process.RateUnitNames(process.BasisActual), ", ")+" (at the line's T and P)")
+	groups := process.StandardUnitGroups()
+	for _, fixed := range []bool{true, false} {
+		if fixed {
+			row("standard", "tied to a reference by the name:")
+		} else {
+			row("", "at a reference --ref may change, by default:")
+		}
+		for _, g := range groups {
+			if g.Fixed == fixed {
+				_, cond, _ := strings.Cut(g.Ref.Label, ": ")
+				fmt.Fprintf(&b, "%12s%-30s %s\n", "", strings.Join(g.Names, ", "), cond)
+			}
+		}
+	}
+	row("", "/hr reads as /h (lb/hr, Nm3/hr)")
+	return b.String()
+}()
 
 const referenceHelp = `References (--ref): normal (0 °C, 101.325 kPa), 15C (15 °C, 101.325 kPa,
   ISO 13443), 20C (20 °C, 101.325 kPa), 60F (60 °F, 14.696 psia), or any
