@@ -368,7 +368,7 @@ func ParseCylinderQuantity(kind, text string) (float64, error) {
 		if err != nil {
 			return 0, err
 		}
-		if !(kg > 0) || kg > 1e9 {
+		if !(kg > 0) {
 			return 0, model.Errorf("process", "mass %s: want a number above 0 and at most 1e9 kg", model.Quote(text))
 		}
 		return kg, nil

@@ -34,8 +34,14 @@ const (
 	WeighedMassUnits = MassUnits
 )
 
-// parseMassKg reads a mass with its unit ("2.5 mg", "25.103g") in kg,
-// any finite number; the callers bound it.
+// MaxMassKg bounds every mass read, as volumes and rates are bounded:
+// far beyond any cylinder, trailer or weighing, so that a slip of the
+// exponent (1e308 g) is refused rather than carried into an overflow of
+// the uncertainty sums.
+const MaxMassKg = 1e9
+
+// parseMassKg reads a mass with its unit ("2.5 mg", "25.103g") in kg, of
+// size at most MaxMassKg; the callers bound its sign.
 func parseMassKg(s string) (float64, error) {
 	if err := tooLongN("a mass", s, maxInputChars); err != nil {
 		return 0, err
@@ -51,6 +57,9 @@ func parseMassKg(s string) (float64, error) {
 	kg := x * scale
 	if math.IsNaN(kg) || math.IsInf(kg, 0) {
 		return 0, model.Errorf("process", "mass %s: want a number and a unit (%s), e.g. 25.103 g", model.Quote(s), MassUnits)
+	}
+	if math.Abs(kg) > MaxMassKg {
+		return 0, model.Errorf("process", "mass %s: want at most 1e9 kg", model.Quote(s))
 	}
 	return kg, nil
 }

@@ -323,6 +323,11 @@ func TestParseParent(t *testing.T) {
 		{"25 g ± CO2", "± must be followed by a mass"},
 		{"25 g N2 with O2 <0ppm", "limit must be above 0"},
 		{"25 g " + strings.Repeat("N2 ", 400), "at most"},
+		// A slip of the exponent: two such parents overflowed the
+		// uncertainty sums (found by FuzzParseParent).
+		{"1e308g N2", "at most 1e9 kg"},
+		{"25 g ± 1e10 t N2", "unknown unit"},
+		{"25 g ± 2e12 kg N2", "at most 1e9 kg"},
 	} {
 		_, err := ParseParent(cat, tt.in)
 		if err == nil || !strings.Contains(err.Error(), tt.want) {

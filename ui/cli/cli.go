@@ -159,6 +159,7 @@ var flagSynonyms = map[string][]string{
 	"to":       {"to-pres", "to-temp"},
 	"to-pres":  {"to"},
 	"pressure": {"pres"},
+	"parent":   {"add"}, // weighed: each parent gas is an --add
 }
 
 // nearFlag returns the one flag of fs that name is the start of, or that

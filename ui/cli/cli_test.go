@@ -85,6 +85,7 @@ func TestBadInput(t *testing.T) {
 		{"flag cut short", []string{"throttle", "--to", "1bar"}, 2, "unknown flag --to; did you mean --to-pres? The flags are"},
 		{"another command's flag", []string{"cylinder", "--fill", "200bar"}, 2, "unknown flag --fill; did you mean --pres? The flags are"},
 		{"another command's flag, the other way", []string{"compress", "--to-pres", "5bar"}, 2, "unknown flag --to-pres; did you mean --to? The flags are"},
+		{"the weighing's word for --add", []string{"weighed", "--parent", "5 g N2"}, 2, "unknown flag --parent; did you mean --add? The flags are"},
 		{"flag without value", []string{"state", "--blend"}, 2, "flag --blend needs a value"},
 		{"missing blend", []string{"state", "--temp", "300K", "--pres", "1bar"}, 2, "--blend is missing"},
 		{"missing temperature", append([]string{"state", "--pres", "1bar"}, okBlend...), 2, "--temp is missing"},
