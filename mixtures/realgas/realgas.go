@@ -422,11 +422,14 @@ func (m *Mixture) Eval(r *Result, tempK, presPa, cpIdealJPerMolK float64) {
 		r.HResJPerMol = presPa * (b - tempK*db)
 		r.SResJPerMolK = -presPa * db
 		cp := cpIdealJPerMolK - presPa*tempK*d2b
-		// V = RT/P + B: (∂P/∂V)_T = −P²/(RT), (∂P/∂T)_V = P/T + P² B'/(RT).
-		dPdV := -presPa * presPa / rt
-		dPdT := presPa/tempK + presPa*presPa*db/rt
-		cv := cp + tempK*dPdT*dPdT/dPdV
-		m.finish(r, tempK, v, cp, cv, dPdV)
+		// V = RT/P + B: (∂P/∂V)_T = −P²/(RT) and (∂P/∂T)_V =
+		// (P/T)(1 + P B'/R), so T (∂P/∂T)²/(∂P/∂V) = −R (1 + P B'/R)² and
+		// V² (∂P/∂V)_T = −Z²RT. Taken so, with P cancelled, nothing
+		// underflows at the lowest pressures the engine accepts, where P²
+		// would (below 1e-154 Pa) and turn Cv and c into 0/0.
+		f := 1 + presPa*db/rg
+		cv := cp - rg*f*f
+		m.finish(r, cp, cv, -z*z*rt)
 		r.JouleThomsonKPerPa = (tempK*db - b) / cp
 		m.checkRange(r, tempK, presPa)
 		return
@@ -436,10 +439,11 @@ func (m *Mixture) Eval(r *Result, tempK, presPa, cpIdealJPerMolK float64) {
 	m.checkRange(r, tempK, presPa)
 }
 
-// finish sets the figures common to both models.
-func (m *Mixture) finish(r *Result, tempK, v, cp, cv, dPdV float64) {
+// finish sets the figures common to both models, given v2dPdV =
+// V² (∂P/∂V)_T: c² = −V² (∂P/∂V)_T γ / M.
+func (m *Mixture) finish(r *Result, cp, cv, v2dPdV float64) {
 	r.CpJPerMolK, r.CvJPerMolK = cp, cv
-	c2 := -v * v / m.massKg * cp / cv * dPdV
+	c2 := -v2dPdV / m.massKg * cp / cv
 	r.SoundSpeedMPerS = math.Sqrt(c2)
 }
 
@@ -479,7 +483,7 @@ func (m *Mixture) pengRobinson(r *Result, sp []species, tempK, presPa, cpIdeal, 
 	dPdT := rg/(v-bm) - da/den
 	dPdV := -rt/((v-bm)*(v-bm)) + 2*a*(v+bm)/(den*den)
 	cp := cv - tempK*dPdT*dPdT/dPdV
-	m.finish(r, tempK, v, cp, cv, dPdV)
+	m.finish(r, cp, cv, v*v*dPdV)
 	r.JouleThomsonKPerPa = -(tempK*dPdT/dPdV + v) / cp
 	// A liquid-like root, or a dense state below the pseudo-critical
 	// temperature, is a liquid: no gas model here describes it.

@@ -128,6 +128,25 @@ func TestIdealLimit(t *testing.T) {
 	}
 }
 
+// TestIdealLimitFarBelow: at the lowest pressures the engine accepts
+// the figures stay finite and are the ideal gas's, Cv = Cp° − R and
+// c = √(γRT/M), where P² underflows (it turned Cv and c into 0/0 below
+// about 1e-154 Pa).
+func TestIdealLimitFarBelow(t *testing.T) {
+	rg := model.GasConstant
+	for _, f := range []string{"N2", "NH3", "SF6"} {
+		m := pure(t, f)
+		cIdeal := math.Sqrt(cpIdeal / (cpIdeal - rg) * rg * 300 / m.massKg)
+		for _, presPa := range []float64{1e-160, 1e-250, 1e-300, 5e-324} {
+			var r Result
+			m.Eval(&r, 300, presPa, cpIdeal)
+			if r.Z != 1 || math.Abs(r.CvJPerMolK-(cpIdeal-rg)) > 1e-12 || math.Abs(r.SoundSpeedMPerS/cIdeal-1) > 1e-12 {
+				t.Errorf("%s at %g Pa: Z %g, Cv %g (want %g), c %g (want %g)", f, presPa, r.Z, r.CvJPerMolK, cpIdeal-rg, r.SoundSpeedMPerS, cIdeal)
+			}
+		}
+	}
+}
+
 // TestIdentities checks each model's departures against each other by
 // finite differences: Cp − Cp° = ∂Hres/∂T at P, Sres consistent with
 // Hres through ∂(Gres/RT)/∂T = −Hres/(RT²), and μJT = −(∂H/∂P)_T/Cp.
