@@ -450,6 +450,10 @@ func parseAmount(s string) (Amount, *BlendError) {
 		a = Amount{MassFraction, x}
 	case "wt%", "wt %", "mass%", "mass %", "%wt":
 		a = Amount{MassFraction, x / 100}
+	case "ppt", "pptv":
+		// Parts per trillion to a gas analyst, per thousand to others:
+		// neither is guessed.
+		return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %s: ppt reads as parts per trillion or per thousand; write ppb for the one (1 ppt = 0.001 ppb) or %% for the other (1 ppt = 0.1 %%)", model.Quote(s))}
 	default:
 		if why := ambiguousPressureUnit(typedUnit); why != "" {
 			return Amount{}, &BlendError{Err: ErrSyntax, Detail: fmt.Sprintf("amount %s: %s", model.Quote(s), why)}

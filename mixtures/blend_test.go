@@ -244,6 +244,10 @@ func TestBlendErrors(t *testing.T) {
 		{"detection limit", "O2 <5ppm, N2 bal", 1e5, ErrSyntax, "O2 <5ppm", `e.g. "5ppm" for the most there can be`},
 		{"uncertainty", "O2 5ppm ±1ppm, N2 bal", 1e5, ErrSyntax, "O2 5ppm ±1ppm", `give the value alone ("5ppm")`},
 		{"ASCII uncertainty", "O2 5 ppm +/- 1 ppm, N2 bal", 1e5, ErrSyntax, "O2 5 ppm +/- 1 ppm", `give the value alone ("5 ppm")`},
+		// ppt: per trillion in a purity specification, per thousand
+		// elsewhere; not guessed.
+		{"ppt", "H2O 100 ppt, N2 bal", 1e5, ErrSyntax, "H2O 100 ppt", "1 ppt = 0.001 ppb"},
+		{"pptv", "H2O 100pptv, N2 bal", 1e5, ErrSyntax, "H2O 100pptv", "parts per trillion or per thousand"},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {

@@ -490,7 +490,7 @@ func (p *processPane) calculate() (process.Result, string, error) {
 		}
 		if ratio := p.value("ratio"); ratio != "" {
 			r, err := strconv.ParseFloat(ratio, 64)
-			if err != nil || !(r >= 0) || r > 1e12 {
+			if err != nil || !(r >= 0) || r > process.MaxDilutionRatio {
 				return nil, "", fieldError("ratio", errText("want moles of diluent per mole of recipe, a number from 0 to 1e12"))
 			}
 			sp, err := process.ParseTargetSpecies(p.c.Catalogue, target)

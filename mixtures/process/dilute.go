@@ -1,7 +1,7 @@
 package process
 
 import (
-	"math"
+	"strconv"
 
 	"zmix/mixtures"
 	"zmix/model"
@@ -66,6 +66,12 @@ var (
 var slpmPerMolS = 60e3 * model.GasConstant * model.ZeroCelsiusK / model.StdPressureAtmPa
 
 // Solve finds the ratio for the target, or the level for the ratio.
+// MaxDilutionRatio bounds the moles of diluent per mole of parent, given
+// or solved for: 1 ppt made from a pure gas is 1e12, so that a larger
+// ratio is a slip (a target of 1e-300 ppb), refused before it overflows
+// the mixture's amounts.
+const MaxDilutionRatio = 1e12
+
 func (d Dilution) Solve() (*DilutionResult, error) {
 	if d.Parent == nil || d.Diluent == nil || d.Species == nil {
 		return nil, model.Errorf("process", "dilution: want a parent, a diluent and a species")
@@ -86,10 +92,19 @@ func (d Dilution) Solve() (*DilutionResult, error) {
 		} else {
 			r.Ratio = (xp - xt) / (xt - xd)
 		}
-	case d.Ratio >= 0 && !math.IsInf(d.Ratio, 0) && d.Ratio == d.Ratio:
+	case d.Ratio >= 0 && d.Ratio <= MaxDilutionRatio:
 		r.Ratio = d.Ratio
 	default:
-		return nil, model.Errorf("process", "dilution ratio %g: want a finite number of 0 or more (moles of diluent per mole of parent)", d.Ratio)
+		return nil, model.Errorf("process", "dilution ratio %g: want a number from 0 to 1e12 (moles of diluent per mole of parent)", d.Ratio)
+	}
+	if r.Ratio > MaxDilutionRatio {
+		need := "more than 1e300"
+		if r.Ratio < 1e300 {
+			need = strconv.FormatFloat(r.Ratio, 'g', 3, 64)
+		}
+		return nil, model.Errorf("process",
+			"diluting %s so needs %s moles of diluent per mole of parent, beyond the 1e12 zmix computes (1 ppt made from a pure gas); want a higher target level or a smaller ratio",
+			name, need)
 	}
 	r.LevelX = (xp + r.Ratio*xd) / (1 + r.Ratio)
 	r.Factor = 1 + r.Ratio

@@ -338,6 +338,23 @@ func TestDilutionRoundTrip(t *testing.T) {
 	if _, err := (Dilution{Parent: parent, Diluent: n2, Species: sih4, TargetX: 0.05}).Solve(); err == nil {
 		t.Error("a target above the parent's level: want an error")
 	}
+	// 1 ppt from pure silane is a ratio just under MaxDilutionRatio; a
+	// level far below (1e-300 ppb overflowed the ratio into the
+	// mixture's amounts) and a ratio above it are refused.
+	pure := mixOf(t, "SiH4 1")
+	if r, err := (Dilution{Parent: pure, Diluent: n2, Species: sih4, TargetX: 1e-12}).Solve(); err != nil || !within(r.LevelX, 1e-12, 1e-24) {
+		t.Errorf("1 ppt from pure SiH4: %v", err)
+	}
+	for _, d := range []Dilution{
+		{Parent: pure, Diluent: n2, Species: sih4, TargetX: 1e-309},
+		{Parent: pure, Diluent: n2, Species: sih4, TargetX: 1e-14},
+		{Parent: pure, Diluent: n2, Species: sih4, Ratio: 2e12},
+		{Parent: pure, Diluent: n2, Species: sih4, Ratio: math.Inf(1)},
+	} {
+		if _, err := d.Solve(); err == nil || !strings.Contains(err.Error(), "1e12") {
+			t.Errorf("target %g, ratio %g: %v, want an error naming the 1e12 bound", d.TargetX, d.Ratio, err)
+		}
+	}
 }
 
 // The gas correction factor against the common published table of N2-

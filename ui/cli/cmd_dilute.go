@@ -46,7 +46,7 @@ func (a *app) cmdDilute(g *globalOpts, args []string) error {
 		return badInput("--target is missing; give %s", process.TargetForm)
 	case ratioText != "":
 		r, err := strconv.ParseFloat(strings.TrimSpace(ratioText), 64)
-		if err != nil || !(r >= 0) || r > 1e12 {
+		if err != nil || !(r >= 0) || r > process.MaxDilutionRatio {
 			return badInput("--ratio %q: want moles of diluent per mole of parent, a number from 0 to 1e12", ratioText)
 		}
 		sp, err := process.ParseTargetSpecies(cat, targetText)
