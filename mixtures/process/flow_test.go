@@ -97,6 +97,7 @@ func TestParseErrors(t *testing.T) {
 		{"target unknown", "Xx 1ppm", "unknown species", func(s string) error { _, err := ParseTarget(cat, s); return err }},
 		{"target mass", "O2 1 wt%", "by moles", func(s string) error { _, err := ParseTarget(cat, s); return err }},
 		{"target zero", "O2 0ppm", "never reached", func(s string) error { _, err := ParseTarget(cat, s); return err }},
+		{"target below 1 ppt", "O2 1e-300 ppb", "below 1e-12", func(s string) error { _, err := ParseTarget(cat, s); return err }},
 		{"reference", "tuesday", "normal", func(s string) error { _, err := ParseReference(s); return err }},
 	}
 	for _, c := range cases {

@@ -54,7 +54,13 @@ type Target struct {
 }
 
 // TargetForm says how a target is written, for messages.
-const TargetForm = `"SPECIES LEVEL" with LEVEL a mole fraction, %, ppm or ppb above zero, e.g. "O2 10ppm"`
+const TargetForm = `"SPECIES LEVEL" with LEVEL a mole fraction, %, ppm or ppb, of 0.001 ppb or more, e.g. "O2 10ppm"`
+
+// MinTargetLevel is the lowest target level read, 1 part per trillion:
+// below the purities gas lines are specified to, and far enough above
+// the smallest float that no purge count or dilution ratio overflows (a
+// target of 1e-300 ppb made either infinite).
+const MinTargetLevel = 1e-12
 
 // ParseTarget reads "SPECIES LEVEL", looking the species up in cat.
 func ParseTarget(cat *model.Catalogue, s string) (Target, error) {
@@ -78,6 +84,9 @@ func ParseTarget(cat *model.Catalogue, s string) (Target, error) {
 	}
 	if !(a.Value > 0 && a.Value < 1) {
 		return Target{}, model.Errorf("process", "target %s: a level of %g is never reached; want %s", model.Quote(s), a.Value, TargetForm)
+	}
+	if a.Value < MinTargetLevel {
+		return Target{}, model.Errorf("process", "target %s: a level below 1e-12 (0.001 ppb) is beyond what zmix computes; want %s", model.Quote(s), TargetForm)
 	}
 	return Target{Species: sp, X: a.Value, Text: strings.TrimSpace(s)}, nil
 }
