@@ -454,12 +454,22 @@ func (r *Result) OxVerdict() string {
 	return fmt.Sprintf("not more oxidizing than air, sum of xi*Ci = %.3g <= 0.235", r.OxSum)
 }
 
+// maxShownLC50PPM is the largest blend LC50 ToxVerdict prints: a
+// million times the undiluted blend.
+const maxShownLC50PPM = 1e12
+
 // ToxVerdict is the GHS result in words.
 func (r *Result) ToxVerdict() string {
 	if !r.LC50Known {
 		return "not known: no LC50 for " + strings.Join(r.NoLC50, ", ")
 	}
-	s := "LC50 of the blend " + ppm(r.LC50PPM) + " ppm (4 h)"
+	lc := ppm(r.LC50PPM)
+	if !(r.LC50PPM <= maxShownLC50PPM) {
+		// A trace of a toxic gas (1e-300 ppm) gives an LC50 past any
+		// number worth printing, or past the floats.
+		lc = "above 1e12"
+	}
+	s := "LC50 of the blend " + lc + " ppm (4 h)"
 	if r.Category > 0 {
 		s += fmt.Sprintf(", Category %d", r.Category)
 	} else {

@@ -213,6 +213,12 @@ func TestGHSAdditivity(t *testing.T) {
 	if !near(r.LC50PPM, 11720, 1e-9) || !near(r.UnknownToxPct, 20, 1e-9) || !strings.Contains(r.ToxVerdict(), "unknown acute toxicity") {
 		t.Errorf("NO + Cl2: LC50 %g, unknown %g %%, %q", r.LC50PPM, r.UnknownToxPct, r.ToxVerdict())
 	}
+	// A trace so small that 100/Σ overflows: not classified, and the
+	// verdict prints no infinite number.
+	r = Classify(blend(t, "NH3", 1e-310, "N2", 1.0))
+	if r.Category != 0 || strings.Contains(r.ToxVerdict(), "Inf") || !strings.Contains(r.ToxVerdict(), "above 1e12 ppm") {
+		t.Errorf("a trace of NH3: category %d, %q", r.Category, r.ToxVerdict())
+	}
 	// No toxic component: nothing to classify.
 	r = Classify(blend(t, "N2", 1.0))
 	if r.LC50Known || r.Category != 0 || len(r.Sources) != 0 {
