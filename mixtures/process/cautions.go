@@ -2,6 +2,7 @@ package process
 
 import (
 	"fmt"
+	"strings"
 
 	"zmix/mixtures"
 	"zmix/model"
@@ -27,7 +28,9 @@ func temperatureCautions(mix *mixtures.Mixture, tempK float64, where string) []m
 			where, mixtures.KelvinToCelsius(tempK))})
 		// A flammable gas made hot: against its autoignition temperature
 		// where the catalogue has one, else a reminder to look it up.
-		var unknown []string
+		// One caution for every species above its autoignition
+		// temperature, each named with its figure and source.
+		var unknown, above, figures []string
 		for _, c := range mix.Components {
 			sp := c.Species
 			if sp.Hazards&(model.Flammable|model.Pyrophoric) == 0 {
@@ -42,10 +45,14 @@ func temperatureCautions(mix *mixtures.Mixture, tempK float64, where string) []m
 				if src == "" {
 					src = "the catalogue"
 				}
-				out = append(out, mixtures.Caution{Title: "Above autoignition", Species: []string{sp.Formula}, Text: fmt.Sprintf(
-					"the %s, %.4g °C, is at or above the autoignition temperature in air of %s, %.4g °C (%s): any air let in can ignite it without a spark.",
-					where, mixtures.KelvinToCelsius(tempK), sp.Formula, mixtures.KelvinToCelsius(ait), src)})
+				above = append(above, sp.Formula)
+				figures = append(figures, fmt.Sprintf("%s, %.4g °C (%s)", sp.Formula, mixtures.KelvinToCelsius(ait), src))
 			}
+		}
+		if len(above) > 0 {
+			out = append(out, mixtures.Caution{Title: "Above autoignition", Species: above, Text: fmt.Sprintf(
+				"the %s, %.4g °C, is at or above the autoignition temperature in air of %s: any air let in can ignite it without a spark.",
+				where, mixtures.KelvinToCelsius(tempK), strings.Join(figures, "; of "))})
 		}
 		if len(unknown) > 0 {
 			out = append(out, mixtures.Caution{Title: "Hot flammable gas", Species: unknown, Text: fmt.Sprintf(

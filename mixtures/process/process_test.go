@@ -432,6 +432,15 @@ func TestCompressionAutoignitionCaution(t *testing.T) {
 	if got := titles(r); r.OutletTempK < 810 || !strings.Contains(got, "Above autoignition") || !strings.Contains(got, "NFPA 325") {
 		t.Errorf("CH4 to %.0f K: cautions\n%s\nwant one above autoignition with its source", r.OutletTempK, got)
 	}
+	// Two species above theirs: one caution names both, each with its
+	// figure (the workbench lists the titles, once each).
+	r, err = Compression{Mixture: mixOf(t, "NH3 18%, H2 5%, N2 bal"), InletTempK: 300, InletPresPa: 1e5, OutletPresPa: 2e7}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := titles(r); strings.Count(got, "Above autoignition") != 1 || !strings.Contains(got, "of NH3, 650.9 °C") || !strings.Contains(got, "of H2, 499.9 °C") {
+		t.Errorf("NH3 and H2 to %.0f K: cautions\n%s\nwant one above autoignition naming both", r.OutletTempK, got)
+	}
 	// Silane has no autoignition temperature in the catalogue.
 	r, err = Compression{Mixture: mixOf(t, "SiH4 2%, N2 bal"), InletTempK: 300, InletPresPa: 1e5, OutletPresPa: 5e5}.Solve()
 	if err != nil {
