@@ -56,27 +56,45 @@ func Notes(s *State, all bool) []StateNote {
 	return out
 }
 
-// realGasNotes says, as numbers, how far the ideal gas is from the real
-// one at the state.
-func realGasNotes(s *State, all bool) []StateNote {
-	note := func(sev model.Severity, format string, args ...any) []StateNote {
-		return []StateNote{{Note: model.Note{Severity: sev, Text: fmt.Sprintf(format, args...)}}}
+// RealGasNote is the blend's real-gas remark at the state when there is
+// one to heed: the ideal-gas density off by more than 1 %, the state
+// outside every real-gas model, or a pressure above 10 bar that no
+// model covers. The state readout adds where its real-gas figures are;
+// the processes give it at their inlets and outlets.
+func RealGasNote(s *State) (model.Note, bool) {
+	note := func(sev model.Severity, format string, args ...any) (model.Note, bool) {
+		return model.Note{Severity: sev, Text: fmt.Sprintf(format, args...)}, true
 	}
 	rg, known := s.RealGasResult()
 	if !known {
 		if s.PresPa > idealPressurePa {
 			return note(model.Caution, "%.4g bar: no species of the blend carries critical constants, so real-gas effects are not computed; above 10 bar they may exceed 1 %% (common practice)", s.PresPa/1e5)
 		}
-		return nil
+		return model.Note{}, false
 	}
 	dev := math.Abs(rg.Z - 1)
 	switch {
 	case rg.Range != realgas.InRange:
 		return note(model.Invalid, "outside every model here (%s): Z from %s is %.3g, and neither it nor the ideal-gas figures can be trusted", rg.Range, rg.Model, rg.Z)
 	case dev > densityCautionFraction:
-		return note(model.Caution, "Z = %.4g (%s): the ideal-gas density is off by %.2g %%; the real-gas figures stand beside it", rg.Z, rg.Model, 100*dev)
-	case all:
-		return note(model.Info, "Z = %.5g (%s): the ideal-gas density is within %.2g %%", rg.Z, rg.Model, 100*dev)
+		return note(model.Caution, "Z = %.4g (%s): the ideal-gas density is off by %.2g %%", rg.Z, rg.Model, 100*dev)
+	}
+	return model.Note{}, false
+}
+
+// realGasNotes says, as numbers, how far the ideal gas is from the real
+// one at the state.
+func realGasNotes(s *State, all bool) []StateNote {
+	rg, known := s.RealGasResult()
+	if n, ok := RealGasNote(s); ok {
+		if known && n.Severity == model.Caution {
+			n.Text += "; the real-gas figures stand beside it"
+		}
+		return []StateNote{{Note: n}}
+	}
+	if known && all {
+		dev := math.Abs(rg.Z - 1)
+		return []StateNote{{Note: model.Note{Severity: model.Info, Text: fmt.Sprintf("Z = %.5g (%s): the ideal-gas density is within %.2g %%", rg.Z, rg.Model, 100*dev)}}}
 	}
 	return nil
 }

@@ -78,3 +78,32 @@ func temperatureCautions(mix *mixtures.Mixture, tempK float64, where string) []m
 	}
 	return out
 }
+
+// realGasCautions says, at each point a process takes the blend to, how
+// far the ideal gas its figures assume is from the real one, where that
+// is more than the state readout's 1 % in density or outside every
+// model: the process figures are then estimates (the readout's own rule,
+// mixtures.RealGasNote).
+func realGasCautions(g Gas, points ...processPoint) []mixtures.Caution {
+	var parts []string
+	var st mixtures.State
+	for _, pt := range points {
+		if g.State(&st, pt.tempK, pt.presPa) != nil {
+			continue
+		}
+		if n, ok := mixtures.RealGasNote(&st); ok {
+			parts = append(parts, fmt.Sprintf("at the %s, %.4g bar and %.4g K, %s", pt.where, pt.presPa/1e5, pt.tempK, strings.TrimSuffix(n.Text, ".")))
+		}
+	}
+	if len(parts) == 0 {
+		return nil
+	}
+	return []mixtures.Caution{{Title: "Real gas", Text: strings.Join(parts, "; ") +
+		". The figures here assume the ideal gas; take them as estimates there."}}
+}
+
+// processPoint is a state a process passes through, named for cautions.
+type processPoint struct {
+	where         string
+	tempK, presPa float64
+}

@@ -224,7 +224,9 @@ func (c Compression) Solve() (*CompressionResult, error) {
 	}
 	// The hottest point is a stage outlet; an expander's coldest is its outlet.
 	r.laterCautions = func() []mixtures.Caution {
-		return append(temperatureCautions(c.Mixture, r.MaxTempK, "outlet"), mixtures.Cautions(c.Mixture, max(p1, p2))...)
+		out := realGasCautions(g, processPoint{"inlet", c.InletTempK, p1}, processPoint{"outlet", r.OutletTempK, p2})
+		out = append(out, temperatureCautions(c.Mixture, r.MaxTempK, "outlet")...)
+		return append(out, mixtures.Cautions(c.Mixture, max(p1, p2))...)
 	}
 	return r, nil
 }

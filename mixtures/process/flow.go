@@ -1,7 +1,10 @@
 package process
 
 import (
+	"fmt"
+
 	"zmix/mixtures"
+	"zmix/mixtures/realgas"
 	"zmix/model"
 )
 
@@ -24,12 +27,16 @@ type Flow struct {
 // FlowResult is a solved Flow.
 type FlowResult struct {
 	base
-	MolPerSec, KgPerSec     float64
-	RefM3PerSec             float64
-	Ref                     Reference
-	RefDensityKgPerM3       float64
-	RelativeDensity         float64
-	ActualM3PerSec          float64 // 0 when the line's T and P are not given
+	MolPerSec, KgPerSec float64
+	RefM3PerSec         float64
+	Ref                 Reference
+	RefDensityKgPerM3   float64
+	RelativeDensity     float64
+	ActualM3PerSec      float64 // 0 when the line's T and P are not given
+	// ActualRealM3PerSec is the actual volume flow from the real-gas Z at
+	// the line, 0 when the line is not given or no real-gas model
+	// covers it.
+	ActualRealM3PerSec      float64
 	GasCorrectionFactor     float64
 	InputRef                Reference // the reference the rate was read at, for a standard volume
 	InputIsStandard, Actual bool
@@ -99,6 +106,8 @@ var (
 		Name: "relative_density", Digits: mixtures.Digits{Sig: 5}}
 	figActualVol = &Figure{Key: "vact", Label: "actual volume flow", Symbol: "V̇", SymbolASCII: "V", Unit: "m³/h", UnitASCII: "m3/h", Scale: 3600,
 		Name: "actual_m3_s", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "L/min", UnitASCII: "L/min", Scale: 6e4}, {Unit: "ACFM", UnitASCII: "ACFM", Scale: 60 / cubicFoot}}}
+	figActualVolReal = &Figure{Key: "vactreal", Label: "actual volume flow, real gas", Symbol: "V̇real", SymbolASCII: "Vreal", Unit: "m³/h", UnitASCII: "m3/h", Scale: 3600,
+		Name: "actual_m3_s_real_gas", Digits: mixtures.Digits{Sig: 6}, Also: []AltUnit{{Unit: "L/min", UnitASCII: "L/min", Scale: 6e4}, {Unit: "ACFM", UnitASCII: "ACFM", Scale: 60 / cubicFoot}}}
 	figLineT = &Figure{Key: "tline", Label: "line temperature", Symbol: "T", SymbolASCII: "T", Unit: "K", UnitASCII: "K", Scale: 1,
 		Name: "temperature_K", Digits: mixtures.Digits{Sig: 6}, Also: celsius}
 	figLineP = &Figure{Key: "pline", Label: "line pressure", Symbol: "P", SymbolASCII: "P", Unit: "bar", UnitASCII: "bar", Scale: 1e-5,
@@ -133,6 +142,7 @@ func (f Flow) Solve() (*FlowResult, error) {
 	r.KgPerSec = n * mm
 
 	var st mixtures.State
+	var realNote string
 	if err := g.State(&st, ref.TempK, ref.PresPa); err != nil {
 		return nil, err
 	}
@@ -146,6 +156,10 @@ func (f Flow) Solve() (*FlowResult, error) {
 		}
 		r.ActualM3PerSec = r.KgPerSec / st.DensityKgPerM3
 		r.Actual = true
+		if rg, ok := st.RealGasResult(); ok && rg.Range == realgas.InRange {
+			r.ActualRealM3PerSec = n * rg.VM3PerMol
+			realNote = fmt.Sprintf("actual volume flow, real gas: from Z = %.4g at the line (%s)", rg.Z, rg.Model)
+		}
 	}
 	r.GasCorrectionFactor, err = GasCorrectionFactor(m, f.Mixture)
 	if err != nil {
@@ -173,11 +187,20 @@ func (f Flow) Solve() (*FlowResult, error) {
 	if r.Actual {
 		r.out(figActualVol, r.ActualM3PerSec)
 	}
+	if r.ActualRealM3PerSec > 0 {
+		r.out(figActualVolReal, r.ActualRealM3PerSec)
+	}
 	r.out(figRelDensity, r.RelativeDensity)
 	r.out(figGCF, r.GasCorrectionFactor)
 	r.note("standard volume at " + ref.Label)
 	r.note("relative density: M/M_air, with dry air 28.96546 g/mol (ISO 6976)")
 	r.note(gcfNote)
+	if realNote != "" {
+		r.note(realNote)
+	}
+	if r.Actual {
+		r.caution(realGasCautions(g, processPoint{"line", f.LineTempK, f.LinePresPa})...)
+	}
 	if f.LinePresPa > 0 {
 		r.caution(mixtures.Cautions(f.Mixture, f.LinePresPa)...)
 	} else {

@@ -157,6 +157,7 @@ func (mx Mixing) Describe(r *MixingResult) {
 	r.outlet = &r.State
 	r.note("enthalpy flows on the engine's scale: each species at its enthalpy of formation at 0 K")
 	r.note("entropy generated includes the mixing entropy; the line below it is that part alone")
+	r.caution(realGasCautions(m.Gas(r.Mixture), processPoint{"outlet", r.OutletTempK, mx.PresPa})...)
 	r.caution(temperatureCautions(r.Mixture, r.OutletTempK, "outlet")...)
 	r.caution(mixtures.Cautions(r.Mixture, mx.PresPa)...)
 }

@@ -457,3 +457,63 @@ func TestCompressionAutoignitionCaution(t *testing.T) {
 		t.Errorf("CH4 barely compressed: cautions\n%s\nwant no temperature caution", got)
 	}
 }
+
+// A process that takes the blend where the ideal gas is off by more than
+// 1 % in density says so once, with Z at each such point, as the state
+// readout would (mixtures.RealGasNote); where it is not, nothing is said.
+// A flow at line conditions gives the real-gas actual volume beside the
+// ideal one, V = n·Z·RT/P.
+func TestRealGasCautions(t *testing.T) {
+	realGas := func(cs []mixtures.Caution) (n int, text string) {
+		for _, c := range cs {
+			if c.Title == "Real gas" {
+				n++
+				text = c.Text
+			}
+		}
+		return n, text
+	}
+	comp, err := Compression{Mixture: mixOf(t, "N2 1"), InletTempK: 295.15, InletPresPa: 1.4e5, OutletPresPa: 300e5}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if n, text := realGas(comp.Cautions()); n != 1 || !strings.Contains(text, "at the outlet, 300 bar") || strings.Contains(text, "inlet") {
+		t.Errorf("N2 to 300 bar: %d real-gas cautions: %q; want one, at the outlet", n, text)
+	}
+	low, err := Compression{Mixture: mixOf(t, "N2 1"), InletTempK: 295.15, InletPresPa: 1e5, OutletPresPa: 5e5}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if n, text := realGas(low.Cautions()); n != 0 {
+		t.Errorf("N2 to 5 bar: a real-gas caution: %q", text)
+	}
+	heat, err := Heating{Mixture: mixOf(t, "CO2 1"), InletTempK: 293.15, OutletTempK: 473.15, PresPa: 50e5}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if n, text := realGas(heat.Cautions()); n != 1 || !strings.Contains(text, "at the inlet") || !strings.Contains(text, "at the outlet") {
+		t.Errorf("CO2 heated at 50 bar: %d real-gas cautions: %q; want one naming inlet and outlet", n, text)
+	}
+
+	ch4 := mixOf(t, "CH4 1")
+	rate, err := ParseRate("1000 Nm3/h")
+	if err != nil {
+		t.Fatal(err)
+	}
+	const tempK, presPa = 293.15, 201.325e5
+	f, err := Flow{Mixture: ch4, Rate: rate, LineTempK: tempK, LinePresPa: presPa}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	var st mixtures.State
+	if err := (Ideal{}).Gas(ch4).State(&st, tempK, presPa); err != nil {
+		t.Fatal(err)
+	}
+	z := st.Z()
+	if !(z < 0.9) || !within(f.ActualRealM3PerSec, f.ActualM3PerSec*z, 1e-12*f.ActualM3PerSec) {
+		t.Errorf("CH4 at 200 barg: real actual flow %g m³/s, ideal %g, Z %g; want ideal × Z", f.ActualRealM3PerSec, f.ActualM3PerSec, z)
+	}
+	if n, text := realGas(f.Cautions()); n != 1 || !strings.Contains(text, "at the line") {
+		t.Errorf("CH4 at 200 barg: %d real-gas cautions: %q", n, text)
+	}
+}
