@@ -4,8 +4,10 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"slices"
 	"strings"
 
+	"zmix/mixtures/report"
 	"zmix/model"
 	"zmix/ui"
 )
@@ -122,8 +124,18 @@ func (a *app) run(args []string) int {
 	fs := newFlagSet("zmix")
 	g.register(fs, true)
 	rest, err := parseFlags(fs, args, false)
+	// Help is output like any other: plain ASCII when asked for, by the
+	// environment or by --ascii anywhere on the line (parsing stops at
+	// --help, so a later --ascii is not parsed as a flag).
+	helpOut := func() io.Writer {
+		g.fromEnv(a.getenv)
+		if g.ascii || slices.Contains(args, "--ascii") {
+			return &report.ASCIIWriter{W: a.stdout}
+		}
+		return a.stdout
+	}
 	if errors.Is(err, errHelp) {
-		usageMain(a.stdout)
+		usageMain(helpOut())
 		return ExitOK
 	}
 	if err != nil {
@@ -142,7 +154,7 @@ func (a *app) run(args []string) int {
 	}
 	err = c.run(a, g, rest[1:])
 	if errors.Is(err, errHelp) {
-		c.usage(a.stdout)
+		c.usage(helpOut())
 		return ExitOK
 	}
 	return a.fail("zmix "+c.name, err)

@@ -919,3 +919,33 @@ func TestCatalogNameInWords(t *testing.T) {
 		t.Errorf("catalog N2 O2: exit %d, stderr %q", code, stderr)
 	}
 }
+
+// Help is output like any other: with --ascii anywhere on the line, or
+// ZMIX_ASCII=1, every command's help is plain ASCII (the units and
+// references in it carry °C and ³ otherwise).
+func TestHelpASCII(t *testing.T) {
+	nonASCII := func(s string) int {
+		n := 0
+		for _, r := range s {
+			if r > 127 {
+				n++
+			}
+		}
+		return n
+	}
+	for _, c := range commands {
+		for _, args := range [][]string{{c.name, "--help", "--ascii"}, {"--ascii", c.name, "--help"}, {"help", c.name, "--ascii"}} {
+			code, stdout, stderr := zmix(t, args...)
+			if code != 0 || stdout == "" || nonASCII(stdout) > 0 {
+				t.Errorf("zmix %q: exit %d, %d characters past ASCII; %s", args, code, nonASCII(stdout), stderr)
+			}
+		}
+		code, stdout, _ := zmixWith(t, newTestApp(map[string]string{"ZMIX_ASCII": "1"}), c.name, "--help")
+		if code != 0 || nonASCII(stdout) > 0 {
+			t.Errorf("ZMIX_ASCII=1 zmix %s --help: exit %d, %d characters past ASCII", c.name, code, nonASCII(stdout))
+		}
+	}
+	if _, stdout, _ := zmix(t, "flow", "--help"); nonASCII(stdout) == 0 {
+		t.Error("flow --help without --ascii holds no °C: the test above proves nothing")
+	}
+}

@@ -4,9 +4,11 @@ import (
 	"bytes"
 	"fmt"
 	"io"
+	"slices"
 	"strings"
 
 	"zmix/mixtures"
+	"zmix/mixtures/report"
 	"zmix/model"
 	"zmix/ui"
 )
@@ -81,13 +83,18 @@ func (a *app) printFileReadout(cat *model.Catalogue, g *globalOpts, src *blendSo
 }
 
 func (a *app) cmdHelp(g *globalOpts, args []string) error {
+	out := a.stdout
+	if g.ascii || slices.Contains(args, "--ascii") || slices.Contains(args, "-ascii") {
+		out = &report.ASCIIWriter{W: a.stdout}
+		args = slices.DeleteFunc(args, func(s string) bool { return s == "--ascii" || s == "-ascii" })
+	}
 	switch len(args) {
 	case 0:
-		usageMain(a.stdout)
+		usageMain(out)
 		return nil
 	case 1:
 		if h := args[0]; h == "--help" || h == "-help" || h == "-h" || h == "--h" {
-			usageHelp(a.stdout)
+			usageHelp(out)
 			return nil
 		}
 		c, ok := lookupCommand(args[0])
@@ -97,7 +104,7 @@ func (a *app) cmdHelp(g *globalOpts, args []string) error {
 			}
 			return badInput("no help on %s; the commands are %s", model.Quote(args[0]), commandNames())
 		}
-		c.usage(a.stdout)
+		c.usage(out)
 		return nil
 	}
 	return badInput("help takes one command name at most; the commands are %s", commandNames())
