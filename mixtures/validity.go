@@ -68,7 +68,7 @@ func RealGasNote(s *State) (model.Note, bool) {
 	rg, known := s.RealGasResult()
 	if !known {
 		if s.PresPa > idealPressurePa {
-			return note(model.Caution, "%.4g bar: no species of the blend carries critical constants, so real-gas effects are not computed; above 10 bar they may exceed 1 %% (common practice)", s.PresPa/1e5)
+			return note(model.Caution, "no species of the blend carries critical constants, so real-gas effects are not computed; above 10 bar they may exceed 1 %% (common practice)")
 		}
 		return model.Note{}, false
 	}
@@ -87,7 +87,10 @@ func RealGasNote(s *State) (model.Note, bool) {
 func realGasNotes(s *State, all bool) []StateNote {
 	rg, known := s.RealGasResult()
 	if n, ok := RealGasNote(s); ok {
-		if known && n.Severity == model.Caution {
+		switch {
+		case !known:
+			n.Text = fmt.Sprintf("%.4g bar: %s", s.PresPa/1e5, n.Text)
+		case n.Severity == model.Caution:
 			n.Text += "; the real-gas figures stand beside it"
 		}
 		return []StateNote{{Note: n}}
