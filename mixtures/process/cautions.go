@@ -84,11 +84,11 @@ func temperatureCautions(mix *mixtures.Mixture, tempK float64, where string) []m
 // is more than the state readout's 1 % in density or outside every
 // model: the process figures are then estimates (the readout's own rule,
 // mixtures.RealGasNote).
-func realGasCautions(g Gas, points ...processPoint) []mixtures.Caution {
+func realGasCautions(points ...processPoint) []mixtures.Caution {
 	var parts []string
 	var st mixtures.State
 	for _, pt := range points {
-		if g.State(&st, pt.tempK, pt.presPa) != nil {
+		if pt.gas.State(&st, pt.tempK, pt.presPa) != nil {
 			continue
 		}
 		if n, ok := mixtures.RealGasNote(&st); ok {
@@ -102,8 +102,10 @@ func realGasCautions(g Gas, points ...processPoint) []mixtures.Caution {
 		". The figures here assume the ideal gas; take them as estimates there."}}
 }
 
-// processPoint is a state a process passes through, named for cautions.
+// processPoint is a state a process passes through, named for cautions:
+// the gas there (a mixer's streams differ from its outlet) at (T, P).
 type processPoint struct {
 	where         string
+	gas           Gas
 	tempK, presPa float64
 }

@@ -224,7 +224,7 @@ func (c Compression) Solve() (*CompressionResult, error) {
 	}
 	// The hottest point is a stage outlet; an expander's coldest is its outlet.
 	r.laterCautions = func() []mixtures.Caution {
-		out := realGasCautions(g, processPoint{"inlet", c.InletTempK, p1}, processPoint{"outlet", r.OutletTempK, p2})
+		out := realGasCautions(processPoint{"inlet", g, c.InletTempK, p1}, processPoint{"outlet", g, r.OutletTempK, p2})
 		out = append(out, temperatureCautions(c.Mixture, r.MaxTempK, "outlet")...)
 		return append(out, mixtures.Cautions(c.Mixture, max(p1, p2))...)
 	}

@@ -199,7 +199,7 @@ func (f Flow) Solve() (*FlowResult, error) {
 		r.note(realNote)
 	}
 	if r.Actual {
-		r.caution(realGasCautions(g, processPoint{"line", f.LineTempK, f.LinePresPa})...)
+		r.caution(realGasCautions(processPoint{"line", g, f.LineTempK, f.LinePresPa})...)
 	}
 	if f.LinePresPa > 0 {
 		r.caution(mixtures.Cautions(f.Mixture, f.LinePresPa)...)

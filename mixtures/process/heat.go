@@ -86,7 +86,7 @@ func (h Heating) Solve() (*HeatingResult, error) {
 	if r.DutyJPerMol < 0 {
 		r.note("a negative duty is heat taken out of the gas: cooling")
 	}
-	r.caution(realGasCautions(g, processPoint{"inlet", h.InletTempK, h.PresPa}, processPoint{"outlet", h.OutletTempK, h.PresPa})...)
+	r.caution(realGasCautions(processPoint{"inlet", g, h.InletTempK, h.PresPa}, processPoint{"outlet", g, h.OutletTempK, h.PresPa})...)
 	r.caution(temperatureCautions(h.Mixture, h.OutletTempK, "outlet")...)
 	r.caution(mixtures.Cautions(h.Mixture, h.PresPa)...)
 	return r, nil

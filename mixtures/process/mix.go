@@ -1,6 +1,7 @@
 package process
 
 import (
+	"fmt"
 	"math"
 
 	"zmix/mixtures"
@@ -157,7 +158,12 @@ func (mx Mixing) Describe(r *MixingResult) {
 	r.outlet = &r.State
 	r.note("enthalpy flows on the engine's scale: each species at its enthalpy of formation at 0 K")
 	r.note("entropy generated includes the mixing entropy; the line below it is that part alone")
-	r.caution(realGasCautions(m.Gas(r.Mixture), processPoint{"outlet", r.OutletTempK, mx.PresPa})...)
+	// Each stream at its inlet, and the outlet, in one caution.
+	points := make([]processPoint, 0, len(mx.Streams)+1)
+	for i, s := range mx.Streams {
+		points = append(points, processPoint{fmt.Sprintf("inlet of stream %d", i+1), m.Gas(s.Mixture), s.TempK, mx.PresPa})
+	}
+	r.caution(realGasCautions(append(points, processPoint{"outlet", m.Gas(r.Mixture), r.OutletTempK, mx.PresPa})...)...)
 	r.caution(temperatureCautions(r.Mixture, r.OutletTempK, "outlet")...)
 	r.caution(mixtures.Cautions(r.Mixture, mx.PresPa)...)
 }

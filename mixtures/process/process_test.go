@@ -495,6 +495,19 @@ func TestRealGasCautions(t *testing.T) {
 		t.Errorf("CO2 heated at 50 bar: %d real-gas cautions: %q; want one naming inlet and outlet", n, text)
 	}
 
+	// A mixer: CO2 at 50 bar and 20 °C is far from ideal at its inlet
+	// (Z about 0.63), N2 barely; one caution names each point past 1 %.
+	mx, err := Mixing{PresPa: 50e5, Streams: []Stream{
+		{Mixture: mixOf(t, "CO2 1"), TempK: 293.15, RateMolPerSec: 1},
+		{Mixture: mixOf(t, "N2 1"), TempK: 293.15, RateMolPerSec: 1},
+	}}.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if n, text := realGas(mx.Cautions()); n != 1 || !strings.Contains(text, "inlet of stream 1") || !strings.Contains(text, "at the outlet") {
+		t.Errorf("CO2 and N2 mixed at 50 bar: %d real-gas cautions: %q; want one naming stream 1's inlet and the outlet", n, text)
+	}
+
 	ch4 := mixOf(t, "CH4 1")
 	rate, err := ParseRate("1000 Nm3/h")
 	if err != nil {

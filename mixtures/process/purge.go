@@ -148,7 +148,7 @@ func (p Purge) Solve() (*PurgeResult, error) {
 			r.in(figVolume, p.VolumeM3)
 			r.in(figVesselT, p.TempK)
 			r.out(figGasUsed, r.GasUsedMol)
-			r.caution(realGasCautions(m.Gas(p.PurgeGas), processPoint{"high pressure", p.TempK, hi})...)
+			r.caution(realGasCautions(processPoint{"high pressure", m.Gas(p.PurgeGas), p.TempK, hi})...)
 		}
 	case PurgeFlow:
 		if !(p.VolumeM3 > 0) || math.IsInf(p.VolumeM3, 0) {
@@ -159,7 +159,7 @@ func (p Purge) Solve() (*PurgeResult, error) {
 			return nil, model.Errorf("process", "a flow purge at %s needs the vessel's temperature and pressure, to turn it into a volume flow; give both, or the flow in an actual-volume unit (m3/h, L/min, ACFM)", model.Quote(p.Rate.Text))
 		}
 		if known {
-			r.caution(realGasCautions(m.Gas(p.PurgeGas), processPoint{"vessel", p.TempK, p.PresPa})...)
+			r.caution(realGasCautions(processPoint{"vessel", m.Gas(p.PurgeGas), p.TempK, p.PresPa})...)
 		}
 		// q is the actual volume flow at the vessel's conditions.
 		q := p.Rate.Value * p.Rate.Unit.SI
