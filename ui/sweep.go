@@ -62,6 +62,11 @@ type sweepPane struct {
 	done    int
 	total   int
 	runErr  string
+	// failedKey is the last sweep that failed: it is not started again
+	// until something it depends on changes, since every message asks
+	// for the wanted sweep and a failing one would be rerun for ever.
+	failedKey sweepKey
+	failed    bool
 
 	result    *mixtures.SweepTable
 	resultKey sweepKey
@@ -275,7 +280,7 @@ func (p *sweepPane) recompute() tea.Cmd {
 	if !ok || p.hidden {
 		return nil
 	}
-	if p.running && k == p.runKey {
+	if p.running && k == p.runKey || p.failed && k == p.failedKey {
 		return nil
 	}
 	if p.result != nil && k == p.resultKey {
@@ -323,6 +328,7 @@ func (p *sweepPane) Update(msg tea.Msg) tea.Cmd {
 func (p *sweepPane) progress(msg sweepProgressMsg) tea.Cmd {
 	if msg.err != nil {
 		p.running = false
+		p.failed, p.failedKey = true, p.runKey
 		p.result, p.series = nil, nil
 		p.runErr = cleanErr(msg.err)
 		p.plot.clear()

@@ -604,6 +604,33 @@ func TestSweepRunErrorShown(t *testing.T) {
 	}
 }
 
+// A sweep that fails is not started again until something it depends
+// on changes: the workbench asks for the wanted sweep after every
+// message, and a failing one was rerun for ever, busy and never settling
+// (found by FuzzWorkbenchKeys: a range from 1e-300 K).
+func TestSweepFailureNotRerun(t *testing.T) {
+	r := testRoot(t, 80, 24, testRootOpts{})
+	press(t, r, "4", "enter", "ctrl+u")
+	typeIn(t, r, "1e-300 K")
+	press(t, r, "enter") // settles: a rerun chain would fail the test here
+	sp := r.panes[paneSweep].(*sweepPane)
+	if sp.running || !strings.Contains(r.View(), "sweep failed") {
+		t.Fatalf("running %v after a failing range:\n%s", sp.running, r.View())
+	}
+	gen := sp.gen
+	press(t, r, "p", "2", "4") // other keys, another pane and back
+	if sp.gen != gen || sp.running {
+		t.Errorf("the failed sweep was started again (generation %d → %d)", gen, sp.gen)
+	}
+	// A changed range runs.
+	press(t, r, "enter", "ctrl+u")
+	typeIn(t, r, "200 K")
+	press(t, r, "enter")
+	if sp.Result() == nil || sp.gen == gen {
+		t.Errorf("a valid range after the failure gave no result:\n%s", r.View())
+	}
+}
+
 func TestSweepCursorMoves(t *testing.T) {
 	p := sweepTestPane(t, false, SweepSettings{Var: mixtures.SweepTemperature, From: "200 K", To: "1500 K", Steps: 1000, Property: "Cp"}, 100, 30)
 	sweepPress(t, p, "home")
