@@ -9,14 +9,17 @@ import (
 )
 
 // fuzzKeys are the keys FuzzWorkbenchKeys presses for the bytes below
-// their count, and fuzzWords the text it types for the bytes after them;
+// their count, fuzzWords the text it types for the bytes after them, and
+// fuzzFileKeys the keys after those (save and open, each with its
+// prompt: they come last so that saved inputs keep their meaning);
 // any other byte types its printable ASCII character (a space for the
 // rest), so that a run both moves through the panes and types into their
 // fields, the extremes the parsers accept among it.
 var (
 	fuzzKeys = []string{"enter", "esc", "tab", "shift+tab", "left", "right", "up", "down",
 		"home", "end", "backspace", "delete", "ctrl+u", "pgdown", "pgup", "ctrl+e"}
-	fuzzWords = []string{"1", "2", "3", "4", "5", "6", "?", "!", "e", "1e300", "1e-300", "ppb", " bar", " K", "%", "-", "SiH4 "}
+	fuzzWords    = []string{"1", "2", "3", "4", "5", "6", "?", "!", "e", "1e300", "1e-300", "ppb", " bar", " K", "%", "-", "SiH4 "}
+	fuzzFileKeys = []string{"ctrl+s", "ctrl+o"}
 )
 
 // nonFiniteOnScreen matches a number that is not finite, as Go spells it.
@@ -54,6 +57,9 @@ func FuzzWorkbenchKeys(f *testing.F) {
 						break
 					}
 				}
+			case n < len(fuzzKeys)+len(fuzzWords)+len(fuzzFileKeys):
+				k = fuzzFileKeys[n-len(fuzzKeys)-len(fuzzWords)]
+				quit = press(t, r, k)
 			default:
 				if b > ' ' && b < 127 {
 					k = string(rune(b))
