@@ -101,6 +101,15 @@ func (sw Sweep) Check() error {
 	if sw.From == sw.To {
 		return model.KindErrorf("mixtures", ErrSweep, "the range starts and ends at %g %s; want two different end points", sw.From, sw.Var.Unit())
 	}
+	if sw.Var == SweepTemperature {
+		// The model's own bounds, known before any blend: the workbench
+		// shows them at the range as it is typed, not as a failed run.
+		for _, v := range []float64{sw.From, sw.To} {
+			if err := model.CheckConditions(v, model.StdPressureBarPa); err != nil {
+				return err // the model's own kind, ErrTemperature
+			}
+		}
+	}
 	return nil
 }
 

@@ -69,6 +69,14 @@ func TestSweepCheck(t *testing.T) {
 		{"equal ends", Sweep{From: 300, To: 300, Steps: 10}},
 		{"equal pressures", Sweep{Var: SweepPressure, From: 1e5, To: 1e5, Steps: 10}},
 	}
+	// The model's temperature bounds are checked with the range, before
+	// any blend, with the model's own error (the workbench shows it at
+	// the range as typed).
+	for _, sw := range []Sweep{{From: 1e-300, To: 400, Steps: 10}, {From: 300, To: 2e6, Steps: 10}} {
+		if err := sw.Check(); !errors.Is(err, model.ErrTemperature) {
+			t.Errorf("%g..%g K: Check() = %v, want the model's ErrTemperature", sw.From, sw.To, err)
+		}
+	}
 	m := mustMixture(t, dryAir, 1e5)
 	for _, c := range cases {
 		if err := c.sw.Check(); !errors.Is(err, ErrSweep) {

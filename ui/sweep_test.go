@@ -607,27 +607,37 @@ func TestSweepRunErrorShown(t *testing.T) {
 // A sweep that fails is not started again until something it depends
 // on changes: the workbench asks for the wanted sweep after every
 // message, and a failing one was rerun for ever, busy and never settling
-// (found by FuzzWorkbenchKeys: a range from 1e-300 K).
+// (found by FuzzWorkbenchKeys, with a range from 1e-300 K, which the
+// range now refuses as it is typed). A run still fails where the blend
+// cannot be computed: at 1e-310 Pa, H2's partial pressure is below the
+// smallest normal float.
 func TestSweepFailureNotRerun(t *testing.T) {
 	r := testRoot(t, 80, 24, testRootOpts{})
 	press(t, r, "4", "enter", "ctrl+u")
 	typeIn(t, r, "1e-300 K")
-	press(t, r, "enter") // settles: a rerun chain would fail the test here
+	press(t, r, "enter")
 	sp := r.panes[paneSweep].(*sweepPane)
+	if v := r.View(); sp.running || !strings.Contains(v, "temperature must be from 0.001 K") || sp.Result() == nil {
+		t.Fatalf("a range from 1e-300 K: want it refused at the range, the last result kept:\n%s", v)
+	}
+	press(t, r, "2", "down", "enter", "ctrl+u")
+	typeIn(t, r, "1e-310 Pa")
+	press(t, r, "enter", "4") // settles: a rerun chain would fail the test here
 	if sp.running || !strings.Contains(r.View(), "sweep failed") {
-		t.Fatalf("running %v after a failing range:\n%s", sp.running, r.View())
+		t.Fatalf("running %v at 1e-310 Pa:\n%s", sp.running, r.View())
 	}
 	gen := sp.gen
 	press(t, r, "p", "2", "4") // other keys, another pane and back
 	if sp.gen != gen || sp.running {
 		t.Errorf("the failed sweep was started again (generation %d → %d)", gen, sp.gen)
 	}
-	// A changed range runs.
-	press(t, r, "enter", "ctrl+u")
-	typeIn(t, r, "200 K")
-	press(t, r, "enter")
+	// A changed input runs (the setpoint's cursor is put back on the
+	// pressure from wherever it was).
+	press(t, r, "2", "up", "up", "up", "down", "enter", "ctrl+u")
+	typeIn(t, r, "1 bar")
+	press(t, r, "enter", "4")
 	if sp.Result() == nil || sp.gen == gen {
-		t.Errorf("a valid range after the failure gave no result:\n%s", r.View())
+		t.Errorf("a valid pressure after the failure gave no result:\n%s", r.View())
 	}
 }
 
