@@ -44,10 +44,10 @@ var commandShapes = [][]string{
 var nonFiniteText = regexp.MustCompile(`NaN|[+-]?Inf\b`)
 
 // FuzzCommandNumbers runs every command shape with numbers the fuzzer
-// chooses, as text and as JSON: each run ends with exit status 0 and its
-// readout (and, with --json, any cautions on standard error), or 2 and
-// one line on standard error; no number that is not finite is printed,
-// and the JSON parses.
+// chooses, as text, JSON and CSV: each run ends with exit status 0 and
+// its readout (and, with --json or --csv, any cautions on standard
+// error), or 2 and one line on standard error; no number that is not
+// finite is printed, and the JSON parses.
 func FuzzCommandNumbers(f *testing.F) {
 	for i := range commandShapes {
 		f.Add(uint8(i), 4.0, 18.0, 295.0, 1.4)
@@ -68,14 +68,15 @@ func FuzzCommandNumbers(f *testing.F) {
 			}
 			args[i] = s
 		}
-		for _, asJSON := range []bool{false, true} {
+		for _, format := range []string{"", "--json", "--csv"} {
 			run := args
-			if asJSON {
-				run = append(append([]string(nil), args...), "--json")
+			if format != "" {
+				run = append(append([]string(nil), args...), format)
 			}
+			asJSON := format == "--json"
 			code, stdout, stderr := zmix(t, run...)
-			// With --json the cautions go to standard error, so that
-			// standard output stays one document.
+			// With --json or --csv the cautions go to standard error, so
+			// that standard output stays one document.
 			switch {
 			case code == 0 && stderr != "" && !strings.HasPrefix(stderr, "zmix: caution: "):
 				t.Fatalf("zmix %q: exit 0 with an error: %s", run, stderr)
@@ -114,8 +115,14 @@ func TestCommandShapesRun(t *testing.T) {
 			s = strings.NewReplacer("{0}", "4", "{1}", "18", "{2}", "295", "{3}", "1.4").Replace(s)
 			args[j] = s
 		}
-		if code, _, stderr := zmix(t, args...); code != 0 {
-			t.Errorf("shape %d, zmix %q: exit %d: %s", i, args, code, stderr)
+		for _, format := range []string{"", "--json", "--csv"} {
+			run := args
+			if format != "" {
+				run = append(append([]string(nil), args...), format)
+			}
+			if code, _, stderr := zmix(t, run...); code != 0 {
+				t.Errorf("shape %d, zmix %q: exit %d: %s", i, run, code, stderr)
+			}
 		}
 	}
 }
