@@ -489,9 +489,9 @@ func (p *processPane) calculate() (process.Result, string, error) {
 			return nil, "", fieldError("target", errText("give "+process.TargetForm))
 		}
 		if ratio := p.value("ratio"); ratio != "" {
-			r, err := strconv.ParseFloat(ratio, 64)
-			if err != nil || !(r >= 0) || r > process.MaxDilutionRatio {
-				return nil, "", fieldError("ratio", errText("want moles of diluent per mole of recipe, a number from 0 to 1e12"))
+			r, err := process.ParseDilutionRatio(ratio)
+			if err != nil {
+				return nil, "", fieldError("ratio", err)
 			}
 			sp, err := process.ParseTargetSpecies(p.c.Catalogue, target)
 			if err != nil {

@@ -2,6 +2,7 @@ package process
 
 import (
 	"strconv"
+	"strings"
 
 	"zmix/mixtures"
 	"zmix/model"
@@ -71,6 +72,17 @@ var slpmPerMolS = 60e3 * model.GasConstant * model.ZeroCelsiusK / model.StdPress
 // ratio is a slip (a target of 1e-300 ppb), refused before it overflows
 // the mixture's amounts.
 const MaxDilutionRatio = 1e12
+
+// ParseDilutionRatio reads a dilution ratio, moles of diluent per mole
+// of parent, from 0 to MaxDilutionRatio: the one reader of the command's
+// --ratio and the workbench's ratio field.
+func ParseDilutionRatio(s string) (float64, error) {
+	r, err := strconv.ParseFloat(strings.TrimSpace(s), 64)
+	if err != nil || !(r >= 0) || r > MaxDilutionRatio {
+		return 0, model.Errorf("process", "ratio %s: want moles of diluent per mole of parent, a number from 0 to 1e12", model.Quote(s))
+	}
+	return r, nil
+}
 
 func (d Dilution) Solve() (*DilutionResult, error) {
 	if d.Parent == nil || d.Diluent == nil || d.Species == nil {

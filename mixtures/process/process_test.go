@@ -530,3 +530,20 @@ func TestRealGasCautions(t *testing.T) {
 		t.Errorf("CH4 at 200 barg: %d real-gas cautions: %q", n, text)
 	}
 }
+
+// The one reader of a dilution ratio, for the command and the workbench.
+func TestParseDilutionRatio(t *testing.T) {
+	for _, c := range []struct {
+		in   string
+		want float64
+		ok   bool
+	}{{"9", 9, true}, {" 0 ", 0, true}, {"1e12", 1e12, true}, {"2e12", 0, false}, {"-1", 0, false}, {"NaN", 0, false}, {"abc", 0, false}, {"", 0, false}} {
+		got, err := ParseDilutionRatio(c.in)
+		if (err == nil) != c.ok || got != c.want {
+			t.Errorf("ParseDilutionRatio(%q) = %g, %v; want %g, ok %v", c.in, got, err, c.want, c.ok)
+		}
+		if err != nil && !strings.Contains(err.Error(), "from 0 to 1e12") {
+			t.Errorf("ParseDilutionRatio(%q): error %q does not name the range", c.in, err)
+		}
+	}
+}

@@ -2,7 +2,6 @@ package cli
 
 import (
 	"io"
-	"strconv"
 	"strings"
 
 	"zmix/mixtures/process"
@@ -45,9 +44,9 @@ func (a *app) cmdDilute(g *globalOpts, args []string) error {
 	case strings.TrimSpace(targetText) == "":
 		return badInput("--target is missing; give %s", process.TargetForm)
 	case ratioText != "":
-		r, err := strconv.ParseFloat(strings.TrimSpace(ratioText), 64)
-		if err != nil || !(r >= 0) || r > process.MaxDilutionRatio {
-			return badInput("--ratio %q: want moles of diluent per mole of parent, a number from 0 to 1e12", ratioText)
+		r, err := process.ParseDilutionRatio(ratioText)
+		if err != nil {
+			return badInput("--ratio: %v", err)
 		}
 		sp, err := process.ParseTargetSpecies(cat, targetText)
 		if err != nil {
